@@ -1,0 +1,68 @@
+/**
+ * The one error type for bad user input (design.md §3, style.md §8).
+ * Structured first: `issues` lists every problem; the message is readable second.
+ */
+
+/** One problem with one input field. */
+export interface InputIssue {
+  /** dotted path of the field, e.g. "coil.radius" */
+  readonly path: string;
+  /** what is wrong, in words, e.g. "expected a length like '12 mm'" */
+  readonly message: string;
+  /** the value received, as given */
+  readonly value: unknown;
+  /** what was expected, e.g. "length > 0 m" */
+  readonly expected?: string;
+}
+
+/** Thrown when user input is invalid; its message names the field, the value and the rule. */
+export class TanklightInputError extends Error {
+  readonly issues: readonly InputIssue[];
+  constructor(issues: readonly InputIssue[], where?: string) {
+    const text = issues
+      .map((i) => `${i.path ? i.path + ": " : ""}${i.message}, got ${describeValue(i.value)}`)
+      .join("; ");
+    super(where ? `${where}: ${text}` : text);
+    this.name = "TanklightInputError";
+    this.issues = issues;
+  }
+}
+
+/** A short, quoted rendering of a received value for error messages. */
+export function describeValue(value: unknown): string {
+  if (typeof value === "string") return `'${value}'`;
+  if (typeof value === "number") return Number.isNaN(value) ? "NaN" : String(value);
+  if (value === undefined) return "nothing";
+  if (value === null) return "null";
+  try {
+    const s = JSON.stringify(value);
+    return s.length > 80 ? s.slice(0, 77) + "..." : s;
+  } catch {
+    return String(value);
+  }
+}
+
+/**
+ * Guard for hot paths: throws TanklightInputError unless x is a finite number > 0.
+ * @example requirePositive(0.01, "radius", "m", "loopField") // → 0.01
+ */
+export function requirePositive(x: number, field: string, unit: string, where: string): number {
+  if (!(typeof x === "number" && Number.isFinite(x) && x > 0)) {
+    throw new TanklightInputError(
+      [{ path: field, message: `must be a finite number > 0 ${unit}`, value: x, expected: `> 0 ${unit}` }],
+      where,
+    );
+  }
+  return x;
+}
+
+/** Guard for hot paths: throws TanklightInputError unless x is a finite number (any sign). */
+export function requireFinite(x: number, field: string, unit: string, where: string): number {
+  if (!(typeof x === "number" && Number.isFinite(x))) {
+    throw new TanklightInputError(
+      [{ path: field, message: `must be a finite number in ${unit}`, value: x, expected: `finite ${unit}` }],
+      where,
+    );
+  }
+  return x;
+}

@@ -1,0 +1,26 @@
+/**
+ * tanklight — the one public entry (design.md §2). Re-exports the public names of every layer.
+ * Each layer keeps its own section below; add new names to your layer's section.
+ */
+
+// ── errors, constants, units ─────────────────────────────────────────────────
+export { TanklightInputError, type InputIssue } from "./errors.ts";
+export * from "./constants.ts";
+
+// ── lib/math ─────────────────────────────────────────────────────────────────
+export { ellipticK, ellipticE, ellipticKE, ellipticKEComplement, type EllipticPair } from "./math/elliptic.ts";
+export {
+  gaussLegendre,
+  integrateGaussLegendre,
+  integrateAdaptive,
+  type GaussRule,
+  type IntegrationResult,
+  type AdaptiveOptions,
+} from "./math/quadrature.ts";
+export { lambertW, lambertWOfLog } from "./math/lambertW.ts";
+
+// ── lib/em ───────────────────────────────────────────────────────────────────
+export type { Vec3, Pose, Filament, Conductor, Coil } from "./em/types.ts";
+
+// ── lib/circuit ──────────────────────────────────────────────────────────────
+export type { DiodeModel } from "./circuit/types.ts";
