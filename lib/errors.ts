@@ -13,6 +13,8 @@ export interface InputIssue {
   readonly value: unknown;
   /** what was expected, e.g. "length > 0 m" */
   readonly expected?: string;
+  /** what the value turned out to be, printed after it in parentheses, e.g. "a frequency" */
+  readonly detail?: string;
 }
 
 /** Thrown when user input is invalid; its message names the field, the value and the rule. */
@@ -20,12 +22,20 @@ export class TanklightInputError extends Error {
   readonly issues: readonly InputIssue[];
   constructor(issues: readonly InputIssue[], where?: string) {
     const text = issues
-      .map((i) => `${i.path ? i.path + ": " : ""}${i.message}, got ${describeValue(i.value)}`)
+      .map((i) => formatIssue(i))
       .join("; ");
     super(where ? `${where}: ${text}` : text);
     this.name = "TanklightInputError";
     this.issues = issues;
   }
+}
+
+/**
+ * One issue as text: "coil.radius: expected a length like '12 mm', got '5 kHz' (a frequency)".
+ */
+export function formatIssue(issue: InputIssue): string {
+  const detail = issue.detail ? ` (${issue.detail})` : "";
+  return `${issue.path ? issue.path + ": " : ""}${issue.message}, got ${describeValue(issue.value)}${detail}`;
 }
 
 /** A short, quoted rendering of a received value for error messages. */

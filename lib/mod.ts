@@ -4,8 +4,35 @@
  */
 
 // ── errors, constants, units ─────────────────────────────────────────────────
-export { TanklightInputError, type InputIssue } from "./errors.ts";
+export {
+  TanklightInputError,
+  type InputIssue,
+  requirePositive,
+  requireFinite,
+  describeValue,
+  formatIssue,
+} from "./errors.ts";
 export * from "./constants.ts";
+export {
+  parseQuantity,
+  formatQuantity,
+  isQuantity,
+  siUnit,
+  DIMENSIONS,
+  type Dimension,
+  type DimensionInfo,
+} from "./units.ts";
+export {
+  quantity,
+  quantityMeta,
+  parseInput,
+  vec3,
+  type QuantityOptions,
+  type QuantityMeta,
+  type QuantitySchema,
+} from "./schema.ts";
+/** Schema shorthands by dimension: `schema.length()`, `schema.frequency()`, … (lib/schema.ts). */
+export * as schema from "./schema.ts";
 
 // ── lib/math ─────────────────────────────────────────────────────────────────
 export { ellipticK, ellipticE, ellipticKE, ellipticKEComplement, type EllipticPair } from "./math/elliptic.ts";

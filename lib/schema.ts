@@ -1,0 +1,249 @@
+/**
+ * zod schemas for user inputs that carry units (design.md §3, style.md §10): a quantity field
+ * accepts an SI number or a string with a unit ("12 mm") and yields the SI number; range rules
+ * (positive, bounds) are part of the schema; `parseInput` turns every problem into one
+ * TanklightInputError with dotted paths.
+ *
+ * Schemas are parsed once at the edge (builders, scenario specs); hot paths take the plain
+ * numbers they return.
+ */
+import { z } from "zod";
+import { TanklightInputError, type InputIssue } from "./errors.ts";
+import { DIMENSIONS, formatQuantity, parseQuantity, type Dimension } from "./units.ts";
+
+/** Range rules of a quantity field, in SI units of its dimension. */
+export interface QuantityOptions {
+  /** require > 0 */
+  readonly positive?: boolean;
+  /** require ≥ 0 */
+  readonly nonNegative?: boolean;
+  /** require ≥ min (SI) */
+  readonly min?: number;
+  /** require ≤ max (SI) */
+  readonly max?: number;
+  /** the example shown in messages, e.g. "12 mm" (default: the dimension's example) */
+  readonly example?: string;
+}
+
+/** The metadata every quantity schema carries (`schema.meta()`), for docs and messages. */
+export interface QuantityMeta {
+  readonly unit: string;
+  readonly dimension: Dimension;
+  readonly example: string;
+  /** the range rule in words, e.g. "> 0 m"; "" when any finite value is allowed */
+  readonly rule: string;
+}
+
+/** A quantity schema: input `number | string`, output the SI number. */
+export type QuantitySchema = z.ZodType<number, number | string>;
+
+/** Words for a range rule, in SI units: "> 0 m", "≥ 0 Hz and ≤ 1 MHz". */
+function ruleText(dimension: Dimension, opts: QuantityOptions): string {
+  const unit = DIMENSIONS[dimension].unit;
+  const show = (x: number): string => formatQuantity(x, unit, 4);
+  const parts: string[] = [];
+  if (opts.positive) parts.push(`> ${show(0)}`);
+  else if (opts.nonNegative) parts.push(`≥ ${show(0)}`);
+  if (opts.min !== undefined) parts.push(`≥ ${show(opts.min)}`);
+  if (opts.max !== undefined) parts.push(`≤ ${show(opts.max)}`);
+  return parts.join(" and ");
+}
+
+/**
+ * A zod schema for one physical quantity: accepts an SI number or a string with a unit
+ * (rules of {@link parseQuantity}), checks the range rules, and outputs the SI number.
+ * Its issues read "expected a length like '12 mm'" or "must be > 0 m"; `parseInput` adds the
+ * path and the received value. Carries `.meta({ unit, dimension, example, rule })`.
+ *
+ * Optional fields: `length().optional()`; a default given as a string must be parsed, so use
+ * `.prefault("12 mm")` (zod v4: `.default()` skips parsing and must be given in SI).
+ *
+ * @param dimension the physical dimension (decides the SI unit of the output).
+ * @param opts range rules in SI units, and the example used in messages.
+ * @returns a zod schema, input `number | string`, output number (SI).
+ * @example parseInput(quantity("length", { positive: true }), "12 mm", "f") // → 0.012
+ */
+export function quantity(dimension: Dimension, opts: QuantityOptions = {}): QuantitySchema {
+  const info = DIMENSIONS[dimension];
+  const example = opts.example ?? info.example;
+  const rule = ruleText(dimension, opts);
+  const unit = info.unit;
+  const show = (x: number): string => formatQuantity(x, unit);
+  const schema = z.custom<number | string>(() => true).transform((value, ctx): number => {
+    let x: number;
+    try {
+      x = parseQuantity(value, dimension);
+    } catch (e) {
+      if (!(e instanceof TanklightInputError)) throw e;
+      const first = e.issues[0];
+      let message = first?.message ?? `expected ${info.noun}`;
+      if (opts.example !== undefined) message = message.replace(`'${info.example}'`, `'${example}'`);
+      ctx.issues.push({
+        code: "custom",
+        message,
+        input: value,
+        params: { detail: first?.detail, expected: rule ? `${info.noun} ${rule}` : info.noun },
+      });
+      return z.NEVER;
+    }
+    const broken =
+      (opts.positive && !(x > 0)) ||
+      (opts.nonNegative && !(x >= 0)) ||
+      (opts.min !== undefined && !(x >= opts.min)) ||
+      (opts.max !== undefined && !(x <= opts.max));
+    if (broken) {
+      ctx.issues.push({
+        code: "custom",
+        message: `must be ${rule}`,
+        input: value,
+        params: {
+          detail: typeof value === "string" ? `= ${show(x)}` : undefined,
+          expected: `${info.noun} ${rule}`,
+        },
+      });
+      return z.NEVER;
+    }
+    return x;
+  });
+  const meta: QuantityMeta = { unit, dimension, example, rule };
+  return schema.meta({ ...meta }) as unknown as QuantitySchema;
+}
+
+/** The metadata of a schema made by {@link quantity}, or undefined. */
+export function quantityMeta(schema: z.ZodType): QuantityMeta | undefined {
+  const m = schema.meta() as Partial<QuantityMeta> | undefined;
+  if (m === undefined || typeof m.dimension !== "string" || typeof m.unit !== "string") return undefined;
+  return m as QuantityMeta;
+}
+
+// ── shorthands ───────────────────────────────────────────────────────────────
+// Sizes of things and circuit element values are positive by default (a coil radius, a wire
+// diameter, a frequency, an inductance, a capacitance, a resistance, a time step): zero or
+// negative has no physical meaning there. Signed by default: voltage, current (phasor and
+// bias values may be negative), angle, and the components of positions (vec3).
+// Temperature is absolute and ≥ 0 K by parseQuantity itself. Pass options to change.
+
+/** Length in m, > 0 by default ("12 mm", "0.5 mil"). */
+export const length = (opts: QuantityOptions = { positive: true }): QuantitySchema => quantity("length", opts);
+/** Area in m², > 0 by default ("1.5 mm^2"). */
+export const area = (opts: QuantityOptions = { positive: true }): QuantitySchema => quantity("area", opts);
+/** Frequency in Hz, > 0 by default ("217 kHz"). */
+export const frequency = (opts: QuantityOptions = { positive: true }): QuantitySchema => quantity("frequency", opts);
+/** Inductance in H, > 0 by default ("24 uH"). */
+export const inductance = (opts: QuantityOptions = { positive: true }): QuantitySchema => quantity("inductance", opts);
+/** Capacitance in F, > 0 by default ("4.7 nF"). */
+export const capacitance = (opts: QuantityOptions = { positive: true }): QuantitySchema => quantity("capacitance", opts);
+/** Resistance in Ω, ≥ 0 by default (a zero series resistance is a legal ideal part) ("0.5 ohm"). */
+export const resistance = (opts: QuantityOptions = { nonNegative: true }): QuantitySchema => quantity("resistance", opts);
+/** Conductance in S, ≥ 0 by default ("20 mS"). */
+export const conductance = (opts: QuantityOptions = { nonNegative: true }): QuantitySchema => quantity("conductance", opts);
+/** Voltage in V, any sign by default ("3.3 V"). */
+export const voltage = (opts: QuantityOptions = {}): QuantitySchema => quantity("voltage", opts);
+/** Current in A, any sign by default ("150 mA"). */
+export const current = (opts: QuantityOptions = {}): QuantitySchema => quantity("current", opts);
+/** Power in W, ≥ 0 by default ("2 W"). */
+export const power = (opts: QuantityOptions = { nonNegative: true }): QuantitySchema => quantity("power", opts);
+/** Energy in J, ≥ 0 by default ("5 mJ"). */
+export const energy = (opts: QuantityOptions = { nonNegative: true }): QuantitySchema => quantity("energy", opts);
+/** Charge in C, any sign by default ("10 nC"). */
+export const charge = (opts: QuantityOptions = {}): QuantitySchema => quantity("charge", opts);
+/** Angle in rad, any sign by default ("30 deg"). */
+export const angle = (opts: QuantityOptions = {}): QuantitySchema => quantity("angle", opts);
+/** Absolute temperature in K, ≥ 0 K always ("25 degC" → 298.15). */
+export const temperature = (opts: QuantityOptions = {}): QuantitySchema => quantity("temperature", opts);
+/** Resistivity in Ω·m, > 0 by default ("1.72e-8 ohm m"). */
+export const resistivity = (opts: QuantityOptions = { positive: true }): QuantitySchema => quantity("resistivity", opts);
+/** Flux density in T, any sign by default ("27 uT"). */
+export const fluxDensity = (opts: QuantityOptions = {}): QuantitySchema => quantity("fluxDensity", opts);
+/** Magnetic field strength in A/m, any sign by default ("21 A/m"). */
+export const fieldStrength = (opts: QuantityOptions = {}): QuantitySchema => quantity("fieldStrength", opts);
+/** Time in s, > 0 by default ("10 us"). */
+export const time = (opts: QuantityOptions = { positive: true }): QuantitySchema => quantity("time", opts);
+/** Plain number, any sign by default ("0.5", "5 %"). */
+export const dimensionless = (opts: QuantityOptions = {}): QuantitySchema => quantity("dimensionless", opts);
+
+/**
+ * A point or offset [x, y, z] in m; each element a length of any sign ("12 mm", 0.003).
+ * @example parseInput(vec3(), ["1 mm", 0, "-2 cm"], "pose") // → [0.001, 0, -0.02]
+ */
+export function vec3(): z.ZodType<readonly [number, number, number], readonly [number | string, number | string, number | string]> {
+  const c = quantity("length");
+  return z.tuple([c, c, c]).readonly() as unknown as z.ZodType<
+    readonly [number, number, number],
+    readonly [number | string, number | string, number | string]
+  >;
+}
+
+// ── running a schema ─────────────────────────────────────────────────────────
+
+/** A zod path as a dotted string: ["coils", 0, "radius"] → "coils[0].radius". */
+function dottedPath(path: readonly PropertyKey[]): string {
+  let out = "";
+  for (const key of path) {
+    if (typeof key === "number") out += `[${key}]`;
+    else out += out === "" ? String(key) : `.${String(key)}`;
+  }
+  return out;
+}
+
+/** The received value at a path of the raw input, or undefined when the path does not exist. */
+function valueAt(input: unknown, path: readonly PropertyKey[]): unknown {
+  let v: unknown = input;
+  for (const key of path) {
+    if (v === null || typeof v !== "object") return undefined;
+    v = (v as Record<PropertyKey, unknown>)[key];
+  }
+  return v;
+}
+
+/** One zod issue as our InputIssues (one per unknown key, else one). */
+function toInputIssues(issue: z.core.$ZodIssue, input: unknown): InputIssue[] {
+  if (issue.code === "unrecognized_keys") {
+    return issue.keys.map((key) => ({
+      path: dottedPath([...issue.path, key]),
+      message: "unknown field",
+      value: valueAt(input, [...issue.path, key]),
+    }));
+  }
+  return [toInputIssue(issue, input)];
+}
+
+/** One zod issue as our InputIssue. */
+function toInputIssue(issue: z.core.$ZodIssue, input: unknown): InputIssue {
+  const path = dottedPath(issue.path);
+  const value = "input" in issue && issue.input !== undefined ? issue.input : valueAt(input, issue.path);
+  const params = (issue as { params?: { detail?: string; expected?: string } }).params;
+  let message = issue.message;
+  if (issue.code !== "custom") {
+    // zod's own texts ("Invalid input: expected number, received string") lose the value;
+    // keep them, lower-cased, since parseInput appends the received value.
+    message = message.replace(/^Invalid input: /, "").replace(/, received \w+$/, "");
+  }
+  return {
+    path,
+    message,
+    value,
+    ...(params?.expected === undefined ? {} : { expected: params.expected }),
+    ...(params?.detail === undefined ? {} : { detail: params.detail }),
+  };
+}
+
+/**
+ * Validate and convert user input with a schema; on failure throw one TanklightInputError
+ * listing every issue with its dotted path, the received value and the expectation:
+ * `roundCoil: coil.radius: expected a length like '12 mm', got '5 kHz' (a frequency)`.
+ *
+ * @param schema a zod schema (typically built from {@link quantity} fields).
+ * @param input the raw user input.
+ * @param where the public function or builder name, prefixed to the message.
+ * @returns the parsed output (quantities in SI numbers).
+ * @throws TanklightInputError with `issues[]` (path, message, value, expected, detail).
+ * @example parseInput(z.object({ radius: length() }), { radius: "12 mm" }, "roundCoil") // → { radius: 0.012 }
+ */
+export function parseInput<T>(schema: z.ZodType<T>, input: unknown, where: string): T {
+  const result = schema.safeParse(input, { reportInput: true });
+  if (result.success) return result.data;
+  const issues = result.error.issues.flatMap((i) => toInputIssues(i, input));
+  throw new TanklightInputError(issues, where);
+}
+

@@ -1,0 +1,385 @@
+/**
+ * Quantities at the edge: parse "12 mm", "217 kHz", "4.7 nF" into SI numbers, and format SI
+ * numbers back into engineering notation (design.md §3, "SI inside, strings at the edge").
+ *
+ * Parsing uses one private mathjs instance (mathjs units) for the unit algebra and the
+ * dimension check. Units are parsed once at the boundary; hot paths never call these functions.
+ * The rules (which strings are accepted, what a bare number means) are documented in
+ * docs/methods/units.md.
+ */
+import { all, create, type FactoryFunctionMap, type Unit } from "mathjs";
+import { TanklightInputError } from "./errors.ts";
+
+/** Physical dimension of an input quantity; decides the SI unit it is converted to. */
+export type Dimension =
+  | "length"
+  | "area"
+  | "frequency"
+  | "inductance"
+  | "capacitance"
+  | "resistance"
+  | "conductance"
+  | "voltage"
+  | "current"
+  | "power"
+  | "energy"
+  | "charge"
+  | "angle"
+  | "temperature"
+  | "resistivity"
+  | "fluxDensity"
+  | "fieldStrength"
+  | "time"
+  | "dimensionless";
+
+/** What we know about one dimension: its SI unit and how to talk about it in messages. */
+export interface DimensionInfo {
+  /** the SI unit every parsed value is returned in, as printed ("Ω·m", "m²", "" for none) */
+  readonly unit: string;
+  /** the same unit in mathjs syntax, used for the conversion */
+  readonly mathUnit: string;
+  /** the dimension in words with its article, for messages: "a length", "an inductance" */
+  readonly noun: string;
+  /** a typical input string, shown in messages: "12 mm" */
+  readonly example: string;
+}
+
+/** The dimension table: SI unit, words and an example for every {@link Dimension}. */
+export const DIMENSIONS: Readonly<Record<Dimension, DimensionInfo>> = {
+  length: { unit: "m", mathUnit: "m", noun: "a length", example: "12 mm" },
+  area: { unit: "m²", mathUnit: "m^2", noun: "an area", example: "1.5 mm^2" },
+  frequency: { unit: "Hz", mathUnit: "Hz", noun: "a frequency", example: "217 kHz" },
+  inductance: { unit: "H", mathUnit: "H", noun: "an inductance", example: "24 uH" },
+  capacitance: { unit: "F", mathUnit: "F", noun: "a capacitance", example: "4.7 nF" },
+  resistance: { unit: "Ω", mathUnit: "ohm", noun: "a resistance", example: "0.5 ohm" },
+  conductance: { unit: "S", mathUnit: "S", noun: "a conductance", example: "20 mS" },
+  voltage: { unit: "V", mathUnit: "V", noun: "a voltage", example: "3.3 V" },
+  current: { unit: "A", mathUnit: "A", noun: "a current", example: "150 mA" },
+  power: { unit: "W", mathUnit: "W", noun: "a power", example: "2 W" },
+  energy: { unit: "J", mathUnit: "J", noun: "an energy", example: "5 mJ" },
+  charge: { unit: "C", mathUnit: "C", noun: "a charge", example: "10 nC" },
+  angle: { unit: "rad", mathUnit: "rad", noun: "an angle", example: "30 deg" },
+  temperature: { unit: "K", mathUnit: "K", noun: "a temperature", example: "25 degC" },
+  resistivity: { unit: "Ω·m", mathUnit: "ohm m", noun: "a resistivity", example: "1.72e-8 ohm m" },
+  fluxDensity: { unit: "T", mathUnit: "T", noun: "a flux density", example: "27 uT" },
+  fieldStrength: { unit: "A/m", mathUnit: "A/m", noun: "a field strength", example: "21 A/m" },
+  time: { unit: "s", mathUnit: "s", noun: "a time", example: "10 us" },
+  dimensionless: { unit: "", mathUnit: "", noun: "a plain number", example: "0.5" },
+};
+
+const DIMENSION_NAMES = Object.keys(DIMENSIONS) as Dimension[];
+
+// ── the private mathjs instance ──────────────────────────────────────────────
+// One instance, created on first use, so that our few added units never touch the global one.
+let mathInstance: ReturnType<typeof create> | undefined;
+let referenceUnits: Map<Dimension, Unit> | undefined;
+
+function math(): ReturnType<typeof create> {
+  if (mathInstance === undefined) {
+    const m = create(all as FactoryFunctionMap);
+    // The gauss (CGS unit of flux density), 1 G = 1e-4 T exactly by definition; common in
+    // older magnetics literature and on cheap field meters. Prefixes allowed ("mG").
+    m.createUnit("gauss", { definition: "1e-4 T", prefixes: "short", aliases: [] });
+    mathInstance = m;
+  }
+  return mathInstance;
+}
+
+function references(): Map<Dimension, Unit> {
+  if (referenceUnits === undefined) {
+    const m = math();
+    referenceUnits = new Map();
+    for (const d of DIMENSION_NAMES) {
+      const info = DIMENSIONS[d];
+      if (info.mathUnit !== "") referenceUnits.set(d, m.unit(info.mathUnit));
+    }
+  }
+  return referenceUnits;
+}
+
+/** The dimension of a mathjs unit among ours, or undefined when it is none of them. */
+function dimensionOf(u: Unit): Dimension | undefined {
+  const dims = (u as unknown as { dimensions: number[] }).dimensions;
+  if (dims.every((x) => x === 0)) return "dimensionless";
+  for (const [d, ref] of references()) {
+    if (u.equalBase(ref)) return d;
+  }
+  return undefined;
+}
+
+// ── parsing ──────────────────────────────────────────────────────────────────
+
+/** A leading decimal number: sign, digits with optional point, optional exponent. */
+const NUMBER_PREFIX = /^([+-]?(?:\d+(?:\.\d*)?|\.\d+))(?:[eE]([+-]?\d+))?/;
+
+/** Dimensionless unit words mathjs lacks, with their factor (exact by definition). */
+const PLAIN_FACTORS: Readonly<Record<string, number>> = { "%": 0.01, ppm: 1e-6 };
+
+/**
+ * Rewrite the Unicode spellings people paste (µ, Ω, °C, ², ·, −) into mathjs syntax.
+ * Only symbols are rewritten; words pass unchanged.
+ */
+function normalizeUnitText(text: string): string {
+  return text
+    .replace(/\u2212/g, "-") // minus sign → hyphen-minus
+    .replace(/[\u00B5\u03BC]/g, "u") // micro sign, Greek mu → u
+    .replace(/[\u03A9\u2126]/g, "ohm") // Greek capital omega, ohm sign → ohm
+    .replace(/\u00B0\s*C/g, "degC")
+    .replace(/\u00B0\s*F/g, "degF")
+    .replace(/\u00B0/g, "deg")
+    .replace(/\u00B2/g, "^2")
+    .replace(/\u00B3/g, "^3")
+    .replace(/[\u00B7\u22C5]/g, " "); // middle dot, dot operator → product
+}
+
+/** Build the one error parseQuantity throws. */
+function quantityError(
+  field: string | undefined,
+  value: unknown,
+  dimension: Dimension,
+  message: string,
+  detail?: string,
+): TanklightInputError {
+  const info = DIMENSIONS[dimension];
+  return new TanklightInputError([
+    {
+      path: field ?? "",
+      message,
+      value,
+      expected: info.unit === "" ? info.noun : `${info.noun} in ${info.unit} or a string like '${info.example}'`,
+      ...(detail === undefined ? {} : { detail }),
+    },
+  ]);
+}
+
+function expectation(dimension: Dimension): string {
+  const info = DIMENSIONS[dimension];
+  return `expected ${info.noun} like '${info.example}'`;
+}
+
+/**
+ * Convert a quantity given as an SI number or as a string with a unit into the SI number.
+ *
+ * Rules (docs/methods/units.md): a `number` is taken as already in SI units (m, Hz, H, F, Ω,
+ * V, A, W, rad, K, Ω·m, T, A/m, s …) and must be finite. A string is a decimal number followed
+ * by a unit, with or without a space: "12 mm", "4.7nF", "4.7 nanofarad", "0.5 mil",
+ * "25 degC", "25 °C", "30 deg", "1.72e-8 ohm m", "100 µT", "3 A/m". The unit must have the
+ * requested dimension. A bare number string ("12") is accepted only for "dimensionless";
+ * for any other dimension it is an error, since "12" could mean 12 m or 12 mm. Temperatures
+ * are absolute (°C and °F are converted with their offsets) and must be ≥ 0 K. No arithmetic,
+ * no comma decimals, no separated prefixes ("4.7n F" is rejected: "n" is no unit).
+ * Signs are not checked here (a position may be negative); schemas add sign and range rules.
+ *
+ * @param value SI number, or string "<number> <unit>".
+ * @param dimension the physical dimension expected (decides the SI unit of the result).
+ * @param field dotted path of the input field, used in the error ("coil.radius").
+ * @returns the value in SI units of `dimension`.
+ * @throws TanklightInputError naming the field, the expectation and the value:
+ *   `coil.radius: expected a length like '12 mm', got '5 kHz' (a frequency)`.
+ * @example parseQuantity("4.7 nF", "capacitance") // → 4.7e-9
+ * @example parseQuantity("25 degC", "temperature") // → 298.15
+ * @example parseQuantity("0.5 mil", "length") // → 1.27e-5 (1 mil = 0.001 in = 25.4 µm exactly)
+ */
+export function parseQuantity(value: number | string, dimension: Dimension, field?: string): number {
+  if (typeof value === "number") {
+    if (!Number.isFinite(value)) {
+      throw quantityError(field, value, dimension, `${expectation(dimension)} (a finite number)`);
+    }
+    if (dimension === "temperature" && value < 0) {
+      throw quantityError(field, value, dimension, "must be ≥ 0 K (absolute temperature)");
+    }
+    return value;
+  }
+  if (typeof value !== "string") {
+    throw quantityError(field, value, dimension, expectation(dimension));
+  }
+  const text = normalizeUnitText(value.trim());
+  const match = NUMBER_PREFIX.exec(text);
+  if (match === null) {
+    throw quantityError(field, value, dimension, expectation(dimension), "no leading number");
+  }
+  const mantissa = match[1] ?? "";
+  const exponent = Number(match[2] ?? "0");
+  const unitText = text.slice(match[0].length).trim();
+  const plain = Number(`${mantissa}e${exponent}`);
+
+  let result: number;
+  if (unitText === "") {
+    if (dimension !== "dimensionless") {
+      throw quantityError(
+        field,
+        value,
+        dimension,
+        expectation(dimension),
+        `no unit; write e.g. '${mantissa}${match[2] === undefined ? "" : "e" + match[2]} ${DIMENSIONS[dimension].mathUnit}' or pass the number for SI`,
+      );
+    }
+    result = plain;
+  } else if (Object.hasOwn(PLAIN_FACTORS, unitText)) {
+    if (dimension !== "dimensionless") {
+      throw quantityError(field, value, dimension, expectation(dimension), "a plain number");
+    }
+    result = scaleDecimal(mantissa, exponent, PLAIN_FACTORS[unitText] ?? 1);
+  } else {
+    let u: Unit;
+    try {
+      u = math().unit(unitText);
+    } catch {
+      throw quantityError(field, value, dimension, expectation(dimension), `unknown unit '${unitText}'`);
+    }
+    const found = dimensionOf(u);
+    if (found !== dimension) {
+      const what = found === undefined ? `unit '${unitText}' is not ${DIMENSIONS[dimension].noun}` : found === "dimensionless" ? "a plain number" : DIMENSIONS[found].noun;
+      throw quantityError(field, value, dimension, expectation(dimension), what);
+    }
+    if (dimension === "temperature") {
+      // Offset units (degC, degF): mathjs converts the absolute value.
+      result = math().unit(plain, unitText).toNumber("K");
+    } else if (dimension === "dimensionless") {
+      result = scaleDecimal(mantissa, exponent, math().unit(1, unitText).toSI().toNumber());
+    } else {
+      const factor = math().unit(1, unitText).toNumber(DIMENSIONS[dimension].mathUnit);
+      result = scaleDecimal(mantissa, exponent, factor);
+    }
+  }
+  if (!Number.isFinite(result)) {
+    throw quantityError(field, value, dimension, `${expectation(dimension)} (a finite number)`, "overflows");
+  }
+  if (result === 0 && Number(mantissa) !== 0) {
+    throw quantityError(field, value, dimension, `${expectation(dimension)} (a representable number)`, "underflows to 0");
+  }
+  if (dimension === "temperature" && result < 0) {
+    throw quantityError(field, value, dimension, "must be ≥ 0 K (absolute temperature)", `${Number(result.toPrecision(12))} K`);
+  }
+  return result;
+}
+
+/**
+ * mantissa·10^exponent·factor, correctly rounded when the factor is a power of ten (every SI
+ * prefix, also products such as µΩ·cm): the decimal string is shifted instead of multiplying
+ * by an inexact 1e-9, so "4.7 nF" gives exactly the double nearest 4.7e-9.
+ */
+function scaleDecimal(mantissa: string, exponent: number, factor: number): number {
+  const p = Math.round(Math.log10(factor));
+  if (Number.isFinite(p) && Math.abs(factor / 10 ** p - 1) < 1e-12) {
+    return Number(`${mantissa}e${exponent + p}`);
+  }
+  return Number(`${mantissa}e${exponent}`) * factor;
+}
+
+/**
+ * Is `value` acceptable for `dimension`? The same rules as {@link parseQuantity}, without throwing.
+ * @example isQuantity("5 kHz", "length") // → false
+ */
+export function isQuantity(value: unknown, dimension: Dimension): boolean {
+  if (typeof value !== "number" && typeof value !== "string") return false;
+  try {
+    parseQuantity(value, dimension);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+// ── formatting ───────────────────────────────────────────────────────────────
+
+/** SI prefixes from quecto (10⁻³⁰) to quetta (10³⁰), index 10 = none (SI Brochure 2019, Table 7; ronna/quetta/ronto/quecto added 2022). */
+const PREFIXES = ["q", "r", "y", "z", "a", "f", "p", "n", "µ", "m", "", "k", "M", "G", "T", "P", "E", "Z", "Y", "R", "Q"] as const;
+const PREFIX_OFFSET = 10;
+
+/**
+ * Units printed without an SI prefix: levels, ratios and units that take no prefixes by
+ * convention (°C and degrees of angle: SI Brochure 2019 §5.3.4 and Table 8; %, ppm; dB).
+ */
+const UNPREFIXED = new Set(["", "%", "ppm", "°C", "°", "deg", "degC", "dB", "dBm", "dBµA/m", "dBµV/m", "dBuA/m", "dBuV/m", "rad", "sr", "K", "°F"]);
+
+/**
+ * Format an SI number in engineering notation with an SI prefix: one to three integer
+ * digits, `digits` significant figures, prefix between quecto and quetta.
+ *
+ * Rules: x = 0 prints "0 <unit>"; negatives keep their sign ("-4.70 nF"); ±∞ prints "∞ <unit>"
+ * / "-∞ <unit>"; outside the prefix range (≥ 1000 Q or < 1 q) the plain exponent form is used
+ * ("1.00e+33 Hz"). A unit in the unprefixed set (%, ppm, dB…, °C, °, deg, rad, K, "") is
+ * printed in plain fixed notation between 1e-3 and 1e6 and in exponent form outside. The
+ * prefix attaches to the first unit factor; when that factor carries a power ("m²", "m^2",
+ * "m³") the prefix is scaled accordingly (1.5e-6 m² → "1.50 mm²"). Pass the SI unit without
+ * a prefix ("m", not "mm"). Output parses back with {@link parseQuantity} where the unit is one
+ * it knows.
+ *
+ * @param x value in SI units of `unit`, not NaN.
+ * @param unit SI unit symbol, e.g. "F", "Hz", "Ω", "A/m", "m²"; "" for a plain number.
+ * @param digits significant figures, integer 1–17, default 3.
+ * @returns the formatted string.
+ * @example formatQuantity(4.7e-9, "F") // → "4.70 nF"
+ * @example formatQuantity(217000, "Hz") // → "217 kHz"
+ * @example formatQuantity(0, "F") // → "0 F"
+ */
+export function formatQuantity(x: number, unit: string, digits = 3): string {
+  if (!(Number.isInteger(digits) && digits >= 1 && digits <= 17)) {
+    throw new TanklightInputError(
+      [{ path: "digits", message: "must be an integer from 1 to 17", value: digits, expected: "1–17" }],
+      "formatQuantity",
+    );
+  }
+  if (Number.isNaN(x)) {
+    throw new TanklightInputError(
+      [{ path: "x", message: `must be a number in ${unit || "SI units"}`, value: x, expected: "not NaN" }],
+      "formatQuantity",
+    );
+  }
+  const space = unit === "" ? "" : " ";
+  if (x === Infinity) return `∞${space}${unit}`;
+  if (x === -Infinity) return `-∞${space}${unit}`;
+  if (x === 0) return `0${space}${unit}`;
+
+  if (UNPREFIXED.has(unit)) {
+    const rounded = Number(x.toPrecision(digits));
+    const ax = Math.abs(rounded);
+    const body = ax >= 1e-3 && ax < 1e6 ? fixedSignificant(rounded, digits) : exponentForm(x, digits);
+    return `${body}${space}${unit}`;
+  }
+
+  const power = leadingPower(unit);
+  // Round to the requested significant figures first, so 999.96 becomes 1.00e3 and takes "k".
+  const rounded = Number(x.toPrecision(digits));
+  const decade = Math.floor(Math.log10(Math.abs(rounded)));
+  // prefix step: one prefix = 10^(3·power) in the value
+  const step = Math.floor(decade / (3 * power));
+  const index = step + PREFIX_OFFSET;
+  if (index < 0 || index >= PREFIXES.length) {
+    return `${exponentForm(x, digits)}${space}${unit}`;
+  }
+  const scaled = rounded / 10 ** (3 * power * step);
+  const mantissa = fixedSignificant(Number(scaled.toPrecision(digits)), digits);
+  return `${mantissa} ${PREFIXES[index]}${unit}`;
+}
+
+/** The power of the first factor of a unit symbol: "m²" → 2, "m^3/s" → 3, "A/m" → 1. */
+function leadingPower(unit: string): number {
+  const first = /^[^\s·*/^²³]+(\^(\d)|²|³)?/.exec(unit);
+  if (first === null || first[1] === undefined) return 1;
+  if (first[1] === "²") return 2;
+  if (first[1] === "³") return 3;
+  return Number(first[2] ?? "1") || 1;
+}
+
+/** A number written with exactly `digits` significant figures in fixed notation. */
+function fixedSignificant(x: number, digits: number): string {
+  if (x === 0) return "0";
+  const decade = Math.floor(Math.log10(Math.abs(x)));
+  const decimals = Math.max(0, digits - 1 - decade);
+  return x.toFixed(Math.min(decimals, 100));
+}
+
+/** Exponent form with `digits` significant figures: "1.23e+33". */
+function exponentForm(x: number, digits: number): string {
+  return x.toExponential(digits - 1);
+}
+
+/**
+ * The SI unit symbol of a dimension, as formatQuantity expects it.
+ * @example siUnit("resistance") // → "Ω"
+ */
+export function siUnit(dimension: Dimension): string {
+  return DIMENSIONS[dimension].unit;
+}

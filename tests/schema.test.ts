@@ -1,0 +1,146 @@
+import { describe, expect, expectTypeOf, it } from "vitest";
+import { z } from "zod";
+import {
+  angle,
+  capacitance,
+  frequency,
+  length,
+  parseInput,
+  quantity,
+  quantityMeta,
+  resistance,
+  temperature,
+  vec3,
+  voltage,
+  type QuantitySchema,
+} from "../lib/schema.ts";
+import { TanklightInputError } from "../lib/errors.ts";
+import { expectRelClose } from "./helpers/expectRelClose.ts";
+
+const CoilInput = z
+  .object({
+    coil: z.object({ radius: length(), turns: z.number().int().positive() }),
+    frequency: frequency(),
+    position: vec3(),
+    tuning: capacitance().optional(),
+    gap: length().prefault("3 mm"),
+  })
+  .strict();
+
+describe("quantity schemas", () => {
+  it("convert strings and numbers to SI", () => {
+    const out = parseInput(
+      CoilInput,
+      { coil: { radius: "12 mm", turns: 5 }, frequency: "217 kHz", position: [0, "1 mm", "-2 cm"] },
+      "roundCoil",
+    );
+    expect(out).toEqual({ coil: { radius: 0.012, turns: 5 }, frequency: 217e3, position: [0, 0.001, -0.02], gap: 0.003 });
+  });
+
+  it("length() is positive by default; options widen or narrow the range", () => {
+    expect(() => parseInput(length(), 0, "f")).toThrowErrorMatchingInlineSnapshot(`[TanklightInputError: f: must be > 0 m, got 0]`);
+    expect(parseInput(length({}), "-5 mm", "f")).toBe(-0.005);
+    expect(parseInput(length({ nonNegative: true }), 0, "f")).toBe(0);
+    expect(() => parseInput(length({ positive: true, max: 0.1 }), "20 cm", "f")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: f: must be > 0 m and ≤ 100.0 mm, got '20 cm' (= 200 mm)]`,
+    );
+    expect(() => parseInput(frequency({ min: 100e3, max: 1e6 }), "50 kHz", "drive")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: drive: must be ≥ 100.0 kHz and ≤ 1.000 MHz, got '50 kHz' (= 50.0 kHz)]`,
+    );
+  });
+
+  it("signed shorthands accept negatives; resistance accepts zero", () => {
+    expect(parseInput(voltage(), "-3.3 V", "v")).toBe(-3.3);
+    expectRelClose(parseInput(angle(), "-90 deg", "tilt"), -Math.PI / 2, 4e-16, "angle"); // one rounding (π/180 factor)
+    expect(parseInput(resistance(), 0, "esr")).toBe(0);
+    expect(() => parseInput(resistance(), "-1 ohm", "esr")).toThrow(TanklightInputError);
+    expectRelClose(parseInput(temperature(), "25 °C", "t"), 298.15, 4e-16, "temperature"); // one rounding (offset)
+  });
+
+  it("an example option changes the example in messages", () => {
+    expect(() => parseInput(length({ positive: true, example: "0.4 mm" }), "5 kHz", "wire.diameter")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: wire.diameter: expected a length like '0.4 mm', got '5 kHz' (a frequency)]`,
+    );
+  });
+
+  it("carry meta with unit and dimension", () => {
+    expect(quantityMeta(length())).toEqual({ unit: "m", dimension: "length", example: "12 mm", rule: "> 0 m" });
+    expect(quantityMeta(capacitance())?.unit).toBe("F");
+    expect(quantityMeta(z.number())).toBeUndefined();
+  });
+});
+
+describe("parseInput", () => {
+  it("lists every issue with its dotted path, value and expectation", () => {
+    const bad = {
+      coil: { radius: "5 kHz", turns: 0 },
+      frequency: -3,
+      position: [0, "1 mm", Infinity],
+      tuning: "4.7n F",
+      extra: 1,
+    };
+    expect(() => parseInput(CoilInput, bad, "roundCoil")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: roundCoil: coil.radius: expected a length like '12 mm', got '5 kHz' (a frequency); coil.turns: Too small: expected number to be >0, got 0; frequency: must be > 0 Hz, got -3; position[2]: expected a length like '12 mm' (a finite number), got Infinity; tuning: expected a capacitance like '4.7 nF', got '4.7n F' (unknown unit 'n F'); extra: unknown field, got 1]`,
+    );
+    try {
+      parseInput(CoilInput, bad, "roundCoil");
+      expect.unreachable();
+    } catch (e) {
+      const issues = (e as TanklightInputError).issues;
+      expect(issues.map((i) => i.path)).toEqual(["coil.radius", "coil.turns", "frequency", "position[2]", "tuning", "extra"]);
+      expect(issues[0]).toEqual({
+        path: "coil.radius",
+        message: "expected a length like '12 mm'",
+        value: "5 kHz",
+        expected: "a length > 0 m",
+        detail: "a frequency",
+      });
+    }
+  });
+
+  it("reports missing fields and wrong types", () => {
+    expect(() => parseInput(CoilInput, {}, "roundCoil")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: roundCoil: coil: expected object, got nothing; frequency: expected a frequency like '217 kHz', got nothing; position: expected tuple, got nothing]`,
+    );
+    expect(() => parseInput(CoilInput, "hello", "roundCoil")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: roundCoil: expected object, got 'hello']`,
+    );
+    expect(() => parseInput(frequency(), { value: 3 }, "f")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: f: expected a frequency like '217 kHz', got {"value":3}]`,
+    );
+  });
+
+  it("rejects NaN, ±Infinity, empty and blank strings in every quantity", () => {
+    for (const bad of [NaN, Infinity, -Infinity, "", "   ", "12", "mm"]) {
+      expect(() => parseInput(length(), bad, "r"), String(bad)).toThrow(TanklightInputError);
+    }
+  });
+
+  it("names the path inside arrays of objects", () => {
+    const S = z.object({ tokens: z.array(z.object({ radius: length() })) });
+    expect(() => parseInput(S, { tokens: [{ radius: "5 mm" }, { radius: "5 V" }] }, "layout")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: layout: tokens[1].radius: expected a length like '12 mm', got '5 V' (a voltage)]`,
+    );
+  });
+
+  it("lets non-input errors through unchanged", () => {
+    const S = z.number().transform(() => {
+      throw new RangeError("boom");
+    });
+    expect(() => parseInput(S, 1, "x")).toThrow(RangeError);
+  });
+});
+
+describe("types", () => {
+  it("infers number outputs and number | string inputs", () => {
+    expectTypeOf(length()).toEqualTypeOf<QuantitySchema>();
+    expectTypeOf<z.output<QuantitySchema>>().toEqualTypeOf<number>();
+    expectTypeOf<z.input<QuantitySchema>>().toEqualTypeOf<number | string>();
+    type Out = z.output<typeof CoilInput>;
+    expectTypeOf<Out["coil"]["radius"]>().toEqualTypeOf<number>();
+    expectTypeOf<Out["position"]>().toEqualTypeOf<readonly [number, number, number]>();
+    expectTypeOf<Out["tuning"]>().toEqualTypeOf<number | undefined>();
+    expectTypeOf(parseInput(length(), "1 m", "x")).toEqualTypeOf<number>();
+    expectTypeOf(quantity).returns.toEqualTypeOf<QuantitySchema>();
+  });
+});

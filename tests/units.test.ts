@@ -1,0 +1,297 @@
+import { describe, expect, expectTypeOf, it } from "vitest";
+import fc from "fast-check";
+import { formatQuantity, isQuantity, parseQuantity, siUnit, DIMENSIONS, type Dimension } from "../lib/units.ts";
+import { TanklightInputError } from "../lib/errors.ts";
+import { expectRelClose } from "./helpers/expectRelClose.ts";
+import { expectOutside } from "./helpers/validation.ts";
+
+// Tolerance regimes of this file:
+//  - "exact": decimal SI-prefix conversions are correctly rounded (the decimal string is
+//    shifted, not multiplied by an inexact 1e-9), so we compare with toBe.
+//  - "one rounding": conversions with a non-decimal factor (deg → rad, inch-based units,
+//    offsets of °C/°F) take one or two floating-point roundings: rtol 4e-16 ≈ 2 ulp.
+const ONE_ROUNDING = 4e-16;
+
+describe("parseQuantity: numbers are SI", () => {
+  it("returns a finite number unchanged, any sign", () => {
+    expect(parseQuantity(0.012, "length")).toBe(0.012);
+    expect(parseQuantity(-0.5, "length")).toBe(-0.5);
+    expect(parseQuantity(0, "capacitance")).toBe(0);
+    expect(parseQuantity(1e300, "length")).toBe(1e300);
+    expect(parseQuantity(5e-324, "capacitance")).toBe(5e-324);
+  });
+
+  it("rejects NaN, Infinity and -Infinity with the field name", () => {
+    expect(() => parseQuantity(NaN, "length", "coil.radius")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: coil.radius: expected a length like '12 mm' (a finite number), got NaN]`,
+    );
+    expect(() => parseQuantity(Infinity, "frequency", "f")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: f: expected a frequency like '217 kHz' (a finite number), got Infinity]`,
+    );
+    expect(() => parseQuantity(-Infinity, "capacitance", "c")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: c: expected a capacitance like '4.7 nF' (a finite number), got -Infinity]`,
+    );
+  });
+});
+
+describe("parseQuantity: strings with units", () => {
+  it("converts SI-prefixed strings exactly (correctly rounded decimal)", () => {
+    // exact regime: "4.7 nF" must be the double nearest 4.7e-9, the same as the literal
+    expect(parseQuantity("12 mm", "length")).toBe(0.012);
+    expect(parseQuantity("217 kHz", "frequency")).toBe(217e3);
+    expect(parseQuantity("4.7 nF", "capacitance")).toBe(4.7e-9);
+    expect(parseQuantity("4.7nF", "capacitance")).toBe(4.7e-9);
+    expect(parseQuantity("4.7 nanofarad", "capacitance")).toBe(4.7e-9);
+    expect(parseQuantity("  4.7 nF  ", "capacitance")).toBe(4.7e-9);
+    expect(parseQuantity("24 uH", "inductance")).toBe(24e-6);
+    expect(parseQuantity("24 µH", "inductance")).toBe(24e-6); // micro sign U+00B5
+    expect(parseQuantity("24 μH", "inductance")).toBe(24e-6); // Greek mu U+03BC
+    expect(parseQuantity("0.5 ohm", "resistance")).toBe(0.5);
+    expect(parseQuantity("2.2 kΩ", "resistance")).toBe(2200);
+    expect(parseQuantity("2.2 kohm", "resistance")).toBe(2200);
+    expect(parseQuantity("1.72e-8 ohm m", "resistivity")).toBe(1.72e-8);
+    expect(parseQuantity("1.72e-8 Ω·m", "resistivity")).toBe(1.72e-8);
+    expect(parseQuantity("1.72 uohm cm", "resistivity")).toBe(1.72e-8);
+    expect(parseQuantity("100 uT", "fluxDensity")).toBe(1e-4);
+    expect(parseQuantity("3 A/m", "fieldStrength")).toBe(3);
+    expect(parseQuantity("1.5 mm^2", "area")).toBe(1.5e-6);
+    expect(parseQuantity("1.5 mm²", "area")).toBe(1.5e-6);
+    expect(parseQuantity("150 mA", "current")).toBe(0.15);
+    expect(parseQuantity("-3.3 V", "voltage")).toBe(-3.3);
+    expect(parseQuantity("−3.3 V", "voltage")).toBe(-3.3); // Unicode minus U+2212
+    expect(parseQuantity("10 us", "time")).toBe(1e-5);
+    expect(parseQuantity("20 mS", "conductance")).toBe(0.02);
+    expect(parseQuantity("10 nC", "charge")).toBe(1e-8);
+    expect(parseQuantity("5 mJ", "energy")).toBe(0.005);
+    expect(parseQuantity("2 W", "power")).toBe(2);
+    expect(parseQuantity("1e3 mm", "length")).toBe(1);
+    expect(parseQuantity(".5 mm", "length")).toBe(0.0005);
+    expect(parseQuantity("+5 mm", "length")).toBe(0.005);
+  });
+
+  it("reads the mil as 0.001 inch = 25.4 µm exactly", () => {
+    // source: international yard and pound agreement (1959): 1 in = 25.4 mm exactly;
+    // the mil (thou) is 0.001 in (NIST SP 811, 2008, App. B.8: mil = 2.54e-5 m exactly).
+    expectOutside({ quantity: "0.5 mil in m", source: "source: NIST SP 811 (2008) App. B.8, mil = 2.54e-5 m exactly", ours: parseQuantity("0.5 mil", "length"), reference: 1.27e-5, rtol: ONE_ROUNDING, unit: "m" });
+    expectOutside({ quantity: "1 inch in m", source: "source: NIST SP 811 (2008) App. B.8, in = 2.54e-2 m exactly", ours: parseQuantity("1 inch", "length"), reference: 0.0254, rtol: ONE_ROUNDING, unit: "m" });
+  });
+
+  it("reads Celsius and Fahrenheit as absolute temperatures", () => {
+    // source: SI Brochure 9th ed. (2019) §2.3.1: t/°C = T/K − 273.15 exactly
+    expectOutside({ quantity: "25 °C in K", source: "source: SI Brochure 2019 §2.3.1 (T = t + 273.15 K)", ours: parseQuantity("25 °C", "temperature"), reference: 298.15, rtol: ONE_ROUNDING, unit: "K" });
+    expectRelClose(parseQuantity("25 degC", "temperature"), 298.15, ONE_ROUNDING, "25 degC");
+    expectRelClose(parseQuantity("0 degC", "temperature"), 273.15, ONE_ROUNDING, "0 degC");
+    // source: NIST SP 811 (2008) App. B.9: T/K = (t/°F + 459.67)/1.8
+    expectOutside({ quantity: "77 °F in K", source: "source: NIST SP 811 (2008) App. B.9, T = (t_F + 459.67)/1.8", ours: parseQuantity("77 °F", "temperature"), reference: (77 + 459.67) / 1.8, rtol: 1e-15, unit: "K" });
+    expect(parseQuantity("300 K", "temperature")).toBe(300);
+  });
+
+  it("reads degrees as radians", () => {
+    // 90° = π/2 by definition of the degree (SI Brochure 2019, Table 8: 1° = (π/180) rad)
+    expectRelClose(parseQuantity("90 deg", "angle"), Math.PI / 2, ONE_ROUNDING, "90 deg");
+    expectRelClose(parseQuantity("90°", "angle"), Math.PI / 2, ONE_ROUNDING, "90°");
+    expectRelClose(parseQuantity("30 deg", "angle"), Math.PI / 6, ONE_ROUNDING, "30 deg");
+    expect(parseQuantity("0.25 rad", "angle")).toBe(0.25);
+  });
+
+  it("accepts huge and tiny values that stay finite and nonzero", () => {
+    expect(parseQuantity("1e300 m", "length")).toBe(1e300);
+    expect(parseQuantity("1e-30 F", "capacitance")).toBe(1e-30);
+    expect(parseQuantity("1 qF", "capacitance")).toBe(1e-30);
+  });
+
+  it("accepts bare number strings, % and ppm only for dimensionless", () => {
+    expect(parseQuantity("12", "dimensionless")).toBe(12);
+    expect(parseQuantity("5 %", "dimensionless")).toBe(0.05);
+    expect(parseQuantity("20 ppm", "dimensionless")).toBe(2e-5);
+    expect(parseQuantity(" 0.5 ", "dimensionless")).toBe(0.5);
+  });
+
+  it("accepts the gauss for flux density (1 G = 1e-4 T by definition)", () => {
+    expect(parseQuantity("1 gauss", "fluxDensity")).toBe(1e-4);
+  });
+});
+
+describe("parseQuantity: rejected strings", () => {
+  it("rejects a unit of the wrong dimension and says what it was", () => {
+    expect(() => parseQuantity("5 kHz", "length", "coil.radius")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: coil.radius: expected a length like '12 mm', got '5 kHz' (a frequency)]`,
+    );
+    expect(() => parseQuantity("5 kg", "length", "coil.radius")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: coil.radius: expected a length like '12 mm', got '5 kg' (unit 'kg' is not a length)]`,
+    );
+    expect(() => parseQuantity("30 deg", "dimensionless", "k")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: k: expected a plain number like '0.5', got '30 deg' (an angle)]`,
+    );
+  });
+
+  it("rejects a bare number string where a unit is needed", () => {
+    expect(() => parseQuantity("12", "length", "coil.radius")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: coil.radius: expected a length like '12 mm', got '12' (no unit; write e.g. '12 m' or pass the number for SI)]`,
+    );
+  });
+
+  it("rejects empty, blank, unknown-unit and malformed strings", () => {
+    expect(() => parseQuantity("", "length", "r")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: r: expected a length like '12 mm', got '' (no leading number)]`,
+    );
+    expect(() => parseQuantity("   ", "length", "r")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: r: expected a length like '12 mm', got '   ' (no leading number)]`,
+    );
+    expect(() => parseQuantity("5 furlongs", "length", "r")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: r: expected a length like '12 mm', got '5 furlongs' (unknown unit 'furlongs')]`,
+    );
+    expect(() => parseQuantity("4.7n F", "capacitance", "c")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: c: expected a capacitance like '4.7 nF', got '4.7n F' (unknown unit 'n F')]`,
+    );
+    expect(() => parseQuantity("mm", "length", "r")).toThrow(TanklightInputError);
+    expect(() => parseQuantity("NaN mm", "length", "r")).toThrow(TanklightInputError);
+    expect(() => parseQuantity("Infinity m", "length", "r")).toThrow(TanklightInputError);
+    expect(() => parseQuantity("1,5 mm", "length", "r")).toThrow(TanklightInputError);
+    expect(() => parseQuantity("2 mm + 3 mm", "length", "r")).toThrow(TanklightInputError);
+    expect(() => parseQuantity("sqrt(2) mm", "length", "r")).toThrow(TanklightInputError);
+  });
+
+  it("rejects strings that overflow or underflow the double range", () => {
+    expect(() => parseQuantity("1e400 m", "length", "r")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: r: expected a length like '12 mm' (a finite number), got '1e400 m' (overflows)]`,
+    );
+    expect(() => parseQuantity("1e-400 F", "capacitance", "c")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: c: expected a capacitance like '4.7 nF' (a representable number), got '1e-400 F' (underflows to 0)]`,
+    );
+  });
+
+  it("rejects temperatures below absolute zero", () => {
+    expect(() => parseQuantity("-300 degC", "temperature", "ambient")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: ambient: must be ≥ 0 K (absolute temperature), got '-300 degC' (-26.85 K)]`,
+    );
+    expect(() => parseQuantity(-1, "temperature", "ambient")).toThrow(TanklightInputError);
+  });
+
+  it("rejects values that are neither number nor string", () => {
+    expect(() => parseQuantity(null as unknown as number, "length", "r")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: r: expected a length like '12 mm', got null]`,
+    );
+  });
+
+  it("puts the field, the value and the expectation into issues[]", () => {
+    try {
+      parseQuantity("5 kHz", "length", "coil.radius");
+      expect.unreachable();
+    } catch (e) {
+      expect(e).toBeInstanceOf(TanklightInputError);
+      expect((e as TanklightInputError).issues).toEqual([
+        {
+          path: "coil.radius",
+          message: "expected a length like '12 mm'",
+          value: "5 kHz",
+          expected: "a length in m or a string like '12 mm'",
+          detail: "a frequency",
+        },
+      ]);
+    }
+  });
+});
+
+describe("parseQuantity: properties", () => {
+  it("a number printed with an SI prefix parses back to itself (exact decimal regime)", () => {
+    const prefixes: [string, number][] = [["p", -12], ["n", -9], ["u", -6], ["m", -3], ["", 0], ["k", 3], ["M", 6]];
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 999_999 }), fc.integer({ min: 0, max: prefixes.length - 1 }), (digits, i) => {
+        const [p, e] = prefixes[i] ?? ["", 0];
+        const text = `${digits / 1000} ${p}F`;
+        return parseQuantity(text, "capacitance") === Number(`${digits / 1000}e${e}`);
+      }),
+    );
+  });
+
+  it("isQuantity agrees with parseQuantity", () => {
+    expect(isQuantity("12 mm", "length")).toBe(true);
+    expect(isQuantity("5 kHz", "length")).toBe(false);
+    expect(isQuantity(NaN, "length")).toBe(false);
+    expect(isQuantity({}, "length")).toBe(false);
+  });
+
+  it("every dimension's example parses to its own dimension", () => {
+    for (const d of Object.keys(DIMENSIONS) as Dimension[]) {
+      expect(isQuantity(DIMENSIONS[d].example, d), d).toBe(true);
+    }
+  });
+});
+
+describe("formatQuantity", () => {
+  it("prints engineering notation with an SI prefix and 3 significant figures", () => {
+    expect(formatQuantity(4.7e-9, "F")).toBe("4.70 nF");
+    expect(formatQuantity(0.012, "m")).toBe("12.0 mm");
+    expect(formatQuantity(217000, "Hz")).toBe("217 kHz");
+    expect(formatQuantity(1, "V")).toBe("1.00 V");
+    expect(formatQuantity(24e-6, "H")).toBe("24.0 µH");
+    expect(formatQuantity(1.72e-8, "Ω·m")).toBe("17.2 nΩ·m");
+    expect(formatQuantity(21, "A/m")).toBe("21.0 A/m");
+    expect(formatQuantity(4.7e-9, "F", 2)).toBe("4.7 nF");
+    expect(formatQuantity(4.7e-9, "F", 5)).toBe("4.7000 nF");
+  });
+
+  it("handles zero, negatives, rounding across a prefix, and infinities", () => {
+    expect(formatQuantity(0, "F")).toBe("0 F");
+    expect(formatQuantity(-4.7e-9, "F")).toBe("-4.70 nF");
+    expect(formatQuantity(999.96, "Hz")).toBe("1.00 kHz");
+    expect(formatQuantity(0.9999, "V")).toBe("1.00 V");
+    expect(formatQuantity(Infinity, "H")).toBe("∞ H");
+    expect(formatQuantity(-Infinity, "H")).toBe("-∞ H");
+  });
+
+  it("falls back to exponent form beyond quecto and quetta", () => {
+    expect(formatQuantity(1e30, "Hz")).toBe("1.00 QHz");
+    expect(formatQuantity(1e33, "Hz")).toBe("1.00e+33 Hz");
+    expect(formatQuantity(1e-30, "F")).toBe("1.00 qF");
+    expect(formatQuantity(1e-33, "F")).toBe("1.00e-33 F");
+  });
+
+  it("scales the prefix by the power of the first unit factor", () => {
+    expect(formatQuantity(1.5e-6, "m²")).toBe("1.50 mm²");
+    expect(formatQuantity(1.5e-6, "m^2")).toBe("1.50 mm^2");
+    expect(formatQuantity(2e-9, "m³")).toBe("2.00 mm³");
+  });
+
+  it("does not prefix %, dB, °C, deg, rad, K or plain numbers", () => {
+    expect(formatQuantity(25, "°C")).toBe("25.0 °C");
+    expect(formatQuantity(0.5, "")).toBe("0.500");
+    expect(formatQuantity(12345678, "")).toBe("1.23e+7");
+    expect(formatQuantity(3.5, "%")).toBe("3.50 %");
+    expect(formatQuantity(-15, "dBµA/m")).toBe("-15.0 dBµA/m");
+    expect(formatQuantity(0.0005, "rad")).toBe("5.00e-4 rad");
+    expect(formatQuantity(298.15, "K")).toBe("298 K");
+  });
+
+  it("rejects NaN and bad digit counts", () => {
+    expect(() => formatQuantity(NaN, "F")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: formatQuantity: x: must be a number in F, got NaN]`,
+    );
+    expect(() => formatQuantity(1, "F", 0)).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: formatQuantity: digits: must be an integer from 1 to 17, got 0]`,
+    );
+  });
+
+  it("round-trips through parseQuantity within the printed precision", () => {
+    // regime "printed precision": 6 significant figures printed → rtol 5e-6 (half a unit in the 6th digit)
+    fc.assert(
+      fc.property(fc.double({ min: 1e-15, max: 1e12, noNaN: true }), fc.boolean(), (x, neg) => {
+        const v = neg ? -x : x;
+        const back = parseQuantity(formatQuantity(v, "F", 6), "capacitance");
+        return Math.abs(back - v) <= 5e-6 * Math.abs(v);
+      }),
+    );
+  });
+});
+
+describe("types", () => {
+  it("has the documented signatures", () => {
+    expectTypeOf(parseQuantity).parameters.toEqualTypeOf<[number | string, Dimension, (string | undefined)?]>();
+    expectTypeOf(parseQuantity).returns.toEqualTypeOf<number>();
+    expectTypeOf(formatQuantity).returns.toEqualTypeOf<string>();
+    expectTypeOf(siUnit).parameter(0).toEqualTypeOf<Dimension>();
+    expectTypeOf<"length">().toMatchTypeOf<Dimension>();
+    expect(siUnit("resistance")).toBe("Ω");
+  });
+});
