@@ -1,83 +1,117 @@
 /**
- * Numerical quadrature: Gauss–Legendre rules of any order (cached) and adaptive
+ * Numerical quadrature: Gauss–Legendre rules of any order (cached) and globally adaptive
  * Gauss–Kronrod 7/15 with absolute and relative tolerance.
  *
- * Methods: Gauss–Legendre nodes by Newton's iteration on P_n (Abramowitz & Stegun 1964,
- * §25.4.29; Numerical Recipes §4.6); Kronrod 7/15 nodes and weights as tabulated by
- * Piessens et al., QUADPACK (1983), routine QK15.
+ * Methods:
+ * - Gauss–Legendre nodes by Newton's iteration on P_n(x) (three-term recurrence, A&S 1964
+ *   eq. 22.7.10), started from Tricomi's approximation x ≈ (1 − (n−1)/(8n³))·cos(π(4i+3)/(4n+2))
+ *   (A&S 22.16.6 for the angle; Tricomi 1950 for the factor); weights
+ *   w = 2/((1 − x²)·P_n′(x)²) (A&S eq. 25.4.29). Two details keep the weights accurate for
+ *   large n: 1 − x² is formed as (1 − x)(1 + x), and the weight is evaluated at the true root
+ *   r = x − δ (δ = P_n/P_n′ at the last iterate, with P_n″ from Legendre's equation), not at
+ *   the rounded node.
+ * - Gauss–Kronrod 7/15 nodes and weights as tabulated in QUADPACK (Piessens, de Doncker-Kapenga,
+ *   Überhuber & Kahaner 1983, routine QK15), with QUADPACK's error estimate
+ *   err = I_abs·min(1, (200·|K15 − G7|/I_abs)^{3/2}) (I_abs = ∫|f − mean|, by the Kronrod rule)
+ *   and a rounding floor 50·ε·∫|f|; bisection of the interval with the largest error (QAG).
+ *
+ * Measured accuracy (tests/math/quadrature.test.ts): nodes within 1.2e-16 of mpmath's for
+ * n ≤ 500; weights ≤ 3e-15 relative for n ≤ 20 and ≤ 3e-13 for n ≤ 500 (worst at the
+ * outermost nodes, whose weights are ~1e-4 of the total, so integrals move by < 1e-16).
  */
+import { TanklightInputError } from "../errors.ts";
 
-/** Nodes and weights of an n-point Gauss–Legendre rule on [−1, 1]. */
+/** Nodes and weights of an n-point Gauss–Legendre rule on [−1, 1] (ascending nodes). */
 export interface GaussRule {
   readonly nodes: Float64Array;
   readonly weights: Float64Array;
 }
 
 const ruleCache = new Map<number, GaussRule>();
+/** Newton stop for the Gauss–Legendre nodes: absolute step below this. */
+const NODE_TOLERANCE = 1e-15;
 
 /**
  * Gauss–Legendre nodes and weights on [−1, 1], exact for polynomials of degree ≤ 2n − 1.
  *
- * @param n number of points, integer ≥ 1. Results are cached per n.
- * @example gaussLegendre(2).nodes // → [−0.5773502691896257, 0.5773502691896257]
+ * @param n number of points, integer 1 ≤ n ≤ 100000. Results are cached per n (the arrays
+ *   are shared: do not modify them).
+ * @returns `{ nodes, weights }`, ascending nodes, dimensionless.
+ * Method: Newton on P_n (A&S 22.7.10), weights A&S 25.4.29.
+ * @example gaussLegendre(2).nodes // → [−0.5773502691896257, 0.5773502691896257], weights [1, 1]
  */
 export function gaussLegendre(n: number): GaussRule {
-  if (!Number.isInteger(n) || n < 1) {
-    throw new RangeError(`gaussLegendre: n must be an integer ≥ 1 (got ${n})`);
+  if (!(Number.isInteger(n) && n >= 1 && n <= 100000)) {
+    throw new TanklightInputError(
+      [{ path: "n", message: "must be an integer in [1, 100000]", value: n, expected: "integer ≥ 1" }],
+      "gaussLegendre",
+    );
   }
   const cached = ruleCache.get(n);
   if (cached) return cached;
   const nodes = new Float64Array(n);
   const weights = new Float64Array(n);
-  const half = Math.floor((n + 1) / 2);
-  for (let i = 0; i < half; i++) {
-    // Initial guess (A&S 22.16.6 asymptotics), then Newton on P_n.
-    let x = Math.cos((Math.PI * (i + 0.75)) / (n + 0.5));
-    let dp = 0;
-    for (let iter = 0; iter < 100; iter++) {
-      let p0 = 1;
-      let p1 = x;
-      for (let k = 2; k <= n; k++) {
-        const p2 = ((2 * k - 1) * x * p1 - (k - 1) * p0) / k;
-        p0 = p1;
-        p1 = p2;
+  if (n === 1) {
+    weights[0] = 2;
+  } else {
+    const half = Math.floor((n + 1) / 2);
+    for (let i = 0; i < half; i++) {
+      let x = (1 - (n - 1) / (8 * n * n * n)) * Math.cos((Math.PI * (4 * i + 3)) / (4 * n + 2));
+      let p = 0;
+      let dp = 1;
+      let delta = 0;
+      for (let iter = 0; iter < 100; iter++) {
+        let p0 = 1;
+        let p1 = x;
+        for (let k = 2; k <= n; k++) {
+          const p2 = ((2 * k - 1) * x * p1 - (k - 1) * p0) / k;
+          p0 = p1;
+          p1 = p2;
+        }
+        p = p1;
+        dp = (n * (p0 - x * p1)) / ((1 - x) * (1 + x)); // P_n′ (A&S 22.8.5)
+        delta = p / dp;
+        if (Math.abs(delta) <= NODE_TOLERANCE) break;
+        x -= delta;
       }
-      const pn = n === 1 ? x : p1;
-      const pnm1 = n === 1 ? 1 : p0;
-      dp = (n * (x * pn - pnm1)) / (x * x - 1);
-      const dx = pn / dp;
-      x -= dx;
-      if (Math.abs(dx) <= 1e-16 * Math.max(1, Math.abs(x))) {
-        // recompute derivative at the converged node
-        break;
-      }
+      // Weight at the true root r = x − δ (first order in δ): 1 − r² and P_n′(r).
+      const omx2 = (1 - x) * (1 + x);
+      const d2p = (2 * x * dp - n * (n + 1) * p) / omx2; // Legendre's equation (A&S 22.6.13)
+      const omr2 = omx2 + 2 * x * delta - delta * delta;
+      const dpr = dp - d2p * delta;
+      const w = 2 / (omr2 * dpr * dpr);
+      x -= delta;
+      nodes[i] = -x;
+      nodes[n - 1 - i] = x;
+      weights[i] = w;
+      weights[n - 1 - i] = w;
     }
-    // Derivative at the final x for the weight (A&S 25.4.29).
-    let p0 = 1;
-    let p1 = x;
-    for (let k = 2; k <= n; k++) {
-      const p2 = ((2 * k - 1) * x * p1 - (k - 1) * p0) / k;
-      p0 = p1;
-      p1 = p2;
-    }
-    dp = n === 1 ? 1 : (n * (x * p1 - p0)) / (x * x - 1);
-    const w = 2 / ((1 - x * x) * dp * dp);
-    nodes[i] = -x;
-    nodes[n - 1 - i] = x;
-    weights[i] = w;
-    weights[n - 1 - i] = w;
+    if (n % 2 === 1) nodes[(n - 1) / 2] = 0;
   }
-  if (n % 2 === 1) nodes[(n - 1) / 2] = 0;
   const rule = { nodes, weights };
   ruleCache.set(n, rule);
   return rule;
 }
 
+function requireLimits(a: number, b: number, where: string): void {
+  if (!Number.isFinite(a) || !Number.isFinite(b)) {
+    throw new TanklightInputError(
+      [{ path: Number.isFinite(a) ? "b" : "a", message: "integration limit must be finite", value: Number.isFinite(a) ? b : a }],
+      where,
+    );
+  }
+}
+
 /**
- * ∫_a^b f(x) dx by an n-point Gauss–Legendre rule.
- * @example integrateGaussLegendre(x => x ** 3, 0, 1, 2) // → 0.25 (exact: degree 3 ≤ 2n − 1)
+ * ∫_a^b f(x) dx by an n-point Gauss–Legendre rule (exact for polynomials of degree ≤ 2n − 1).
+ *
+ * @param f integrand, finite on (a, b); a, b finite limits (b < a gives the negative integral);
+ * @param n number of points, integer ≥ 1.
+ * @returns the integral's estimate, in the units of f times the units of x.
+ * @example integrateGaussLegendre((x) => x ** 3, 0, 1, 2) // → 0.25 (exact: degree 3 ≤ 2n − 1)
  */
 export function integrateGaussLegendre(f: (x: number) => number, a: number, b: number, n: number): number {
+  requireLimits(a, b, "integrateGaussLegendre");
   const { nodes, weights } = gaussLegendre(n);
   const half = 0.5 * (b - a);
   const mid = 0.5 * (a + b);
@@ -86,7 +120,7 @@ export function integrateGaussLegendre(f: (x: number) => number, a: number, b: n
   return s * half;
 }
 
-// QUADPACK QK15 abscissae (Kronrod nodes; odd indices are the 7-point Gauss nodes).
+// QUADPACK QK15 abscissae (Kronrod nodes; odd indices are the 7-point Gauss nodes) and weights.
 const XGK = [
   0.991455371120812639206854697526329, 0.949107912342758524526189684047851,
   0.864864423359769072789712788640926, 0.741531185599394439863864773280788,
@@ -103,51 +137,85 @@ const WG = [
   0.129484966168869693270611432679082, 0.27970539148927666790146777142378,
   0.381830050505118944950369775488975, 0.417959183673469387755102040816327,
 ];
+const EPS = Number.EPSILON;
 
 /** Outcome of an adaptive integration. */
 export interface IntegrationResult {
   /** the integral's estimate */
   readonly value: number;
-  /** estimated absolute error (|K15 − G7| summed over the final intervals) */
+  /** estimated absolute error (sum of the QUADPACK QK15 estimates over the final intervals) */
   readonly error: number;
   /** number of integrand evaluations */
   readonly evaluations: number;
+  /** true when error ≤ max(absTol, relTol·|value|) was reached within maxIntervals */
+  readonly converged: boolean;
 }
 
 /** Options for {@link integrateAdaptive}. */
 export interface AdaptiveOptions {
-  /** absolute error target, default 1e-12 */
+  /** absolute error target, ≥ 0, in the units of the integral; default 1e-12 */
   readonly absTol?: number;
-  /** relative error target, default 1e-10 */
+  /** relative error target, ≥ 0; default 1e-10 */
   readonly relTol?: number;
-  /** maximum number of subintervals, default 2000 */
+  /** maximum number of subintervals, integer ≥ 1; default 2000 */
   readonly maxIntervals?: number;
 }
 
-function kronrod15(f: (x: number) => number, a: number, b: number): { k: number; g: number } {
+// results of the last kronrod15() call (module scratch: no allocation per interval)
+let qkValue = 0;
+let qkError = 0;
+
+function kronrod15(f: (x: number) => number, a: number, b: number): void {
   const c = 0.5 * (a + b);
   const h = 0.5 * (b - a);
+  const fv = new Float64Array(15);
   const fc = f(c);
+  fv[14] = fc;
   let k = fc * WGK[7]!;
   let g = fc * WG[3]!;
+  let kAbs = Math.abs(k);
   for (let j = 0; j < 7; j++) {
     const dx = h * XGK[j]!;
-    const fs = f(c - dx) + f(c + dx);
-    k += WGK[j]! * fs;
-    if (j % 2 === 1) g += WG[(j - 1) / 2]! * fs;
+    const f1 = f(c - dx);
+    const f2 = f(c + dx);
+    fv[2 * j] = f1;
+    fv[2 * j + 1] = f2;
+    k += WGK[j]! * (f1 + f2);
+    kAbs += WGK[j]! * (Math.abs(f1) + Math.abs(f2));
+    if (j % 2 === 1) g += WG[(j - 1) / 2]! * (f1 + f2);
   }
-  return { k: k * h, g: g * h };
+  if (!Number.isFinite(k)) {
+    throw new TanklightInputError(
+      [{ path: "f", message: `integrand is not finite on [${a}, ${b}]`, value: k, expected: "finite values" }],
+      "integrateAdaptive",
+    );
+  }
+  const mean = 0.5 * k;
+  let asc = WGK[7]! * Math.abs(fc - mean);
+  for (let j = 0; j < 7; j++) asc += WGK[j]! * (Math.abs(fv[2 * j]! - mean) + Math.abs(fv[2 * j + 1]! - mean));
+  const ah = Math.abs(h);
+  let err = Math.abs((k - g) * h);
+  asc *= ah;
+  kAbs *= ah;
+  if (asc !== 0 && err !== 0) err = asc * Math.min(1, Math.pow((200 * err) / asc, 1.5));
+  if (kAbs > Number.MIN_VALUE / (50 * EPS)) err = Math.max(50 * EPS * kAbs, err);
+  qkValue = k * h;
+  qkError = err;
 }
 
 /**
  * ∫_a^b f(x) dx by globally adaptive Gauss–Kronrod 7/15 bisection (QUADPACK QAG strategy):
  * always split the interval with the largest error estimate until
- * error ≤ max(absTol, relTol·|value|). Integrable endpoint singularities (log, x^−½) are
- * handled because no node sits on an endpoint.
+ * error ≤ max(absTol, relTol·|value|) or maxIntervals is reached (then `converged` is false).
+ * Integrable endpoint singularities (ln x, x^−½) are handled because no node sits on an endpoint.
  *
- * @param f integrand; a, b finite limits.
- * @returns `{ value, error, evaluations }`.
- * @example integrateAdaptive(x => Math.log(x), 0, 1).value // → −1
+ * @param f integrand, finite on the open interval (a, b); a, b finite limits (b < a allowed).
+ * @param options absTol (units of the integral), relTol, maxIntervals — see {@link AdaptiveOptions}.
+ * @returns `{ value, error, evaluations, converged }`; `error` is an estimated absolute error.
+ * Throws TanklightInputError for non-finite limits, bad options, or a non-finite integrand value.
+ * Method: Piessens et al. 1983, QUADPACK routines QK15 and QAG.
+ * @example integrateAdaptive(Math.log, 0, 1).value // → −1 (to 1e-12);
+ *   integrateAdaptive((x) => 1 / Math.sqrt(x), 0, 1).value // → 2
  */
 export function integrateAdaptive(
   f: (x: number) => number,
@@ -158,36 +226,53 @@ export function integrateAdaptive(
   const absTol = options.absTol ?? 1e-12;
   const relTol = options.relTol ?? 1e-10;
   const maxIntervals = options.maxIntervals ?? 2000;
-  if (!Number.isFinite(a) || !Number.isFinite(b)) {
-    throw new RangeError(`integrateAdaptive: limits must be finite (got ${a}, ${b})`);
+  requireLimits(a, b, "integrateAdaptive");
+  if (!(absTol >= 0 && Number.isFinite(absTol))) {
+    throw new TanklightInputError([{ path: "absTol", message: "must be a finite number ≥ 0", value: absTol }], "integrateAdaptive");
   }
-  if (a === b) return { value: 0, error: 0, evaluations: 0 };
-  interface Piece { a: number; b: number; value: number; error: number }
-  const first = kronrod15(f, a, b);
-  const pieces: Piece[] = [{ a, b, value: first.k, error: Math.abs(first.k - first.g) }];
+  if (!(relTol >= 0 && Number.isFinite(relTol))) {
+    throw new TanklightInputError([{ path: "relTol", message: "must be a finite number ≥ 0", value: relTol }], "integrateAdaptive");
+  }
+  if (!(Number.isInteger(maxIntervals) && maxIntervals >= 1)) {
+    throw new TanklightInputError([{ path: "maxIntervals", message: "must be an integer ≥ 1", value: maxIntervals }], "integrateAdaptive");
+  }
+  if (a === b) return { value: 0, error: 0, evaluations: 0, converged: true };
+  const lo: number[] = [a];
+  const hi: number[] = [b];
+  kronrod15(f, a, b);
+  const val: number[] = [qkValue];
+  const err: number[] = [qkError];
   let evaluations = 15;
-  let value = first.k;
-  let error = pieces[0]!.error;
-  while (error > Math.max(absTol, relTol * Math.abs(value)) && pieces.length < maxIntervals) {
-    // take the worst piece
+  let value = qkValue;
+  let error = qkError;
+  while (error > Math.max(absTol, relTol * Math.abs(value)) && lo.length < maxIntervals) {
     let worst = 0;
-    for (let i = 1; i < pieces.length; i++) if (pieces[i]!.error > pieces[worst]!.error) worst = i;
-    const p = pieces[worst]!;
-    const mid = 0.5 * (p.a + p.b);
-    if (mid <= p.a || mid >= p.b) break; // interval at rounding resolution
-    const left = kronrod15(f, p.a, mid);
-    const right = kronrod15(f, mid, p.b);
+    for (let i = 1; i < err.length; i++) if (err[i]! > err[worst]!) worst = i;
+    const pa = lo[worst]!;
+    const pb = hi[worst]!;
+    const mid = 0.5 * (pa + pb);
+    if (mid === pa || mid === pb) break; // interval at rounding resolution: cannot split further
+    kronrod15(f, pa, mid);
+    const lv = qkValue;
+    const le = qkError;
+    kronrod15(f, mid, pb);
     evaluations += 30;
-    const l: Piece = { a: p.a, b: mid, value: left.k, error: Math.abs(left.k - left.g) };
-    const r: Piece = { a: mid, b: p.b, value: right.k, error: Math.abs(right.k - right.g) };
-    pieces[worst] = l;
-    pieces.push(r);
-    value = 0;
-    error = 0;
-    for (const q of pieces) {
-      value += q.value;
-      error += q.error;
-    }
+    value += lv + qkValue - val[worst]!;
+    error += le + qkError - err[worst]!;
+    hi[worst] = mid;
+    val[worst] = lv;
+    err[worst] = le;
+    lo.push(mid);
+    hi.push(pb);
+    val.push(qkValue);
+    err.push(qkError);
   }
-  return { value, error, evaluations };
+  // re-sum once to remove the drift of the running updates
+  value = 0;
+  error = 0;
+  for (let i = 0; i < val.length; i++) {
+    value += val[i]!;
+    error += err[i]!;
+  }
+  return { value, error, evaluations, converged: error <= Math.max(absTol, relTol * Math.abs(value)) };
 }

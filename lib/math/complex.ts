@@ -1,0 +1,114 @@
+/**
+ * Small complex arithmetic for hot paths: plain numbers in, results written into a caller's
+ * Float64Array at an offset (re at out[i], im at out[i + 1]) — no allocation per call.
+ * Phasor convention e^{jωt} (design.md §3); these helpers know no physics.
+ *
+ * Methods: division by Smith's algorithm (R. L. Smith, "Algorithm 116: Complex division",
+ * Comm. ACM 5(8):435, 1962), which avoids overflow/underflow of |b|²; modulus by
+ * Math.hypot; principal square root by the cancellation-free form of Kahan ("Branch cuts
+ * for complex elementary functions", 1987, procedure CSQRT; also DLMF §4.2(iv) for the
+ * principal branch).
+ */
+import { TanklightInputError } from "../errors.ts";
+
+/** A complex number as plain data (mathjs Complex objects also fit this shape). */
+export interface Complex {
+  readonly re: number;
+  readonly im: number;
+}
+
+/**
+ * out ← a·b.
+ * @param ar, ai real and imaginary parts of a; br, bi of b (any finite numbers).
+ * @param out receives re at out[offset], im at out[offset + 1].
+ * @example complexMul(1, 2, 3, -1, out) // out → [5, 5]
+ */
+export function complexMul(ar: number, ai: number, br: number, bi: number, out: Float64Array, offset = 0): void {
+  out[offset] = ar * br - ai * bi;
+  out[offset + 1] = ar * bi + ai * br;
+}
+
+/**
+ * out ← a·conj(b); with a = V and b = I, ½·out[0] is the real power ½Re(V·I*).
+ * @example complexMulConj(1, 2, 3, -1, out) // out → [1, 7]
+ */
+export function complexMulConj(ar: number, ai: number, br: number, bi: number, out: Float64Array, offset = 0): void {
+  out[offset] = ar * br + ai * bi;
+  out[offset + 1] = ai * br - ar * bi;
+}
+
+/**
+ * out ← a / b by Smith's algorithm (Smith 1962). Throws TanklightInputError when b = 0.
+ * @example complexDiv(5, 5, 3, -1, out) // out → [1, 2]
+ */
+export function complexDiv(ar: number, ai: number, br: number, bi: number, out: Float64Array, offset = 0): void {
+  if (br === 0 && bi === 0) {
+    throw new TanklightInputError([{ path: "b", message: "divisor must be non-zero", value: 0 }], "complexDiv");
+  }
+  if (Math.abs(br) >= Math.abs(bi)) {
+    const r = bi / br;
+    const d = br + bi * r;
+    out[offset] = (ar + ai * r) / d;
+    out[offset + 1] = (ai - ar * r) / d;
+  } else {
+    const r = br / bi;
+    const d = br * r + bi;
+    out[offset] = (ar * r + ai) / d;
+    out[offset + 1] = (ai * r - ar) / d;
+  }
+}
+
+/**
+ * out ← 1 / b (Smith 1962). Throws TanklightInputError when b = 0.
+ * @example complexInv(0, 2, out) // out → [0, −0.5]
+ */
+export function complexInv(br: number, bi: number, out: Float64Array, offset = 0): void {
+  complexDiv(1, 0, br, bi, out, offset);
+}
+
+/**
+ * |a| = √(re² + im²) without overflow.
+ * @example complexAbs(3, 4) // → 5
+ */
+export function complexAbs(ar: number, ai: number): number {
+  return Math.hypot(ar, ai);
+}
+
+/**
+ * Argument (phase) of a in (−π, π], rad.
+ * @example complexArg(0, 1) // → π/2
+ */
+export function complexArg(ar: number, ai: number): number {
+  return Math.atan2(ai, ar);
+}
+
+/**
+ * out ← √a, principal branch (Re ≥ 0; branch cut on the negative real axis, the upper side
+ * for im = +0 as in DLMF §4.2(iv)); cancellation-free (Kahan 1987).
+ * @example complexSqrt(-4, 0, out) // out → [0, 2];  complexSqrt(3, 4, out) // → [2, 1]
+ */
+export function complexSqrt(ar: number, ai: number, out: Float64Array, offset = 0): void {
+  if (ar === 0 && ai === 0) {
+    out[offset] = 0;
+    out[offset + 1] = ai;
+    return;
+  }
+  const t = Math.sqrt((Math.abs(ar) + Math.hypot(ar, ai)) / 2);
+  if (ar >= 0) {
+    out[offset] = t;
+    out[offset + 1] = ai / (2 * t);
+  } else {
+    out[offset] = Math.abs(ai) / (2 * t);
+    out[offset + 1] = ai < 0 || Object.is(ai, -0) ? -t : t;
+  }
+}
+
+/**
+ * out ← e^{jθ}·r = r·(cos θ + j sin θ): a phasor of magnitude r and phase θ.
+ * @param r magnitude (any unit); theta phase, rad.
+ * @example complexFromPolar(2, Math.PI / 2, out) // out → [1.2e−16, 2]
+ */
+export function complexFromPolar(r: number, theta: number, out: Float64Array, offset = 0): void {
+  out[offset] = r * Math.cos(theta);
+  out[offset + 1] = r * Math.sin(theta);
+}
