@@ -45,6 +45,20 @@ export {
   type AdaptiveOptions,
 } from "./math/quadrature.ts";
 export { lambertW, lambertWOfLog } from "./math/lambertW.ts";
+export {
+  complexMul,
+  complexMulConj,
+  complexDiv,
+  complexInv,
+  complexAbs,
+  complexArg,
+  complexSqrt,
+  complexFromPolar,
+  type Complex,
+} from "./math/complex.ts";
+export { solveComplex, solveComplex2x2 } from "./math/solveComplex.ts";
+export { luFactor, luSolve, solveLinear, SingularMatrixError, LU_PIVOT_RTOL } from "./math/lu.ts";
+export { createRandom, type RandomSource } from "./math/random.ts";
 
 // ── lib/em ───────────────────────────────────────────────────────────────────
 export type { Vec3, Pose, Filament, Conductor, Coil } from "./em/types.ts";
