@@ -62,6 +62,11 @@ export { createRandom, type RandomSource } from "./math/random.ts";
 
 // ── lib/em ───────────────────────────────────────────────────────────────────
 export type { Vec3, Pose, Filament, Conductor, Coil } from "./em/types.ts";
+// fields and inductance (EM core)
+export { loopField, type LoopFieldValue } from "./em/loopField.ts";
+export { loopVectorPotential } from "./em/vectorPotential.ts";
+export { coaxialLoopMutualInductance } from "./em/coaxialMutual.ts";
+export { loopMutualInductance, type CircleFilament, type LoopMutualOptions } from "./em/loopMutual.ts";
 
 // ── lib/circuit ──────────────────────────────────────────────────────────────
 export type { DiodeModel } from "./circuit/types.ts";
