@@ -162,16 +162,41 @@ export const time = (opts: QuantityOptions = { positive: true }): QuantitySchema
 /** Plain number, any sign by default ("0.5", "5 %"). */
 export const dimensionless = (opts: QuantityOptions = {}): QuantitySchema => quantity("dimensionless", opts);
 
+/** Output and input types of {@link vec3}. */
+export type Vec3Schema = z.ZodType<readonly [number, number, number], readonly [number | string, number | string, number | string]>;
+
 /**
- * A point or offset [x, y, z] in m; each element a length of any sign ("12 mm", 0.003).
- * @example parseInput(vec3(), ["1 mm", 0, "-2 cm"], "pose") // → [0.001, 0, -0.02]
+ * A point or offset [x, y, z] in m; each element a length ("12 mm", 0.003), any sign by
+ * default (positions lie on both sides of the origin).
+ * @param opts range rules applied to each element, SI (default none).
+ * @example parseInput(vec3(), ["1 mm", 0, "-2 cm"], "pose.position") // → [0.001, 0, -0.02]
  */
-export function vec3(): z.ZodType<readonly [number, number, number], readonly [number | string, number | string, number | string]> {
-  const c = quantity("length");
-  return z.tuple([c, c, c]).readonly() as unknown as z.ZodType<
-    readonly [number, number, number],
-    readonly [number | string, number | string, number | string]
-  >;
+export function vec3(opts: QuantityOptions = {}): Vec3Schema {
+  const c = quantity("length", opts);
+  return z.tuple([c, c, c]).readonly() as unknown as Vec3Schema;
+}
+
+/** Output and input types of {@link unitVector}. */
+export type UnitVectorSchema = z.ZodType<readonly [number, number, number], readonly [number, number, number]>;
+
+/**
+ * A direction [x, y, z] (plain finite numbers, not all zero), returned normalized to length 1:
+ * the axis of a pose. A zero vector is an error.
+ * @example parseInput(unitVector(), [0, 3, 4], "pose.axis") // → [0, 0.6, 0.8]
+ */
+export function unitVector(): UnitVectorSchema {
+  const finite = z.number().refine(Number.isFinite, { error: "expected a finite number" });
+  return z
+    .tuple([finite, finite, finite])
+    .transform((v, ctx) => {
+      const n = Math.hypot(v[0], v[1], v[2]);
+      if (!(n > 0) || !Number.isFinite(n)) {
+        ctx.issues.push({ code: "custom", message: "expected a direction (not all zero)", input: v });
+        return z.NEVER;
+      }
+      return [v[0] / n, v[1] / n, v[2] / n] as const;
+    })
+    .readonly() as unknown as UnitVectorSchema;
 }
 
 // ── running a schema ─────────────────────────────────────────────────────────
@@ -217,7 +242,9 @@ function toInputIssue(issue: z.core.$ZodIssue, input: unknown): InputIssue {
   if (issue.code !== "custom") {
     // zod's own texts ("Invalid input: expected number, received string") lose the value;
     // keep them, lower-cased, since parseInput appends the received value.
-    message = message.replace(/^Invalid input: /, "").replace(/, received \w+$/, "");
+    message = message
+      .replace(/^(Invalid input|Too small|Too big): /, "")
+      .replace(/, received \w+$/, "");
   }
   return {
     path,

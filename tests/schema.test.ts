@@ -10,6 +10,7 @@ import {
   quantityMeta,
   resistance,
   temperature,
+  unitVector,
   vec3,
   voltage,
   type QuantitySchema,
@@ -70,6 +71,31 @@ describe("quantity schemas", () => {
   });
 });
 
+describe("vec3 and unitVector", () => {
+  it("vec3 reads three lengths of any sign; options apply to each element", () => {
+    expect(parseInput(vec3(), ["1 mm", 0, "-2 cm"], "pose.position")).toEqual([0.001, 0, -0.02]);
+    expect(() => parseInput(vec3({ nonNegative: true }), ["1 mm", "-1 mm", 0], "p")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: p: [1]: must be ≥ 0 m, got '-1 mm' (= -1.00 mm)]`,
+    );
+    expect(() => parseInput(vec3(), [1, 2], "p")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: p: expected array to have >=3 items, got [1,2]]`,
+    );
+    expect(() => parseInput(vec3(), [1, 2, 3, 4], "p")).toThrow(TanklightInputError);
+  });
+
+  it("unitVector normalizes and rejects zero, NaN and infinite components", () => {
+    // exact regime: [0, 3, 4]/5 — 0.6 and 0.8 are the correctly rounded quotients
+    expect(parseInput(unitVector(), [0, 3, 4], "pose.axis")).toEqual([0, 0.6, 0.8]);
+    const big = parseInput(unitVector(), [1e300, 1e300, 0], "pose.axis");
+    expectRelClose(Math.hypot(...big), 1, 2.3e-16, "norm after normalizing huge components (one rounding)");
+    expect(() => parseInput(unitVector(), [0, 0, 0], "pose.axis")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: pose.axis: expected a direction (not all zero), got [0,0,0]]`,
+    );
+    expect(() => parseInput(unitVector(), [NaN, 0, 1], "pose.axis")).toThrow(TanklightInputError);
+    expect(() => parseInput(unitVector(), [0, 0, Infinity], "pose.axis")).toThrow(TanklightInputError);
+  });
+});
+
 describe("parseInput", () => {
   it("lists every issue with its dotted path, value and expectation", () => {
     const bad = {
@@ -80,7 +106,7 @@ describe("parseInput", () => {
       extra: 1,
     };
     expect(() => parseInput(CoilInput, bad, "roundCoil")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: roundCoil: coil.radius: expected a length like '12 mm', got '5 kHz' (a frequency); coil.turns: Too small: expected number to be >0, got 0; frequency: must be > 0 Hz, got -3; position[2]: expected a length like '12 mm' (a finite number), got Infinity; tuning: expected a capacitance like '4.7 nF', got '4.7n F' (unknown unit 'n F'); extra: unknown field, got 1]`,
+      `[TanklightInputError: roundCoil: coil.radius: expected a length like '12 mm', got '5 kHz' (a frequency); coil.turns: expected number to be >0, got 0; frequency: must be > 0 Hz, got -3; position[2]: expected a length like '12 mm' (a finite number), got Infinity; tuning: expected a capacitance like '4.7 nF', got '4.7n F' (unknown unit 'n F'); extra: unknown field, got 1]`,
     );
     try {
       parseInput(CoilInput, bad, "roundCoil");
@@ -142,5 +168,6 @@ describe("types", () => {
     expectTypeOf<Out["tuning"]>().toEqualTypeOf<number | undefined>();
     expectTypeOf(parseInput(length(), "1 m", "x")).toEqualTypeOf<number>();
     expectTypeOf(quantity).returns.toEqualTypeOf<QuantitySchema>();
+    expectTypeOf<z.output<ReturnType<typeof unitVector>>>().toEqualTypeOf<readonly [number, number, number]>();
   });
 });

@@ -81,8 +81,8 @@ describe("parseQuantity: strings with units", () => {
     expectOutside({ quantity: "25 °C in K", source: "source: SI Brochure 2019 §2.3.1 (T = t + 273.15 K)", ours: parseQuantity("25 °C", "temperature"), reference: 298.15, rtol: ONE_ROUNDING, unit: "K" });
     expectRelClose(parseQuantity("25 degC", "temperature"), 298.15, ONE_ROUNDING, "25 degC");
     expectRelClose(parseQuantity("0 degC", "temperature"), 273.15, ONE_ROUNDING, "0 degC");
-    // source: NIST SP 811 (2008) App. B.9: T/K = (t/°F + 459.67)/1.8
-    expectOutside({ quantity: "77 °F in K", source: "source: NIST SP 811 (2008) App. B.9, T = (t_F + 459.67)/1.8", ours: parseQuantity("77 °F", "temperature"), reference: (77 + 459.67) / 1.8, rtol: 1e-15, unit: "K" });
+    // source: NIST SP 811 (2008) App. B.8 (degree Fahrenheit): T/K = (t/°F + 459.67)/1.8
+    expectOutside({ quantity: "77 °F in K", source: "source: NIST SP 811 (2008) App. B.8, T = (t_F + 459.67)/1.8", ours: parseQuantity("77 °F", "temperature"), reference: (77 + 459.67) / 1.8, rtol: 1e-15, unit: "K" });
     expect(parseQuantity("300 K", "temperature")).toBe(300);
   });
 
@@ -150,6 +150,15 @@ describe("parseQuantity: rejected strings", () => {
     expect(() => parseQuantity("1,5 mm", "length", "r")).toThrow(TanklightInputError);
     expect(() => parseQuantity("2 mm + 3 mm", "length", "r")).toThrow(TanklightInputError);
     expect(() => parseQuantity("sqrt(2) mm", "length", "r")).toThrow(TanklightInputError);
+  });
+
+  it("hints at the right case when a unit is unknown only by its case", () => {
+    expect(() => parseQuantity("217 khz", "frequency", "f")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: f: expected a frequency like '217 kHz', got '217 khz' (unknown unit 'khz'; units are case-sensitive: 'kHz'?)]`,
+    );
+    expect(() => parseQuantity("1 MOHM", "resistance", "r")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: r: expected a resistance like '0.5 ohm', got '1 MOHM' (unknown unit 'MOHM'; units are case-sensitive: 'mohm' or 'Mohm'?)]`,
+    );
   });
 
   it("rejects strings that overflow or underflow the double range", () => {
