@@ -65,45 +65,6 @@ export { createRandom, type RandomSource } from "./math/random.ts";
 
 // ── lib/em ───────────────────────────────────────────────────────────────────
 export type { Vec3, Pose, Filament, Conductor, Coil } from "./em/types.ts";
-// coil builders, conductors and classic inductance formulas (builders)
-export { roundCoil, RoundCoilSpec, type RoundCoilInput, type RoundCoil, type RoundCoilShape } from "./em/builders/roundCoil.ts";
-export { solenoid, SolenoidSpec, type SolenoidInput, type Solenoid, type SolenoidShape } from "./em/builders/solenoid.ts";
-export { flatSpiral, FlatSpiralSpec, type FlatSpiralInput, type FlatSpiral, type FlatSpiralShape } from "./em/builders/flatSpiral.ts";
-export { rectSpiral, RectSpiralSpec, type RectSpiralInput, type RectSpiral, type RectSpiralShape } from "./em/builders/rectSpiral.ts";
-export { rectLoop, RectLoopSpec, type RectLoopInput, type RectLoop, type RectLoopShape } from "./em/builders/rectLoop.ts";
-export {
-  roundWire,
-  awgWire,
-  litzWire,
-  pcbTrace,
-  copperWeightThickness,
-  conductorFootprint,
-  type RoundWire,
-  type LitzWire,
-  type PcbTrace,
-  type RoundWireOptions,
-  type LitzWireOptions,
-} from "./em/builders/conductor.ts";
-export { archimedeanArcLength } from "./em/builders/common.ts";
-export type { CoilShape } from "./em/types.ts";
-export {
-  INCH,
-  MICROHENRY,
-  awgDiameter,
-  nagaokaCoefficient,
-  lundinNagaokaCoefficient,
-  currentSheetInductance,
-  wheeler1982Inductance,
-  wheelerSingleLayerInductance,
-  wheelerMultilayerInductance,
-  wheelerFlatSpiralInductance,
-  mohanModifiedWheelerInductance,
-  mohanCurrentSheetInductance,
-  groverRectangleInductance,
-  rosaB,
-  rosaRoundWireCorrection,
-  type SpiralOutline,
-} from "./em/classicFormulas.ts";
 // fields and inductance (EM core)
 export { loopField, type LoopFieldValue } from "./em/loopField.ts";
 export { loopVectorPotential } from "./em/vectorPotential.ts";
