@@ -63,5 +63,79 @@ export interface Coil {
   /** total conductor length, m */
   readonly wireLength: number;
   /** which builder made it and with which (SI) parameters, for reports and loss models */
-  readonly shape?: { readonly kind: string; readonly [key: string]: unknown };
+  readonly shape?: CoilShape;
 }
+
+/**
+ * The builder's own description of a coil, in SI units (m), for reports and loss models
+ * (written by lib/em/builders/*; conventions in docs/methods/coils.md). Radii of a winding
+ * window are measured to its boundary (the insulation surface of round wire, the copper edge of
+ * a trace); `meanRadius` is the mean of inner and outer radius. Hand-built coils may omit it or
+ * use `{ kind: "custom" }`.
+ */
+export type CoilShape =
+  | {
+      /** wound multi-layer circular coil: turns fill layer by layer, layers stacked radially outward */
+      readonly kind: "roundCoil";
+      readonly innerRadius: number;
+      readonly meanRadius: number;
+      readonly outerRadius: number;
+      /** axial extent of the winding window, m */
+      readonly windingHeight: number;
+      readonly turns: number;
+      readonly layers: number;
+      /** turns in a full layer (the last layer may hold fewer) */
+      readonly turnsPerLayer: number;
+      /** centre-to-centre distance of neighbouring turns along the axis, m */
+      readonly axialPitch: number;
+      /** centre-to-centre distance of neighbouring layers, m */
+      readonly radialPitch: number;
+    }
+  | {
+      /** single-layer circular coil with a pitch */
+      readonly kind: "solenoid";
+      /** radius of the wire centres, m */
+      readonly radius: number;
+      /** winding length turns·pitch (the current-sheet length of Nagaoka's formula), m */
+      readonly length: number;
+      readonly pitch: number;
+      readonly turns: number;
+    }
+  | {
+      /** planar circular (Archimedean) spiral */
+      readonly kind: "flatSpiral";
+      /** innermost conductor edge, m */
+      readonly innerRadius: number;
+      /** outermost conductor edge, m */
+      readonly outerRadius: number;
+      readonly meanRadius: number;
+      readonly pitch: number;
+      readonly turns: number;
+      /** conductor width in the plane (trace width or wire outer diameter), m */
+      readonly conductorWidth: number;
+      /** how the filaments represent the spiral */
+      readonly model: "rings" | "spiral";
+    }
+  | {
+      /** rectangular spiral: planar (turns nest inward) or wound (turns stacked along the axis) */
+      readonly kind: "rectSpiral";
+      readonly stacking: "planar" | "axial";
+      /** outer edge dimensions of the outermost turn, m */
+      readonly outerWidth: number;
+      readonly outerHeight: number;
+      /** inner edge dimensions of the innermost turn, m */
+      readonly innerWidth: number;
+      readonly innerHeight: number;
+      readonly pitch: number;
+      readonly turns: number;
+      /** corner radius of the outer edge of the outermost turn, m (0: sharp corners) */
+      readonly cornerRadius: number;
+      readonly conductorWidth: number;
+    }
+  | {
+      /** one rectangular turn; width and height measured between conductor centrelines */
+      readonly kind: "rectLoop";
+      readonly width: number;
+      readonly height: number;
+    }
+  | { readonly kind: "custom"; readonly [key: string]: unknown };

@@ -1,0 +1,116 @@
+/**
+ * Shared helpers of the coil builders (lib/em/builders/*): input-issue collection, the
+ * placement of round turns in a winding window, rounded-rectangle polygons and the arc length of
+ * an Archimedean spiral. Conventions are stated once in docs/methods/coils.md.
+ */
+import { z } from "zod";
+import { TanklightInputError, type InputIssue } from "../../errors.ts";
+import type { Filament, Vec3 } from "../types.ts";
+
+/** Collects every problem with a builder's input, then throws them together. */
+export class IssueList {
+  readonly issues: InputIssue[] = [];
+  constructor(readonly where: string) {}
+  /** Record one problem with one field. */
+  add(path: string, message: string, value: unknown, expected?: string): void {
+    this.issues.push(expected === undefined ? { path, message, value } : { path, message, value, expected });
+  }
+  /** Throw a TanklightInputError listing every recorded problem (no-op when there is none). */
+  throwIfAny(): void {
+    if (this.issues.length > 0) throw new TanklightInputError(this.issues, this.where);
+  }
+}
+
+/** True when x is a finite integer ≥ 1. */
+export function isPositiveInteger(x: number): boolean {
+  return Number.isInteger(x) && x >= 1;
+}
+
+/** Round a metre value for error messages (6 significant digits, unit m). */
+export function metres(x: number): string {
+  return `${Number(x.toPrecision(6))} m`;
+}
+
+/** Circle filament of one turn in the coil frame, axis +z. */
+export function circleTurn(radius: number, z: number): Filament {
+  return { kind: "circle", center: [0, 0, z], axis: [0, 0, 1], radius, turns: 1 };
+}
+
+/**
+ * Vertices of a rectangle with rounded corners, centred on the z axis at height z, traversed
+ * counter-clockwise seen from +z (current circulating right-handed about +z, like a circle
+ * filament with axis +z). Corners of radius r are replaced by arcs through `cornerSegments`
+ * chords (r = 0: one sharp vertex per corner).
+ *
+ * @param halfWidth half the centreline width along x, m, > 0.
+ * @param halfHeight half the centreline height along y, m, > 0.
+ * @param r centreline corner radius, m, 0 ≤ r ≤ min(halfWidth, halfHeight).
+ * @param z height of the polygon plane, m.
+ * @param cornerSegments chords per 90° arc, ≥ 1.
+ */
+export function roundedRectangle(halfWidth: number, halfHeight: number, r: number, z: number, cornerSegments: number): Vec3[] {
+  const points: Vec3[] = [];
+  // Corner centres, counter-clockwise starting at the lower right; each arc spans 90°.
+  const corners: ReadonlyArray<readonly [number, number, number]> = [
+    [halfWidth - r, -halfHeight + r, -Math.PI / 2],
+    [halfWidth - r, halfHeight - r, 0],
+    [-halfWidth + r, halfHeight - r, Math.PI / 2],
+    [-halfWidth + r, -halfHeight + r, Math.PI],
+  ];
+  for (const [cx, cy, start] of corners) {
+    if (r === 0) {
+      points.push([cx, cy, z]);
+      continue;
+    }
+    for (let k = 0; k <= cornerSegments; k++) {
+      const phi = start + (k / cornerSegments) * (Math.PI / 2);
+      points.push([cx + r * Math.cos(phi), cy + r * Math.sin(phi), z]);
+    }
+  }
+  return points;
+}
+
+/**
+ * Perimeter of a rectangle with rounded corners (centreline), m:
+ * 2(2X + 2Y) − (8 − 2π)r for half-dimensions X, Y and corner radius r.
+ * @example roundedRectanglePerimeter(0.01, 0.005, 0) // → 0.06
+ */
+export function roundedRectanglePerimeter(halfWidth: number, halfHeight: number, r: number): number {
+  return 4 * (halfWidth + halfHeight) - (8 - 2 * Math.PI) * r;
+}
+
+/** Perimeter of a closed polygon (last vertex joins the first), m. */
+export function polygonPerimeter(points: readonly Vec3[]): number {
+  let sum = 0;
+  for (let i = 0; i < points.length; i++) {
+    const a = points[i]!;
+    const b = points[(i + 1) % points.length]!;
+    sum += Math.hypot(b[0] - a[0], b[1] - a[1], b[2] - a[2]);
+  }
+  return sum;
+}
+
+/**
+ * Arc length of the Archimedean spiral r(θ) = r₀ + bθ, b = pitch/(2π), between radii r₀ and r₁, m.
+ * From ds = √(r² + b²) dθ and dr = b dθ:
+ *   s = [r√(r²+b²) + b² ln(r + √(r²+b²))]_{r₀}^{r₁} / (2b).
+ * (Standard calculus; e.g. any table of integrals, ∫√(x²+a²)dx.)
+ * @param r0 start radius, m, ≥ 0.
+ * @param r1 end radius, m, ≥ r0.
+ * @param pitch radial advance per turn, m, > 0.
+ * @example archimedeanArcLength(0.01, 0.02, 0.001) // → 0.94248… (≈ 10 turns of mean circumference 2π·0.015 m)
+ */
+export function archimedeanArcLength(r0: number, r1: number, pitch: number): number {
+  const b = pitch / (2 * Math.PI);
+  const f = (r: number): number => {
+    const h = Math.hypot(r, b);
+    return r * h + b * b * Math.log(r + h);
+  };
+  return (f(r1) - f(r0)) / (2 * b);
+}
+
+/** zod schema of a count: a whole number ≥ min (default 1), with a plain message. */
+export function count(min = 1): z.ZodNumber {
+  const message = `must be a whole number ≥ ${min}`;
+  return z.number({ error: message }).int({ error: message }).min(min, { error: message });
+}
