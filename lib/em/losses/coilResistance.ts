@@ -1,0 +1,190 @@
+/**
+ * AC resistance of a coil: DC resistance at temperature, skin effect of its conductor, and
+ * the proximity effect of the field the other turns produce at each turn (Ferreira 1994).
+ */
+
+import { TanklightInputError, requirePositive } from "../../errors.ts";
+import { MU0 } from "../../constants.ts";
+import type { Coil, Filament } from "../types.ts";
+import { material, resistivityAt, REFERENCE_TEMPERATURE } from "../materials.ts";
+import { acFactorFromQ } from "./roundWireAcFactor.ts";
+import { proximityG, turnFieldsPerAmpere, type TurnFields } from "./proximity.ts";
+import { litzResistancePerLength } from "./litz.ts";
+import { traceResistancePerLength } from "./trace.ts";
+
+/** Options of coilResistance. */
+export interface CoilResistanceOptions {
+  /** conductor temperature, K, 150–700 K (default 293.15 K = 20 °C) */
+  readonly temperature?: number;
+}
+
+/** The parts of a coil's AC resistance, Ω (series resistance at the coil terminals). */
+export interface CoilResistanceDetail {
+  /** DC resistance at the temperature, Ω */
+  readonly dc: number;
+  /** extra resistance from each conductor's own skin effect, Ω */
+  readonly skin: number;
+  /** extra resistance from the proximity effect (other turns' field, and for litz the bundle's own), Ω */
+  readonly proximity: number;
+  /** dc + skin + proximity, Ω */
+  readonly total: number;
+  /** frequency, Hz */
+  readonly frequency: number;
+  /** conductor temperature used, K */
+  readonly temperature: number;
+  readonly warnings: readonly string[];
+}
+
+const fieldCache = new WeakMap<Coil, TurnFields>();
+
+/** Per-ampere field at each turn, cached per coil object (coils are immutable plain data). */
+export function cachedTurnFields(coil: Coil): TurnFields {
+  let t = fieldCache.get(coil);
+  if (!t) {
+    t = turnFieldsPerAmpere(equivalentCircleCoil(coil));
+    fieldCache.set(coil, t);
+  }
+  return t;
+}
+
+/**
+ * A coil whose polygon (path) turns are replaced by circles of equal enclosed area, centred on
+ * the polygon's centroid and normal to its plane, for the proximity-field computation only
+ * (the conductor length stays the polygon's perimeter). Circles pass through unchanged.
+ */
+function equivalentCircleCoil(coil: Coil): Coil {
+  if (coil.filaments.every((f) => f.kind === "circle")) return coil;
+  const filaments: Filament[] = coil.filaments.map((f) => {
+    if (f.kind === "circle") return f;
+    const pts = f.points;
+    const n = pts.length;
+    let cx = 0, cy = 0, cz = 0;
+    for (const p of pts) { cx += p[0]; cy += p[1]; cz += p[2]; }
+    cx /= n; cy /= n; cz /= n;
+    // vector area ½ Σ (p_k − c) × (p_{k+1} − c)
+    let ax = 0, ay = 0, az = 0;
+    for (let k = 0; k < n; k++) {
+      const p = pts[k]!, q = pts[(k + 1) % n]!;
+      const ux = p[0] - cx, uy = p[1] - cy, uz = p[2] - cz;
+      const vx = q[0] - cx, vy = q[1] - cy, vz = q[2] - cz;
+      ax += 0.5 * (uy * vz - uz * vy);
+      ay += 0.5 * (uz * vx - ux * vz);
+      az += 0.5 * (ux * vy - uy * vx);
+    }
+    const area = Math.hypot(ax, ay, az);
+    return { kind: "circle", center: [cx, cy, cz], axis: [ax / area, ay / area, az / area], radius: Math.sqrt(area / Math.PI), turns: f.turns };
+  });
+  return { ...coil, filaments };
+}
+
+/**
+ * Conductor length each filament stands for: turns × circumference (circle) or perimeter (path), m.
+ */
+function filamentLengths(coil: Coil): Float64Array {
+  const out = new Float64Array(coil.filaments.length);
+  coil.filaments.forEach((f, i) => {
+    if (f.kind === "circle") out[i] = f.turns * 2 * Math.PI * f.radius;
+    else {
+      let L = 0;
+      const n = f.points.length;
+      for (let k = 0; k < n; k++) {
+        const p = f.points[k]!, q = f.points[(k + 1) % n]!;
+        L += Math.hypot(q[0] - p[0], q[1] - p[1], q[2] - p[2]);
+      }
+      out[i] = f.turns * L;
+    }
+  });
+  return out;
+}
+
+/**
+ * The AC series resistance of a coil and its parts: DC, skin effect, proximity effect.
+ *
+ * R = R_dc(T)·F_skin + Σ_turns ℓ_i·2G·⟨Ĥ_i²⟩/Î², with R_dc(T) = ρ(T)·ℓ_wire/A (ρ(T) per IEC 60028,
+ * α₂₀ = 0.00393/K for copper), F_skin the exact round-wire factor (Kelvin functions), G the
+ * uniform-transverse-field loss factor of the conductor (Ferreira 1994 orthogonality) and Ĥ_i
+ * the field all other turns produce at turn i (loopField, per ampere). Litz: per strand, with
+ * the bundle's internal field added (Bartoli et al. 1996). Traces: slab skin factor and
+ * low-frequency strip eddy loss (a stated model). See docs/methods/losses.md.
+ * @param coil the coil (any builder's, or hand-built circle/path filaments).
+ * @param f frequency, Hz, ≥ 0.
+ * @param opts temperature, K (default 293.15 K).
+ * @returns the parts, Ω, and warnings (filaments standing for several turns, traces beyond
+ *   the thin-strip regime, polygon turns approximated by circles for the proximity field).
+ * @example coilResistanceDetail(roundCoil({ meanRadius: 0.04, turns: 20, wire: { diameter: 0.5e-3 } }), 200e3)
+ *   // → { dc ≈ 0.44 Ω, skin ≈ 0.07 Ω, proximity ≈ 0.5 Ω, … } (see tests)
+ */
+export function coilResistanceDetail(coil: Coil, f: number, opts: CoilResistanceOptions = {}): CoilResistanceDetail {
+  if (!(typeof f === "number" && Number.isFinite(f) && f >= 0)) {
+    throw new TanklightInputError([{ path: "f", message: "must be a finite frequency ≥ 0 Hz", value: f, expected: "≥ 0 Hz" }], "coilResistance");
+  }
+  const temperature = opts.temperature ?? REFERENCE_TEMPERATURE;
+  const c = coil.conductor;
+  const rho = resistivityAt(material(c.material), temperature);
+  requirePositive(coil.wireLength, "coil.wireLength", "m", "coilResistance");
+  const warnings: string[] = [];
+  const len = coil.wireLength;
+  let dc: number, skin: number, proximity = 0;
+  const needField = f > 0;
+  const fields = needField ? cachedTurnFields(coil) : undefined;
+  if (fields) for (const w of fields.warnings) warnings.push(w);
+  if (fields && coil.filaments.some((fl) => fl.kind === "path")) {
+    warnings.push("polygon turns: the proximity field is computed for circles of equal area (approximation)");
+  }
+  const lengths = filamentLengths(coil);
+  switch (c.kind) {
+    case "round": {
+      requirePositive(c.diameter, "coil.conductor.diameter", "m", "coilResistance");
+      const r = c.diameter / 2;
+      dc = (rho * len) / (Math.PI * r * r);
+      if (!fields) { skin = 0; break; }
+      const delta = Math.sqrt(rho / (Math.PI * f * MU0));
+      skin = dc * (acFactorFromQ((Math.SQRT2 * r) / delta) - 1);
+      const G = rho * proximityG(c.diameter / (delta * Math.SQRT2));
+      for (let i = 0; i < lengths.length; i++) proximity += lengths[i]! * 2 * G * fields.h2[i]!;
+      break;
+    }
+    case "litz": {
+      requirePositive(c.strands, "coil.conductor.strands", "", "coilResistance");
+      requirePositive(c.strandDiameter, "coil.conductor.strandDiameter", "m", "coilResistance");
+      requirePositive(c.outerDiameter, "coil.conductor.outerDiameter", "m", "coilResistance");
+      const p = litzResistancePerLength(c.strands, c.strandDiameter, c.outerDiameter, f, rho);
+      dc = p.dc * len;
+      skin = p.skin * len;
+      if (!fields) break;
+      proximity = p.internalProximity * len;
+      for (let i = 0; i < lengths.length; i++) proximity += lengths[i]! * p.externalFactor * fields.h2[i]!;
+      break;
+    }
+    case "trace": {
+      requirePositive(c.width, "coil.conductor.width", "m", "coilResistance");
+      requirePositive(c.thickness, "coil.conductor.thickness", "m", "coilResistance");
+      const p = traceResistancePerLength(c.width, c.thickness, f, rho);
+      dc = p.dc * len;
+      skin = p.skin * len;
+      if (!fields) break;
+      for (let i = 0; i < lengths.length; i++) proximity += lengths[i]! * (p.normalFactor * fields.hz2[i]! + p.tangentialFactor * fields.hr2[i]!);
+      if (p.beyondThinStrip) {
+        warnings.push(
+          `trace ${c.width} m × ${c.thickness} m at ${f} Hz: width·thickness exceeds 2δ², so the low-frequency strip proximity model overstates the loss`,
+        );
+      }
+      break;
+    }
+    default: {
+      const never: never = c;
+      throw new TanklightInputError([{ path: "coil.conductor.kind", message: "unknown conductor kind", value: (never as { kind: string }).kind }], "coilResistance");
+    }
+  }
+  return { dc, skin, proximity, total: dc + skin + proximity, frequency: f, temperature, warnings };
+}
+
+/**
+ * AC series resistance of a coil (DC at temperature + skin + proximity), Ω.
+ * @param coil the coil.  @param f frequency, Hz, ≥ 0.  @param opts temperature, K (default 293.15 K).
+ * @returns R, Ω. See coilResistanceDetail for the parts, the method and warnings.
+ * @example coilResistance(coil, 0) // → the DC resistance ρℓ/A at 20 °C
+ */
+export function coilResistance(coil: Coil, f: number, opts: CoilResistanceOptions = {}): number {
+  return coilResistanceDetail(coil, f, opts).total;
+}

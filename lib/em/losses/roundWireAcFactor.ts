@@ -1,0 +1,51 @@
+/**
+ * Exact skin-effect resistance ratio of an isolated straight round wire.
+ */
+
+import { MU0 } from "../../constants.ts";
+import { TanklightInputError, requirePositive } from "../../errors.ts";
+import { kelvinScaledInto } from "../../math/kelvin.ts";
+
+const buf = new Float64Array(6);
+
+/**
+ * R_ac/R_dc from q = √2·r/δ (hot path: no checks, no allocation). q ≥ 0.
+ *
+ * R_ac/R_dc = (q/2)·(ber q·bei′q − bei q·ber′q)/(ber′²q + bei′²q), evaluated with the Kelvin
+ * functions scaled by e^{−q/√2} (the scale cancels), so it is finite for any q.
+ */
+export function acFactorFromQ(q: number): number {
+  if (q === 0) return 1;
+  kelvinScaledInto(q, buf);
+  const br = buf[0]!, bi = buf[1]!;
+  const b1r = buf[2]!, b1i = buf[3]!;
+  const dr = (b1r + b1i) * Math.SQRT1_2; // ber′
+  const di = (b1i - b1r) * Math.SQRT1_2; // bei′
+  return ((q / 2) * (br * di - bi * dr)) / (dr * dr + di * di);
+}
+
+/**
+ * Exact AC-to-DC resistance ratio of an isolated straight round wire (skin effect only).
+ *
+ * With δ = √(ρ/(πfμ₀)) and q = √2·r/δ:
+ * R_ac/R_dc = (q/2)·(ber q·bei′q − bei q·ber′q)/(ber′²q + bei′²q)
+ * (the Kelvin-function form of Re[(ka/2)J₀(ka)/J₁(ka)], k = (1−j)/δ; Ramo, Whinnery & Van Duzer
+ * §5.14; Terman, Radio Engineers' Handbook 1943 §2). Low frequency 1 + (r/δ)⁴/48 − …; high
+ * frequency r/(2δ) + 1/4 + 3δ/(32r) + ….
+ * @param radius bare conductor radius, m, > 0.
+ * @param f frequency, Hz, ≥ 0 (0 → exactly 1).
+ * @param resistivity conductor resistivity, Ω·m, > 0 (non-magnetic conductor).
+ * @returns R_ac/R_dc, dimensionless, ≥ 1.
+ * @example roundWireAcFactor(0.25e-3, 200e3, 1.7241e-8) // → 1.1504 (0.5 mm copper, 200 kHz)
+ * @example roundWireAcFactor(0.25e-3, 0, 1.7241e-8) // → 1
+ */
+export function roundWireAcFactor(radius: number, f: number, resistivity: number): number {
+  requirePositive(radius, "radius", "m", "roundWireAcFactor");
+  requirePositive(resistivity, "resistivity", "Ω·m", "roundWireAcFactor");
+  if (!(typeof f === "number" && Number.isFinite(f) && f >= 0)) {
+    throw new TanklightInputError([{ path: "f", message: "must be a finite number ≥ 0 Hz", value: f, expected: "≥ 0 Hz" }], "roundWireAcFactor");
+  }
+  if (f === 0) return 1;
+  const delta = Math.sqrt(resistivity / (Math.PI * f * MU0));
+  return acFactorFromQ((Math.SQRT2 * radius) / delta);
+}
