@@ -7,7 +7,6 @@
  */
 import { TanklightInputError } from "../errors.ts";
 import { MU0 } from "../constants.ts";
-import { ellipticKEComplement } from "../math/elliptic.ts";
 
 /** One inch, m (exact since the 1959 international yard and pound agreement). */
 export const INCH = 0.0254;
@@ -81,10 +80,38 @@ export function nagaokaCoefficient(radius: number, length: number): number {
   const kp2 = l2 / (fourA2 + l2);
   const k = Math.sqrt(k2);
   const kp = Math.sqrt(kp2);
-  const { K, E } = ellipticKEComplement(kp2);
+  const { K, KminusE } = ellipticKAndKMinusE(k2, kp2);
+  const E = K - KminusE;
   // E − k = (E − 1) + (1 − k), with 1 − k = k′²/(1 + k) formed without cancellation.
   const eMinusK = E - 1 + kp2 / (1 + k);
-  return (4 / (3 * Math.PI * kp)) * ((kp2 / k2) * (K - E) + eMinusK);
+  return (4 / (3 * Math.PI * kp)) * ((kp2 / k2) * KminusE + eMinusK);
+}
+
+/**
+ * K(m) and K(m) − E(m) by the arithmetic–geometric mean (Abramowitz & Stegun 1964, §17.6):
+ * K = π/(2a_N), K − E = K·Σ_{n≥0} 2^{n−1}c_n², c₀² = m, with c_{n+1} = c_n²/(4a_{n+1}) (A&S 17.6.3
+ * rearranged) so that no step subtracts nearly equal numbers. Both m and m₁ = 1 − m are passed,
+ * each formed from the geometry: K − E keeps full relative precision as m → 0 (long coils) and
+ * K as m → 1 (short coils).
+ */
+function ellipticKAndKMinusE(m: number, m1: number): { K: number; KminusE: number } {
+  let a = 1;
+  let b = Math.sqrt(m1);
+  let c = Math.sqrt(m);
+  let sum = 0.5 * m;
+  let weight = 0.5;
+  for (let i = 0; i < 40; i++) {
+    const an = 0.5 * (a + b);
+    const cn = (c * c) / (4 * an);
+    b = Math.sqrt(a * b);
+    a = an;
+    c = cn;
+    weight *= 2;
+    sum += weight * c * c;
+    if (c <= 1e-17 * a) break;
+  }
+  const K = Math.PI / (2 * a);
+  return { K, KminusE: K * sum };
 }
 
 /**
@@ -113,7 +140,7 @@ export function lundinNagaokaCoefficient(radius: number, length: number): number
  * A coil of round wire differs from its sheet by Rosa's correction ({@link rosaRoundWireCorrection}).
  * @param radius a, m, > 0 (to the wire centres). @param length ℓ = N·pitch, m, > 0. @param turns N, > 0.
  * @returns H.
- * @example currentSheetInductance(0.01, 0.02, 20) // → 1.0874e-5… (10.9 µH)
+ * @example currentSheetInductance(0.01, 0.02, 20) // → 5.4356e-6 (5.44 µH)
  */
 export function currentSheetInductance(radius: number, length: number, turns: number): number {
   check("currentSheetInductance", "turns", turns);
@@ -291,7 +318,7 @@ export function mohanCurrentSheetInductance(
  * @param width a, m, > 0. @param height b, m, > 0. @param wireRadius ρ, m, > 0.
  * @param opts.internal Y, default 1/4.
  * @returns H.
- * @example groverRectangleInductance(0.1, 0.1, 0.0005) // → 3.904e-7… (a 10 cm square of 1 mm wire)
+ * @example groverRectangleInductance(0.1, 0.1, 0.0005) // → 3.8194e-7 (a 10 cm square of 1 mm wire)
  */
 export function groverRectangleInductance(
   width: number,
@@ -324,7 +351,7 @@ export function groverRectangleInductance(
  * mean distance of two collinear strips of width p whose centres are k·p apart (Maxwell):
  *   ln g = [(D + p)² ln(D + p) + (D − p)² ln(D − p) − 2D² ln D]/(2p²) − 3/2,  D = k·p.
  * It is the difference between the mutual inductances of neighbouring filaments and of the
- * sheet's strips, in units of µ₀aN. Values: B(1) = 0, B(2) = 2 ln 2 − 3/2 = 0.11371 (Rosa's table
+ * sheet's strips, in units of µ₀aN. Values: B(1) = 0, B(2) = 3/2 − 2 ln 2 = 0.11371 (Rosa's table
  * gives 0.1137 — from memory), rising towards about 0.3 for many turns.
  * @param turns N, integer ≥ 1.
  */
@@ -340,7 +367,7 @@ export function rosaB(turns: number): number {
       1.5;
     sum += (turns - k) * (lnG - Math.log(k));
   }
-  return (-2 / turns) * sum;
+  return sum === 0 ? 0 : (-2 / turns) * sum;
 }
 
 /**
