@@ -1,0 +1,63 @@
+/**
+ * Casebook — "How fast does coupling fall with height?"
+ *
+ * A token coil floats above a transmitter loop, on its axis. Before any circuit, the
+ * geometry alone sets how much of the transmitter's flux the token catches. This run prints
+ * the mutual inductance and coupling factor of a 40 mm transmitter loop and a 6 mm token loop
+ * from touching distance to 12 cm, and shows the 1/d³ dipole fall-off taking over beyond the
+ * transmitter's radius (physics-notes.md: range grows only as the cube root of drive).
+ *
+ * Demo data: the radii and heights are our own example, not a product.
+ */
+import { coaxialLoopMutualInductance, formatQuantity, MU0 } from "../lib/mod.ts";
+
+export interface CoaxialLoopsRow {
+  /** axial distance, m */
+  readonly height: number;
+  /** mutual inductance, H */
+  readonly mutual: number;
+  /** small-token estimate: the transmitter's on-axis field times the token area, μ₀πa²b²/(2(a²+d²)^{3/2}), H */
+  readonly smallToken: number;
+  /** the far-field dipole law μ₀πa²b²/(2d³), H */
+  readonly dipole: number;
+}
+
+export interface CoaxialLoopsResult {
+  readonly transmitterRadius: number;
+  readonly tokenRadius: number;
+  readonly rows: readonly CoaxialLoopsRow[];
+}
+
+/** Runs the scenario and returns its printed text and its numbers. */
+export function run(): { notebook: string; results: CoaxialLoopsResult } {
+  const a = 0.04; // transmitter loop radius, m (demo)
+  const b = 0.006; // token loop radius, m (demo)
+  const heights = [0.002, 0.005, 0.01, 0.02, 0.03, 0.04, 0.06, 0.08, 0.1, 0.12];
+  const rows = heights.map((d) => ({
+    height: d,
+    mutual: coaxialLoopMutualInductance(a, b, d),
+    smallToken: (MU0 * Math.PI * a * a * b * b) / (2 * (a * a + d * d) ** 1.5),
+    dipole: (MU0 * Math.PI * a * a * b * b) / (2 * d ** 3),
+  }));
+  const worstSmall = Math.max(...rows.map((r) => Math.abs(r.smallToken / r.mutual - 1)));
+  const last = rows[rows.length - 1]!;
+  const lines = [
+    "# How fast does coupling fall with height?",
+    "",
+    `Transmitter loop radius ${formatQuantity(a, "m")}, token loop radius ${formatQuantity(b, "m")}, coaxial.`,
+    "Single turns; multiply M by both turn counts for wound coils.",
+    "",
+    "| height | M (Maxwell, exact) | small-token estimate | ratio | 1/d³ dipole law | ratio |",
+    "|---:|---:|---:|---:|---:|---:|",
+    ...rows.map(
+      (r) =>
+        `| ${formatQuantity(r.height, "m")} | ${formatQuantity(r.mutual, "H")} | ${formatQuantity(r.smallToken, "H")} | ${(r.smallToken / r.mutual).toFixed(4)} | ${formatQuantity(r.dipole, "H")} | ${(r.dipole / r.mutual).toFixed(3)} |`,
+    ),
+    "",
+    `A token this much smaller than the transmitter sees an almost uniform field: the`,
+    `small-token estimate stays within ${(100 * worstSmall).toFixed(1)} % of the exact value at every height.`,
+    `The 1/d³ law is reached only slowly: it is still ${(100 * (last.dipole / last.mutual - 1)).toFixed(0)} % high at ${formatQuantity(last.height, "m")}`,
+    "(three transmitter radii); from there on, doubling the height cuts the coupling about eightfold.",
+  ];
+  return { notebook: lines.join("\n"), results: { transmitterRadius: a, tokenRadius: b, rows } };
+}
