@@ -166,6 +166,10 @@ describe("types", () => {
     expectTypeOf<Out["coil"]["radius"]>().toEqualTypeOf<number>();
     expectTypeOf<Out["position"]>().toEqualTypeOf<readonly [number, number, number]>();
     expectTypeOf<Out["tuning"]>().toEqualTypeOf<number | undefined>();
+    // a quantity field is a required key of the input; .optional() makes it optional
+    const S = z.object({ r: length(), c: capacitance().optional() });
+    expectTypeOf<z.input<typeof S>>().toEqualTypeOf<{ r: number | string; c?: number | string | undefined }>();
+    expectTypeOf<z.output<typeof S>>().toEqualTypeOf<{ r: number; c?: number | undefined }>();
     expectTypeOf(parseInput(length(), "1 m", "x")).toEqualTypeOf<number>();
     expectTypeOf(quantity).returns.toEqualTypeOf<QuantitySchema>();
     expectTypeOf<z.output<ReturnType<typeof unitVector>>>().toEqualTypeOf<readonly [number, number, number]>();

@@ -214,6 +214,45 @@ describe("parseQuantity: properties", () => {
     );
   });
 
+  it("a prefix equals the matching power of ten, exactly (\"1.5 kHz\" = \"1.5e3 Hz\")", () => {
+    const table: [string, number, string, Dimension][] = [
+      ["p", -12, "F", "capacitance"], ["n", -9, "H", "inductance"], ["u", -6, "T", "fluxDensity"],
+      ["m", -3, "m", "length"], ["k", 3, "Hz", "frequency"], ["M", 6, "ohm", "resistance"], ["G", 9, "Hz", "frequency"],
+    ];
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1e-6, max: 1e6, noNaN: true }),
+        fc.integer({ min: 0, max: table.length - 1 }),
+        fc.constantFrom("", " ", "  "),
+        (x, i, gap) => {
+          const [p, e, u, d] = table[i] ?? ["", 0, "m", "length"];
+          const text = String(x);
+          return parseQuantity(`${text}${gap}${p}${u}`, d) === parseQuantity(`${text}e${e} ${u}`, d);
+        },
+      ),
+    );
+  });
+
+  it("any string either parses to a finite number or throws TanklightInputError (never another error)", () => {
+    const dims = Object.keys(DIMENSIONS) as Dimension[];
+    const unitish = fc.constantFrom("mm", "kHz", "nF", "ohm m", "deg", "degC", "%", "A/m", "µT", "Ω", "(", "^", "e", "/", "*", "1/0", "mm^-999", "m^1e9");
+    const text = fc.oneof(
+      fc.string(),
+      fc.tuple(fc.double(), fc.constantFrom("", " "), unitish).map(([x, g, u]) => `${x}${g}${u}`),
+      fc.array(unitish, { maxLength: 4 }).map((a) => a.join(" ")),
+    );
+    fc.assert(
+      fc.property(text, fc.constantFrom(...dims), (s, d) => {
+        try {
+          return Number.isFinite(parseQuantity(s, d));
+        } catch (e) {
+          return e instanceof TanklightInputError && e.issues.length === 1 && e.issues[0]?.value === s;
+        }
+      }),
+      { numRuns: 2000 },
+    );
+  });
+
   it("isQuantity agrees with parseQuantity", () => {
     expect(isQuantity("12 mm", "length")).toBe(true);
     expect(isQuantity("5 kHz", "length")).toBe(false);
