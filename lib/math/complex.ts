@@ -93,13 +93,22 @@ export function complexSqrt(ar: number, ai: number, out: Float64Array, offset = 
     out[offset + 1] = ai;
     return;
   }
-  const t = Math.sqrt((Math.abs(ar) + Math.hypot(ar, ai)) / 2);
-  if (ar >= 0) {
-    out[offset] = t;
-    out[offset + 1] = ai / (2 * t);
+  // rescale by an even power of two outside [2^-500, 2^500] so that neither the hypot nor
+  // the quotient under- or overflows (subnormal inputs, |a| near the double limit)
+  const big = Math.max(Math.abs(ar), Math.abs(ai));
+  let scale = 1;
+  if (big < 3.054936363499605e-151) scale = 2 ** 600; // 2^-500
+  else if (big > 3.273390607896142e150) scale = 2 ** -600; // 2^500
+  const sr = ar * scale;
+  const si = ai * scale;
+  const back = scale === 1 ? 1 : scale > 1 ? 2 ** -300 : 2 ** 300;
+  const t = Math.sqrt((Math.abs(sr) + Math.hypot(sr, si)) / 2);
+  if (sr >= 0) {
+    out[offset] = t * back;
+    out[offset + 1] = (si / (2 * t)) * back;
   } else {
-    out[offset] = Math.abs(ai) / (2 * t);
-    out[offset + 1] = ai < 0 || Object.is(ai, -0) ? -t : t;
+    out[offset] = (Math.abs(si) / (2 * t)) * back;
+    out[offset + 1] = (si < 0 || Object.is(si, -0) ? -t : t) * back;
   }
 }
 

@@ -29,7 +29,7 @@ export class SingularMatrixError extends TanklightInputError {
       [
         {
           path: `matrix column ${pivotIndex}`,
-          message: "matrix is singular (zero pivot at this column; e.g. a floating node or a loop of ideal sources)",
+          message: "matrix is singular (zero pivot at this column)",
           value: pivot,
           expected: "a non-zero pivot",
         },
@@ -73,6 +73,14 @@ export function luFactor(a: Float64Array, n: number, pivots: Int32Array): void {
   if (pivots.length < n) {
     throw new TanklightInputError([{ path: "pivots.length", message: `must be ≥ n = ${n}`, value: pivots.length }], "luFactor");
   }
+  for (let i = 0; i < n * n; i++) {
+    if (!Number.isFinite(a[i]!)) {
+      throw new TanklightInputError(
+        [{ path: `matrix[${Math.floor(i / n)}][${i % n}]`, message: "entries must be finite", value: a[i] }],
+        "luFactor",
+      );
+    }
+  }
   for (let k = 0; k < n; k++) {
     // pivot search in column k, rows k..n-1
     let p = k;
@@ -83,12 +91,6 @@ export function luFactor(a: Float64Array, n: number, pivots: Int32Array): void {
         big = v;
         p = i;
       }
-    }
-    if (!Number.isFinite(big)) {
-      throw new TanklightInputError(
-        [{ path: `matrix column ${k}`, message: "entries must be finite", value: big }],
-        "luFactor",
-      );
     }
     // column scale: U entries above (rows < k) and the pivot candidate
     let scale = big;
