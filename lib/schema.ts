@@ -221,38 +221,74 @@ function valueAt(input: unknown, path: readonly PropertyKey[]): unknown {
   return v;
 }
 
-/** One zod issue as our InputIssues (one per unknown key, else one). */
-function toInputIssues(issue: z.core.$ZodIssue, input: unknown): InputIssue[] {
-  if (issue.code === "unrecognized_keys") {
-    return issue.keys.map((key) => ({
-      path: dottedPath([...issue.path, key]),
-      message: "unknown field",
-      value: valueAt(input, [...issue.path, key]),
-    }));
-  }
-  return [toInputIssue(issue, input)];
+/** True when a union branch failed on the form itself (its discriminator or its type), not on a field. */
+function branchMismatch(issues: readonly z.core.$ZodIssue[]): boolean {
+  return issues.some(
+    (i) =>
+      (i.path.length === 0 && i.code !== "unrecognized_keys") ||
+      (i.path.length === 1 && i.code === "invalid_value") ||
+      (i.path.length === 1 && i.code === "invalid_union" && i.errors.length === 0),
+  );
 }
 
-/** One zod issue as our InputIssue. */
-function toInputIssue(issue: z.core.$ZodIssue, input: unknown): InputIssue {
-  const path = dottedPath(issue.path);
-  const value = "input" in issue && issue.input !== undefined ? issue.input : valueAt(input, issue.path);
-  const params = (issue as { params?: { detail?: string; expected?: string } }).params;
-  let message = issue.message;
-  if (issue.code !== "custom") {
-    // zod's own texts ("Invalid input: expected number, received string") lose the value;
-    // keep them, lower-cased, since parseInput appends the received value.
-    message = message
-      .replace(/^(Invalid input|Too small|Too big): /, "")
-      .replace(/, received \w+$/, "");
+/** A short description of what one union branch wanted, from its form-level issues. */
+function branchWanted(issues: readonly z.core.$ZodIssue[]): string {
+  const literal = issues.find((i) => i.path.length === 1 && i.code === "invalid_value");
+  if (literal !== undefined && literal.code === "invalid_value") {
+    return `${String(literal.path[0])} ${literal.values.map((v) => JSON.stringify(v)).join(" or ")}`;
   }
-  return {
-    path,
-    message,
-    value,
-    ...(params?.expected === undefined ? {} : { expected: params.expected }),
-    ...(params?.detail === undefined ? {} : { detail: params.detail }),
-  };
+  const top = issues.find((i) => i.path.length === 0);
+  return top === undefined ? "another form" : cleanMessage(top);
+}
+
+/** zod's own texts without the parts parseInput adds itself ("Invalid input: …, received string"). */
+function cleanMessage(issue: z.core.$ZodIssue): string {
+  if (issue.code === "custom") return issue.message;
+  return issue.message.replace(/^(Invalid input|Invalid option|Too small|Too big): /, "").replace(/, received \w+$/, "");
+}
+
+/**
+ * One zod issue as our InputIssues: one per unknown key; a union's issues are those of the one
+ * branch whose form matched (its discriminator or type), else one issue listing the forms.
+ */
+function toInputIssues(issue: z.core.$ZodIssue, input: unknown, prefix: readonly PropertyKey[] = []): InputIssue[] {
+  const full = [...prefix, ...issue.path];
+  if (issue.code === "unrecognized_keys") {
+    return issue.keys.map((key) => ({
+      path: dottedPath([...full, key]),
+      message: "unknown field",
+      value: valueAt(input, [...full, key]),
+    }));
+  }
+  if (issue.code === "invalid_union") {
+    const options = (issue as { options?: readonly unknown[] }).options;
+    if (issue.errors.length === 0 && options !== undefined) {
+      // discriminated union with an unknown discriminator value
+      return [{ path: dottedPath(full), message: `expected one of ${options.map((o) => JSON.stringify(o)).join(", ")}`, value: valueAt(input, full) }];
+    }
+    const matching = issue.errors.filter((branch) => !branchMismatch(branch));
+    const best = matching.length === 1 ? matching[0] : undefined;
+    if (best !== undefined) return best.flatMap((i) => toInputIssues(i, input, full));
+    const wanted = [...new Set(issue.errors.map(branchWanted))];
+    return [
+      {
+        path: dottedPath(full),
+        message: `matches none of the accepted forms (${wanted.join("; ")})`,
+        value: valueAt(input, full),
+      },
+    ];
+  }
+  const value = "input" in issue && issue.input !== undefined ? issue.input : valueAt(input, full);
+  const params = (issue as { params?: { detail?: string; expected?: string } }).params;
+  return [
+    {
+      path: dottedPath(full),
+      message: cleanMessage(issue),
+      value,
+      ...(params?.expected === undefined ? {} : { expected: params.expected }),
+      ...(params?.detail === undefined ? {} : { detail: params.detail }),
+    },
+  ];
 }
 
 /**

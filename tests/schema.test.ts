@@ -149,6 +149,36 @@ describe("parseInput", () => {
     );
   });
 
+  it("reports a union through the branch whose form matched, else lists the forms", () => {
+    const Drive = z.union([
+      z.strictObject({ kind: z.literal("sine"), amplitude: voltage({ nonNegative: true }) }),
+      z.strictObject({ kind: z.literal("bridge"), supply: voltage({ positive: true }), onResistance: resistance().optional() }),
+      z.custom<{ kind: "ready" }>((d) => typeof d === "object" && d !== null && (d as { kind?: unknown }).kind === "ready", {
+        message: "expected a ready drive",
+      }),
+    ]);
+    const S = z.object({ transmitter: z.object({ drive: Drive }) });
+    expect(() => parseInput(S, { transmitter: { drive: { kind: "sine", amplitude: "5 kHz" } } }, "link")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: link: transmitter.drive.amplitude: expected a voltage like '3.3 V', got '5 kHz' (a frequency)]`,
+    );
+    expect(() => parseInput(S, { transmitter: { drive: { kind: "bridge" } } }, "link")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: link: transmitter.drive.supply: expected a voltage like '3.3 V', got nothing]`,
+    );
+    expect(() => parseInput(S, { transmitter: { drive: { kind: "pulse" } } }, "link")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: link: transmitter.drive: matches none of the accepted forms (kind "sine"; kind "bridge"; expected a ready drive), got {"kind":"pulse"}]`,
+    );
+    const D = z.object({
+      drive: z.discriminatedUnion("kind", [
+        z.strictObject({ kind: z.literal("sine"), amplitude: voltage() }),
+        z.strictObject({ kind: z.literal("bridge"), supply: voltage() }),
+      ]),
+      compensation: z.enum(["series", "parallel"]),
+    });
+    expect(() => parseInput(D, { drive: { kind: "pulse" }, compensation: "both" }, "link")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: link: drive.kind: expected one of "sine", "bridge", got 'pulse'; compensation: expected one of "series"|"parallel", got 'both']`,
+    );
+  });
+
   it("lets non-input errors through unchanged", () => {
     const S = z.number().transform(() => {
       throw new RangeError("boom");
