@@ -70,6 +70,21 @@ export { loopField, type LoopFieldValue } from "./em/loopField.ts";
 export { loopVectorPotential } from "./em/vectorPotential.ts";
 export { coaxialLoopMutualInductance } from "./em/coaxialMutual.ts";
 export { loopMutualInductance, type CircleFilament, type LoopMutualOptions } from "./em/loopMutual.ts";
+export { poseFrame, worldFilaments, type Frame } from "./em/frames.ts";
+export { magneticField } from "./em/magneticField.ts";
+export {
+  mutualInductance,
+  mutualInductanceChecked,
+  couplingFactor,
+  type MutualInductanceResult,
+} from "./em/mutualInductance.ts";
+export {
+  selfInductance,
+  selfInductanceDetail,
+  internalInductanceFactor,
+  type SelfInductanceOptions,
+  type SelfInductanceDetail,
+} from "./em/selfInductance.ts";
 
 // ── lib/circuit ──────────────────────────────────────────────────────────────
 export type { DiodeModel } from "./circuit/types.ts";
