@@ -21,7 +21,12 @@ export interface LinkLoadModel {
   /** fundamental susceptance at peak amplitude v, S (default 0) */
   susceptance?(amplitude: number): number;
   /** average current of each LED of the load at peak amplitude v, A (reports only) */
-  ledCurrents?(amplitude: number): readonly { readonly label: string; readonly current: number }[];
+  ledCurrents?(amplitude: number): readonly {
+    readonly label: string;
+    readonly current: number;
+    /** light relative to the LED's rated current (default: current / options.brightnessReference) */
+    readonly relativeBrightness?: number;
+  }[];
 }
 
 /** Compensation of the transmitter coil by its capacitor. */

@@ -766,7 +766,7 @@ function assemble(
     const leds: LedState[] = ledList.map((d) => ({
       label: d.label,
       averageCurrent: d.current,
-      relativeBrightness: Math.max(d.current, 0) / brightRef,
+      relativeBrightness: d.relativeBrightness ?? Math.max(d.current, 0) / brightRef,
       lit: d.current >= threshold,
     }));
     const label = labelOf(r, k);
