@@ -11,6 +11,7 @@ import { acFactorFromQ } from "./roundWireAcFactor.ts";
 import { proximityG, turnFieldsPerAmpere, type TurnFields } from "./proximity.ts";
 import { litzResistancePerLength } from "./litz.ts";
 import { traceResistancePerLength } from "./trace.ts";
+import { selfResonanceWarning } from "../selfCapacitance.ts";
 
 /** Options of coilResistance. */
 export interface CoilResistanceOptions {
@@ -109,8 +110,9 @@ function filamentLengths(coil: Coil): Float64Array {
  * @param coil the coil (any builder's, or hand-built circle/path filaments).
  * @param f frequency, Hz, ≥ 0.
  * @param opts temperature, K (default 293.15 K).
- * @returns the parts, Ω, and warnings (filaments standing for several turns, traces beyond
- *   the thin-strip regime, polygon turns approximated by circles for the proximity field).
+ * @returns the parts, Ω, and warnings (f above a third of the self-resonance, filaments standing
+ *   for several turns, traces beyond the thin-strip regime, polygon turns approximated by circles
+ *   for the proximity field).
  * @example coilResistanceDetail(roundCoil({ meanRadius: 0.04, turns: 20, wire: { diameter: 0.5e-3 } }), 200e3)
  *   // → { dc ≈ 0.44 Ω, skin ≈ 0.07 Ω, proximity ≈ 0.5 Ω, … } (see tests)
  */
@@ -176,6 +178,10 @@ export function coilResistanceDetail(coil: Coil, f: number, opts: CoilResistance
       throw new TanklightInputError([{ path: "coil.conductor.kind", message: "unknown conductor kind", value: (never as { kind: string }).kind }], "coilResistance");
     }
   }
+  if (f > 0 && !(opts as { skipSelfResonance?: boolean }).skipSelfResonance) {
+    const w = selfResonanceWarning(coil, f);
+    if (w) warnings.push(w);
+  }
   return { dc, skin, proximity, total: dc + skin + proximity, frequency: f, temperature, warnings };
 }
 
@@ -186,5 +192,5 @@ export function coilResistanceDetail(coil: Coil, f: number, opts: CoilResistance
  * @example coilResistance(coil, 0) // → the DC resistance ρℓ/A at 20 °C
  */
 export function coilResistance(coil: Coil, f: number, opts: CoilResistanceOptions = {}): number {
-  return coilResistanceDetail(coil, f, opts).total;
+  return coilResistanceDetail(coil, f, { ...opts, skipSelfResonance: true } as CoilResistanceOptions).total;
 }

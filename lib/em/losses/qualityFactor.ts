@@ -1,0 +1,56 @@
+/**
+ * Quality factor of a coil from the loss models: Q = ωL/R.
+ */
+
+import { TanklightInputError } from "../../errors.ts";
+import type { Coil } from "../types.ts";
+import { selfInductance } from "../selfInductance.ts";
+import { selfResonance } from "../selfCapacitance.ts";
+import { coilResistanceDetail, type CoilResistanceOptions } from "./coilResistance.ts";
+
+/** Q with what it was computed from. */
+export interface QualityFactorDetail {
+  /** Q = ωL/R, dimensionless */
+  readonly q: number;
+  /** L at f, H */
+  readonly inductance: number;
+  /** AC series resistance at f, Ω */
+  readonly resistance: number;
+  /** estimated self-resonant frequency, Hz */
+  readonly selfResonance: number;
+  readonly warnings: readonly string[];
+}
+
+/**
+ * Quality factor of a coil and its parts at one frequency.
+ *
+ * Q = 2πf·L(f)/R(f), L from selfInductance(coil, { frequency: f }) (filament method), R from
+ * coilResistanceDetail (DC at temperature + skin + proximity). The self-capacitance is not folded
+ * into Q (it raises the apparent L and lowers Q near resonance); above f_sr/3 a warning says so.
+ * @param coil the coil. @param f frequency, Hz, > 0. @param opts temperature, K (default 293.15 K).
+ * @returns `{ q, inductance (H), resistance (Ω), selfResonance (Hz), warnings }`.
+ * @example qualityFactorDetail(tx20Turns, 200e3).q // → ≈ 85 (radius 40 mm, 20 turns, 0.5 mm copper)
+ */
+export function qualityFactorDetail(coil: Coil, f: number, opts: CoilResistanceOptions = {}): QualityFactorDetail {
+  if (!(typeof f === "number" && Number.isFinite(f) && f > 0)) {
+    throw new TanklightInputError([{ path: "f", message: "must be a finite frequency > 0 Hz", value: f, expected: "> 0 Hz" }], "qualityFactor");
+  }
+  const r = coilResistanceDetail(coil, f, opts);
+  const L = selfInductance(coil, { frequency: f });
+  const fsr = selfResonance(coil);
+  const warnings = [...r.warnings];
+  if (f > fsr / 3) {
+    warnings.push(`frequency ${f.toPrecision(4)} Hz is above a third of the coil's estimated self-resonance ${fsr.toPrecision(3)} Hz: lumped L, R and Q are no longer accurate`);
+  }
+  return { q: (2 * Math.PI * f * L) / r.total, inductance: L, resistance: r.total, selfResonance: fsr, warnings };
+}
+
+/**
+ * Quality factor Q = ωL/R of a coil at frequency f (see qualityFactorDetail for parts and warnings).
+ * @param coil the coil. @param f frequency, Hz, > 0. @param opts temperature, K.
+ * @returns Q, dimensionless.
+ * @example qualityFactor(tx20Turns, 200e3) // → ≈ 85
+ */
+export function qualityFactor(coil: Coil, f: number, opts: CoilResistanceOptions = {}): number {
+  return qualityFactorDetail(coil, f, opts).q;
+}
