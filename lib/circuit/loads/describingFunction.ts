@@ -1,0 +1,279 @@
+/**
+ * Describing functions of token loads: the fundamental current a load draws at a sinusoidal
+ * tank voltage v = A·sin θ, and the average current of each LED (what brightness follows).
+ *
+ * Method: fundamental-harmonic balance (the describing function of a memoryless nonlinearity,
+ * e.g. Gelb & Vander Velde, "Multiple-Input Describing Functions and Nonlinear System Design",
+ * 1968, ch. 2): I₁(A) = (1/π)·∫₀^{2π} i(A·sin θ)·sin θ dθ, G(A) = I₁/A. A memoryless load's
+ * current is symmetric about the crest, so its cosine term vanishes: G is a real conductance.
+ * Average current: (1/2π)·∫₀^{2π} i_LED dθ. Slope dI₁/dA = (1/π)·∫ g(A·sin θ)·sin²θ dθ with
+ * g = dI/dV, for the link solver's Newton on the amplitude.
+ * Quadrature: the fixed graded composite Gauss–Legendre rule of halfWave.ts.
+ *
+ * Reversing one LED of a memoryless load leaves its fundamental and its average current
+ * unchanged (it just conducts on the other half-cycle). So at a given sinusoidal amplitude an
+ * anti-parallel pair and a same-direction pair draw the same fundamental and share it the same
+ * way: the lower-V_F LED takes most of it in both. What differs in practice comes from the
+ * tank voltage not being a pure sine; the transient engine shows it.
+ */
+import type { Junction, Led } from "./led.ts";
+import type { LedCurrent, TokenLoad } from "./types.ts";
+import { JunctionBranch, halfWaveIntegrals, reverseHalfIntegrals, type StringBranch } from "./halfWave.ts";
+import { bridgeBranch, cachedBranch, reservoirSteadyState } from "./rectifier.ts";
+import { TanklightInputError } from "../../errors.ts";
+import { integrateAdaptive } from "../../math/quadrature.ts";
+
+const fwd = new Float64Array(6);
+const rev = new Float64Array(6);
+
+/** Fundamental current, its slope and per-junction averages for one junction (LED) across the tank. */
+interface JunctionResult {
+  /** the junction and amplitude these numbers belong to (a one-entry memo: averageLoadCurrent
+   * right after fundamentalConductance at the same amplitude reuses the pass) */
+  j: Junction | null;
+  A: number;
+  i1: number; // π·I₁ contribution (without leakage)
+  slope: number; // π·dI₁/dA contribution (without leakage)
+  avg: number; // average current, A
+  peak: number; // peak current, A
+}
+
+function junctionBranch(j: Junction): JunctionBranch {
+  return cachedBranch(j, () => new JunctionBranch(j.is, j.n * j.thermalVoltage, j.rs));
+}
+
+function evalJunction(j: Junction, A: number, r: JunctionResult): void {
+  if (r.j === j && r.A === A) return;
+  halfWaveIntegrals(junctionBranch(j), A, 0, fwd);
+  const nvt = j.n * j.thermalVoltage;
+  reverseHalfIntegrals(j.is, nvt, A, rev);
+  r.i1 = fwd[0]! - rev[0]!;
+  r.slope = fwd[2]! + rev[2]!;
+  r.avg = (fwd[1]! + rev[1]!) / (2 * Math.PI) - j.is;
+  r.peak = fwd[5]! - j.is + j.leakage * A;
+  r.j = j;
+  r.A = A;
+}
+
+const ra: JunctionResult = { j: null, A: NaN, i1: 0, slope: 0, avg: 0, peak: 0 };
+const rb: JunctionResult = { j: null, A: NaN, i1: 0, slope: 0, avg: 0, peak: 0 };
+
+function checkAmplitude(amplitude: number, where: string): void {
+  if (!(typeof amplitude === "number" && Number.isFinite(amplitude) && amplitude >= 0)) {
+    throw new TanklightInputError(
+      [{ path: "amplitude", message: "must be a finite number ≥ 0 V (peak)", value: amplitude, expected: "≥ 0 V" }],
+      where,
+    );
+  }
+}
+
+function checkLoad(load: TokenLoad, where: string): void {
+  if (load === null || typeof load !== "object" || typeof (load as { kind?: unknown }).kind !== "string") {
+    throw new TanklightInputError([{ path: "load", message: "must be a TokenLoad object with a kind", value: load }], where);
+  }
+}
+
+/** Fundamental current I₁ (A, peak, in phase) and its slope dI₁/dA (S) of a load at amplitude A. */
+export interface FundamentalResponse {
+  /** in-phase fundamental current, A (peak) */
+  readonly current: number;
+  /** d(current)/d(amplitude), S */
+  readonly slope: number;
+}
+
+/** Scratch result, reused (no allocation on the hot path). */
+const resp = { current: 0, slope: 0 };
+
+function fundamentalInto(load: TokenLoad, A: number, where: string): void {
+  switch (load.kind) {
+    case "resistor": {
+      const g = 1 / load.resistance;
+      resp.current = g * A;
+      resp.slope = g;
+      return;
+    }
+    case "led": {
+      const l = load.led;
+      if (A === 0) {
+        resp.current = 0;
+        resp.slope = l.conductance(0);
+        return;
+      }
+      evalJunction(l, A, ra);
+      resp.current = ra.i1 / Math.PI + l.leakage * A;
+      resp.slope = ra.slope / Math.PI + l.leakage;
+      return;
+    }
+    case "antiParallel":
+    case "parallelSameDirection": {
+      if (A === 0) {
+        resp.current = 0;
+        resp.slope = load.a.conductance(0) + load.b.conductance(0);
+        return;
+      }
+      evalJunction(load.a, A, ra);
+      evalJunction(load.b, A, rb);
+      resp.current = (ra.i1 + rb.i1) / Math.PI + (load.a.leakage + load.b.leakage) * A;
+      resp.slope = (ra.slope + rb.slope) / Math.PI + load.a.leakage + load.b.leakage;
+      return;
+    }
+    case "bridge": {
+      const br = bridgeOf(load);
+      if (A === 0) {
+        br.evalAt(0);
+        resp.current = 0;
+        resp.slope = br.g;
+        return;
+      }
+      halfWaveIntegrals(br, A, 0, fwd);
+      // both half-cycles conduct through the string: I₁ = (2/π)∫₀^π i sin θ dθ
+      resp.current = (2 * fwd[0]!) / Math.PI;
+      resp.slope = (2 * fwd[2]!) / Math.PI;
+      return;
+    }
+    case "halfWaveReservoir": {
+      const st = reservoirSteadyState(load.diode, load.led, A, load.seriesResistance ?? 0, undefined, undefined, reservoirBranch(load));
+      resp.current = st.fundamentalCurrent;
+      resp.slope = st.slope;
+      return;
+    }
+    default: {
+      const kind = (load as { kind: unknown }).kind;
+      throw new TanklightInputError([{ path: "load.kind", message: "is not a known token load", value: kind }], where);
+    }
+  }
+}
+
+function bridgeOf(load: Extract<TokenLoad, { kind: "bridge" }>): StringBranch {
+  return cachedBranch(load, () => bridgeBranch(load.diode, load.led, load.seriesResistance ?? 0));
+}
+
+function reservoirBranch(load: Extract<TokenLoad, { kind: "halfWaveReservoir" }>): JunctionBranch {
+  return cachedBranch(
+    load,
+    () => new JunctionBranch(load.diode.is, load.diode.n * load.diode.thermalVoltage, load.diode.rs + (load.seriesResistance ?? 0)),
+  );
+}
+
+/**
+ * Describing function of a token load: the in-phase fundamental current divided by the
+ * amplitude of the sinusoidal tank voltage across it.
+ *
+ * G(A) = (1/(π·A))·∫₀^{2π} i(A·sin θ)·sin θ dθ (Gelb & Vander Velde 1968, ch. 2).
+ * @param load a {@link TokenLoad} (build one with tokenCircuits.ts helpers or as plain data).
+ * @param amplitude tank voltage amplitude A, V (peak), ≥ 0; at A = 0 the small-signal conductance.
+ * @returns conductance, S, > 0.
+ * @example fundamentalConductance({ kind: "resistor", resistance: 1000 }, 5) // → 0.001
+ * @example fundamentalConductance({ kind: "led", led: ledPreset("red") }, 2.0) // ≈ 3.4e-3 S
+ * Related: fundamentalCurrentSlope, averageLoadCurrent, loadResponse.
+ */
+export function fundamentalConductance(load: TokenLoad, amplitude: number): number {
+  checkLoad(load, "fundamentalConductance");
+  checkAmplitude(amplitude, "fundamentalConductance");
+  fundamentalInto(load, amplitude, "fundamentalConductance");
+  return amplitude === 0 ? resp.slope : resp.current / amplitude;
+}
+
+/**
+ * Derivative of the fundamental current with respect to the amplitude, dI₁/dA (S): the
+ * Newton slope for the link solver. dI₁/dA = (1/π)·∫₀^{2π} g(A·sin θ)·sin²θ dθ, g = dI/dV.
+ * @param load token load; amplitude V ≥ 0.
+ * @returns S, > 0.
+ * @example fundamentalCurrentSlope({ kind: "resistor", resistance: 50 }, 1) // → 0.02
+ */
+export function fundamentalCurrentSlope(load: TokenLoad, amplitude: number): number {
+  checkLoad(load, "fundamentalCurrentSlope");
+  checkAmplitude(amplitude, "fundamentalCurrentSlope");
+  fundamentalInto(load, amplitude, "fundamentalCurrentSlope");
+  return resp.slope;
+}
+
+/**
+ * Fundamental current (A, peak, in phase with the tank voltage) and its slope (S) together,
+ * in one pass. The returned object is fresh (safe to keep).
+ * @example loadResponse({ kind: "resistor", resistance: 100 }, 2) // → { current: 0.02, slope: 0.01 }
+ */
+export function loadResponse(load: TokenLoad, amplitude: number): FundamentalResponse {
+  checkLoad(load, "loadResponse");
+  checkAmplitude(amplitude, "loadResponse");
+  fundamentalInto(load, amplitude, "loadResponse");
+  return { current: resp.current, slope: resp.slope };
+}
+
+function ledEntry(role: LedCurrent["role"], l: Led, avg: number, peak: number): LedCurrent {
+  return { role, label: l.label, current: avg, peakCurrent: peak, relativeBrightness: avg / l.ratedCurrent };
+}
+
+/**
+ * Average (DC) current of every LED in a token load at tank amplitude A, with its peak current
+ * and relative brightness (average current / rated current). Brightness follows the average
+ * current, not the fundamental (physics-notes.md, "The token").
+ * @param load token load; amplitude V (peak) ≥ 0.
+ * @returns one entry per LED (none for a resistor): `{ role, label, current, peakCurrent, relativeBrightness }`.
+ * @example averageLoadCurrent({ kind: "led", led: ledPreset("red") }, 2.2)[0].current // ≈ 3 mA
+ */
+export function averageLoadCurrent(load: TokenLoad, amplitude: number): readonly LedCurrent[] {
+  const where = "averageLoadCurrent";
+  checkLoad(load, where);
+  checkAmplitude(amplitude, where);
+  const A = amplitude;
+  switch (load.kind) {
+    case "resistor":
+      return [];
+    case "led": {
+      if (A === 0) return [ledEntry("led", load.led, 0, 0)];
+      evalJunction(load.led, A, ra);
+      return [ledEntry("led", load.led, ra.avg, ra.peak)];
+    }
+    case "antiParallel":
+    case "parallelSameDirection": {
+      if (A === 0) return [ledEntry("a", load.a, 0, 0), ledEntry("b", load.b, 0, 0)];
+      evalJunction(load.a, A, ra);
+      evalJunction(load.b, A, rb);
+      return [ledEntry("a", load.a, ra.avg, ra.peak), ledEntry("b", load.b, rb.avg, rb.peak)];
+    }
+    case "bridge": {
+      if (A === 0) return [ledEntry("led", load.led, 0, 0)];
+      const br = bridgeOf(load);
+      halfWaveIntegrals(br, A, 0, fwd);
+      // the LED conducts on both half-cycles: average = 2·∫₀^π i dθ / 2π
+      return [ledEntry("led", load.led, fwd[1]! / Math.PI, fwd[5]!)];
+    }
+    case "halfWaveReservoir": {
+      const st = reservoirSteadyState(load.diode, load.led, A, load.seriesResistance ?? 0, undefined, undefined, reservoirBranch(load));
+      return [ledEntry("led", load.led, st.ledCurrent, st.ledCurrent)];
+    }
+    default: {
+      const kind = (load as { kind: unknown }).kind;
+      throw new TanklightInputError([{ path: "load.kind", message: "is not a known token load", value: kind }], where);
+    }
+  }
+}
+
+/**
+ * Reference describing function of any memoryless current law, by adaptive Gauss–Kronrod
+ * over the cycle (slow; for checks): fundamental current (A, peak, in phase), quadrature
+ * (cosine) component and average current.
+ * @param current i(v), A; amplitude V > 0; relTol relative accuracy (default 1e-12).
+ * @example describingFunctionReference(v => v / 100, 1).inPhase // → 0.01
+ */
+export function describingFunctionReference(
+  current: (v: number) => number,
+  amplitude: number,
+  relTol = 1e-12,
+): { inPhase: number; quadrature: number; average: number } {
+  checkAmplitude(amplitude, "describingFunctionReference");
+  const A = amplitude;
+  const opts = { absTol: 0, relTol, maxIntervals: 20000 };
+  // split at the crests so the adaptive rule sees each half-cycle's peak at an interval end
+  const parts = [0, Math.PI / 2, Math.PI, (3 * Math.PI) / 2, 2 * Math.PI];
+  let s = 0, c = 0, a = 0;
+  for (let k = 0; k < 4; k++) {
+    const lo = parts[k]!;
+    const hi = parts[k + 1]!;
+    s += integrateAdaptive((th) => current(A * Math.sin(th)) * Math.sin(th), lo, hi, opts).value;
+    c += integrateAdaptive((th) => current(A * Math.sin(th)) * Math.cos(th), lo, hi, opts).value;
+    a += integrateAdaptive((th) => current(A * Math.sin(th)), lo, hi, opts).value;
+  }
+  return { inPhase: s / Math.PI, quadrature: c / Math.PI, average: a / (2 * Math.PI) };
+}

@@ -1,0 +1,422 @@
+/**
+ * LEDs and rectifier diodes as Shockley junctions with series resistance, solved exactly.
+ *
+ * Model (Shockley 1949, with an ohmic series resistance):
+ *   v = n·V_T·ln(1 + i_j/I_s) + i_j·r_s,        i = i_j + g_leak·v
+ * where V_T = kT/q. The junction current has the closed form (Banwell & Jayakumar,
+ * Electron. Lett. 36(4), 2000, "Exact analytical solution for current flow through diode
+ * with series resistance"):
+ *   i_j = (n·V_T/r_s)·W( (I_s·r_s/(n·V_T))·exp((v + I_s·r_s)/(n·V_T)) ) − I_s
+ * with W the principal Lambert W branch; far in forward bias the argument's logarithm is used
+ * (W(e^y) from y) so nothing overflows, and the current continues as (v − V_knee)/r_s.
+ * dv/di_j = n·V_T/(I_s + i_j) + r_s gives the conductance without another W evaluation:
+ *   di_j/dv = W/(r_s·(1 + W)).
+ * g_leak is a tiny parallel conductance (default 1e-12 S, a numerical floor standing for the
+ * junction's real reverse leakage) that keeps the conductance > 0 for every finite v.
+ */
+import type { DiodeModel } from "../types.ts";
+import { thermalVoltage } from "../../constants.ts";
+import { TanklightInputError, requireFinite } from "../../errors.ts";
+
+/** A datasheet-style point of the forward characteristic: the voltage at a current. */
+export interface ForwardPoint {
+  /** forward current, A, > 0 */
+  readonly current: number;
+  /** forward voltage at that current, V, > 0 */
+  readonly voltage: number;
+}
+
+/** Shockley parameters at one temperature. */
+export interface ShockleyParameters {
+  /** saturation current I_s, A, > 0 */
+  readonly saturationCurrent: number;
+  /** ideality (emission) factor n, > 0 (LEDs ≈ 1.5–4, silicon ≈ 1–2) */
+  readonly idealityFactor: number;
+  /** ohmic series resistance r_s, Ω, > 0 */
+  readonly seriesResistance: number;
+}
+
+/** Options shared by {@link led} and {@link diode}. */
+export interface JunctionOptions {
+  /** junction temperature the model is evaluated at, K; default = referenceTemperature */
+  readonly temperature?: number;
+  /** temperature at which the points or parameters hold, K; default 298.15 (25 °C, datasheet convention) */
+  readonly referenceTemperature?: number;
+  /**
+   * forward-voltage temperature coefficient at the reference current, V/K; default −0.002
+   * (about −2 mV/K: from memory (unverified), references.md "LED forward voltage")
+   */
+  readonly temperatureCoefficient?: number;
+  /** current at which the temperature coefficient holds, A; default: the largest fit point or 20 mA */
+  readonly referenceCurrent?: number;
+  /** parallel leakage conductance, S, ≥ 0; default 1e-12 (numerical floor, see module comment) */
+  readonly leakage?: number;
+  /** short label for reports */
+  readonly label?: string;
+  /** where the numbers come from (datasheet, preset table, fit …) */
+  readonly source?: string;
+}
+
+/** How a junction is specified: datasheet-style points, or Shockley parameters directly. */
+export type JunctionSpec =
+  | (JunctionOptions & {
+      /** two or three (current, voltage) points, distinct currents */
+      readonly points: readonly ForwardPoint[];
+      /** ideality factor to hold fixed when only two points are given; default 2 */
+      readonly idealityFactor?: number;
+    })
+  | (JunctionOptions & ShockleyParameters);
+
+/** A Shockley junction with series resistance, ready to evaluate (satisfies DiodeModel). */
+export interface Junction extends DiodeModel {
+  readonly label: string;
+  /** where its numbers come from */
+  readonly source: string;
+  /** I_s at `temperature`, A */
+  readonly is: number;
+  /** ideality factor */
+  readonly n: number;
+  /** series resistance, Ω */
+  readonly rs: number;
+  /** temperature the model is evaluated at, K */
+  readonly temperature: number;
+  /** thermal voltage kT/q at `temperature`, V */
+  readonly thermalVoltage: number;
+  /** parallel leakage conductance, S */
+  readonly leakage: number;
+  /** the fit points, when the model was built from points */
+  readonly points?: readonly ForwardPoint[];
+  /** current anode → cathode at voltage v (A); finite for every finite v */
+  current(v: number): number;
+  /** dI/dV at v, S, > 0 */
+  conductance(v: number): number;
+  /** the voltage at which the current is i (the exact inverse of `current`), V */
+  voltage(i: number): number;
+}
+
+/** An LED: a junction plus its colour. */
+export interface Led extends Junction {
+  readonly kind: "led";
+  /** colour name, e.g. "red" (free text for user-built LEDs) */
+  readonly colour?: string;
+  /** current at which relative brightness is 1, A (the preset's rated current; default 20 mA) */
+  readonly ratedCurrent: number;
+}
+
+/** A rectifier diode. */
+export interface Diode extends Junction {
+  readonly kind: "diode";
+}
+
+const DEFAULT_T = 298.15;
+const DEFAULT_TEMPCO = -0.002;
+const DEFAULT_LEAKAGE = 1e-12;
+
+/**
+ * W₀(e^y), the principal Lambert W of e^y, from its logarithm y (any finite y): solves
+ * w + ln w = y. Start: Winitzki's approximation W(x) ≈ L·(1 − ln(1+L)/(2+L)), L = ln(1+x)
+ * (Winitzki 2003, "Uniform approximations for transcendental functions", LNCS 2667) for
+ * y < 1.5, the asymptotic y − ln y + ln y / y above; then the third-order iteration of
+ * Fritsch, Shafer & Crowley (CACM 16(2), 1973, Algorithm 443), two or three steps to full
+ * precision. Written here (rather than lib/math lambertW) for speed on the loads' hot path;
+ * the tests check it against lambertW/lambertWOfLog.
+ * @param y ln of the argument, finite.
+ * @example wOfLog(0) // → 0.5671432904097838 (the omega constant)
+ */
+export function wOfLog(y: number): number {
+  if (y < -30) {
+    const x = Math.exp(y);
+    return x * (1 - x); // W(x) = x − x² + O(x³), relative error < 2e-26
+  }
+  if (y > 1e8) {
+    // w = y − ln w as a fixed point contracts by 1/w: three steps reach full precision
+    let w = y - Math.log(y);
+    w = y - Math.log(w);
+    return y - Math.log(w);
+  }
+  let w: number;
+  if (y < 1.5) {
+    const l = Math.log1p(Math.exp(y));
+    w = l * (1 - Math.log1p(l) / (2 + l));
+  } else {
+    const ly = Math.log(y);
+    w = y - ly + ly / y;
+  }
+  for (let k = 0; k < 8; k++) {
+    const z = y - w - Math.log(w);
+    const w1 = 1 + w;
+    const q = 2 * w1 * (w1 + (2 / 3) * z);
+    const eps = ((z / w1) * (q - z)) / (q - 2 * z);
+    w *= 1 + eps;
+    // the iteration is of high order: after a step of relative size < 1e-4 the error is
+    // below 4e-15 (checked over y ∈ [−30, 700] in the tests)
+    if (Math.abs(eps) < 1e-4) break;
+  }
+  return w;
+}
+
+/**
+ * The Lambert W value of a junction with series resistance at voltage v, so that the
+ * junction current is (n·V_T/r_s)·W − I_s (exported for the loads' hot loops).
+ * @param v voltage, V; lnIs ln(I_s); is I_s, A; nvt n·V_T, V; rs Ω (> 0).
+ */
+export function junctionW(v: number, lnIs: number, is: number, nvt: number, rs: number): number {
+  return wOfLog(lnIs + Math.log(rs / nvt) + (v + is * rs) / nvt);
+}
+
+function checkPositive(x: unknown, field: string, unit: string, where: string): number {
+  if (typeof x !== "number" || !Number.isFinite(x) || x <= 0) {
+    throw new TanklightInputError(
+      [{ path: field, message: `must be a finite number > 0 ${unit}`, value: x, expected: `> 0 ${unit}` }],
+      where,
+    );
+  }
+  return x;
+}
+
+/**
+ * Fits Shockley parameters (I_s, n, r_s) to two or three datasheet-style points.
+ *
+ * Three points: v_k = n·V_T·ln(1 + I_k/I_s) + I_k·r_s solved exactly for all three unknowns
+ * (linear solve in (n·V_T, −n·V_T·ln I_s, r_s) with ln I_k, then Newton on the exact equations).
+ * Two points: n is held at `idealityFactor` (default 2) and I_s, r_s are solved.
+ * @param points forward points (current A > 0, voltage V > 0), distinct currents.
+ * @param temperature K, > 0, at which the points hold.
+ * @param idealityFactor n for the two-point fit.
+ * @returns Shockley parameters; throws TanklightInputError when the points imply r_s ≤ 0 or n ≤ 0.
+ * @example fitShockley([{current:1e-3,voltage:1.75},{current:5e-3,voltage:1.85},{current:20e-3,voltage:2.0}], 298.15)
+ */
+export function fitShockley(
+  points: readonly ForwardPoint[],
+  temperature: number = DEFAULT_T,
+  idealityFactor = 2,
+  where = "fitShockley",
+): ShockleyParameters {
+  if (!Array.isArray(points) || points.length < 2 || points.length > 3) {
+    throw new TanklightInputError(
+      [{ path: "points", message: "must hold two or three (current, voltage) points", value: points, expected: "2 or 3 points" }],
+      where,
+    );
+  }
+  points.forEach((p, k) => {
+    checkPositive(p?.current, `points[${k}].current`, "A", where);
+    checkPositive(p?.voltage, `points[${k}].voltage`, "V", where);
+  });
+  const sorted = [...points].sort((a, b) => a.current - b.current);
+  for (let k = 1; k < sorted.length; k++) {
+    if (!(sorted[k]!.current > sorted[k - 1]!.current) || !(sorted[k]!.voltage > sorted[k - 1]!.voltage)) {
+      throw new TanklightInputError(
+        [{ path: "points", message: "voltage must rise with current and the currents must differ", value: points, expected: "increasing (current, voltage)" }],
+        where,
+      );
+    }
+  }
+  const vt = thermalVoltage(temperature);
+  // unknowns x = [ln I_s, n, r_s]
+  let x: number[];
+  if (sorted.length === 3) {
+    // v = a·ln I + b + r·I with a = nV_T, b = −a ln I_s (valid for I ≫ I_s)
+    const A = sorted.map((p) => [Math.log(p.current), 1, p.current]);
+    const rhs = sorted.map((p) => p.voltage);
+    const s = solve3(A, rhs);
+    const a = s[0]!;
+    x = [-s[1]! / a, a / vt, s[2]!];
+  } else {
+    const a = idealityFactor * vt;
+    const [p0, p1] = [sorted[0]!, sorted[1]!];
+    const r = (p1.voltage - p0.voltage - a * Math.log(p1.current / p0.current)) / (p1.current - p0.current);
+    x = [(p0.current * r + a * Math.log(p0.current) - p0.voltage) / a, idealityFactor, r];
+  }
+  // Newton refinement on the exact equations (log1p), Jacobian by hand.
+  const free = sorted.length === 3 ? [0, 1, 2] : [0, 2];
+  for (let it = 0; it < 30; it++) {
+    const [lnIs, n, r] = x as [number, number, number];
+    const is = Math.exp(lnIs);
+    const res: number[] = [];
+    const J: number[][] = [];
+    for (const p of sorted) {
+      const u = Math.log1p(p.current / is);
+      res.push(n * vt * u + p.current * r - p.voltage);
+      const dIs = (n * vt * (-p.current / is)) / (1 + p.current / is); // d/d lnIs
+      J.push([dIs, vt * u, p.current]);
+    }
+    const Jr = J.map((row) => free.map((c) => row[c]!));
+    const step = free.length === 3 ? solve3(Jr, res) : solve2(Jr, res);
+    let maxStep = 0;
+    free.forEach((c, k) => {
+      x[c] = x[c]! - step[k]!;
+      maxStep = Math.max(maxStep, Math.abs(step[k]!) / Math.max(1, Math.abs(x[c]!)));
+    });
+    if (maxStep < 1e-15) break;
+  }
+  const [lnIs, n, r] = x as [number, number, number];
+  if (!(n > 0) || !Number.isFinite(n) || !(r > 0) || !Number.isFinite(lnIs)) {
+    throw new TanklightInputError(
+      [{
+        path: "points",
+        message: `these points imply n = ${n.toPrecision(4)}, r_s = ${r.toPrecision(4)} Ω; a Shockley junction needs n > 0 and r_s > 0 (check the points, or give two points and an ideality factor)`,
+        value: points,
+        expected: "points of a real diode",
+      }],
+      where,
+    );
+  }
+  return { saturationCurrent: Math.exp(lnIs), idealityFactor: n, seriesResistance: r };
+}
+
+function solve3(A: number[][], b: number[]): number[] {
+  // Gaussian elimination with partial pivoting (3×3)
+  const M = A.map((row, i) => [...row, b[i]!]);
+  for (let c = 0; c < 3; c++) {
+    let p = c;
+    for (let r = c + 1; r < 3; r++) if (Math.abs(M[r]![c]!) > Math.abs(M[p]![c]!)) p = r;
+    [M[c], M[p]] = [M[p]!, M[c]!];
+    for (let r = c + 1; r < 3; r++) {
+      const f = M[r]![c]! / M[c]![c]!;
+      for (let k = c; k < 4; k++) M[r]![k] = M[r]![k]! - f * M[c]![k]!;
+    }
+  }
+  const xs = [0, 0, 0];
+  for (let r = 2; r >= 0; r--) {
+    let s = M[r]![3]!;
+    for (let k = r + 1; k < 3; k++) s -= M[r]![k]! * xs[k]!;
+    xs[r] = s / M[r]![r]!;
+  }
+  return xs;
+}
+
+function solve2(A: number[][], b: number[]): number[] {
+  const [a, c] = A[0] as [number, number];
+  const [d, e] = A[1] as [number, number];
+  const det = a * e - c * d;
+  return [(b[0]! * e - c * b[1]!) / det, (a * b[1]! - d * b[0]!) / det];
+}
+
+/** Resolves a spec into parameters at the reference temperature, plus the fit points. */
+function resolveSpec(spec: JunctionSpec, where: string): { p: ShockleyParameters; points?: readonly ForwardPoint[] } {
+  if (spec === null || typeof spec !== "object") {
+    throw new TanklightInputError([{ path: "spec", message: "must be an object", value: spec }], where);
+  }
+  const tRef = spec.referenceTemperature ?? DEFAULT_T;
+  checkPositive(tRef, "referenceTemperature", "K", where);
+  if ("points" in spec && spec.points !== undefined) {
+    if (spec.idealityFactor !== undefined) checkPositive(spec.idealityFactor, "idealityFactor", "", where);
+    return { p: fitShockley(spec.points, tRef, spec.idealityFactor ?? 2, where), points: spec.points };
+  }
+  const s = spec as ShockleyParameters;
+  checkPositive(s.saturationCurrent, "saturationCurrent", "A", where);
+  checkPositive(s.idealityFactor, "idealityFactor", "", where);
+  checkPositive(s.seriesResistance, "seriesResistance", "Ω", where);
+  return { p: { saturationCurrent: s.saturationCurrent, idealityFactor: s.idealityFactor, seriesResistance: s.seriesResistance } };
+}
+
+/**
+ * Builds an evaluable junction from parameters at the reference temperature, moved to the
+ * evaluation temperature by holding the forward voltage's temperature coefficient at the
+ * reference current: V_F(T) = V_F(T_ref) + tc·(T − T_ref) at i_ref, I_s(T) re-solved from it.
+ */
+function makeJunction(spec: JunctionSpec, where: string, defaultLabel: string, defaultSource: string) {
+  const { p, points } = resolveSpec(spec, where);
+  const tRef = spec.referenceTemperature ?? DEFAULT_T;
+  const temperature = spec.temperature ?? tRef;
+  checkPositive(temperature, "temperature", "K", where);
+  const tc = spec.temperatureCoefficient ?? DEFAULT_TEMPCO;
+  requireFinite(tc, "temperatureCoefficient", "V/K", where);
+  const leakage = spec.leakage ?? DEFAULT_LEAKAGE;
+  if (!(Number.isFinite(leakage) && leakage >= 0)) {
+    throw new TanklightInputError([{ path: "leakage", message: "must be a finite number ≥ 0 S", value: leakage }], where);
+  }
+  const n = p.idealityFactor;
+  const rs = p.seriesResistance;
+  let is = p.saturationCurrent;
+  const vtRef = thermalVoltage(tRef);
+  const vt = thermalVoltage(temperature);
+  const iRef = spec.referenceCurrent ?? (points ? Math.max(...points.map((q) => q.current)) : 20e-3);
+  checkPositive(iRef, "referenceCurrent", "A", where);
+  if (temperature !== tRef) {
+    const vfRef = n * vtRef * Math.log1p(iRef / is) + iRef * rs;
+    const vf = vfRef + tc * (temperature - tRef);
+    const junctionDrop = vf - iRef * rs;
+    if (!(junctionDrop > 0)) {
+      throw new TanklightInputError(
+        [{ path: "temperature", message: "moves the forward voltage below the series-resistance drop; outside the model", value: temperature }],
+        where,
+      );
+    }
+    is = iRef / Math.expm1(junctionDrop / (n * vt));
+  }
+  const nvt = n * vt;
+  const lnIs = Math.log(is);
+  const current = (v: number): number => {
+    const w = junctionW(v, lnIs, is, nvt, rs);
+    return (nvt / rs) * w - is + leakage * v;
+  };
+  const conductance = (v: number): number => {
+    const w = junctionW(v, lnIs, is, nvt, rs);
+    return w / (rs * (1 + w)) + leakage;
+  };
+  const voltage = (i: number): number => {
+    requireFinite(i, "i", "A", `${where}.voltage`);
+    // start from the leakage-free inverse, then Newton on current(v) = i
+    let v = i > -is * (1 - 1e-9) ? nvt * Math.log1p(i / is) + i * rs : leakage > 0 ? (i + is) / leakage : -Infinity;
+    if (!Number.isFinite(v)) {
+      throw new TanklightInputError(
+        [{ path: "i", message: `a junction without leakage cannot carry less than −I_s = ${-is} A`, value: i }],
+        `${where}.voltage`,
+      );
+    }
+    for (let k = 0; k < 50; k++) {
+      const dv = (current(v) - i) / conductance(v);
+      v -= dv;
+      if (Math.abs(dv) <= 1e-15 * Math.max(1, Math.abs(v))) break;
+    }
+    return v;
+  };
+  return {
+    label: spec.label ?? defaultLabel,
+    source: spec.source ?? (points ? "fitted to the given forward points" : defaultSource),
+    is,
+    n,
+    rs,
+    temperature,
+    thermalVoltage: vt,
+    leakage,
+    ...(points ? { points } : {}),
+    current,
+    conductance,
+    voltage,
+  };
+}
+
+/**
+ * An LED as a Shockley junction with series resistance, I(V) exact by Lambert W.
+ *
+ * @param spec either `{ points: [{ current, voltage }, …] }` (two or three datasheet-style
+ *   points; with two, `idealityFactor` is held, default 2) or `{ saturationCurrent,
+ *   idealityFactor, seriesResistance }`; plus optional temperature (K), referenceTemperature
+ *   (K, default 298.15), temperatureCoefficient (V/K, default −0.002), leakage (S, default
+ *   1e-12), colour, ratedCurrent (A, default 0.02), label, source.
+ * @returns a {@link Led}: `current(v)` A, `conductance(v)` S, `voltage(i)` V and its parameters.
+ * Method: Shockley equation with series resistance, closed form with Lambert W (Banwell &
+ *   Jayakumar 2000).
+ * @example led({ points: [{ current: 1e-3, voltage: 1.75 }, { current: 20e-3, voltage: 2.0 }] }).voltage(20e-3) // → 2.0
+ * Related: ledPreset, diode, fitShockley.
+ */
+export function led(spec: JunctionSpec & { readonly colour?: string; readonly ratedCurrent?: number }): Led {
+  const j = makeJunction(spec, "led", spec?.colour ? `${spec.colour} LED` : "LED", "Shockley parameters given by the caller");
+  const ratedCurrent = spec.ratedCurrent ?? 20e-3;
+  checkPositive(ratedCurrent, "ratedCurrent", "A", "led");
+  return { kind: "led", ...j, ...(spec.colour ? { colour: spec.colour } : {}), ratedCurrent };
+}
+
+/**
+ * A rectifier diode as a Shockley junction with series resistance (same model as {@link led}).
+ * @param spec as for led (points or parameters).
+ * @returns a {@link Diode}.
+ * @example diode({ saturationCurrent: 1e-9, idealityFactor: 1.9, seriesResistance: 0.1 }).current(0.5)
+ * Related: diodePreset.
+ */
+export function diode(spec: JunctionSpec): Diode {
+  const j = makeJunction(spec, "diode", "diode", "Shockley parameters given by the caller");
+  return { kind: "diode", ...j };
+}

@@ -1,0 +1,147 @@
+/**
+ * Ready-made LEDs and rectifier diodes, each built from datasheet-style forward points and
+ * labelled with where its numbers come from.
+ *
+ * Provenance (read before relying on a preset):
+ * - LED forward voltage at 20 mA lies inside the ranges of references.md ("reference tables,
+ *   not a handbook"): red AlInGaP 1.8–2.1 V, orange 2.0–2.1, yellow 2.1–2.2, green InGaN
+ *   3.0–3.5, yellow-green GaP about 2.1, blue 3.0–3.3, white 3.0–3.3.
+ * - The 1 mA and 5 mA points (the shape of the curve below rated current) are from memory
+ *   (unverified) of typical indicator-LED curves; they are chosen so that a red indicator LED
+ *   clamps a tank near 1.7 V and a GaP green one near 2 V at token currents of a few mA
+ *   (trade practice, no source).
+ * - "Green" is two different parts: the older GaP yellow-green indicator (≈ 2 V, the "about
+ *   2 V" of trade lore) and the InGaN true green (≈ 3.2 V). `ledPreset("green")` refuses to
+ *   guess and names both.
+ * - Diodes: silicon small-signal and small Schottky curves from memory (unverified) of typical
+ *   datasheet graphs.
+ */
+import { led, diode, type Diode, type ForwardPoint, type Led } from "./led.ts";
+import { TanklightInputError } from "../../errors.ts";
+
+/** The LED colours with presets. */
+export type LedColour = "red" | "orange" | "yellow" | "green-gap" | "green-ingan" | "blue" | "white";
+
+/** The rectifier diode presets. */
+export type DiodeKind = "schottky" | "silicon";
+
+/** One preset's data: points, a typical peak wavelength and the provenance text. */
+export interface LedPresetData {
+  readonly colour: LedColour;
+  readonly chemistry: string;
+  /** typical peak (dominant) wavelength, m — from memory (unverified); white: the blue pump */
+  readonly wavelength: number;
+  readonly points: readonly ForwardPoint[];
+  readonly source: string;
+}
+
+const TABLE_20MA = "V_F at 20 mA inside the references.md range (reference tables, not a handbook)";
+const LOW_POINTS = "1 mA and 5 mA points from memory (unverified), typical indicator-LED curve";
+
+/** The preset table (plain data, exported for docs and tests). */
+export const LED_PRESET_DATA: Readonly<Record<LedColour, LedPresetData>> = {
+  red: {
+    colour: "red", chemistry: "AlInGaP", wavelength: 625e-9,
+    points: [{ current: 1e-3, voltage: 1.66 }, { current: 5e-3, voltage: 1.77 }, { current: 20e-3, voltage: 1.92 }],
+    source: `${TABLE_20MA} (red AlInGaP 1.8–2.1 V); ${LOW_POINTS}`,
+  },
+  orange: {
+    colour: "orange", chemistry: "AlInGaP", wavelength: 605e-9,
+    points: [{ current: 1e-3, voltage: 1.78 }, { current: 5e-3, voltage: 1.9 }, { current: 20e-3, voltage: 2.05 }],
+    source: `${TABLE_20MA} (orange 2.0–2.1 V); ${LOW_POINTS}`,
+  },
+  yellow: {
+    colour: "yellow", chemistry: "AlInGaP", wavelength: 590e-9,
+    points: [{ current: 1e-3, voltage: 1.85 }, { current: 5e-3, voltage: 1.97 }, { current: 20e-3, voltage: 2.15 }],
+    source: `${TABLE_20MA} (yellow 2.1–2.2 V); ${LOW_POINTS}`,
+  },
+  "green-gap": {
+    colour: "green-gap", chemistry: "GaP (yellow-green, the older 'about 2 V' indicator green)", wavelength: 570e-9,
+    points: [{ current: 1e-3, voltage: 1.9 }, { current: 5e-3, voltage: 1.99 }, { current: 20e-3, voltage: 2.15 }],
+    source: `${TABLE_20MA} (yellow-green GaP about 2.1 V, dim); ${LOW_POINTS}`,
+  },
+  "green-ingan": {
+    colour: "green-ingan", chemistry: "InGaN (true green)", wavelength: 525e-9,
+    points: [{ current: 1e-3, voltage: 2.65 }, { current: 5e-3, voltage: 2.85 }, { current: 20e-3, voltage: 3.2 }],
+    source: `${TABLE_20MA} (green InGaN 3.0–3.5 V); ${LOW_POINTS}`,
+  },
+  blue: {
+    colour: "blue", chemistry: "InGaN", wavelength: 470e-9,
+    points: [{ current: 1e-3, voltage: 2.7 }, { current: 5e-3, voltage: 2.88 }, { current: 20e-3, voltage: 3.15 }],
+    source: `${TABLE_20MA} (blue 3.0–3.3 V); ${LOW_POINTS}`,
+  },
+  white: {
+    colour: "white", chemistry: "InGaN blue + phosphor", wavelength: 455e-9,
+    points: [{ current: 1e-3, voltage: 2.68 }, { current: 5e-3, voltage: 2.86 }, { current: 20e-3, voltage: 3.15 }],
+    source: `${TABLE_20MA} (white 3.0–3.3 V); ${LOW_POINTS}`,
+  },
+};
+
+/** Diode preset data. */
+export const DIODE_PRESET_DATA: Readonly<Record<DiodeKind, { readonly points: readonly ForwardPoint[]; readonly source: string }>> = {
+  silicon: {
+    points: [{ current: 1e-3, voltage: 0.62 }, { current: 10e-3, voltage: 0.74 }, { current: 100e-3, voltage: 0.95 }],
+    source: "silicon small-signal diode, typical curve from memory (unverified)",
+  },
+  schottky: {
+    points: [{ current: 1e-3, voltage: 0.28 }, { current: 10e-3, voltage: 0.36 }, { current: 100e-3, voltage: 0.6 }],
+    source: "small-signal Schottky diode, typical curve from memory (unverified)",
+  },
+};
+
+/** Options for presets: the junction temperature and a label override. */
+export interface PresetOptions {
+  /** junction temperature, K; default 298.15 (the points hold at 25 °C) */
+  readonly temperature?: number;
+  readonly label?: string;
+}
+
+const ledCache = new Map<string, Led>();
+
+/**
+ * A ready-made LED of a colour, fitted (three points, exact) to its preset forward points.
+ * @param colour "red" | "orange" | "yellow" | "green-gap" | "green-ingan" | "blue" | "white";
+ *   "green" alone is ambiguous and throws, naming both greens.
+ * @param options temperature (K) and label.
+ * @returns a {@link Led} with `source` naming where its numbers come from.
+ * @example ledPreset("red").voltage(20e-3) // → 1.92 (V, the preset's 20 mA point)
+ * Related: led, LED_PRESET_DATA, diodePreset.
+ */
+export function ledPreset(colour: LedColour, options: PresetOptions = {}): Led {
+  const data = (LED_PRESET_DATA as Record<string, LedPresetData | undefined>)[colour];
+  if (!data) {
+    const hint = (colour as string) === "green"
+      ? "ambiguous: use 'green-gap' (GaP yellow-green, ≈ 2 V, the trade's 'about 2 V' green) or 'green-ingan' (InGaN true green, ≈ 3.2 V)"
+      : `must be one of ${Object.keys(LED_PRESET_DATA).join(", ")}`;
+    throw new TanklightInputError([{ path: "colour", message: hint, value: colour }], "ledPreset");
+  }
+  const key = `${colour}|${options.temperature ?? ""}|${options.label ?? ""}`;
+  const hit = ledCache.get(key);
+  if (hit) return hit;
+  const made = led({
+    points: data.points,
+    colour,
+    label: options.label ?? `${colour} LED (preset)`,
+    source: data.source,
+    ...(options.temperature !== undefined ? { temperature: options.temperature } : {}),
+  });
+  ledCache.set(key, made);
+  return made;
+}
+
+/**
+ * A ready-made rectifier diode: "schottky" (small-signal Schottky) or "silicon" (small-signal).
+ * @example diodePreset("schottky").voltage(10e-3) // → 0.36 (V)
+ */
+export function diodePreset(kind: DiodeKind, options: PresetOptions = {}): Diode {
+  const data = (DIODE_PRESET_DATA as Record<string, { points: readonly ForwardPoint[]; source: string } | undefined>)[kind];
+  if (!data) {
+    throw new TanklightInputError([{ path: "kind", message: "must be 'schottky' or 'silicon'", value: kind }], "diodePreset");
+  }
+  return diode({
+    points: data.points,
+    label: options.label ?? `${kind} diode (preset)`,
+    source: data.source,
+    ...(options.temperature !== undefined ? { temperature: options.temperature } : {}),
+  });
+}
