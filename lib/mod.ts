@@ -65,11 +65,65 @@ export { createRandom, type RandomSource } from "./math/random.ts";
 
 // ── lib/em ───────────────────────────────────────────────────────────────────
 export type { Vec3, Pose, Filament, Conductor, Coil } from "./em/types.ts";
+// coil builders, conductors and classic inductance formulas (builders)
+export { roundCoil, RoundCoilSpec, type RoundCoilInput, type RoundCoil, type RoundCoilShape } from "./em/builders/roundCoil.ts";
+export { solenoid, SolenoidSpec, type SolenoidInput, type Solenoid, type SolenoidShape } from "./em/builders/solenoid.ts";
+export { flatSpiral, FlatSpiralSpec, type FlatSpiralInput, type FlatSpiral, type FlatSpiralShape } from "./em/builders/flatSpiral.ts";
+export { rectSpiral, RectSpiralSpec, type RectSpiralInput, type RectSpiral, type RectSpiralShape } from "./em/builders/rectSpiral.ts";
+export { rectLoop, RectLoopSpec, type RectLoopInput, type RectLoop, type RectLoopShape } from "./em/builders/rectLoop.ts";
+export {
+  roundWire,
+  awgWire,
+  litzWire,
+  pcbTrace,
+  copperWeightThickness,
+  conductorFootprint,
+  type RoundWire,
+  type LitzWire,
+  type PcbTrace,
+  type RoundWireOptions,
+  type LitzWireOptions,
+} from "./em/builders/conductor.ts";
+export { archimedeanArcLength } from "./em/builders/common.ts";
+export type { CoilShape } from "./em/types.ts";
+export {
+  INCH,
+  MICROHENRY,
+  awgDiameter,
+  nagaokaCoefficient,
+  lundinNagaokaCoefficient,
+  currentSheetInductance,
+  wheeler1982Inductance,
+  wheelerSingleLayerInductance,
+  wheelerMultilayerInductance,
+  wheelerFlatSpiralInductance,
+  mohanModifiedWheelerInductance,
+  mohanCurrentSheetInductance,
+  groverRectangleInductance,
+  rosaB,
+  rosaRoundWireCorrection,
+  type SpiralOutline,
+} from "./em/classicFormulas.ts";
 // fields and inductance (EM core)
 export { loopField, type LoopFieldValue } from "./em/loopField.ts";
 export { loopVectorPotential } from "./em/vectorPotential.ts";
 export { coaxialLoopMutualInductance } from "./em/coaxialMutual.ts";
 export { loopMutualInductance, type CircleFilament, type LoopMutualOptions } from "./em/loopMutual.ts";
+export { poseFrame, worldFilaments, type Frame } from "./em/frames.ts";
+export { magneticField } from "./em/magneticField.ts";
+export {
+  mutualInductance,
+  mutualInductanceChecked,
+  couplingFactor,
+  type MutualInductanceResult,
+} from "./em/mutualInductance.ts";
+export {
+  selfInductance,
+  selfInductanceDetail,
+  internalInductanceFactor,
+  type SelfInductanceOptions,
+  type SelfInductanceDetail,
+} from "./em/selfInductance.ts";
 
 // ── lib/circuit ──────────────────────────────────────────────────────────────
 export type { DiodeModel } from "./circuit/types.ts";
@@ -106,3 +160,30 @@ export {
   type CurrentFedBridgeResult,
 } from "./circuit/loads/rectifier.ts";
 // end parts and loads
+// link: drives, coupled tanks, operating point (issue 6)
+export {
+  sineDrive,
+  halfBridgeDrive,
+  fullBridgeDrive,
+  currentDrive,
+  parallelTankDrive,
+  classEDesign,
+  classEDrive,
+  CLASS_E,
+  type DriveEquivalent,
+  type ClassEDesign,
+} from "./circuit/drive.ts";
+export { solveLink, linkNetwork, type LinkSystem, type LinkSolution, type LinkNetworkBuild } from "./circuit/link.ts";
+export { solveLinkNetwork, LinkConvergenceError } from "./circuit/link/solveNetwork.ts";
+export { tokenLoadModel } from "./circuit/link/tokenLoad.ts";
+export {
+  DEFAULT_LIT_THRESHOLD,
+  type LinkNetwork,
+  type LinkOptions,
+  type LinkLoadModel,
+  type TransmitterNetwork,
+  type ReceiverNetwork,
+} from "./circuit/link/network.ts";
+export type { LinkResult, TransmitterState, ReceiverState, LedState, LinkPower, Phasor } from "./circuit/link/result.ts";
+export { maxLinkEfficiency, optimalLoad } from "./circuit/linkLimits.ts";
+export { frequencySweep, type FrequencySweep, type SweepFrequencies } from "./circuit/frequencySweep.ts";
