@@ -62,6 +62,7 @@ export {
 export { solveComplex, solveComplex2x2 } from "./math/solveComplex.ts";
 export { luFactor, luSolve, solveLinear, SingularMatrixError, LU_PIVOT_RTOL } from "./math/lu.ts";
 export { createRandom, type RandomSource } from "./math/random.ts";
+export { kelvin, kelvinScaled, ber, bei, berPrime, beiPrime, type KelvinValues } from "./math/kelvin.ts";
 
 // ── lib/em ───────────────────────────────────────────────────────────────────
 export type { Vec3, Pose, Filament, Conductor, Coil } from "./em/types.ts";
@@ -124,6 +125,29 @@ export {
   type SelfInductanceOptions,
   type SelfInductanceDetail,
 } from "./em/selfInductance.ts";
+// losses, self-capacitance, quality factor (losses)
+export { COPPER, ALUMINIUM, MATERIALS, material, resistivityAt, type Material } from "./em/materials.ts";
+export { skinDepth } from "./em/losses/skinDepth.ts";
+export { roundWireAcFactor } from "./em/losses/roundWireAcFactor.ts";
+export { roundWireProximityFactor, turnFieldsPerAmpere, type TurnFields } from "./em/losses/proximity.ts";
+export { dowellFactor, dowellDelta } from "./em/losses/dowell.ts";
+export { litzResistancePerLength, type LitzResistance } from "./em/losses/litz.ts";
+export { traceResistancePerLength, slabSkinFactor, type TraceResistance } from "./em/losses/trace.ts";
+export {
+  coilResistance,
+  coilResistanceDetail,
+  type CoilResistanceOptions,
+  type CoilResistanceDetail,
+} from "./em/losses/coilResistance.ts";
+export { qualityFactor, qualityFactorDetail, type QualityFactorDetail } from "./em/losses/qualityFactor.ts";
+export {
+  selfCapacitance,
+  selfCapacitanceDetail,
+  selfResonance,
+  medhurstCoefficient,
+  MEDHURST_TABLE,
+  type SelfCapacitanceDetail,
+} from "./em/selfCapacitance.ts";
 
 // ── lib/circuit ──────────────────────────────────────────────────────────────
 export type { DiodeModel } from "./circuit/types.ts";
