@@ -1,8 +1,36 @@
+/**
+ * lib/math benchmarks (`npm run bench -- math`). Targets from issue 2: ellipticK+E pair ≤ 60 ns.
+ * The others are reported without a target, for the engines that call them.
+ */
 import type { Workload } from "./harness.ts";
 import { ellipticKE } from "../lib/math/elliptic.ts";
+import { integrateAdaptive, integrateGaussLegendre } from "../lib/math/quadrature.ts";
+import { lambertW } from "../lib/math/lambertW.ts";
+import { luFactor, luSolve } from "../lib/math/lu.ts";
+import { solveComplex, solveComplex2x2 } from "../lib/math/solveComplex.ts";
+import { createRandom } from "../lib/math/random.ts";
 
 let i = 0;
 const ms = Array.from({ length: 1024 }, (_, j) => (j + 0.5) / 1024);
+// Lambert W arguments spread over the diode range: 1e-6 … 1e12, log-uniform
+const ws = Array.from({ length: 1024 }, (_, j) => 10 ** (-6 + (18 * j) / 1023));
+
+const rng = createRandom(2);
+const N = 12;
+const a12 = Float64Array.from({ length: N * N }, () => rng.uniformIn(-1, 1));
+for (let k = 0; k < N; k++) a12[k * N + k]! += 4;
+const b12 = Float64Array.from({ length: N }, () => rng.uniformIn(-1, 1));
+const lu = new Float64Array(N * N);
+const piv = new Int32Array(N);
+const x12 = new Float64Array(N);
+
+const c12 = Array.from({ length: N }, () => Array.from({ length: N }, () => ({ re: rng.normal(), im: rng.normal() })));
+const cb12 = Array.from({ length: N }, () => ({ re: rng.normal(), im: rng.normal() }));
+const a2 = Float64Array.of(2, 1, 0, 1, 0, -1, 3, 0);
+const b2 = Float64Array.of(1, 0, 0, 1);
+const x2 = new Float64Array(4);
+
+const smooth = (x: number): number => Math.exp(-x) * Math.cos(3 * x);
 
 export const workloads: Workload[] = [
   {
@@ -10,5 +38,49 @@ export const workloads: Workload[] = [
     size: "1 evaluation",
     target: 60e-9,
     fn: () => ellipticKE(ms[i++ & 1023]!),
+  },
+  {
+    name: "Gauss–Legendre 32-point integral (cached rule)",
+    size: "32 integrand calls",
+    fn: () => integrateGaussLegendre(smooth, 0, 2, 32),
+  },
+  {
+    name: "adaptive Gauss–Kronrod ∫₀¹ ln x dx, tol 1e-10",
+    size: "1 integral",
+    fn: () => integrateAdaptive(Math.log, 0, 1, { absTol: 1e-10, relTol: 1e-10 }),
+  },
+  {
+    name: "lambertW (x log-uniform 1e-6 … 1e12)",
+    size: "1 evaluation",
+    fn: () => lambertW(ws[i++ & 1023]!),
+  },
+  {
+    name: "12×12 real LU factor + solve (in place, reused workspace)",
+    size: "1 system",
+    fn: () => {
+      lu.set(a12);
+      x12.set(b12);
+      luFactor(lu, N, piv);
+      luSolve(lu, N, piv, x12);
+      return x12[0];
+    },
+  },
+  {
+    name: "2×2 complex solve, closed form (solveComplex2x2)",
+    size: "1 system",
+    fn: () => {
+      solveComplex2x2(a2, b2, x2);
+      return x2[0];
+    },
+  },
+  {
+    name: "12×12 complex solve via mathjs (solveComplex)",
+    size: "1 system",
+    fn: () => solveComplex(c12, cb12),
+  },
+  {
+    name: "normal draw (xoshiro128**, polar method)",
+    size: "1 draw",
+    fn: () => rng.normal(),
   },
 ];

@@ -8,8 +8,8 @@ import mp from "../fixtures/math/lambertw-mpmath.json" with { type: "json" };
 import mpLog from "../fixtures/math/lambertw-of-log-mpmath.json" with { type: "json" };
 
 // Tolerance regimes (relative to W):
-// - "regular" and "huge" x: RTOL = 1e-15. Halley converges to within a rounding or two of
-//   the exact W of the exact double x (measured worst 2.4e-16).
+// - "regular" and "huge" x: RTOL = 1e-15. Fritsch's iteration converges to within a rounding
+//   or two of the exact W of the exact double x (measured worst 3.1e-16).
 // - "branch" (x within 1e-3 of −1/e): the same 1e-15. The branch series in p = √(2(ex + 1))
 //   with 1/e split into two doubles keeps the distance to the branch point exact, so even
 //   x one ulp above −1/e (W = −1 + 1.5e-8) comes out to rounding (measured worst 2.4e-16).
