@@ -38,7 +38,14 @@ export {
 export * as schema from "./schema.ts";
 
 // ── lib/math ─────────────────────────────────────────────────────────────────
-export { ellipticK, ellipticE, ellipticKE, ellipticKEComplement, type EllipticPair } from "./math/elliptic.ts";
+export {
+  ellipticK,
+  ellipticE,
+  ellipticKE,
+  ellipticKEComplement,
+  ellipticKEInto,
+  type EllipticPair,
+} from "./math/elliptic.ts";
 export {
   gaussLegendre,
   integrateGaussLegendre,

@@ -29,6 +29,8 @@ import { TanklightInputError } from "../errors.ts";
 const HALF_PI = Math.PI / 2;
 /** AGM stop: |c_n| ≤ this × a_n. Convergence is quadratic, so c_{n+1} ≈ c_n²/(4a) is then below rounding. */
 const AGM_TOLERANCE = 1e-15;
+/** ellipticKEInto: largest accepted |m + m₁ − 1| (both formed from the same geometry agree far better). */
+const SUM_TOLERANCE = 1e-12;
 /** Below this m₁, E is taken from Legendre's relation (two AGM runs) instead of K·(1 − S). */
 const LEGENDRE_BELOW_M1 = 0.01;
 
@@ -91,6 +93,42 @@ export function ellipticKEComplement(m1: number): EllipticPair {
   if (!(m1 >= 0 && m1 <= 1)) throw domainError("ellipticKEComplement", "m1", m1);
   if (m1 === 0) return { K: Infinity, E: 1 };
   return pair(1 - m1, m1);
+}
+
+/**
+ * K and E from both m and m₁ as the caller formed them, written into `out` — the hot-path
+ * form: no allocation, and no digits lost at either end when both come from the geometry
+ * (e.g. m = 4ab/((a+b)² + d²), m₁ = ((a−b)² + d²)/((a+b)² + d²) for two coaxial circles).
+ *
+ * @param m parameter k², 0 ≤ m ≤ 1, dimensionless.
+ * @param m1 complementary parameter, 0 ≤ m₁ ≤ 1, with |m + m₁ − 1| ≤ 1e-12 (checked).
+ * @param out receives K at out[offset] and E at out[offset + 1] (K = +∞, E = 1 when m₁ = 0).
+ * Method: AGM, A&S 1964 §17.6; Legendre's relation 17.3.13 for E when m₁ < 0.01.
+ * @example ellipticKEInto(0.5, 0.5, out) // out → [1.8540746773013719, 1.3506438810476755]
+ */
+export function ellipticKEInto(m: number, m1: number, out: Float64Array, offset = 0): void {
+  if (!(m >= 0 && m <= 1)) throw domainError("ellipticKEInto", "m", m);
+  if (!(m1 >= 0 && m1 <= 1)) throw domainError("ellipticKEInto", "m1", m1);
+  if (!(Math.abs(m + m1 - 1) <= SUM_TOLERANCE)) {
+    throw new TanklightInputError(
+      [{ path: "m1", message: `must equal 1 − m to within ${SUM_TOLERANCE} (m = ${m})`, value: m1, expected: "m + m1 = 1" }],
+      "ellipticKEInto",
+    );
+  }
+  if (m1 === 0) {
+    out[offset] = Infinity;
+    out[offset + 1] = 1;
+    return;
+  }
+  agm(m, m1);
+  const K = agmK;
+  out[offset] = K;
+  if (m1 >= LEGENDRE_BELOW_M1) {
+    out[offset + 1] = K * (1 - agmS);
+  } else {
+    agm(m1, m);
+    out[offset + 1] = HALF_PI / agmK + K * agmS;
+  }
 }
 
 /**

@@ -7,6 +7,7 @@ import {
   ellipticK,
   ellipticKE,
   ellipticKEComplement,
+  ellipticKEInto,
   type EllipticPair,
 } from "../../lib/math/elliptic.ts";
 import { TanklightInputError } from "../../lib/errors.ts";
@@ -158,5 +159,32 @@ describe("ellipticK(m), ellipticE(m) — parameter m = k²", () => {
     expectTypeOf(ellipticKE).returns.toEqualTypeOf<EllipticPair>();
     expectTypeOf(ellipticKEComplement).parameters.toEqualTypeOf<[number]>();
     expectTypeOf<EllipticPair>().toEqualTypeOf<{ readonly K: number; readonly E: number }>();
+  });
+});
+
+describe("ellipticKEInto(m, m1, out, offset) — hot-path form with both parameters", () => {
+  it("matches mpmath at both ends when m and m1 are both given, and writes at the offset", () => {
+    // reference library: mpmath via the fixture; m and m1 given exactly as in the generator
+    const out = new Float64Array(3);
+    for (const c of mp.cases) {
+      const m = c.form === "parameter" ? c.m! : 1 - c.m1!;
+      const m1 = c.form === "parameter" ? 1 - c.m! : c.m1!;
+      // parameter form: m exact, m1 = 1 − m rounded; complement form: m1 exact. The AGM uses
+      // c₀² = m only in the E sum and b₀ = √m₁ for K, so each end keeps its exact input.
+      ellipticKEInto(m, m1, out, 1);
+      expectRelClose(out[1]!, c.K, MPMATH_RTOL, `K (${c.form} ${c.m ?? c.m1})`);
+      expectRelClose(out[2]!, c.E, MPMATH_RTOL, `E (${c.form} ${c.m ?? c.m1})`);
+    }
+    expect(out[0]).toBe(0);
+    ellipticKEInto(1, 0, out);
+    expect([out[0], out[1]]).toEqual([Infinity, 1]);
+  });
+
+  it("rejects m, m1 that do not add up to 1, and out-of-range values", () => {
+    const out = new Float64Array(2);
+    expect(() => ellipticKEInto(0.5, 0.6, out)).toThrow(TanklightInputError);
+    expect(() => ellipticKEInto(Number.NaN, 0.5, out)).toThrow(TanklightInputError);
+    expect(() => ellipticKEInto(0.5, -0.5, out)).toThrow(TanklightInputError);
+    expectTypeOf(ellipticKEInto).returns.toEqualTypeOf<void>();
   });
 });
