@@ -152,7 +152,7 @@ export function currentSheetInductance(radius: number, length: number, turns: nu
  * for circular and square coils", Proc. IEEE 70(12):1449–1450, 1982), d = 2a, u = ℓ/d:
  *   L = (µ₀dN²/2)·[ln(1 + π/(2u)) + 1/(2.3004 + 3.437u + 1.7636u² − 0.47/(0.755 + 1/u)^1.44)].
  * Claimed ≤ 0.1 % (claim checked; coefficients from memory — they reproduce both asymptotes
- * exactly: the thin ring ln(4/u) − ½ as u → 0 and 1 − 4/(3πu) as u → ∞; tests measure the error
+ * exactly: the thin ring ln(4/u) − ½ as u → 0 and K_N ≈ 1 − 4/(3πu) as u → ∞; tests measure the error
  * against the exact Nagaoka form).
  * @param radius a, m, > 0. @param length ℓ, m, > 0. @param turns N, > 0.
  * @returns H.
