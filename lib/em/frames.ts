@@ -23,8 +23,9 @@ function finiteVec(v: unknown, path: string, where: string): Vec3 {
  * The rotation matrix of a pose: R = R_align(n)·R_z(spin), where R_z(spin) turns the coil by
  * `spin` about its own axis and R_align is the smallest rotation taking +z to the unit axis n
  * (about ẑ × n by the angle between them; Rodrigues' formula). For n = −z exactly R_align is
- * the half-turn about x. Entries use k = 1/(1 + n_z) or, for n_z < 0, the equal (1 − n_z)/(n_x² + n_y²),
- * so nothing cancels near n = −z.
+ * the half-turn about x. Entries use k = 1/(1 + n_z) or, for n_z < 0, the equal (1 − n_z)/(n_x² + n_y²)
+ * with the in-plane direction normalised first, so nothing cancels or underflows near n = −z
+ * (there the in-plane orientation, i.e. the reference of `spin`, depends on the direction of approach).
  *
  * @param pose `{ position (m), axis? (any non-zero vector, normalised; default [0,0,1]), spin? (rad, default 0) }`.
  * @param where function name for error messages.  @param field field name for error messages.
@@ -49,15 +50,21 @@ export function poseFrame(pose: Pose, where = "poseFrame", field = "pose"): Fram
   if (!(typeof spin === "number" && Number.isFinite(spin))) {
     throw new TanklightInputError([{ path: `${field}.spin`, message: "must be a finite angle in rad", value: spin }], where);
   }
-  const q = nx * nx + ny * ny;
   const A = new Float64Array(9);
-  if (q === 0 && nz < 0) {
-    A[0] = 1; A[4] = -1; A[8] = -1;
+  A[2] = nx; A[5] = ny; A[6] = -nx; A[7] = -ny; A[8] = nz;
+  if (nz >= 0) {
+    const k = 1 / (1 + nz);
+    A[0] = 1 - k * nx * nx; A[1] = -k * nx * ny;
+    A[3] = -k * nx * ny; A[4] = 1 - k * ny * ny;
   } else {
-    const k = nz >= 0 ? 1 / (1 + nz) : (1 - nz) / q;
-    A[0] = 1 - k * nx * nx; A[1] = -k * nx * ny; A[2] = nx;
-    A[3] = -k * nx * ny; A[4] = 1 - k * ny * ny; A[5] = ny;
-    A[6] = -nx; A[7] = -ny; A[8] = nz;
+    // k·nᵢnⱼ = (1 − n_z)·ĉᵢĉⱼ with ĉ = (n_x, n_y)/hypot(n_x, n_y): no cancellation, no underflow
+    const h = Math.hypot(nx, ny);
+    // below 1e-100 the direction of (n_x, n_y) is lost in subnormals: take the half-turn about x
+    const cx = h > 1e-100 ? nx / h : 0;
+    const cy = h > 1e-100 ? ny / h : 1;
+    const w = 1 - nz;
+    A[0] = 1 - w * cx * cx; A[1] = -w * cx * cy;
+    A[3] = -w * cx * cy; A[4] = 1 - w * cy * cy;
   }
   const c = Math.cos(spin);
   const s = Math.sin(spin);
