@@ -137,7 +137,25 @@ def gauss_legendre():
 
 
 # ── Lambert W ──────────────────────────────────────────────────────────────────────
+# Branch-point series of W₀ in p = √(2(ex + 1)) (Corless et al. 1996, eq. 4.22), as typed in
+# lib/math/lambertW.ts: checked here against mpmath — with ten terms the error must scale as p¹⁰.
+BRANCH_SERIES = [mpf(-1), mpf(1), mpf(-1) / 3, mpf(11) / 72, mpf(-43) / 540, mpf(769) / 17280,
+                 mpf(-221) / 8505, mpf(680863) / 43545600, mpf(-1963) / 204120,
+                 mpf(226287557) / 37623398400]
+
+
+def check_branch_series():
+    for p in [mpf("0.001"), mpf("0.01"), mpf("0.03")]:
+        x = (p * p / 2 - 1) / mp.e
+        exact = mp.lambertw(x).real
+        series = sum(c * p ** k for k, c in enumerate(BRANCH_SERIES))
+        # next coefficient ≈ −0.0036: truncation ≈ 0.004·p¹⁰ (≈ 2e-18 at p = 0.03)
+        assert abs(series - exact) < mpf("0.005") * p ** 10, (p, series - exact)
+    print("branch series coefficients verified against mpmath")
+
+
 def lambert():
+    check_branch_series()
     inv_e = mp.exp(-1)
     hi = float(inv_e)
     print("1/e split: hi", repr(hi), "lo", repr(float(inv_e - mpf(hi))))
