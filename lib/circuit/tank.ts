@@ -1,0 +1,180 @@
+/**
+ * Tuned tanks: resonance, quality factor, bandwidth and detuning tolerance of an LC tank.
+ *
+ * Methods: Thomson's formula f₀ = 1/(2π√(LC)); the quality factor of a tank with several
+ * small losses as the reciprocal sum 1/Q = Σ 1/Q_k (each loss taken separately: coil
+ * Q_L = ωL/R_L, capacitor Q_C = 1/tan δ = 1/(ω·C·ESR), parallel load Q_p = R_p/(ωL));
+ * −3 dB bandwidth f₀/Q; the universal resonance curve of a single tuned circuit,
+ * |H|/|H₀| = 1/√(1 + Q²(f/f₀ − f₀/f)²) (Terman, "Radio Engineers' Handbook", 1943, §3 —
+ * from memory (unverified); the same curve in any circuits text).
+ */
+import { TanklightInputError, requirePositive } from "../errors.ts";
+
+/**
+ * Capacitance that tunes an inductance to a frequency: C = 1/((2πf)²·L).
+ * @param L inductance, H, > 0; f frequency, Hz, > 0.
+ * @returns capacitance, F.
+ * @example resonantCapacitance(100e-6, 200e3) // → 6.332573977646111e-9
+ * Related: resonantFrequency, nearestStandardValue, bestCombination.
+ */
+export function resonantCapacitance(L: number, f: number): number {
+  requirePositive(L, "L", "H", "resonantCapacitance");
+  requirePositive(f, "f", "Hz", "resonantCapacitance");
+  const w = 2 * Math.PI * f;
+  return 1 / (w * w * L);
+}
+
+/**
+ * Resonant frequency of an LC tank: f₀ = 1/(2π√(LC)).
+ * @param L inductance, H, > 0; C capacitance, F, > 0.
+ * @returns Hz.
+ * @example resonantFrequency(100e-6, 6.8e-9) // → 193001.7…
+ */
+export function resonantFrequency(L: number, C: number): number {
+  requirePositive(L, "L", "H", "resonantFrequency");
+  requirePositive(C, "C", "F", "resonantFrequency");
+  return 1 / (2 * Math.PI * Math.sqrt(L * C));
+}
+
+/** A tank's parts and losses, for {@link tankQuality}. */
+export interface TankLosses {
+  /** inductance, H, > 0 */
+  readonly inductance: number;
+  /** capacitance, F, > 0 */
+  readonly capacitance: number;
+  /** coil series resistance at the operating frequency, Ω ≥ 0 */
+  readonly coilResistance?: number;
+  /** capacitor ESR, Ω ≥ 0 (or give dissipationFactor) */
+  readonly capacitorEsr?: number;
+  /** capacitor dissipation factor tan δ ≥ 0 (alternative to capacitorEsr) */
+  readonly dissipationFactor?: number;
+  /** resistance in parallel with the tank (a linear load), Ω > 0 */
+  readonly parallelResistance?: number;
+}
+
+/** Quality factor of a tank and its parts. */
+export interface TankQuality {
+  /** resonant frequency, Hz */
+  readonly frequency: number;
+  /** loaded Q of the tank: 1/Q = Σ 1/Q_k */
+  readonly q: number;
+  /** coil Q, ωL/R (Infinity when lossless) */
+  readonly coilQ: number;
+  /** capacitor Q, 1/tan δ (Infinity when lossless) */
+  readonly capacitorQ: number;
+  /** parallel-load Q, R_p/(ωL) (Infinity when absent) */
+  readonly loadQ: number;
+  /** −3 dB bandwidth, Hz */
+  readonly bandwidth: number;
+  /** equivalent parallel resistance at resonance, Q·ωL, Ω */
+  readonly dynamicResistance: number;
+  /** characteristic impedance √(L/C), Ω */
+  readonly characteristicImpedance: number;
+}
+
+/**
+ * Quality factor, bandwidth and dynamic resistance of an LC tank at resonance.
+ * 1/Q = R_L/(ωL) + tan δ + ωL/R_p (small losses, each referred separately).
+ * @param t parts and losses (see {@link TankLosses}); at least one loss must be given.
+ * @returns {@link TankQuality}.
+ * @example tankQuality({ inductance: 100e-6, capacitance: 6.8e-9, coilResistance: 2 }).q // → 60.6…
+ */
+export function tankQuality(t: TankLosses): TankQuality {
+  const where = "tankQuality";
+  requirePositive(t.inductance, "inductance", "H", where);
+  requirePositive(t.capacitance, "capacitance", "F", where);
+  const f = 1 / (2 * Math.PI * Math.sqrt(t.inductance * t.capacitance));
+  const w = 2 * Math.PI * f;
+  const wl = w * t.inductance;
+  const nonNeg = (x: number | undefined, name: string, unit: string) => {
+    if (x === undefined) return 0;
+    if (!(Number.isFinite(x) && x >= 0)) {
+      throw new TanklightInputError([{ path: name, message: `must be a finite number ≥ 0 ${unit}`, value: x }], where);
+    }
+    return x;
+  };
+  const rl = nonNeg(t.coilResistance, "coilResistance", "Ω");
+  if (t.capacitorEsr !== undefined && t.dissipationFactor !== undefined) {
+    throw new TanklightInputError([{ path: "capacitorEsr", message: "give capacitorEsr or dissipationFactor, not both", value: t.capacitorEsr }], where);
+  }
+  const tanD = t.dissipationFactor !== undefined
+    ? nonNeg(t.dissipationFactor, "dissipationFactor", "")
+    : nonNeg(t.capacitorEsr, "capacitorEsr", "Ω") * w * t.capacitance;
+  let invQp = 0;
+  if (t.parallelResistance !== undefined) {
+    requirePositive(t.parallelResistance, "parallelResistance", "Ω", where);
+    invQp = wl / t.parallelResistance;
+  }
+  const invQl = rl / wl;
+  const invQ = invQl + tanD + invQp;
+  if (!(invQ > 0)) {
+    throw new TanklightInputError(
+      [{ path: "coilResistance", message: "a tank needs at least one loss (coil resistance, capacitor ESR/tan δ or a parallel resistance)", value: t }],
+      where,
+    );
+  }
+  const q = 1 / invQ;
+  return {
+    frequency: f,
+    q,
+    coilQ: invQl > 0 ? 1 / invQl : Infinity,
+    capacitorQ: tanD > 0 ? 1 / tanD : Infinity,
+    loadQ: invQp > 0 ? 1 / invQp : Infinity,
+    bandwidth: f / q,
+    dynamicResistance: q * wl,
+    characteristicImpedance: Math.sqrt(t.inductance / t.capacitance),
+  };
+}
+
+/**
+ * −3 dB bandwidth of a tank: f₀/Q.
+ * @param f0 resonant frequency, Hz > 0; q quality factor > 0.
+ * @example tankBandwidth(200e3, 50) // → 4000
+ */
+export function tankBandwidth(f0: number, q: number): number {
+  requirePositive(f0, "f0", "Hz", "tankBandwidth");
+  requirePositive(q, "q", "", "tankBandwidth");
+  return f0 / q;
+}
+
+/** How far a tank may be detuned before its response falls by a fraction. */
+export interface DetuningWindow {
+  /** frequency ratio f/f₀ below resonance where the response has fallen by the fraction */
+  readonly lowerRatio: number;
+  /** frequency ratio above resonance */
+  readonly upperRatio: number;
+  /** relative frequency offset allowed, (upper − lower)/2, ≈ x/(2Q) */
+  readonly relativeHalfWidth: number;
+  /**
+   * the matching relative capacitance (or inductance) change: the tank's own resonance moves
+   * as f ∝ 1/√C, so C may change by a factor 1/ratio² — here [1/upper² − 1, 1/lower² − 1]
+   */
+  readonly capacitanceChange: readonly [number, number];
+}
+
+/**
+ * Detuning a single tuned tank tolerates before its voltage (at fixed drive) falls by
+ * `fraction`: |H|/|H₀| = 1/√(1 + Q²(r − 1/r)²) = 1 − fraction, r = f/f₀ (universal resonance curve).
+ * Solving: Q(r − 1/r) = ±x, x = √(1/(1 − fraction)² − 1); r = (±x/Q + √(x²/Q² + 4))/2.
+ * @param q loaded quality factor, > 0; fraction response drop, 0 < fraction < 1 (e.g. 0.1 for 10 %;
+ *   1 − 1/√2 ≈ 0.293 gives the −3 dB points).
+ * @returns {@link DetuningWindow}.
+ * @example detuningTolerance(50, 1 - Math.SQRT1_2).relativeHalfWidth // → 0.01 (= 1/(2Q))
+ */
+export function detuningTolerance(q: number, fraction: number): DetuningWindow {
+  requirePositive(q, "q", "", "detuningTolerance");
+  if (!(Number.isFinite(fraction) && fraction > 0 && fraction < 1)) {
+    throw new TanklightInputError([{ path: "fraction", message: "must be between 0 and 1 (exclusive)", value: fraction }], "detuningTolerance");
+  }
+  const x = Math.sqrt(1 / ((1 - fraction) * (1 - fraction)) - 1);
+  const a = x / q;
+  const root = Math.sqrt(a * a + 4);
+  const upper = (a + root) / 2;
+  const lower = (-a + root) / 2;
+  return {
+    lowerRatio: lower,
+    upperRatio: upper,
+    relativeHalfWidth: (upper - lower) / 2,
+    capacitanceChange: [1 / (upper * upper) - 1, 1 / (lower * lower) - 1],
+  };
+}
