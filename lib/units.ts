@@ -32,6 +32,9 @@ export type Dimension =
   | "time"
   | "dimensionless";
 
+/** A quantity as a user may give it: an SI number, or a string with a unit ("12 mm"). */
+export type QuantityInput = number | string;
+
 /** What we know about one dimension: its SI unit and how to talk about it in messages. */
 export interface DimensionInfo {
   /** the SI unit every parsed value is returned in, as printed ("Ω·m", "m²", "" for none) */
@@ -206,7 +209,7 @@ function expectation(dimension: Dimension): string {
  * @example parseQuantity("25 degC", "temperature") // → 298.15
  * @example parseQuantity("0.5 mil", "length") // → 1.27e-5 (1 mil = 0.001 in = 25.4 µm exactly)
  */
-export function parseQuantity(value: number | string, dimension: Dimension, field?: string): number {
+export function parseQuantity(value: QuantityInput, dimension: Dimension, field?: string): number {
   if (typeof value === "number") {
     if (!Number.isFinite(value)) {
       throw quantityError(field, value, dimension, `${expectation(dimension)} (a finite number)`);
@@ -359,26 +362,39 @@ export function formatQuantity(x: number, unit: string, digits = 3): string {
   if (x === -Infinity) return `-∞${space}${unit}`;
   if (x === 0) return `0${space}${unit}`;
 
+  // Decimal digits and exponent of x rounded to `digits` significant figures, taken from
+  // toExponential (correctly rounded, exact exponent): no log10 or division roundings, so
+  // 999.96 becomes 1.00e3 and takes "k", and 9.99…e-31 never slips to "0.999… q".
+  const { sign, figures, exponent } = decimalDigits(x, digits);
+
   if (UNPREFIXED.has(unit)) {
-    const rounded = Number(x.toPrecision(digits));
-    const ax = Math.abs(rounded);
-    const body = ax >= 1e-3 && ax < 1e6 ? fixedSignificant(rounded, digits) : exponentForm(x, digits);
+    const body = exponent >= -3 && exponent < 6 ? sign + placePoint(figures, exponent) : exponentForm(x, digits);
     return `${body}${space}${unit}`;
   }
 
   const power = leadingPower(unit);
-  // Round to the requested significant figures first, so 999.96 becomes 1.00e3 and takes "k".
-  const rounded = Number(x.toPrecision(digits));
-  const decade = Math.floor(Math.log10(Math.abs(rounded)));
   // prefix step: one prefix = 10^(3·power) in the value
-  const step = Math.floor(decade / (3 * power));
+  const step = Math.floor(exponent / (3 * power));
   const index = step + PREFIX_OFFSET;
   if (index < 0 || index >= PREFIXES.length) {
     return `${exponentForm(x, digits)}${space}${unit}`;
   }
-  const scaled = rounded / 10 ** (3 * power * step);
-  const mantissa = fixedSignificant(Number(scaled.toPrecision(digits)), digits);
+  const mantissa = sign + placePoint(figures, exponent - 3 * power * step);
   return `${mantissa} ${PREFIXES[index]}${unit}`;
+}
+
+/** x ≠ 0 rounded to `digits` significant figures: sign, the digit string, the decimal exponent. */
+function decimalDigits(x: number, digits: number): { sign: string; figures: string; exponent: number } {
+  const [mant = "0", exp = "0"] = Math.abs(x).toExponential(digits - 1).split("e");
+  return { sign: x < 0 ? "-" : "", figures: mant.replace(".", ""), exponent: Number(exp) };
+}
+
+/** Digits d₀d₁d₂… with value d₀.d₁d₂…·10^e written in fixed notation ("470", e = 0 → "4.70"). */
+function placePoint(figures: string, e: number): string {
+  if (e < 0) return `0.${"0".repeat(-e - 1)}${figures}`;
+  const whole = figures.slice(0, e + 1).padEnd(e + 1, "0");
+  const fraction = figures.slice(e + 1);
+  return fraction === "" ? whole : `${whole}.${fraction}`;
 }
 
 /** The power of the first factor of a unit symbol: "m²" → 2, "m^3/s" → 3, "A/m" → 1. */
@@ -388,14 +404,6 @@ function leadingPower(unit: string): number {
   if (first[1] === "²") return 2;
   if (first[1] === "³") return 3;
   return Number(first[2] ?? "1") || 1;
-}
-
-/** A number written with exactly `digits` significant figures in fixed notation. */
-function fixedSignificant(x: number, digits: number): string {
-  if (x === 0) return "0";
-  const decade = Math.floor(Math.log10(Math.abs(x)));
-  const decimals = Math.max(0, digits - 1 - decade);
-  return x.toFixed(Math.min(decimals, 100));
 }
 
 /** Exponent form with `digits` significant figures: "1.23e+33". */

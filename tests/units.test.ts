@@ -321,6 +321,23 @@ describe("formatQuantity", () => {
     );
   });
 
+  it("prints 1–3 integer digits and exactly `digits` significant figures (digits ≥ 3), or the exponent form", () => {
+    fc.assert(
+      fc.property(fc.double({ noNaN: true, noDefaultInfinity: true }).filter((x) => x !== 0), fc.integer({ min: 3, max: 17 }), (x, digits) => {
+        const s = formatQuantity(x, "F", digits);
+        const m = /^(-?)(\d{1,3})(?:\.(\d+))? [qryzafpnµmkMGTPEZYRQ]?F$/.exec(s);
+        if (m === null) return /^-?\d(\.\d+)?e[+-]\d+ F$/.test(s) && (Math.abs(x) >= 1e33 || Math.abs(x) < 1e-30);
+        const figures = ((m[2] ?? "") + (m[3] ?? "")).replace(/^0+/, "");
+        return (m[2] ?? "0") !== "0" && figures.length === digits;
+      }),
+      { numRuns: 3000 },
+    );
+    // the double just below 1e-30 stays below quecto at 17 digits (no "0.99… qF")
+    expect(formatQuantity(9.999999999999999e-31, "F", 17)).toBe("9.9999999999999991e-31 F");
+    expect(formatQuantity(9.999999999999999e-31, "F")).toBe("1.00 qF");
+    expect(formatQuantity(1e5, "Hz", 1)).toBe("100 kHz"); // digits < 3: trailing zeros of the integer part show
+  });
+
   it("round-trips through parseQuantity within the printed precision", () => {
     // regime "printed precision": 6 significant figures printed → rtol 5e-6 (half a unit in the 6th digit)
     fc.assert(
