@@ -21,6 +21,7 @@ export {
   DIMENSIONS,
   type Dimension,
   type DimensionInfo,
+  type QuantityInput,
 } from "./units.ts";
 export {
   quantity,
