@@ -1,7 +1,8 @@
 #!/usr/bin/env python3
 """Reference values for lib/em/classicFormulas.ts (tests/em/classicFormulas.test.ts).
 
-Writes tests/fixtures/em-formulas/nagaoka.json: Nagaoka's coefficient K_N of a uniform
+Writes tests/fixtures/em-formulas/nagaoka.json and annulus.json (flat annular sheets, see
+annulus_sheet below). nagaoka.json: Nagaoka's coefficient K_N of a uniform
 cylindrical current sheet (radius a, length l) for a range of x = D/l = 2a/l, computed two ways
 at 40 significant digits with mpmath:
 
@@ -83,5 +84,65 @@ def main():
     print(f"wrote {len(cases)} cases")
 
 
+
+
+# ── flat annular current sheet ────────────────────────────────────────────────
+# A planar annulus r_in ≤ r ≤ r_out carrying N turns' current spread uniformly over its radial width
+# (the sheet of a flat spiral). Its self-inductance is the double integral of Maxwell's coaxial
+# formula at zero separation over the sheet:
+#     L = (N/c)^2 * 2 * int_{r_in}^{r_out} dr1 int_{r_in}^{r1} dr2 M(r1, r2, 0),   c = r_out - r_in,
+#     M(r1, r2, 0) = mu0 sqrt(r1 r2) [ (2/k - k) K(k^2) - (2/k) E(k^2) ],  k^2 = 4 r1 r2/(r1 + r2)^2.
+# The inner integral has a logarithmic singularity at r2 = r1 (an end point: tanh-sinh copes).
+# Stored: L/(mu0 N^2) in metres.
+
+def annulus_sheet(r_in, r_out):
+    r_in = mp.mpf(r_in)
+    r_out = mp.mpf(r_out)
+    c = r_out - r_in
+
+    def m_cop(r1, r2):
+        s = r1 + r2
+        kp2 = ((r1 - r2) / s) ** 2  # complementary parameter from the geometry
+        if kp2 < mp.mpf(10) ** -30:
+            # touching limit: M = sqrt(r1 r2) (ln(8 sqrt(r1 r2)/|r1 - r2|) - 2)
+            g = mp.sqrt(r1 * r2)
+            return g * (mp.log(8 * g / abs(r1 - r2)) - 2) if r1 != r2 else mp.mpf(0)
+        k2 = 1 - kp2
+        k = mp.sqrt(k2)
+        return mp.sqrt(r1 * r2) * ((2 / k - k) * mp.ellipk(k2) - (2 / k) * mp.ellipe(k2))
+
+    inner = lambda r1: mp.quad(lambda r2: m_cop(r1, r2), [r_in, r1])
+    return 2 * mp.quad(inner, [r_in, r_out]) / (c * c)
+
+
+def annulus_fixture():
+    mp.mp.dps = 20
+    cases = []
+    # the sheets of the three flat spirals of tests/em/inductanceCrossChecks.test.ts:
+    # inner edge e, width w, pitch p, N turns -> sheet from e + w/2 to e + w/2 + N p
+    for e, w, p, N in [("0.005", "0.0004", "0.0006", 10), ("0.01", "0.0005", "0.001", 5), ("0.003", "0.0002", "0.0003", 20)]:
+        r0 = mp.mpf(e) + mp.mpf(w) / 2
+        r1 = r0 + N * mp.mpf(p)
+        cases.append({"rIn": float(r0), "rOut": float(r1), "LOverMu0N2": float(annulus_sheet(r0, r1))})
+    # a sweep of fill ratio rho = (r_out - r_in)/(r_out + r_in) at mean radius 10 mm
+    for rho in ["0.05", "0.1", "0.2", "0.4", "0.6", "0.8"]:
+        rm = mp.mpf("0.01")
+        r0 = rm * (1 - mp.mpf(rho))
+        r1 = rm * (1 + mp.mpf(rho))
+        cases.append({"rIn": float(r0), "rOut": float(r1), "LOverMu0N2": float(annulus_sheet(r0, r1))})
+    doc = {
+        "source": "independent method: self-inductance of a uniform flat annular current sheet as the double integral of Maxwell's coaxial formula (Treatise sec. 701) over the sheet",
+        "generator": "scripts/gen_formula_fixtures.py (mpmath, 20 digits, tanh-sinh quadrature)",
+        "digits": 15,
+        "parameters": "rIn, rOut in m; LOverMu0N2 = L/(mu0 N^2) in m",
+        "cases": cases,
+    }
+    with open(os.path.join(OUT, "annulus.json"), "w") as f:
+        json.dump(doc, f, indent=1)
+        f.write("\n")
+    print(f"wrote {len(cases)} annulus cases")
+
+
 if __name__ == "__main__":
     main()
+    annulus_fixture()

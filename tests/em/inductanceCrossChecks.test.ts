@@ -36,6 +36,10 @@ import {
 import { MU0 } from "../../lib/constants.ts";
 import { expectOutside } from "../helpers/validation.ts";
 import { expectRelClose } from "../helpers/expectRelClose.ts";
+import annulus from "../fixtures/em-formulas/annulus.json" with { type: "json" };
+
+type AnnulusCase = { rIn: number; rOut: number; LOverMu0N2: number };
+const ANNULI = annulus.cases as AnnulusCase[];
 
 /** Close-wound solenoids: radius a, turns N, bare d, outer (= pitch) od. */
 const SOLENOIDS = [
@@ -119,6 +123,15 @@ describe("flatSpiral against Wheeler's flat-spiral formula and Mohan's circular 
     // filament − sheet (Rosa's correction with the trace's GMD 0.2235(w + t) against the strip's p·e^{−3/2})
     const sheetCorrection = MU0 * meanRing * sp.N * (Math.log((sp.p * Math.exp(-1.5)) / (0.2235 * (sp.w + t))) - rosaB(sp.N));
 
+    it(`${tag}: filaments = exact flat annular sheet + Rosa-type correction (independent double integral)`, () => {
+      const sheetCase = ANNULI.find((x) => Math.abs(x.rIn - r0) < 1e-12 && Math.abs(x.rOut - (r0 + sp.N * sp.p)) < 1e-12);
+      expect(sheetCase).toBeDefined();
+      const sheet = MU0 * sp.N * sp.N * sheetCase!.LOverMu0N2;
+      // the correction is −0.2 … +3 % of L here; with it the rings model meets the exact sheet. 5e-4 as for the
+      // solenoids: the GMD terms are exact to O((p/a)²) in the ring terms (observed agreement ≤ 2e-4).
+      expectOutside({ quantity: `flat spiral L vs exact annular sheet (${tag})`, source: `${annulus.source}; with Rosa's correction (Rosa 1906, re-derived)`, ours: L - sheetCorrection, reference: sheet, rtol: 5e-4, unit: "H" });
+    });
+
     it(`${tag}: Wheeler 1928 flat spiral within its stated 5 % (c > 0.2a) of the sheet-equivalent`, () => {
       const c = s.outerRadius - s.innerRadius;
       expect(c).toBeGreaterThan(0.2 * s.meanRadius);
@@ -135,6 +148,32 @@ describe("flatSpiral against Wheeler's flat-spiral formula and Mohan's circular 
       // source: Mohan et al. 1999, IEEE JSSC 34(10) eq. (2): typical error 2–3 % (checked); circle coefficients from memory
       expectOutside({ quantity: `Mohan current sheet (circle) vs flatSpiral (${tag})`, source: "source: Mohan et al. 1999, IEEE JSSC 34(10), eq. (2), typical error 2–3 % (circle row from memory)", ours: L, reference: mohanCurrentSheetInductance(sp.N, dOut, dIn, "circle"), rtol: 0.03, unit: "H" });
     });
+  }
+});
+
+describe("flat annular current sheets (exact double integral) against Mohan's and Wheeler's sheet formulas", () => {
+  for (const x of ANNULI.slice(3)) {
+    const a = (x.rIn + x.rOut) / 2;
+    const c = x.rOut - x.rIn;
+    const N = 10;
+    const sheet = MU0 * N * N * x.LOverMu0N2;
+    const rho = c / (2 * a);
+    it(`fill ratio ρ = ${rho.toFixed(2)}: Mohan's circular current-sheet expression`, () => {
+      // Mohan's eq. (2) is a current-sheet expression, so its natural reference is the exact sheet. The paper's 2–3 %
+      // refers to real spirals; against the sheet we find ≤ 0.5 % over ρ = 0.05 … 0.8 and test at 1 %, which pins the
+      // circle-row coefficients recalled from memory (c1 = 1, c2 = 2.46, c3 = 0, c4 = 0.20) to that level.
+      expectOutside({ quantity: `Mohan current sheet (circle) vs exact annular sheet, ρ=${rho.toFixed(2)}`, source: "source: Mohan et al. 1999, IEEE JSSC 34(10), eq. (2), circle row (memory); reference: exact sheet double integral (mpmath)", ours: mohanCurrentSheetInductance(N, 2 * x.rOut, 2 * x.rIn, "circle"), reference: sheet, rtol: 0.01, unit: "H" });
+    });
+    if (c > 0.2 * a * (1 + 1e-9)) {
+      it(`c/a = ${(c / a).toFixed(2)}: Wheeler's flat-spiral formula within its stated 5 %`, () => {
+        // source: Wheeler 1928, Proc. IRE 16(10): within 5 % for c > 0.2a
+        expectOutside({ quantity: `Wheeler 1928 flat spiral vs exact annular sheet, c/a=${(c / a).toFixed(2)}`, source: "source: Wheeler 1928, Proc. IRE 16(10), within 5 % for c > 0.2a", ours: wheelerFlatSpiralInductance(a, c, N), reference: sheet, rtol: 0.05, unit: "H" });
+      });
+    } else if (c < 0.15 * a) {
+      it(`c/a = ${(c / a).toFixed(2)}: Wheeler's flat-spiral formula is not meant for narrow rings (more than 5 % off)`, () => {
+        expect(Math.abs(wheelerFlatSpiralInductance(a, c, N) / sheet - 1)).toBeGreaterThan(0.05);
+      });
+    }
   }
 });
 
