@@ -304,7 +304,16 @@ function toInputIssues(issue: z.core.$ZodIssue, input: unknown, prefix: readonly
  * @example parseInput(z.object({ radius: length() }), { radius: "12 mm" }, "roundCoil") // → { radius: 0.012 }
  */
 export function parseInput<T>(schema: z.ZodType<T>, input: unknown, where: string): T {
-  const result = schema.safeParse(input, { reportInput: true });
+  let result: z.ZodSafeParseResult<T>;
+  try {
+    result = schema.safeParse(input, { reportInput: true });
+  } catch (e) {
+    // A TanklightInputError thrown inside a hand-written transform (parseQuantity called
+    // directly, a builder called from a schema) escapes zod without its path; keep its issues
+    // and add the function's name. Use quantity() fields to get the dotted path as well.
+    if (e instanceof TanklightInputError) throw new TanklightInputError(e.issues, where);
+    throw e;
+  }
   if (result.success) return result.data;
   const issues = result.error.issues.flatMap((i) => toInputIssues(i, input));
   throw new TanklightInputError(issues, where);

@@ -16,6 +16,7 @@ import {
   type QuantitySchema,
 } from "../lib/schema.ts";
 import { TanklightInputError } from "../lib/errors.ts";
+import { parseQuantity } from "../lib/units.ts";
 import { expectRelClose } from "./helpers/expectRelClose.ts";
 
 const CoilInput = z
@@ -176,6 +177,13 @@ describe("parseInput", () => {
     });
     expect(() => parseInput(D, { drive: { kind: "pulse" }, compensation: "both" }, "link")).toThrowErrorMatchingInlineSnapshot(
       `[TanklightInputError: link: drive.kind: expected one of "sine", "bridge", got 'pulse'; compensation: expected one of "series"|"parallel", got 'both']`,
+    );
+  });
+
+  it("adds the function name to a TanklightInputError thrown inside a hand-written transform", () => {
+    const S = z.object({ r: z.string().transform((v) => parseQuantity(v, "length", "r")) });
+    expect(() => parseInput(S, { r: "5 kHz" }, "tokenBuilder")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: tokenBuilder: r: expected a length like '12 mm', got '5 kHz' (a frequency)]`,
     );
   });
 
