@@ -102,9 +102,16 @@ export function coplanarStripCapacitancePerLength(width: number, gap: number, ep
   return EPS0 * ((1 + epsR) / 2) * (ellipticK(1 - k2) / ellipticK(k2));
 }
 
+/**
+ * Film build assumed for a round wire given without insulation (a bare wire cannot be wound
+ * touching): outer diameter 1.1 × bare, roughly grade-1 enamel for 0.1–1 mm wire — trade
+ * practice (no source).
+ */
+const ASSUMED_FILM_RATIO = 1.1;
+
 function conductorSizes(c: Conductor): { d: number; od: number } {
   switch (c.kind) {
-    case "round": return { d: c.diameter, od: c.outerDiameter };
+    case "round": return { d: c.diameter, od: c.outerDiameter > c.diameter * 1.001 ? c.outerDiameter : c.diameter * ASSUMED_FILM_RATIO };
     case "litz": return { d: c.outerDiameter * 0.9, od: c.outerDiameter };
     case "trace": return { d: c.width, od: c.width };
   }
@@ -134,6 +141,9 @@ export function selfCapacitanceDetail(coil: Coil): SelfCapacitanceDetail {
   const warnings: string[] = [];
   const s = coil.shape;
   const { d, od } = conductorSizes(coil.conductor);
+  if (coil.conductor.kind === "round" && !(coil.conductor.outerDiameter > coil.conductor.diameter * 1.001)) {
+    warnings.push(`wire given without insulation: an enamel film of outer diameter ${ASSUMED_FILM_RATIO} × bare is assumed for the capacitance`);
+  }
   if (s?.kind === "solenoid") {
     const C = medhurst(s.length, 2 * s.radius, warnings);
     return { value: C, model: "medhurst", external: C, internal: 0, warnings };
@@ -146,7 +156,7 @@ export function selfCapacitanceDetail(coil: Coil): SelfCapacitanceDetail {
     const NL = s.layers;
     // adjacent layers: one turn faces one turn (square stacking), mean turn length of the pair
     const rMid = s.meanRadius;
-    const cPrime = turnToTurnCapacitancePerLength(d, od, s.radialPitch);
+    const cPrime = turnToTurnCapacitancePerLength(d, od, Math.max(s.radialPitch, od));
     const Cll = s.turnsPerLayer * cPrime * 2 * Math.PI * rMid;
     const internal = ((4 * (NL - 1)) / (3 * NL * NL)) * Cll;
     const external = medhurst(s.windingHeight, 2 * s.outerRadius, warnings);
@@ -154,7 +164,10 @@ export function selfCapacitanceDetail(coil: Coil): SelfCapacitanceDetail {
     return { value: internal + external, model: "multilayer", external, internal, warnings };
   }
   // flat spirals, rectangular spirals, loops, custom coils: inter-turn estimate + Medhurst at ℓ/D = 0.1
-  const radii = coil.filaments.map((f) => (f.kind === "circle" ? f.radius : equivalentRadius(f.points)));
+  const radii =
+    s?.kind === "flatSpiral"
+      ? Array.from({ length: Math.max(1, Math.round(s.turns)) }, (_, i) => s.innerRadius + s.conductorWidth / 2 + (i + 0.5) * s.pitch)
+      : coil.filaments.map((f) => (f.kind === "circle" ? f.radius : equivalentRadius(f.points)));
   const sorted = [...radii].sort((a, b) => a - b);
   const outer = sorted[sorted.length - 1] ?? 0;
   if (!(outer > 0)) {
@@ -169,7 +182,7 @@ export function selfCapacitanceDetail(coil: Coil): SelfCapacitanceDetail {
     const rMid = (sorted[i]! + sorted[i - 1]!) / 2;
     const cPrime = isTrace && coil.conductor.kind === "trace"
       ? coplanarStripCapacitancePerLength(coil.conductor.width, Math.max(pitch - coil.conductor.width, 1e-6))
-      : turnToTurnCapacitancePerLength(d, od, pitch);
+      : turnToTurnCapacitancePerLength(d, od, Math.max(pitch, od));
     internal += (cPrime * 2 * Math.PI * rMid) / (N * N);
   }
   const external = 0.96 * 2 * outer * 1e-10; // Medhurst H at ℓ/D = 0.1, D = outer diameter

@@ -88,6 +88,11 @@ describe("selfCapacitance(coil) — multi-layer and flat spirals", () => {
     const Cll = 20 * turnToTurnCapacitancePerLength(0.1e-3, 0.12e-3, tok.shape.radialPitch) * 2 * Math.PI * 0.006;
     expectRelClose(det.internal, ((4 * 2) / 27) * Cll, 1e-12, "energy method");
     expect(det.warnings.join(" ")).toMatch(/±50 %/);
+    // a bare wire (no insulation given) gets an assumed film, and says so
+    const bare = roundCoil({ meanRadius: 0.006, turns: 60, layers: 3, wire: roundWire(0.1e-3) });
+    const bd = selfCapacitanceDetail(bare);
+    expect(bd.warnings.join(" ")).toMatch(/without insulation/);
+    expect(bd.value).toBeLessThan(100e-12);
     // trade practice (no source): small multi-layer token coils show tens of pF and resonate at a few MHz
     expect(det.value).toBeGreaterThan(5e-12);
     expect(det.value).toBeLessThan(100e-12);

@@ -36,16 +36,36 @@ export interface CoilResistanceDetail {
   readonly warnings: readonly string[];
 }
 
-const fieldCache = new WeakMap<Coil, TurnFields>();
+/** The per-turn field and per-turn conductor lengths the proximity sum needs. */
+interface ProximityGeometry {
+  readonly fields: TurnFields;
+  /** conductor length of each entry of fields, m */
+  readonly lengths: Float64Array;
+}
 
-/** Per-ampere field at each turn, cached per coil object (coils are immutable plain data). */
-export function cachedTurnFields(coil: Coil): TurnFields {
-  let t = fieldCache.get(coil);
-  if (!t) {
-    t = turnFieldsPerAmpere(equivalentCircleCoil(coil));
-    fieldCache.set(coil, t);
+const geometryCache = new WeakMap<Coil, ProximityGeometry>();
+
+/**
+ * Per-ampere field at each turn and each turn's conductor length, cached per coil object (coils
+ * are immutable plain data). A flat spiral built as one spiral polygon (`model: "spiral"`) is
+ * represented by its rings (turn i at r₀ + (i + ½)p, as the builder's "rings" model), since one
+ * filament carries no turn-to-turn proximity; other polygon turns by circles of equal area.
+ */
+export function proximityGeometry(coil: Coil): ProximityGeometry {
+  let g = geometryCache.get(coil);
+  if (g) return g;
+  const s = coil.shape;
+  if (s?.kind === "flatSpiral" && coil.filaments.some((f) => f.kind === "path")) {
+    const r0 = s.innerRadius + s.conductorWidth / 2;
+    const N = Math.max(1, Math.round(s.turns));
+    const rings: Filament[] = Array.from({ length: N }, (_, i) => ({ kind: "circle", center: [0, 0, 0], axis: [0, 0, 1], radius: r0 + (i + 0.5) * s.pitch, turns: 1 }));
+    const ringCoil: Coil = { ...coil, filaments: rings };
+    g = { fields: turnFieldsPerAmpere(ringCoil), lengths: filamentLengths(ringCoil) };
+  } else {
+    g = { fields: turnFieldsPerAmpere(equivalentCircleCoil(coil)), lengths: filamentLengths(coil) };
   }
-  return t;
+  geometryCache.set(coil, g);
+  return g;
 }
 
 /**
@@ -127,13 +147,17 @@ export function coilResistanceDetail(coil: Coil, f: number, opts: CoilResistance
   const warnings: string[] = [];
   const len = coil.wireLength;
   let dc: number, skin: number, proximity = 0;
-  const needField = f > 0;
-  const fields = needField ? cachedTurnFields(coil) : undefined;
+  const geo = f > 0 ? proximityGeometry(coil) : undefined;
+  const fields = geo?.fields;
+  const lengths = geo?.lengths ?? new Float64Array(0);
   if (fields) for (const w of fields.warnings) warnings.push(w);
   if (fields && coil.filaments.some((fl) => fl.kind === "path")) {
-    warnings.push("polygon turns: the proximity field is computed for circles of equal area (approximation)");
+    warnings.push(
+      coil.shape?.kind === "flatSpiral"
+        ? "spiral polygon: the proximity field is computed for the spiral's rings (approximation)"
+        : "polygon turns: the proximity field is computed for circles of equal area (approximation)",
+    );
   }
-  const lengths = filamentLengths(coil);
   switch (c.kind) {
     case "round": {
       requirePositive(c.diameter, "coil.conductor.diameter", "m", "coilResistance");
@@ -179,8 +203,13 @@ export function coilResistanceDetail(coil: Coil, f: number, opts: CoilResistance
     }
   }
   if (f > 0 && !(opts as { skipSelfResonance?: boolean }).skipSelfResonance) {
-    const w = selfResonanceWarning(coil, f);
-    if (w) warnings.push(w);
+    try {
+      const w = selfResonanceWarning(coil, f);
+      if (w) warnings.push(w);
+    } catch (e) {
+      if (!(e instanceof TanklightInputError)) throw e;
+      warnings.push(`self-resonance could not be estimated for this coil (${e.message}); the f_sr/3 check was skipped`);
+    }
   }
   return { dc, skin, proximity, total: dc + skin + proximity, frequency: f, temperature, warnings };
 }

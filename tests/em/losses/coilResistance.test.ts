@@ -70,6 +70,20 @@ describe("coilResistance(coil, f, { temperature? })", () => {
     expect(coilResistanceDetail(spiral, 1e6).warnings.join(" ")).toMatch(/overstates the loss/);
   });
 
+  it("a flat spiral built as one spiral polygon gets the same resistance as its rings model (1 %)", () => {
+    // independent method: the two filament models of flatSpiral describe the same winding; the
+    // wire lengths agree exactly (both the spiral arc length) and the proximity field is taken on
+    // the rings in both, so only the warning differs. 1 %: the rings' per-turn lengths 2πr̄ sum to
+    // the arc length only to second order in p/r.
+    const wire = roundWire(0.5e-3, { insulation: 25e-6 });
+    const rings = flatSpiral({ outerRadius: 0.04, turns: 12, pitch: 2e-3, wire });
+    const poly = flatSpiral({ outerRadius: 0.04, turns: 12, pitch: 2e-3, wire, model: "spiral" });
+    const a = coilResistanceDetail(rings, 200e3);
+    const b = coilResistanceDetail(poly, 200e3);
+    expectRelClose(b.total, a.total, 0.01, "spiral vs rings");
+    expect(b.warnings.join(" ")).toMatch(/spiral's rings/);
+  });
+
   it("rejects bad input", () => {
     expect(() => coilResistance(tx, -1)).toThrow(TanklightInputError);
     expect(() => coilResistance(tx, 1e5, { temperature: 20 })).toThrow(/kelvin/);
