@@ -141,6 +141,19 @@ function caseHint(text: string): string | undefined {
   return `units are case-sensitive: ${hits.map((u) => `'${u}'`).join(" or ")}?`;
 }
 
+/** "4.7n F" → "write the prefix with its unit: '4.7 nF'?" when joining them gives a known unit. */
+function separatedPrefixHint(mantissa: string, exponent: string | undefined, unitText: string): string | undefined {
+  const m = /^(da|[qryzafpnumkhMGTPEZYRQ]) (\S+)$/.exec(unitText);
+  if (m === null) return undefined;
+  const joined = `${m[1]}${m[2]}`;
+  try {
+    math().unit(joined);
+  } catch {
+    return undefined;
+  }
+  return `write the prefix with its unit: '${mantissa}${exponent === undefined ? "" : "e" + exponent} ${joined}'?`;
+}
+
 /** Dimensionless unit words mathjs lacks, with their factor (exact by definition). */
 const PLAIN_FACTORS: Readonly<Record<string, number>> = { "%": 0.01, ppm: 1e-6 };
 
@@ -158,7 +171,8 @@ function normalizeUnitText(text: string): string {
     .replace(/\u00B0/g, "deg")
     .replace(/\u00B2/g, "^2")
     .replace(/\u00B3/g, "^3")
-    .replace(/[\u00B7\u22C5]/g, " "); // middle dot, dot operator → product
+    .replace(/[\u00B7\u22C5]/g, " ") // middle dot, dot operator → product
+    .replace(/\s+/g, " "); // no-break, thin and other Unicode spaces → one space
 }
 
 /** Build the one error parseQuantity throws. */
@@ -254,7 +268,7 @@ export function parseQuantity(value: QuantityInput, dimension: Dimension, field?
     try {
       u = math().unit(unitText);
     } catch {
-      const hint = caseHint(unitText);
+      const hint = caseHint(unitText) ?? separatedPrefixHint(mantissa, match[2], unitText);
       throw quantityError(field, value, dimension, expectation(dimension), `unknown unit '${unitText}'${hint === undefined ? "" : "; " + hint}`);
     }
     const found = dimensionOf(u);

@@ -107,7 +107,7 @@ describe("parseInput", () => {
       extra: 1,
     };
     expect(() => parseInput(CoilInput, bad, "roundCoil")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: roundCoil: coil.radius: expected a length like '12 mm', got '5 kHz' (a frequency); coil.turns: expected number to be >0, got 0; frequency: must be > 0 Hz, got -3; position[2]: expected a length like '12 mm' (a finite number), got Infinity; tuning: expected a capacitance like '4.7 nF', got '4.7n F' (unknown unit 'n F'); extra: unknown field, got 1]`,
+      `[TanklightInputError: roundCoil: coil.radius: expected a length like '12 mm', got '5 kHz' (a frequency); coil.turns: expected number to be >0, got 0; frequency: must be > 0 Hz, got -3; position[2]: expected a length like '12 mm' (a finite number), got Infinity; tuning: expected a capacitance like '4.7 nF', got '4.7n F' (unknown unit 'n F'; write the prefix with its unit: '4.7 nF'?); extra: unknown field, got 1]`,
     );
     try {
       parseInput(CoilInput, bad, "roundCoil");

@@ -94,6 +94,12 @@ describe("parseQuantity: strings with units", () => {
     expect(parseQuantity("0.25 rad", "angle")).toBe(0.25);
   });
 
+  it("accepts no-break, thin and narrow no-break spaces between number and unit", () => {
+    expect(parseQuantity("12\u00A0mm", "length")).toBe(0.012);
+    expect(parseQuantity("12\u2009mm", "length")).toBe(0.012);
+    expect(parseQuantity("1.72e-8\u202FΩ\u00A0m", "resistivity")).toBe(1.72e-8);
+  });
+
   it("accepts huge and tiny values that stay finite and nonzero", () => {
     expect(parseQuantity("1e300 m", "length")).toBe(1e300);
     expect(parseQuantity("1e-30 F", "capacitance")).toBe(1e-30);
@@ -142,7 +148,7 @@ describe("parseQuantity: rejected strings", () => {
       `[TanklightInputError: r: expected a length like '12 mm', got '5 furlongs' (unknown unit 'furlongs')]`,
     );
     expect(() => parseQuantity("4.7n F", "capacitance", "c")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: c: expected a capacitance like '4.7 nF', got '4.7n F' (unknown unit 'n F')]`,
+      `[TanklightInputError: c: expected a capacitance like '4.7 nF', got '4.7n F' (unknown unit 'n F'; write the prefix with its unit: '4.7 nF'?)]`,
     );
     expect(() => parseQuantity("mm", "length", "r")).toThrow(TanklightInputError);
     expect(() => parseQuantity("NaN mm", "length", "r")).toThrow(TanklightInputError);
