@@ -161,6 +161,30 @@ export {
 export type { DiodeModel } from "./circuit/types.ts";
 // parts and loads (tanks, E-series, dielectrics, LEDs, token loads)
 export {
+  resonantCapacitance,
+  resonantFrequency,
+  tankQuality,
+  tankBandwidth,
+  detuningTolerance,
+  type TankLosses,
+  type TankQuality,
+  type DetuningWindow,
+} from "./circuit/tank.ts";
+export { standardValues, standardValuesBetween, nearestStandardValue, SERIES_TOLERANCE, type ESeries } from "./circuit/eseries.ts";
+export { bestCombination, type Combination, type CombinationOptions, type CombinationTopology, type PartKind } from "./circuit/combination.ts";
+export { resonantFrequencyWindow, type ToleranceInput, type FrequencyWindow } from "./circuit/tolerance.ts";
+export { capacitorStress, HIGH_VOLTAGE_CAUTION, type CapacitorStress, type CapacitorStressInput } from "./circuit/stress.ts";
+export {
+  DIELECTRICS,
+  VOLTAGE_RATINGS,
+  dielectric,
+  esrFromDissipationFactor,
+  recommendCapacitor,
+  type Dielectric,
+  type DielectricData,
+  type CapacitorRecommendation,
+} from "./circuit/dielectrics.ts";
+export {
   led,
   diode,
   fitShockley,
