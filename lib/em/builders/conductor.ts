@@ -7,6 +7,7 @@ import { TanklightInputError } from "../../errors.ts";
 import { length } from "../../schema.ts";
 import { parseQuantity } from "../../units.ts";
 import { awgDiameter } from "../classicFormulas.ts";
+import { MATERIALS } from "../materials.ts";
 import type { Conductor } from "../types.ts";
 import { IssueList, isPositiveInteger, metres } from "./common.ts";
 
@@ -54,6 +55,15 @@ export function copperWeightThickness(ounces: number): number {
     );
   }
   return (ounces * OUNCE) / (SQUARE_FOOT * COPPER_DENSITY);
+}
+
+/** Record an issue unless `name` is a material of lib/em/materials.ts (case-insensitive); returns the name or "copper". */
+function checkMaterial(issues: IssueList, name: string | undefined, path: string): string {
+  if (name === undefined) return "copper";
+  if (typeof name !== "string" || !Object.hasOwn(MATERIALS, name.toLowerCase())) {
+    issues.add(path, `is not a known material (known: ${Object.keys(MATERIALS).join(", ")})`, name);
+  }
+  return name;
 }
 
 function readLength(issues: IssueList, value: unknown, path: string, rule: "positive" | "nonNegative"): number | undefined {
@@ -110,8 +120,9 @@ export function roundWire(diameter: LengthInput, opts: RoundWireOptions = {}): R
   const issues = new IssueList("roundWire");
   const d = readLength(issues, diameter, "diameter", "positive");
   const od = outerOf(issues, d, opts, "");
+  const mat = checkMaterial(issues, opts.material, "material");
   issues.throwIfAny();
-  return { kind: "round", diameter: d!, outerDiameter: od!, material: opts.material ?? "copper" };
+  return { kind: "round", diameter: d!, outerDiameter: od!, material: mat };
 }
 
 /**
@@ -125,8 +136,9 @@ export function awgWire(gauge: number | string, opts: RoundWireOptions = {}): Ro
   const d = awgDiameter(gauge);
   const issues = new IssueList("awgWire");
   const od = outerOf(issues, d, opts, "");
+  const mat = checkMaterial(issues, opts.material, "material");
   issues.throwIfAny();
-  return { kind: "round", diameter: d, outerDiameter: od!, material: opts.material ?? "copper" };
+  return { kind: "round", diameter: d, outerDiameter: od!, material: mat };
 }
 
 /** Options of {@link litzWire}. */
@@ -171,8 +183,9 @@ export function litzWire(strands: number, strandDiameter: LengthInput, opts: Lit
   if (od !== undefined && ds !== undefined && isPositiveInteger(strands) && od < ds * Math.sqrt(strands)) {
     issues.add("outerDiameter", `is too small to hold ${strands} strands of ${metres(ds)}`, opts.outerDiameter, `≥ ${metres(ds * Math.sqrt(strands))}`);
   }
+  const mat = checkMaterial(issues, opts.material, "material");
   issues.throwIfAny();
-  return { kind: "litz", strands, strandDiameter: ds!, outerDiameter: od!, material: opts.material ?? "copper" };
+  return { kind: "litz", strands, strandDiameter: ds!, outerDiameter: od!, material: mat };
 }
 
 /**
@@ -194,8 +207,9 @@ export function pcbTrace(width: LengthInput, thickness: LengthInput, opts: { rea
   } else {
     t = readLength(issues, thickness, "thickness", "positive");
   }
+  const mat = checkMaterial(issues, opts.material, "material");
   issues.throwIfAny();
-  return { kind: "trace", width: w!, thickness: t!, material: opts.material ?? "copper" };
+  return { kind: "trace", width: w!, thickness: t!, material: mat };
 }
 
 /** Width a conductor occupies in a winding (outer diameter of wire or litz, width of a trace), m. */
@@ -263,7 +277,8 @@ export function resolveConductor(f: ConductorFields, issues: IssueList, allowTra
     issues.add(given.length === 0 ? "wire" : given.join("/"), `give exactly one of ${options}`, given.length === 0 ? undefined : given.join(", "));
     return undefined;
   }
-  const material = (m: string | undefined): string => m ?? "copper";
+  const field = given[0]!;
+  const material = (m: string | undefined): string => checkMaterial(issues, m, `${field}.material`);
   if (f.trace !== undefined) {
     if (!allowTrace) {
       issues.add("trace", "a wound coil takes wire or awg, not a PCB trace", f.trace);

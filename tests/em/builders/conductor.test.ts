@@ -62,3 +62,11 @@ describe("pcbTrace and copper weight", () => {
     expectTypeOf(pcbTrace).parameter(1).toEqualTypeOf<number | string>();
   });
 });
+
+describe("materials", () => {
+  it("accept the materials of lib/em/materials.ts and name an unknown one", () => {
+    expect(roundWire("0.5 mm", { material: "aluminium" }).material).toBe("aluminium");
+    expect(() => roundWire("0.5 mm", { material: "unobtainium" })).toThrow(/material: is not a known material/);
+    expect(() => pcbTrace("0.5 mm", "1 oz", { material: "gold?" })).toThrow(/material/);
+  });
+});

@@ -1,4 +1,5 @@
 import { describe, expect, expectTypeOf, it } from "vitest";
+import fc from "fast-check";
 import { roundCoil, type RoundCoil } from "../../../lib/em/builders/roundCoil.ts";
 import { awgWire, litzWire } from "../../../lib/em/builders/conductor.ts";
 import { TanklightInputError } from "../../../lib/errors.ts";
@@ -129,5 +130,38 @@ describe("roundCoil types", () => {
     expectTypeOf(roundCoil).returns.toEqualTypeOf<RoundCoil>();
     expectTypeOf<RoundCoil["shape"]["turnsPerLayer"]>().toEqualTypeOf<number>();
     expectTypeOf(roundCoil).parameter(0).toHaveProperty("innerRadius").toEqualTypeOf<number | string | undefined>();
+  });
+});
+
+describe("roundCoil properties (fast-check)", () => {
+  it("for any valid winding: turn count, window containment, spacing ≥ d_o, wire length ≥ Σ 2πr", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1e-3, max: 0.1, noNaN: true }),
+        fc.integer({ min: 1, max: 60 }),
+        fc.integer({ min: 1, max: 8 }),
+        fc.double({ min: 5e-5, max: 2e-3, noNaN: true }),
+        fc.double({ min: 1, max: 2, noNaN: true }),
+        (inner, turns, layersWanted, od, pitchFactor) => {
+          const layers = Math.min(layersWanted, turns);
+          const tpl = Math.ceil(turns / layers);
+          fc.pre((layers - 1) * tpl < turns); // no empty layer (that input is an error, tested above)
+          fc.pre(inner >= od / 2);
+          const c = roundCoil({ innerRadius: inner, turns, layers, wire: { diameter: od }, pitch: od * pitchFactor });
+          expect(c.filaments).toHaveLength(turns);
+          const s = c.shape;
+          let flat = 0;
+          for (const f of circles(c)) {
+            expect(f.radius - od / 2).toBeGreaterThanOrEqual(s.innerRadius * (1 - 1e-12));
+            expect(f.radius + od / 2).toBeLessThanOrEqual(s.outerRadius * (1 + 1e-12));
+            expect(Math.abs(f.center[2]) + od / 2).toBeLessThanOrEqual((s.windingHeight / 2) * (1 + 1e-12));
+            flat += 2 * Math.PI * f.radius;
+          }
+          expect(c.wireLength).toBeGreaterThanOrEqual(flat);
+          expect(c.wireLength).toBeLessThanOrEqual(flat * (1 + ((2 * od) / (2 * Math.PI * inner)) ** 2));
+        },
+      ),
+      { numRuns: 200 },
+    );
   });
 });
