@@ -1,4 +1,5 @@
 import { describe, expect, expectTypeOf, it } from "vitest";
+import fc from "fast-check";
 import { flatSpiral, type FlatSpiral } from "../../../lib/em/builders/flatSpiral.ts";
 import { archimedeanArcLength, polygonPerimeter } from "../../../lib/em/builders/common.ts";
 import { integrateAdaptive } from "../../../lib/math/quadrature.ts";
@@ -76,5 +77,37 @@ describe("archimedeanArcLength", () => {
     // pitch → 0: N turns between r0 and r1 → Σ 2πr ≈ 2π·N·(r0 + r1)/2
     expectRelClose(archimedeanArcLength(0.01, 0.01001, 1e-6), 10 * 2 * Math.PI * 0.010005, 1e-9, "tiny pitch");
     expectRelClose(archimedeanArcLength(0.01, 0.03, 1e-3), archimedeanArcLength(0.01, 0.02, 1e-3) + archimedeanArcLength(0.02, 0.03, 1e-3), 1e-14, "additive");
+  });
+});
+
+describe("flatSpiral properties (fast-check)", () => {
+  it("rings lie between the edges, one pitch apart; wire length lies between N·2π·r_mean and the same plus the pitch terms", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1e-3, max: 0.05, noNaN: true }),
+        fc.integer({ min: 1, max: 40 }),
+        fc.double({ min: 1e-4, max: 2e-3, noNaN: true }),
+        fc.double({ min: 0.2, max: 1, noNaN: true }),
+        (inner, turns, pitch, fill) => {
+          const w = pitch * fill;
+          fc.pre(inner >= w / 2);
+          const s = flatSpiral({ innerRadius: inner, turns, pitch, trace: { width: w, thickness: 35e-6 } });
+          const cs = s.filaments as Circle[];
+          expect(cs).toHaveLength(turns);
+          cs.forEach((c, i) => {
+            expect(c.radius - w / 2).toBeGreaterThanOrEqual(s.shape.innerRadius * (1 - 1e-12));
+            expect(c.radius + w / 2).toBeLessThanOrEqual(s.shape.outerRadius * (1 + 1e-12));
+            if (i > 0) expectRelClose(c.radius - cs[i - 1]!.radius, pitch, 1e-9, "ring spacing");
+          });
+          // ∫√(r² + b²)dθ ≥ ∫r dθ = N·2π·r_mean, and ≤ ∫(r + b²/(2r))dθ
+          const mean = 2 * Math.PI * turns * s.shape.meanRadius;
+          const b = pitch / (2 * Math.PI);
+          const r0 = inner + w / 2;
+          expect(s.wireLength).toBeGreaterThanOrEqual(mean * (1 - 1e-12));
+          expect(s.wireLength).toBeLessThanOrEqual(mean + (b * b / (2 * r0)) * 2 * Math.PI * turns * (1 + 1e-9));
+        },
+      ),
+      { numRuns: 200 },
+    );
   });
 });
