@@ -147,7 +147,7 @@ function checkX(x: number, where: string, max: number): void {
  * @param x argument, ≥ 0 (dimensionless), finite.
  * @returns the scaled values (dimensionless).
  * @example kelvinScaled(0).ber // → 1
- * @example kelvinScaled(2000).ber // → finite (≈ 6e-3 in modulus with bei)
+ * @example kelvinScaled(2000).ber // → finite; |ber + i bei|·e^{−x/√2} ≈ 1/√(2πx) = 8.9e-3
  * @see kelvin for the unscaled values; A&S 1964 §9.9–9.10.
  */
 export function kelvinScaled(x: number): KelvinValues {
