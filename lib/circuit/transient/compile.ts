@@ -1,0 +1,352 @@
+/**
+ * Checks a `TransientCircuit` and compiles it into index arrays for the engine: node numbers,
+ * branch-current numbers (voltage sources and inductors, the extra unknowns of modified
+ * nodal analysis, Ho, Ruehli & Brennan 1975), the inductance matrix with its mutual terms,
+ * and the topology checks: a floating node (no path to ground except through current
+ * sources), a loop of voltage sources, an inductance matrix that is not positive definite.
+ * Each error names the elements involved.
+ */
+
+import { TanklightInputError, type InputIssue } from "../../errors.ts";
+import type { DiodeModel } from "../types.ts";
+import { elementNodes, GROUND, type CircuitElement, type TransientCircuit, type Waveform } from "./circuit.ts";
+
+const WHERE = "simulate";
+
+/** Default off-state resistance of a switch, Ω. */
+export const DEFAULT_SWITCH_OFF_RESISTANCE = 1e6;
+
+/** The circuit as index arrays (node index −1 is ground). */
+export interface CompiledCircuit {
+  readonly nodeNames: readonly string[];
+  readonly nodeIndex: ReadonlyMap<string, number>;
+  /** node count (without ground) + branch count */
+  readonly size: number;
+  readonly resistors: { readonly name: string; readonly a: number; readonly b: number; readonly g: number }[];
+  readonly capacitors: { readonly name: string; readonly a: number; readonly b: number; readonly c: number; readonly v0: number }[];
+  /** `row` is the unknown holding the branch current; `l` is row of the inductance matrix (H) */
+  readonly inductors: { readonly name: string; readonly a: number; readonly b: number; readonly row: number; readonly r: number; readonly i0: number; readonly l: Float64Array }[];
+  readonly voltageSources: { readonly name: string; readonly a: number; readonly b: number; readonly row: number; readonly waveform: Waveform }[];
+  readonly currentSources: { readonly name: string; readonly from: number; readonly to: number; readonly waveform: Waveform }[];
+  readonly switches: { readonly name: string; readonly a: number; readonly b: number; readonly gOn: number; readonly gOff: number; readonly closed: (t: number) => boolean }[];
+  readonly diodes: { readonly name: string; readonly a: number; readonly b: number; readonly model: DiodeModel }[];
+  /** elements attached to each node (for error messages), by node index */
+  readonly attached: readonly (readonly string[])[];
+  /** names of the unknowns: node names, then "current of <element>" */
+  readonly unknownNames: readonly string[];
+}
+
+function fail(issues: InputIssue[]): never {
+  throw new TanklightInputError(issues, WHERE);
+}
+
+function positive(x: unknown, path: string, unit: string, issues: InputIssue[]): number {
+  if (typeof x !== "number" || !Number.isFinite(x) || x <= 0) {
+    issues.push({ path, message: `must be a finite number > 0 ${unit}`, value: x, expected: `> 0 ${unit}` });
+    return 1;
+  }
+  return x;
+}
+
+function finiteOr(x: unknown, dflt: number, path: string, unit: string, issues: InputIssue[]): number {
+  if (x === undefined) return dflt;
+  if (typeof x !== "number" || !Number.isFinite(x)) {
+    issues.push({ path, message: `must be a finite number in ${unit}`, value: x, expected: `finite ${unit}` });
+    return dflt;
+  }
+  return x;
+}
+
+/** Union–find over node names. */
+class Components {
+  private parent = new Map<string, string>();
+  find(x: string): string {
+    let p = this.parent.get(x) ?? x;
+    if (p === x) return x;
+    p = this.find(p);
+    this.parent.set(x, p);
+    return p;
+  }
+  union(a: string, b: string): boolean {
+    const ra = this.find(a);
+    const rb = this.find(b);
+    if (ra === rb) return false;
+    this.parent.set(ra, rb);
+    return true;
+  }
+}
+
+/** The elements on the path from `from` to `to` through the given edges (breadth-first). */
+function pathThrough(edges: readonly { name: string; a: string; b: string }[], from: string, to: string): string[] {
+  const prev = new Map<string, { node: string; edge: string }>();
+  const seen = new Set([from]);
+  const queue = [from];
+  while (queue.length > 0) {
+    const n = queue.shift()!;
+    if (n === to) break;
+    for (const e of edges) {
+      const other = e.a === n ? e.b : e.b === n ? e.a : undefined;
+      if (other !== undefined && !seen.has(other)) {
+        seen.add(other);
+        prev.set(other, { node: n, edge: e.name });
+        queue.push(other);
+      }
+    }
+  }
+  const out: string[] = [];
+  let n = to;
+  while (n !== from) {
+    const p = prev.get(n);
+    if (!p) break;
+    out.push(p.edge);
+    n = p.node;
+  }
+  return out.reverse();
+}
+
+/** Validates and compiles a circuit; throws TanklightInputError naming the elements at fault. */
+export function compileCircuit(circuit: TransientCircuit): CompiledCircuit {
+  const issues: InputIssue[] = [];
+  if (!circuit || !Array.isArray(circuit.elements) || circuit.elements.length === 0) {
+    fail([{ path: "circuit.elements", message: "must be a non-empty array of elements", value: circuit?.elements }]);
+  }
+  const elements = circuit.elements as readonly CircuitElement[];
+  const names = new Set<string>();
+  elements.forEach((e, i) => {
+    const path = `circuit.elements[${i}]`;
+    if (typeof e?.name !== "string" || e.name === "") {
+      issues.push({ path: `${path}.name`, message: "must be a non-empty string", value: e?.name });
+    } else if (names.has(e.name)) {
+      issues.push({ path: `${path}.name`, message: "duplicates another element's name", value: e.name });
+    } else names.add(e.name);
+    const kinds = ["resistor", "capacitor", "inductor", "coupling", "voltageSource", "currentSource", "switch", "diode"];
+    if (!kinds.includes(e?.kind)) {
+      issues.push({ path: `${path}.kind`, message: `must be one of ${kinds.join(", ")}`, value: e?.kind });
+      return;
+    }
+    for (const n of elementNodes(e)) {
+      if (typeof n !== "string" || n === "") issues.push({ path: `${path} (${e.name})`, message: "terminal node names must be non-empty strings", value: n });
+    }
+  });
+  if (issues.length) fail(issues);
+
+  // node numbering, in order of first appearance
+  const nodeIndex = new Map<string, number>([[GROUND, -1]]);
+  const nodeNames: string[] = [];
+  const attachedLists: string[][] = [];
+  for (const e of elements) {
+    for (const n of elementNodes(e)) {
+      if (!nodeIndex.has(n)) {
+        nodeIndex.set(n, nodeNames.length);
+        nodeNames.push(n);
+        attachedLists.push([]);
+      }
+      const k = nodeIndex.get(n)!;
+      if (k >= 0 && !attachedLists[k]!.includes(e.name)) attachedLists[k]!.push(e.name);
+    }
+  }
+  if (nodeNames.length === 0) fail([{ path: "circuit.elements", message: `no node other than "${GROUND}"`, value: elements.map((e) => e.name) }]);
+  const idx = (n: string) => nodeIndex.get(n)!;
+
+  // topology: floating nodes (components without ground, ignoring current sources)
+  const comp = new Components();
+  for (const e of elements) {
+    if (e.kind === "coupling" || e.kind === "currentSource") continue;
+    const [a, b] = elementNodes(e) as [string, string];
+    comp.union(a, b);
+  }
+  const groundRoot = comp.find(GROUND);
+  const floating = nodeNames.filter((n) => comp.find(n) !== groundRoot);
+  if (floating.length) {
+    const attachedTo = [...new Set(floating.flatMap((n) => attachedLists[idx(n)]!))];
+    fail([
+      {
+        path: "circuit",
+        message:
+          `floating node${floating.length > 1 ? "s" : ""} ${floating.map((n) => `"${n}"`).join(", ")}: no path to "${GROUND}" ` +
+          `except through current sources; elements attached: ${attachedTo.join(", ")}`,
+        value: floating,
+        expected: `every node connected to "${GROUND}" through resistors, capacitors, inductors, switches, diodes or voltage sources`,
+      },
+    ]);
+  }
+
+  // topology: loops of voltage sources
+  const vsComp = new Components();
+  const vsEdges: { name: string; a: string; b: string }[] = [];
+  for (const e of elements) {
+    if (e.kind !== "voltageSource") continue;
+    if (!vsComp.union(e.plus, e.minus)) {
+      const loop = [...pathThrough(vsEdges, e.plus, e.minus), e.name];
+      fail([
+        {
+          path: "circuit",
+          message: `loop of voltage sources: ${loop.join(", ")} (their voltages cannot all be imposed; add a resistance in the loop)`,
+          value: loop,
+        },
+      ]);
+    }
+    vsEdges.push({ name: e.name, a: e.plus, b: e.minus });
+  }
+
+  // element data
+  const nNodes = nodeNames.length;
+  let row = nNodes;
+  const unknownNames: string[] = [...nodeNames];
+  const resistors: CompiledCircuit["resistors"] = [];
+  const capacitors: CompiledCircuit["capacitors"] = [];
+  const inductors: { name: string; a: number; b: number; row: number; r: number; i0: number; l: Float64Array; L: number }[] = [];
+  const voltageSources: CompiledCircuit["voltageSources"] = [];
+  const currentSources: CompiledCircuit["currentSources"] = [];
+  const switches: CompiledCircuit["switches"] = [];
+  const diodes: CompiledCircuit["diodes"] = [];
+  const couplings: { name: string; path: string; pair: readonly [string, string]; k?: number; m?: number }[] = [];
+  elements.forEach((e, i) => {
+    const path = `circuit.elements[${i}] (${e.name})`;
+    switch (e.kind) {
+      case "resistor":
+        resistors.push({ name: e.name, a: idx(e.a), b: idx(e.b), g: 1 / positive(e.resistance, `${path}.resistance`, "Ω", issues) });
+        break;
+      case "capacitor":
+        capacitors.push({
+          name: e.name, a: idx(e.a), b: idx(e.b),
+          c: positive(e.capacitance, `${path}.capacitance`, "F", issues),
+          v0: finiteOr(e.initialVoltage, 0, `${path}.initialVoltage`, "V", issues),
+        });
+        break;
+      case "inductor": {
+        const r = finiteOr(e.resistance, 0, `${path}.resistance`, "Ω", issues);
+        if (r < 0) issues.push({ path: `${path}.resistance`, message: "must be ≥ 0 Ω", value: r, expected: "≥ 0 Ω" });
+        inductors.push({
+          name: e.name, a: idx(e.a), b: idx(e.b), row: row++, r,
+          i0: finiteOr(e.initialCurrent, 0, `${path}.initialCurrent`, "A", issues),
+          L: positive(e.inductance, `${path}.inductance`, "H", issues),
+          l: new Float64Array(0),
+        });
+        unknownNames.push(`current of ${e.name}`);
+        break;
+      }
+      case "coupling": {
+        const pair = e.inductors;
+        if (!Array.isArray(pair) || pair.length !== 2) {
+          issues.push({ path: `${path}.inductors`, message: "must name exactly two inductors", value: pair });
+          break;
+        }
+        const hasK = e.k !== undefined;
+        const hasM = e.mutualInductance !== undefined;
+        if (hasK === hasM) {
+          issues.push({ path, message: "give exactly one of k and mutualInductance", value: { k: e.k, mutualInductance: e.mutualInductance } });
+          break;
+        }
+        if (hasK) couplings.push({ name: e.name, path, pair, k: finiteOr(e.k, 0, `${path}.k`, "", issues) });
+        else couplings.push({ name: e.name, path, pair, m: finiteOr(e.mutualInductance, 0, `${path}.mutualInductance`, "H", issues) });
+        break;
+      }
+      case "voltageSource":
+        if (typeof e.waveform !== "function") issues.push({ path: `${path}.waveform`, message: "must be a function of time", value: e.waveform });
+        voltageSources.push({ name: e.name, a: idx(e.plus), b: idx(e.minus), row: row++, waveform: e.waveform });
+        unknownNames.push(`current of ${e.name}`);
+        break;
+      case "currentSource":
+        if (typeof e.waveform !== "function") issues.push({ path: `${path}.waveform`, message: "must be a function of time", value: e.waveform });
+        currentSources.push({ name: e.name, from: idx(e.from), to: idx(e.to), waveform: e.waveform });
+        break;
+      case "switch": {
+        if (typeof e.closed !== "function") issues.push({ path: `${path}.closed`, message: "must be a function of time returning a boolean", value: e.closed });
+        const ron = positive(e.onResistance, `${path}.onResistance`, "Ω", issues);
+        const roff = positive(e.offResistance ?? DEFAULT_SWITCH_OFF_RESISTANCE, `${path}.offResistance`, "Ω", issues);
+        if (roff <= ron) issues.push({ path: `${path}.offResistance`, message: "must exceed onResistance", value: roff, expected: `> ${ron} Ω` });
+        switches.push({ name: e.name, a: idx(e.a), b: idx(e.b), gOn: 1 / ron, gOff: 1 / roff, closed: e.closed });
+        break;
+      }
+      case "diode":
+        if (!e.model || typeof e.model.current !== "function" || typeof e.model.conductance !== "function") {
+          issues.push({ path: `${path}.model`, message: "must be a DiodeModel with current(v) and conductance(v)", value: e.model });
+        }
+        diodes.push({ name: e.name, a: idx(e.anode), b: idx(e.cathode), model: e.model });
+        break;
+    }
+  });
+  if (issues.length) fail(issues);
+
+  // inductance matrix with mutual terms
+  const nL = inductors.length;
+  const lm = new Float64Array(nL * nL);
+  inductors.forEach((ind, j) => (lm[j * nL + j] = ind.L));
+  const byName = new Map(inductors.map((ind, j) => [ind.name, j]));
+  const seenPairs = new Set<string>();
+  for (const c of couplings) {
+    const [p, q] = c.pair;
+    const jp = byName.get(p);
+    const jq = byName.get(q);
+    if (jp === undefined || jq === undefined) {
+      issues.push({ path: `${c.path}.inductors`, message: "must name two inductors of the circuit", value: c.pair });
+      continue;
+    }
+    if (jp === jq) {
+      issues.push({ path: `${c.path}.inductors`, message: "must name two different inductors", value: c.pair });
+      continue;
+    }
+    const key = jp < jq ? `${jp},${jq}` : `${jq},${jp}`;
+    if (seenPairs.has(key)) {
+      issues.push({ path: c.path, message: `couples ${p} and ${q} a second time`, value: c.name });
+      continue;
+    }
+    seenPairs.add(key);
+    const lp = lm[jp * nL + jp]!;
+    const lq = lm[jq * nL + jq]!;
+    const m = c.k !== undefined ? c.k * Math.sqrt(lp * lq) : c.m!;
+    const k = m / Math.sqrt(lp * lq);
+    if (!(Math.abs(k) < 1)) {
+      issues.push({ path: c.path, message: "coupling factor must satisfy |k| < 1", value: k, expected: "−1 < k < 1" });
+      continue;
+    }
+    lm[jp * nL + jq] = m;
+    lm[jq * nL + jp] = m;
+  }
+  if (issues.length) fail(issues);
+  if (nL > 1 && !choleskyOk(lm, nL)) {
+    fail([
+      {
+        path: "circuit",
+        message: `the couplings ${couplings.map((c) => c.name).join(", ")} give an inductance matrix that is not positive definite (stored magnetic energy could be negative)`,
+        value: couplings.map((c) => c.name),
+      },
+    ]);
+  }
+  const inductorsOut = inductors.map((ind, j) => ({
+    name: ind.name, a: ind.a, b: ind.b, row: ind.row, r: ind.r, i0: ind.i0,
+    l: lm.slice(j * nL, j * nL + nL),
+  }));
+
+  return {
+    nodeNames,
+    nodeIndex,
+    size: row,
+    resistors,
+    capacitors,
+    inductors: inductorsOut,
+    voltageSources,
+    currentSources,
+    switches,
+    diodes,
+    attached: attachedLists,
+    unknownNames,
+  };
+}
+
+/** True when the symmetric matrix is positive definite (Cholesky succeeds). */
+function choleskyOk(a: Float64Array, n: number): boolean {
+  const l = new Float64Array(n * n);
+  for (let i = 0; i < n; i++) {
+    for (let j = 0; j <= i; j++) {
+      let s = a[i * n + j]!;
+      for (let k = 0; k < j; k++) s -= l[i * n + k]! * l[j * n + k]!;
+      if (i === j) {
+        if (!(s > 0)) return false;
+        l[i * n + i] = Math.sqrt(s);
+      } else l[i * n + j] = s / l[j * n + j]!;
+    }
+  }
+  return true;
+}

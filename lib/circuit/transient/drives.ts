@@ -1,0 +1,197 @@
+/**
+ * Ready-made transmitter drive circuits for the time-domain engine: the single-switch drive
+ * (a switch to ground under the transmitter coil and its capacitor, fed from the supply — the
+ * common low-cost arrangement, in its parallel-tank and its class-E form) and the half and
+ * full bridge with a series-tuned transmitter. Each returns the circuit plus the names of the
+ * nodes and of the transmitter coil, so a token can be coupled to it (see token.ts).
+ *
+ * Size a class-E drive with `classEDesign` (lib/circuit/drive.ts, Sokal & Sokal 1975; Raab
+ * 1977) and pass its values here; this file only builds circuits.
+ */
+
+import { requirePositive, TanklightInputError } from "../../errors.ts";
+import { GROUND, type CircuitElement, type TransientCircuit } from "./circuit.ts";
+import { periodicGate, stepWaveform } from "./waveforms.ts";
+
+/** A drive circuit with the names a caller needs. */
+export interface DriveCircuit {
+  readonly circuit: TransientCircuit;
+  /** drive frequency, Hz */
+  readonly frequency: number;
+  /** name of the transmitter coil (an inductor element): couple tokens to it */
+  readonly coil: string;
+  /** node names: supply, the switch node(s), the transmitter coil's ends */
+  readonly nodes: Readonly<Record<string, string>>;
+  readonly warnings: readonly string[];
+}
+
+/** Default switch on-resistance, Ω (a small logic-level MOSFET, trade practice (no source)). */
+export const DEFAULT_ON_RESISTANCE = 0.05;
+
+/** Options of the single-switch drive. SI units. */
+export interface SingleSwitchDriveSpec {
+  /** supply voltage V_DD, V, > 0 */
+  readonly supply: number;
+  /** switching frequency, Hz, > 0 */
+  readonly frequency: number;
+  /** fraction of the period the switch is closed, 0 < duty < 1; default 0.5 */
+  readonly duty?: number;
+  /** transmitter coil inductance, H, > 0 */
+  readonly coilInductance: number;
+  /** transmitter coil series resistance, Ω, ≥ 0; default 0 */
+  readonly coilResistance?: number;
+  /**
+   * the transmitter tank capacitor, F, > 0: across the coil ("parallel-tank") or in series
+   * with it ("class-e")
+   */
+  readonly tankCapacitance: number;
+  /**
+   * "parallel-tank" (default): supply → coil ∥ capacitor → switch node → switch → ground.
+   * "class-e": supply → feed choke → switch node; shunt capacitor and switch to ground; series
+   * capacitor + coil (+ load resistance) from the switch node to ground (Sokal & Sokal 1975).
+   */
+  readonly arrangement?: "parallel-tank" | "class-e";
+  /** capacitance from the switch node to ground (switch output capacitance; class E: C₁), F ≥ 0 */
+  readonly shuntCapacitance?: number;
+  /** class-e feed choke, H; default 50 × coilInductance (large enough to carry near-DC current) */
+  readonly chokeInductance?: number;
+  /** extra series resistance in the coil branch (e.g. the reflected load), Ω ≥ 0; default 0 */
+  readonly loadResistance?: number;
+  /** switch on-resistance, Ω > 0; default 0.05 */
+  readonly onResistance?: number;
+  /** switch off-resistance, Ω; default 1 MΩ */
+  readonly offResistance?: number;
+}
+
+/**
+ * The single-switch drive with its transmitter tank as a circuit (switch closed from t = 0
+ * for duty·T of each period). Node names: "supply", "switch", and for class-e "coilTop"
+ * (between series capacitor and coil); the coil is the inductor "Ltx".
+ * @example singleSwitchDrive({ supply: 5, frequency: 200e3, coilInductance: 10e-6, tankCapacitance: 63e-9 }).coil // → "Ltx"
+ */
+export function singleSwitchDrive(spec: SingleSwitchDriveSpec): DriveCircuit {
+  const where = "singleSwitchDrive";
+  const supply = requirePositive(spec.supply, "supply", "V", where);
+  const f = requirePositive(spec.frequency, "frequency", "Hz", where);
+  const duty = spec.duty ?? 0.5;
+  const L = requirePositive(spec.coilInductance, "coilInductance", "H", where);
+  const C = requirePositive(spec.tankCapacitance, "tankCapacitance", "F", where);
+  const R = nonNegative(spec.coilResistance ?? 0, "coilResistance", "Ω", where);
+  const rLoad = nonNegative(spec.loadResistance ?? 0, "loadResistance", "Ω", where);
+  const cShunt = nonNegative(spec.shuntCapacitance ?? 0, "shuntCapacitance", "F", where);
+  const ron = requirePositive(spec.onResistance ?? DEFAULT_ON_RESISTANCE, "onResistance", "Ω", where);
+  const arrangement = spec.arrangement ?? "parallel-tank";
+  const warnings: string[] = [];
+  const gate = periodicGate({ frequency: f, duty });
+  const sw: CircuitElement = {
+    kind: "switch", name: "S1", a: "switch", b: GROUND, closed: gate, onResistance: ron,
+    ...(spec.offResistance !== undefined ? { offResistance: spec.offResistance } : {}),
+  };
+  const elements: CircuitElement[] = [
+    { kind: "voltageSource", name: "Vsupply", plus: "supply", minus: GROUND, waveform: stepWaveform(supply) },
+  ];
+  const nodes: Record<string, string> = { supply: "supply", switch: "switch" };
+  if (arrangement === "parallel-tank") {
+    elements.push(
+      { kind: "inductor", name: "Ltx", a: "supply", b: "switch", inductance: L, resistance: R + rLoad },
+      { kind: "capacitor", name: "Ctank", a: "supply", b: "switch", capacitance: C },
+      sw,
+    );
+    nodes.coilTop = "supply";
+    nodes.coilBottom = "switch";
+  } else if (arrangement === "class-e") {
+    const choke = requirePositive(spec.chokeInductance ?? 50 * L, "chokeInductance", "H", where);
+    elements.push(
+      { kind: "inductor", name: "Lchoke", a: "supply", b: "switch", inductance: choke },
+      sw,
+      { kind: "capacitor", name: "Cseries", a: "switch", b: "coilTop", capacitance: C },
+    );
+    if (rLoad > 0) {
+      elements.push(
+        { kind: "inductor", name: "Ltx", a: "coilTop", b: "load", inductance: L, resistance: R },
+        { kind: "resistor", name: "Rload", a: "load", b: GROUND, resistance: rLoad },
+      );
+      nodes.load = "load";
+    } else {
+      elements.push({ kind: "inductor", name: "Ltx", a: "coilTop", b: GROUND, inductance: L, resistance: R });
+    }
+    if (R + rLoad === 0) warnings.push("singleSwitchDrive: the class-E coil branch has no resistance; the drive will not settle");
+    nodes.coilTop = "coilTop";
+  } else {
+    throw new TanklightInputError([{ path: "arrangement", message: "must be 'parallel-tank' or 'class-e'", value: arrangement }], where);
+  }
+  if (cShunt > 0) elements.push({ kind: "capacitor", name: "Cshunt", a: "switch", b: GROUND, capacitance: cShunt });
+  return { circuit: { elements }, frequency: f, coil: "Ltx", nodes, warnings };
+}
+
+/** Options of the bridge drive. SI units. */
+export interface BridgeDriveSpec {
+  readonly supply: number;
+  readonly frequency: number;
+  /** "half": one leg, tank from its midpoint to ground; "full": two legs in antiphase, tank between them */
+  readonly bridge: "half" | "full";
+  readonly coilInductance: number;
+  readonly coilResistance?: number;
+  /** series tank capacitor, F > 0 (also blocks the half bridge's DC) */
+  readonly tankCapacitance: number;
+  readonly loadResistance?: number;
+  readonly onResistance?: number;
+  readonly offResistance?: number;
+}
+
+/**
+ * A half or full bridge (square wave, 50 % duty, complementary switches with no dead time)
+ * driving a series-tuned transmitter: leg midpoint(s) "midA" ("midB"), series capacitor to
+ * "coilTop", coil "Ltx" to ground (half) or to "midB" (full). No dead time is modelled, so no
+ * body diodes are needed; the fundamental of the leg voltage is 2V/π (half) or 4V/π (full,
+ * across the tank) — Fourier series of a square wave.
+ * @example bridgeDrive({ supply: 12, frequency: 200e3, bridge: "full", coilInductance: 10e-6, tankCapacitance: 63.3e-9 }).nodes.midB // → "midB"
+ */
+export function bridgeDrive(spec: BridgeDriveSpec): DriveCircuit {
+  const where = "bridgeDrive";
+  const supply = requirePositive(spec.supply, "supply", "V", where);
+  const f = requirePositive(spec.frequency, "frequency", "Hz", where);
+  const L = requirePositive(spec.coilInductance, "coilInductance", "H", where);
+  const C = requirePositive(spec.tankCapacitance, "tankCapacitance", "F", where);
+  const R = nonNegative(spec.coilResistance ?? 0, "coilResistance", "Ω", where);
+  const rLoad = nonNegative(spec.loadResistance ?? 0, "loadResistance", "Ω", where);
+  const ron = requirePositive(spec.onResistance ?? DEFAULT_ON_RESISTANCE, "onResistance", "Ω", where);
+  if (spec.bridge !== "half" && spec.bridge !== "full") {
+    throw new TanklightInputError([{ path: "bridge", message: "must be 'half' or 'full'", value: spec.bridge }], where);
+  }
+  const off = spec.offResistance !== undefined ? { offResistance: spec.offResistance } : {};
+  const high = periodicGate({ frequency: f, duty: 0.5 });
+  const low = periodicGate({ frequency: f, duty: 0.5, invert: true });
+  const elements: CircuitElement[] = [
+    { kind: "voltageSource", name: "Vsupply", plus: "supply", minus: GROUND, waveform: stepWaveform(supply) },
+    { kind: "switch", name: "SAhigh", a: "supply", b: "midA", closed: high, onResistance: ron, ...off },
+    { kind: "switch", name: "SAlow", a: "midA", b: GROUND, closed: low, onResistance: ron, ...off },
+    { kind: "capacitor", name: "Ctank", a: "midA", b: "coilTop", capacitance: C },
+  ];
+  const nodes: Record<string, string> = { supply: "supply", midA: "midA", coilTop: "coilTop" };
+  const end = spec.bridge === "half" ? GROUND : "midB";
+  if (spec.bridge === "full") {
+    elements.push(
+      { kind: "switch", name: "SBhigh", a: "supply", b: "midB", closed: low, onResistance: ron, ...off },
+      { kind: "switch", name: "SBlow", a: "midB", b: GROUND, closed: high, onResistance: ron, ...off },
+    );
+    nodes.midB = "midB";
+  }
+  if (rLoad > 0) {
+    elements.push(
+      { kind: "inductor", name: "Ltx", a: "coilTop", b: "load", inductance: L, resistance: R },
+      { kind: "resistor", name: "Rload", a: "load", b: end, resistance: rLoad },
+    );
+    nodes.load = "load";
+  } else {
+    elements.push({ kind: "inductor", name: "Ltx", a: "coilTop", b: end, inductance: L, resistance: R });
+  }
+  return { circuit: { elements }, frequency: f, coil: "Ltx", nodes, warnings: [] };
+}
+
+function nonNegative(x: number, field: string, unit: string, where: string): number {
+  if (!(typeof x === "number" && Number.isFinite(x) && x >= 0)) {
+    throw new TanklightInputError([{ path: field, message: `must be a finite number ≥ 0 ${unit}`, value: x, expected: `≥ 0 ${unit}` }], where);
+  }
+  return x;
+}

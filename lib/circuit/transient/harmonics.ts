@@ -1,0 +1,114 @@
+/**
+ * Fundamental and harmonics of a sampled periodic waveform by an exact discrete Fourier
+ * transform at the chosen harmonics over a whole number of cycles (no FFT needed: the count
+ * of harmonics is small). With N uniform samples t_j spanning exactly `cycles` periods,
+ * the phasor of harmonic k is X_k = (2/N)·Σ x_j·e^{−jkωt_j}, so that
+ * x(t) ≈ dc + Σ_k |X_k|·cos(kωt + arg X_k) (phasors e^{jωt}, peak amplitudes).
+ * For a waveform sampled at M points a period the result is exact for harmonics below M/2
+ * (no leakage, since the window holds whole periods).
+ */
+
+import { requirePositive, TanklightInputError } from "../../errors.ts";
+
+/** Harmonic content of a periodic waveform; index k of each array is harmonic k (index 0: dc). */
+export interface Harmonics {
+  /** mean over the analysed cycles */
+  readonly dc: number;
+  /** peak amplitude of harmonic k (amplitude[0] = |dc|) */
+  readonly amplitude: Float64Array;
+  /** phase of harmonic k, rad, cosine reference at t = 0 */
+  readonly phase: Float64Array;
+  /** real part of the phasor of harmonic k */
+  readonly re: Float64Array;
+  /** imaginary part of the phasor of harmonic k */
+  readonly im: Float64Array;
+  /** total harmonic distortion √(Σ_{k≥2} A_k²)/A_1 over the harmonics computed (∞ if A_1 = 0) */
+  readonly distortion: number;
+  /** RMS of the analysed samples (all harmonics) */
+  readonly rms: number;
+  /** peak |x| over the analysed samples */
+  readonly peak: number;
+}
+
+/**
+ * Harmonics of `samples` (taken at `time`, uniform step) over the LAST `cycles` whole
+ * periods of `frequency`.
+ * @param time sample times, s (uniform, as returned by simulate)
+ * @param samples values at those times (V or A)
+ * @param opts.frequency fundamental, Hz > 0; a period must hold a whole number of steps
+ * @param opts.count highest harmonic, default 10
+ * @param opts.cycles periods analysed, default 1
+ * @example waveformHarmonics(t, cos(2π·1e5·t) sampled 200/period, { frequency: 1e5 }).amplitude[1] // → 1
+ */
+export function waveformHarmonics(
+  time: Float64Array,
+  samples: Float64Array,
+  opts: { readonly frequency: number; readonly count?: number; readonly cycles?: number },
+): Harmonics {
+  const where = "waveformHarmonics";
+  const f = requirePositive(opts.frequency, "frequency", "Hz", where);
+  const count = opts.count ?? 10;
+  const cycles = opts.cycles ?? 1;
+  if (!(Number.isInteger(count) && count >= 1)) throw new TanklightInputError([{ path: "count", message: "must be an integer ≥ 1", value: count }], where);
+  if (!(Number.isInteger(cycles) && cycles >= 1)) throw new TanklightInputError([{ path: "cycles", message: "must be an integer ≥ 1", value: cycles }], where);
+  if (time.length !== samples.length || time.length < 3) {
+    throw new TanklightInputError([{ path: "samples", message: "must have the same length as time (≥ 3)", value: samples.length, expected: `${time.length}` }], where);
+  }
+  const step = time[1]! - time[0]!;
+  const perCycle = 1 / (f * step);
+  const spc = Math.round(perCycle);
+  if (!(spc >= 2) || Math.abs(perCycle - spc) > 1e-6 * perCycle) {
+    throw new TanklightInputError([{ path: "frequency", message: `a period must hold a whole number of steps (holds ${perCycle})`, value: f }], where);
+  }
+  const N = spc * cycles;
+  if (N + 1 > samples.length) {
+    throw new TanklightInputError([{ path: "cycles", message: `needs ${N + 1} samples, have ${samples.length}`, value: cycles }], where);
+  }
+  // the last N intervals: samples j = end − N … end − 1 (the end sample repeats the first)
+  const start = samples.length - 1 - N;
+  const w = 2 * Math.PI * f;
+  let dc = 0;
+  let sq = 0;
+  let peak = 0;
+  for (let j = start; j < start + N; j++) {
+    const v = samples[j]!;
+    dc += v;
+    sq += v * v;
+    if (Math.abs(v) > peak) peak = Math.abs(v);
+  }
+  dc /= N;
+  const amplitude = new Float64Array(count + 1);
+  const phase = new Float64Array(count + 1);
+  const re = new Float64Array(count + 1);
+  const im = new Float64Array(count + 1);
+  amplitude[0] = Math.abs(dc);
+  re[0] = dc;
+  phase[0] = dc < 0 ? Math.PI : 0;
+  const t0 = time[start]!;
+  for (let k = 1; k <= count; k++) {
+    // rotate by the exact sample phase k·2π·j/spc, referenced to t0
+    let sr = 0;
+    let si = 0;
+    for (let j = 0; j < N; j++) {
+      const a = (2 * Math.PI * k * j) / spc;
+      const v = samples[start + j]!;
+      sr += v * Math.cos(a);
+      si -= v * Math.sin(a);
+    }
+    sr *= 2 / N;
+    si *= 2 / N;
+    // shift reference from t0 to t = 0: multiply by e^{−jkωt0}
+    const c = Math.cos(k * w * t0);
+    const s = Math.sin(k * w * t0);
+    const r = sr * c + si * s;
+    const i = si * c - sr * s;
+    re[k] = r;
+    im[k] = i;
+    amplitude[k] = Math.hypot(r, i);
+    phase[k] = Math.atan2(i, r);
+  }
+  let hsum = 0;
+  for (let k = 2; k <= count; k++) hsum += amplitude[k]! * amplitude[k]!;
+  const a1 = amplitude[1]!;
+  return { dc, amplitude, phase, re, im, distortion: a1 > 0 ? Math.sqrt(hsum) / a1 : Infinity, rms: Math.sqrt(sq / N), peak };
+}
