@@ -237,10 +237,9 @@ describe("solveLinkNetwork: nonlinear loads (describing function)", () => {
   });
 
   it("non-convergence throws a LinkConvergenceError naming the receiver (never NaN), or warns on request", () => {
-    // a pathological "describing function" that is not a function of the amplitude at all
-    // (it alternates between calls), so no fixed point exists
-    let calls = 0;
-    const bad = { label: "chatter", conductance: () => (calls++ % 2 === 0 ? 1e-4 : 1e-1) };
+    // a pathological load that is open below 1 V and 1 Ω above (a discontinuous clamp):
+    // open, the tank rises far above 1 V; loaded, it falls below — no amplitude is consistent
+    const bad = { label: "step clamp", conductance: (v: number) => (v < 1 ? 1e-9 : 1) };
     const net = pair(0.1, { load: bad }, sineDrive(20, 0.5));
     expect(() => solveLinkNetwork(net, { maxIterations: 6 })).toThrow(LinkConvergenceError);
     expect(() => solveLinkNetwork(net, { maxIterations: 6 })).toThrow(/receiver 1: \|V\| − x = /);

@@ -256,9 +256,11 @@ export function solveLinkNetwork(network: LinkNetwork, options: LinkOptions = {}
   };
 
   let scalarIterations = 0;
+  const next = new Float64Array(q);
+  const nextG = new Float64Array(q);
+  const nextB = new Float64Array(q);
   /** Jacobi step: each nonlinear receiver solved locally against its Thevenin source (needs evaluate + columns). */
   const localStep = (): void => {
-    const next = new Float64Array(q);
     for (let c = 0; c < q; c++) {
       const k = nl[c]!;
       const wRe = colRe[c * n + k + 1]!;
@@ -288,11 +290,14 @@ export function solveLinkNetwork(network: LinkNetwork, options: LinkOptions = {}
       const res = solveLocal(rx[k]!, k, Math.hypot(eRe, eIm), 1 + aRe, aIm, bRe, bIm);
       scalarIterations += res.iterations;
       next[c] = res.amplitude;
+      nextG[c] = res.g;
+      nextB[c] = res.b;
     }
     for (let c = 0; c < q; c++) {
       const k = nl[c]!;
       x[k] = next[c]!;
-      setAdmittance(k, x[k]!);
+      yG[k] = nextG[c]!; // the describing function at x, already evaluated by the local solve
+      yB[k] = nextB[c]!;
     }
   };
 
@@ -305,8 +310,8 @@ export function solveLinkNetwork(network: LinkNetwork, options: LinkOptions = {}
     s0Im: number,
     bRe: number,
     bIm: number,
-  ): { amplitude: number; iterations: number } => {
-    if (!(eAbs > 0)) return { amplitude: 0, iterations: 0 };
+  ): { amplitude: number; iterations: number; g: number; b: number } => {
+    if (!(eAbs > 0)) return { amplitude: 0, iterations: 0, g: OPEN_LOAD_CONDUCTANCE, b: 0 };
     const load = r.load;
     const lnE = Math.log(eAbs);
     const sAbs = (v: number, out: Float64Array): number => {
@@ -339,21 +344,21 @@ export function solveLinkNetwork(network: LinkNetwork, options: LinkOptions = {}
     }
     let lo = 0;
     let v = hi;
-    let fv = fhi;
+    let fv = fhi; // tmp holds S, g, b at v
     for (let it = 0; it < 200; it++) {
       its++;
       if (fv === 0) break;
-      // φ'(v) = 1/v + Re(conj(S)·B·Y')/|S|², Y' by a forward difference
-      const s = sAbs(v, tmp);
+      // φ'(v) = 1/v + Re(conj(S)·B·Y')/|S|², Y' by a forward difference (tmp still holds v's values)
       const sRe = tmp[0]!;
       const sIm = tmp[1]!;
+      const s2 = sRe * sRe + sIm * sIm;
       const h = 1e-7 * v;
       sAbs(v + h, tmp2);
       const dgRe = (tmp2[2]! - tmp[2]!) / h;
       const dgIm = (tmp2[3]! - tmp[3]!) / h;
       const dsRe = bRe * dgRe - bIm * dgIm;
       const dsIm = bRe * dgIm + bIm * dgRe;
-      const dphi = 1 / v + (sRe * dsRe + sIm * dsIm) / (s * s);
+      const dphi = 1 / v + (sRe * dsRe + sIm * dsIm) / s2;
       if (fv < 0) lo = v;
       else hi = v;
       let vn = v - fv / dphi;
@@ -361,16 +366,16 @@ export function solveLinkNetwork(network: LinkNetwork, options: LinkOptions = {}
       const step = Math.abs(vn - v);
       v = vn;
       fv = phi(v);
-      if (step <= 1e-13 * v || Math.abs(fv) <= 1e-14 || hi - lo <= 1e-14 * hi) break;
+      if (step <= 1e-12 * v || Math.abs(fv) <= 1e-14 || hi - lo <= 1e-14 * hi) break;
     }
-    return { amplitude: v, iterations: its };
+    return { amplitude: v, iterations: its, g: tmp[2]!, b: tmp[3]! };
   };
   const localTmp = new Float64Array(4);
   const localTmp2 = new Float64Array(4);
 
   // ── iterate ────────────────────────────────────────────────────────────────────────────
-  for (let k = 0; k < m; k++) setAdmittance(k, rx[k]!.load.linear ? 1 : 0);
-  evaluate();
+  for (let k = 0; k < m; k++) if (rx[k]!.load.linear) setAdmittance(k, 1);
+  if (q === 0) evaluate();
   let iterations = 0;
   let converged = q === 0;
   const resid = new Float64Array(q);
