@@ -58,7 +58,7 @@ export function dielectric(d: Dielectric): DielectricData {
  * @param dissipationFactor tan δ, ≥ 0 (or a dielectric key for its typical value);
  * @param frequency Hz > 0; capacitance F > 0.
  * @returns Ω.
- * @example esrFromDissipationFactor(4e-4, 200e3, 10e-9) // → 0.0318309886… Ω
+ * @example esrFromDissipationFactor(4e-4, 200e3, 10e-9) // → 0.031830988618379075 Ω
  */
 export function esrFromDissipationFactor(dissipationFactor: number | Dielectric, frequency: number, capacitance: number): number {
   const where = "esrFromDissipationFactor";

@@ -49,7 +49,7 @@ export const HIGH_VOLTAGE_CAUTION = 50;
  * Peak/RMS voltage and current, reactive power and ESR loss of a tank capacitor, with a
  * recommendation of dielectric and rating and warnings where the chosen part falls short.
  * @param input see {@link CapacitorStressInput} (exactly one of voltageAmplitude, currentAmplitude).
- * @example capacitorStress({ capacitance: 6.8e-9, frequency: 200e3, voltageAmplitude: 30 }).peakCurrent // → 0.2563… A
+ * @example capacitorStress({ capacitance: 6.8e-9, frequency: 200e3, voltageAmplitude: 30 }).peakCurrent // → 0.2563539605329271 A
  */
 export function capacitorStress(input: CapacitorStressInput): CapacitorStress {
   const where = "capacitorStress";

@@ -28,7 +28,7 @@ export function resonantCapacitance(L: number, f: number): number {
  * Resonant frequency of an LC tank: f₀ = 1/(2π√(LC)).
  * @param L inductance, H, > 0; C capacitance, F, > 0.
  * @returns Hz.
- * @example resonantFrequency(100e-6, 6.8e-9) // → 193001.7…
+ * @example resonantFrequency(100e-6, 6.8e-9) // → 193003.7180020742
  */
 export function resonantFrequency(L: number, C: number): number {
   requirePositive(L, "L", "H", "resonantFrequency");
@@ -77,7 +77,7 @@ export interface TankQuality {
  * 1/Q = R_L/(ωL) + tan δ + ωL/R_p (small losses, each referred separately).
  * @param t parts and losses (see {@link TankLosses}); at least one loss must be given.
  * @returns {@link TankQuality}.
- * @example tankQuality({ inductance: 100e-6, capacitance: 6.8e-9, coilResistance: 2 }).q // → 60.6…
+ * @example tankQuality({ inductance: 100e-6, capacitance: 6.8e-9, coilResistance: 2 }).q // → 60.63390625908323
  */
 export function tankQuality(t: TankLosses): TankQuality {
   const where = "tankQuality";

@@ -56,7 +56,7 @@ export interface FrequencyWindow {
  * Resonant-frequency band of a batch of LC tanks with toleranced parts.
  * @param input see {@link ToleranceInput}.
  * @returns {@link FrequencyWindow} (Hz).
- * @example resonantFrequencyWindow({ inductance: 100e-6, capacitance: 6.8e-9, inductanceTolerance: 0.05, capacitanceTolerance: 0.05 }).worstCase.min // → f₀/√(1.05²) = 183811.…
+ * @example resonantFrequencyWindow({ inductance: 100e-6, capacitance: 6.8e-9, inductanceTolerance: 0.05, capacitanceTolerance: 0.05 }).worstCase.min // → 183813.0647638802 (= f₀/1.05)
  */
 export function resonantFrequencyWindow(input: ToleranceInput): FrequencyWindow {
   const where = "resonantFrequencyWindow";

@@ -67,9 +67,42 @@ function checkAmplitude(amplitude: number, where: string): void {
   }
 }
 
+function badLoad(path: string, message: string, value: unknown, where: string): never {
+  throw new TanklightInputError([{ path, message, value }], where);
+}
+
+function isJunction(j: unknown): boolean {
+  const x = j as Partial<Junction> | null;
+  return !!x && typeof x.is === "number" && x.is > 0 && typeof x.rs === "number" && x.rs > 0 && typeof x.n === "number" && x.n > 0 && typeof x.thermalVoltage === "number";
+}
+
+/** Cheap structural checks of plain-data loads (a few typeof tests: fine on the hot path). */
 function checkLoad(load: TokenLoad, where: string): void {
   if (load === null || typeof load !== "object" || typeof (load as { kind?: unknown }).kind !== "string") {
-    throw new TanklightInputError([{ path: "load", message: "must be a TokenLoad object with a kind", value: load }], where);
+    badLoad("load", "must be a TokenLoad object with a kind", load, where);
+  }
+  switch (load.kind) {
+    case "resistor":
+      if (!(typeof load.resistance === "number" && Number.isFinite(load.resistance) && load.resistance > 0)) badLoad("load.resistance", "must be a finite number > 0 Ω", load.resistance, where);
+      return;
+    case "led":
+      if (!isJunction(load.led)) badLoad("load.led", "must be an LED from led()/ledPreset()", load.led, where);
+      return;
+    case "antiParallel":
+    case "parallelSameDirection":
+      if (!isJunction(load.a)) badLoad("load.a", "must be an LED from led()/ledPreset()", load.a, where);
+      if (!isJunction(load.b)) badLoad("load.b", "must be an LED from led()/ledPreset()", load.b, where);
+      return;
+    case "bridge":
+    case "halfWaveReservoir":
+      if (!isJunction(load.diode)) badLoad("load.diode", "must be a diode from diode()/diodePreset()", load.diode, where);
+      if (!isJunction(load.led)) badLoad("load.led", "must be an LED from led()/ledPreset()", load.led, where);
+      if (load.seriesResistance !== undefined && !(Number.isFinite(load.seriesResistance) && load.seriesResistance >= 0)) {
+        badLoad("load.seriesResistance", "must be a finite number ≥ 0 Ω", load.seriesResistance, where);
+      }
+      return;
+    default:
+      return; // unknown kinds are reported by the dispatch
   }
 }
 
@@ -164,7 +197,7 @@ function reservoirBranch(load: Extract<TokenLoad, { kind: "halfWaveReservoir" }>
  * @param amplitude tank voltage amplitude A, V (peak), ≥ 0; at A = 0 the small-signal conductance.
  * @returns conductance, S, > 0.
  * @example fundamentalConductance({ kind: "resistor", resistance: 1000 }, 5) // → 0.001
- * @example fundamentalConductance({ kind: "led", led: ledPreset("red") }, 2.0) // ≈ 3.4e-3 S
+ * @example fundamentalConductance({ kind: "led", led: ledPreset("red") }, 2.0) // → 0.003274187758319909 S
  * Related: fundamentalCurrentSlope, averageLoadCurrent, loadResponse.
  */
 export function fundamentalConductance(load: TokenLoad, amplitude: number): number {
@@ -210,7 +243,8 @@ function ledEntry(role: LedCurrent["role"], l: Led, avg: number, peak: number): 
  * current, not the fundamental (physics-notes.md, "The token").
  * @param load token load; amplitude V (peak) ≥ 0.
  * @returns one entry per LED (none for a resistor): `{ role, label, current, peakCurrent, relativeBrightness }`.
- * @example averageLoadCurrent({ kind: "led", led: ledPreset("red") }, 2.2)[0].current // ≈ 3 mA
+ * @example averageLoadCurrent({ kind: "led", led: ledPreset("red") }, 2.2)[0].current // → 0.008489958975518656 A
+ * @example averageLoadCurrent({ kind: "resistor", resistance: 100 }, 2) // → [] (edge: no LED)
  */
 export function averageLoadCurrent(load: TokenLoad, amplitude: number): readonly LedCurrent[] {
   const where = "averageLoadCurrent";

@@ -185,6 +185,7 @@ function checkPositive(x: unknown, field: string, unit: string, where: string): 
  * @param idealityFactor n for the two-point fit.
  * @returns Shockley parameters; throws TanklightInputError when the points imply r_s ≤ 0 or n ≤ 0.
  * @example fitShockley([{current:1e-3,voltage:1.75},{current:5e-3,voltage:1.85},{current:20e-3,voltage:2.0}], 298.15)
+ *   // → { saturationCurrent: 2.2164765511026647e-19, idealityFactor: 1.8836756868950875, seriesResistance: 5.527214899673994 }
  */
 export function fitShockley(
   points: readonly ForwardPoint[],
@@ -399,7 +400,7 @@ function makeJunction(spec: JunctionSpec, where: string, defaultLabel: string, d
  * @returns a {@link Led}: `current(v)` A, `conductance(v)` S, `voltage(i)` V and its parameters.
  * Method: Shockley equation with series resistance, closed form with Lambert W (Banwell &
  *   Jayakumar 2000).
- * @example led({ points: [{ current: 1e-3, voltage: 1.75 }, { current: 20e-3, voltage: 2.0 }] }).voltage(20e-3) // → 2.0
+ * @example led({ points: [{ current: 1e-3, voltage: 1.75 }, { current: 20e-3, voltage: 2.0 }] }).voltage(20e-3) // → 1.99999999998475 (the 20 mA point; the 1e-12 S leakage floor shifts it by 1.5e-11 V)
  * Related: ledPreset, diode, fitShockley.
  */
 export function led(spec: JunctionSpec & { readonly colour?: string; readonly ratedCurrent?: number }): Led {
@@ -413,7 +414,7 @@ export function led(spec: JunctionSpec & { readonly colour?: string; readonly ra
  * A rectifier diode as a Shockley junction with series resistance (same model as {@link led}).
  * @param spec as for led (points or parameters).
  * @returns a {@link Diode}.
- * @example diode({ saturationCurrent: 1e-9, idealityFactor: 1.9, seriesResistance: 0.1 }).current(0.5)
+ * @example diode({ saturationCurrent: 1e-9, idealityFactor: 1.9, seriesResistance: 0.1 }).current(0.5) // → 2.807040878375539e-5 A
  * Related: diodePreset.
  */
 export function diode(spec: JunctionSpec): Diode {

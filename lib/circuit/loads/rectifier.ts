@@ -65,7 +65,7 @@ const scratch = new Float64Array(6);
  * @param diode rectifier diode; led the LED across the reservoir (any current(v)/conductance(v) load); amplitude V (peak, ≥ 0);
  * @param seriesResistance Ω ≥ 0; capacitance F > 0 and frequency Hz > 0 (ripple estimate only).
  * @returns {@link ReservoirState}.
- * @example reservoirSteadyState(diodePreset("schottky"), ledPreset("red"), 3).reservoirVoltage // ≈ 2.0 V
+ * @example reservoirSteadyState(diodePreset("schottky"), ledPreset("red"), 3).reservoirVoltage // → 2.032896911165257 V
  */
 export function reservoirSteadyState(
   diode: Diode,
@@ -161,7 +161,7 @@ export interface CurrentFedBridgeResult {
  * V_o = R_L·2I/π. The input voltage is sign(i)·(V_o + 2·v_D(|i|)); its fundamental is found by
  * adaptive quadrature over the cycle (diode drops included).
  * @param diode bridge diode; loadResistance Ω > 0; currentAmplitude A > 0.
- * @example currentFedBridge(diodePreset("schottky"), 1000, 0.01).equivalentResistance // ≈ 8·1000/π² + diode term
+ * @example currentFedBridge(diodePreset("schottky"), 1000, 0.01).equivalentResistance // → 899.05… Ω (8·1000/π² = 810.6 Ω plus the diode drops at 6.4 V output)
  */
 export function currentFedBridge(diode: Junction, loadResistance: number, currentAmplitude: number): CurrentFedBridgeResult {
   requirePositive(loadResistance, "loadResistance", "Ω", "currentFedBridge");

@@ -214,3 +214,12 @@ describe("fundamentalConductance / averageLoadCurrent", () => {
     expectTypeOf<Extract<TokenLoad, { kind: "led" }>["led"]>().toEqualTypeOf<Led>();
   });
 });
+
+describe("plain-data loads are checked", () => {
+  it("a resistor load with a non-positive resistance, or an LED that is not a model, throws", () => {
+    expect(() => fundamentalConductance({ kind: "resistor", resistance: -5 }, 1)).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: fundamentalConductance: load.resistance: must be a finite number > 0 Ω, got -5]`,
+    );
+    expect(() => averageLoadCurrent({ kind: "led", led: {} as Led }, 1)).toThrow(/load\.led/);
+  });
+});
