@@ -86,13 +86,25 @@ export function bestCombination(x: number, series: ESeries, options: Combination
   // does better with fewer parts (trade practice: nobody trims a tank with a 1 % part).
   const cand = standardValuesBetween(series, x * 1e-2, x * 1e2);
   let out: Combination[] = [];
+  const keep = Math.max(200, 20 * count);
+  let limit = Infinity; // |error| of the worst kept combination after the last prune
   const prune = () => {
     out.sort((a, b) => Math.abs(a.error) - Math.abs(b.error) || a.parts.length - b.parts.length);
-    out = out.slice(0, Math.max(200, 20 * count));
+    out = out.slice(0, keep);
+    limit = out.length >= keep ? Math.abs(out[out.length - 1]!.error) : Infinity;
   };
+  const few: Combination[] = []; // one- and two-part combinations: O(N), never pruned
   const push = (value: number, parts: number[], topo: string) => {
-    out.push({ value, error: (value - x) / x, parts: [...parts].sort((a, b) => a - b), topology: topo });
-    if (out.length > 20000) prune();
+    const error = (value - x) / x;
+    if (parts.length < 3) {
+      few.push({ value, error, parts: [...parts].sort((a, b) => a - b), topology: topo });
+      return;
+    }
+    // three-part combinations: keep only the most accurate (the ranking's head and every
+    // three-part candidate a fewest-parts ranking could need after fewer-part ones)
+    if (Math.abs(error) > limit) return; // cannot enter the kept list
+    out.push({ value, error, parts: [...parts].sort((a, b) => a - b), topology: topo });
+    if (out.length > 4 * keep) prune();
   };
   // one part
   const n1 = nearestIndex(cand, x);
@@ -132,6 +144,7 @@ export function bestCombination(x: number, series: ESeries, options: Combination
     }
   }
   const tol = options.tolerance;
+  out = few.concat(out);
   const kept = (tol === undefined ? out : out.filter((c) => Math.abs(c.error) <= tol * (1 + 1e-12)));
   const unique = new Map<string, Combination>();
   for (const c of kept) {

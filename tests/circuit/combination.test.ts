@@ -94,3 +94,15 @@ function recompute(c: Combination): number {
     }
   }
 }
+
+describe("bestCombination with many three-part candidates", () => {
+  it("fewestParts still finds a single part within tolerance (E192, three parts allowed)", () => {
+    const x = 6.3326e-9;
+    const r = bestCombination(x, "E192", { maxParts: 3, tolerance: 0.005, prefer: "fewestParts", count: 3 });
+    expect(r[0]!.parts).toHaveLength(1);
+    expect(Math.abs(r[0]!.error)).toBeLessThanOrEqual(0.005);
+    // and the accuracy ranking is headed by a three-part hit far closer than any single part
+    const acc = bestCombination(x, "E192", { maxParts: 3, count: 1 })[0]!;
+    expect(Math.abs(acc.error)).toBeLessThan(1e-4);
+  });
+});
