@@ -69,7 +69,7 @@ export {
 } from "./math/complex.ts";
 export { solveComplex, solveComplex2x2 } from "./math/solveComplex.ts";
 export { luFactor, luSolve, solveLinear, SingularMatrixError, LU_PIVOT_RTOL } from "./math/lu.ts";
-export { createRandom, type RandomSource } from "./math/random.ts";
+export { createRandom, createRandomFromState, type RandomSource } from "./math/random.ts";
 export { kelvin, kelvinScaled, ber, bei, berPrime, beiPrime, type KelvinValues } from "./math/kelvin.ts";
 
 // ── lib/em ───────────────────────────────────────────────────────────────────

@@ -21,7 +21,7 @@ import { TanklightInputError } from "../errors.ts";
 
 /** A seeded stream of random numbers. Each call advances the stream; nothing else is shared. */
 export interface RandomSource {
-  /** the seed this stream was made from */
+  /** the seed this stream was made from (−1 when made from a raw state) */
   readonly seed: number;
   /** next raw 32-bit output, integer in [0, 2³²) */
   nextUint32(): number;
@@ -70,10 +70,35 @@ export function createRandom(seed: number): RandomSource {
     words[2 * i] = Number(out & 0xffffffffn);
     words[2 * i + 1] = Number(out >> 32n);
   }
-  let s0 = words[0]!;
-  let s1 = words[1]!;
-  let s2 = words[2]!;
-  let s3 = words[3]!;
+  return xoshiro128ss(words[0]!, words[1]!, words[2]!, words[3]!, seed);
+}
+
+/**
+ * Makes a xoshiro128** generator from a raw 128-bit state (four 32-bit words, s[0] first),
+ * e.g. to continue a recorded stream or to compare with published test vectors.
+ *
+ * @param state four integers in [0, 2³²), not all zero.
+ * @returns a {@link RandomSource} whose `seed` is −1 (it was not made from a seed).
+ * @example createRandomFromState([0x964d4a0c, 0xd40ab895, 0xad7fdecb, 0x3006f0f0]).nextUint32()
+ *   // → 0xf1391922 = 4047051042 (C reference test data, see tests/math/random.test.ts)
+ */
+export function createRandomFromState(state: readonly [number, number, number, number]): RandomSource {
+  const ok =
+    state.length === 4 && state.every((w) => Number.isInteger(w) && w >= 0 && w <= 0xffffffff) && state.some((w) => w !== 0);
+  if (!ok) {
+    throw new TanklightInputError(
+      [{ path: "state", message: "must be four integers in [0, 2^32), not all zero", value: state, expected: "[s0, s1, s2, s3]" }],
+      "createRandomFromState",
+    );
+  }
+  return xoshiro128ss(state[0], state[1], state[2], state[3], -1);
+}
+
+function xoshiro128ss(w0: number, w1: number, w2: number, w3: number, seed: number): RandomSource {
+  let s0 = w0 | 0;
+  let s1 = w1 | 0;
+  let s2 = w2 | 0;
+  let s3 = w3 | 0;
   if ((s0 | s1 | s2 | s3) === 0) s0 = 1; // unreachable for SplitMix output, kept as a guard
 
   let spare = 0;

@@ -1,13 +1,29 @@
 import { describe, expect, expectTypeOf, it } from "vitest";
 import { mean, sampleSkewness, standardDeviation } from "simple-statistics";
-import { createRandom, type RandomSource } from "../../lib/math/random.ts";
+import { createRandom, createRandomFromState, type RandomSource } from "../../lib/math/random.ts";
 import { TanklightInputError } from "../../lib/errors.ts";
 import { expectOutside } from "../helpers/validation.ts";
 import ref from "../fixtures/math/xoshiro128ss.json" with { type: "json" };
+import cref from "../fixtures/math/xoshiro128ss-c-reference-vectors.json" with { type: "json" };
 
 const PORT = "independent method: Python port of xoshiro128** + SplitMix64 seeding (tests/fixtures/math/xoshiro128ss.json)";
 
 describe("createRandom(seed) — xoshiro128**", () => {
+  it("reproduces test data of the C reference implementation of xoshiro128** (published vectors)", () => {
+    // source: C reference implementation test data as published in edorfaus/xoshiro-6502
+    // test-rom/testdata.asm (fixture tests/fixtures/math/xoshiro128ss-c-reference-vectors.json)
+    for (const c of cref.cases) {
+      const rng = createRandomFromState(c.state as [number, number, number, number]);
+      c.outputs.forEach((expected, i) => {
+        // exact integer equality (rtol 0)
+        expectOutside({ quantity: `xoshiro128** output ${i} from the published state`, source: "source: C reference test data (edorfaus/xoshiro-6502 testdata.asm)", ours: rng.nextUint32(), reference: expected, rtol: 0 });
+      });
+      expect(rng.seed).toBe(-1);
+    }
+    expect(() => createRandomFromState([0, 0, 0, 0])).toThrow(TanklightInputError);
+    expect(() => createRandomFromState([1, 2, 3, 2 ** 32])).toThrow(TanklightInputError);
+  });
+
   it("reproduces an independent Python port of xoshiro128** (Blackman & Vigna 2021) bit for bit", () => {
     for (const c of ref.cases) {
       const rng = createRandom(c.seed);
@@ -80,6 +96,7 @@ describe("createRandom(seed) — xoshiro128**", () => {
 
   it("has the documented types", () => {
     expectTypeOf(createRandom).toEqualTypeOf<(seed: number) => RandomSource>();
+    expectTypeOf(createRandomFromState).parameter(0).toEqualTypeOf<readonly [number, number, number, number]>();
     expectTypeOf<RandomSource["normal"]>().toEqualTypeOf<(mean?: number, sd?: number) => number>();
   });
 });
