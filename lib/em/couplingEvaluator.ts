@@ -1,0 +1,440 @@
+/**
+ * Fast mutual inductance and coupling factor of one coil pair over many poses (sweeps,
+ * coverage maps): both coils' turns lumped into a few representative loops, with an error
+ * estimate from two lumping orders and a fall-back to the exact filament sum.
+ */
+import { TanklightInputError } from "../errors.ts";
+import { aOverRhoKernel } from "./loopKernel.ts";
+import { filamentMutual, lastFilamentDistance2 } from "./filamentMutual.ts";
+import { conductorRadius } from "./mutualInductance.ts";
+import { selfInductance } from "./selfInductance.ts";
+import { poseFrame, type Frame } from "./frames.ts";
+import type { Coil, Filament, Pose } from "./types.ts";
+
+/** Options of {@link couplingEvaluator}. */
+export interface CouplingEvaluatorOptions {
+  /** relative error target of M, default 1e-3 */
+  readonly relTol?: number;
+  /**
+   * absolute error floor, H, for poses where M is small (near its zero crossings); default
+   * 1e-2·relTol·M₀, where M₀ is the lumped coils' mutual inductance with the receiver at the
+   * transmitter's centre (the natural maximum of a coverage map)
+   */
+  readonly absTol?: number;
+  /** frequency for the self-inductances used by coupling(), Hz (default DC) */
+  readonly frequency?: number;
+}
+
+/** One evaluation with its provenance. */
+export interface CouplingEvaluation {
+  /** M, H */
+  readonly mutual: number;
+  /** k = M/√(L₁L₂) */
+  readonly coupling: number;
+  /** error estimate of M, H */
+  readonly error: number;
+  /** "lumped" (representative loops) or "exact" (every filament pair) */
+  readonly method: "lumped" | "exact";
+  /** e.g. overlapping conductors */
+  readonly warnings: readonly string[];
+}
+
+/** A coupling evaluator configured for one transmitter–receiver pair. */
+export interface CouplingEvaluator {
+  /** M for the given poses, H (never throws on overlap: see evaluate().warnings) */
+  mutual(poseTx: Pose, poseRx: Pose): number;
+  /** k = M/√(L₁L₂) for the given poses */
+  coupling(poseTx: Pose, poseRx: Pose): number;
+  /** M, k, the error estimate, the method used and warnings */
+  evaluate(poseTx: Pose, poseRx: Pose): CouplingEvaluation;
+  /** self-inductances used by coupling(), H */
+  readonly selfTx: number;
+  readonly selfRx: number;
+  /** how many evaluations used each method so far */
+  readonly stats: { lumped: number; exact: number };
+}
+
+/** Representative loops of a set of coaxial circles (own frame, axis z): radius, height, weight. */
+interface Lumps {
+  readonly r: Float64Array;
+  readonly z: Float64Array;
+  readonly w: Float64Array;
+  /** largest distance, in the (r, z) half-plane, of a member turn from its representative loop, m */
+  readonly extent: number;
+}
+
+interface Turn { readonly r: number; readonly z: number; readonly w: number }
+
+/** The circles of a coil as weighted (r, z) turns if they are all coaxial with its z axis. */
+function coaxialTurns(filaments: readonly Filament[]): Turn[] | undefined {
+  const out: Turn[] = [];
+  for (const f of filaments) {
+    if (f.kind !== "circle") return undefined;
+    const [ax, ay, az] = f.axis;
+    const al = Math.hypot(ax, ay, az);
+    if (Math.abs(ax) > 1e-12 * al || Math.abs(ay) > 1e-12 * al || f.center[0] !== 0 || f.center[1] !== 0) return undefined;
+    out.push({ r: f.radius, z: f.center[2], w: Math.sign(az) * f.turns });
+  }
+  const W = out.reduce((a, t) => a + t.w, 0);
+  // the lumping rules need weights of one sign (a coil wound back on itself goes to the exact sum)
+  if (W === 0 || out.some((t) => t.w * W < 0)) return undefined;
+  return out;
+}
+
+/** One representative loop of a group: weight Σw at the means of r² and z (moments of order ≤ 1). */
+function lumpOf(group: readonly Turn[]): Turn & { extent: number } {
+  let W = 0, U = 0, Z = 0;
+  for (const t of group) { W += t.w; U += t.w * t.r * t.r; Z += t.w * t.z; }
+  const r = Math.sqrt(U / W), z = Z / W;
+  let extent = 0;
+  for (const t of group) extent = Math.max(extent, Math.hypot(t.r - r, t.z - z));
+  return { r, z, w: W, extent };
+}
+
+function toLumps(list: readonly (Turn & { extent: number })[]): Lumps {
+  return {
+    r: Float64Array.from(list, (t) => t.r),
+    z: Float64Array.from(list, (t) => t.z),
+    w: Float64Array.from(list, (t) => t.w),
+    extent: list.reduce((a, t) => Math.max(a, t.extent), 0),
+  };
+}
+
+/**
+ * Levels of a bisection tree of the turns: level ℓ has up to 2^ℓ groups, each lumped into one
+ * loop; a group is split across its larger extent (r or z) at the median turn. The last level
+ * has one loop per turn (exact).
+ */
+function groupLevels(turns: readonly Turn[]): Lumps[] {
+  let groups: Turn[][] = [turns.slice()];
+  const levels: Lumps[] = [toLumps(groups.map(lumpOf))];
+  while (groups.some((g) => g.length > 1)) {
+    const next: Turn[][] = [];
+    for (const g of groups) {
+      if (g.length === 1) { next.push(g); continue; }
+      const rs = g.map((t) => t.r), zs = g.map((t) => t.z);
+      const byR = Math.max(...rs) - Math.min(...rs) > Math.max(...zs) - Math.min(...zs);
+      const sorted = g.slice().sort((a, b) => (byR ? a.r - b.r : a.z - b.z));
+      const h = Math.ceil(sorted.length / 2);
+      next.push(sorted.slice(0, h), sorted.slice(h));
+    }
+    groups = next;
+    levels.push(toLumps(groups.map(lumpOf)));
+  }
+  return levels;
+}
+
+/**
+ * Order-1 lumps of the transmitter: the 2 × 2 tensor product of the two-point rules ū ± σ_u,
+ * z̄ ± σ_z in u = r² and z (weights ¼ of the turns each; a rule with σ = 0 collapses to one
+ * point), which reproduces every moment of total degree ≤ 3 of a product distribution.
+ */
+function momentLumps(turns: readonly Turn[]): Lumps {
+  const c = lumpOf(turns);
+  const uBar = c.r * c.r;
+  let Vu = 0, Vz = 0;
+  for (const t of turns) { Vu += t.w * (t.r * t.r - uBar) ** 2; Vz += t.w * (t.z - c.z) ** 2; }
+  const su = Math.sqrt(Math.max(0, Vu / c.w)), sz = Math.sqrt(Math.max(0, Vz / c.w));
+  const us = su > 1e-12 * uBar ? [uBar - su, uBar + su] : [uBar];
+  const zs = sz > 0 ? [c.z - sz, c.z + sz] : [c.z];
+  const list: (Turn & { extent: number })[] = [];
+  for (const u of us) for (const z of zs) list.push({ r: Math.sqrt(u), z, w: c.w / (us.length * zs.length), extent: c.extent });
+  return toLumps(list);
+}
+
+// cos/sin tables of the trapezoidal nodes added at each doubling (N = 8·2^i)
+const tables = new Map<number, { c: Float64Array; s: Float64Array }>();
+function added(n: number): { c: Float64Array; s: Float64Array } {
+  let e = tables.get(n);
+  if (!e) {
+    const first = n === 8;
+    const m = first ? 8 : n / 2;
+    const c = new Float64Array(m), s = new Float64Array(m);
+    for (let j = 0; j < m; j++) {
+      const t = first ? (2 * Math.PI * j) / 8 : ((2 * j + 1) * Math.PI) / m;
+      c[j] = Math.cos(t);
+      s[j] = Math.sin(t);
+    }
+    e = { c, s };
+    tables.set(n, e);
+  }
+  return e;
+}
+
+const ring = { v1: 0, v0: 0, err: 0, minA2: Infinity };
+/** Safety factor on the order-1 lumping error estimates (checked against the exact sum in tests and bench). */
+const LUMP_SAFETY = 3;
+/** Lumps are trusted only while the nearest wire is farther than GUARD × the lumped coil's extent. */
+const GUARD = 2;
+
+/**
+ * ∮ A_tx · dl over one receiver loop (tx frame: centre c, unit normal n, radius r), with A_tx
+ * the sum over the transmitter's lumps `t1` (and separately over `t0`), by the nested periodic
+ * trapezoidal rule (8, 16, … 256 nodes; stop when |T_2N − T_N| ≤ 0.1·√qtol·scale, see loopMutual.ts).
+ * Results in `ring`: v1 (over t1), v0 (over t0), err, minA2 (closest node-to-lump-wire distance²).
+ */
+function ringIntegral(
+  cx: number, cy: number, cz: number, nx: number, ny: number, nz: number, r: number,
+  t1: Lumps, t0: Lumps | undefined, qtol: number, floor: number,
+): void {
+  let ux: number, uy: number, uz: number;
+  if (Math.abs(nx) < 0.9) { ux = 1 - nx * nx; uy = -nx * ny; uz = -nx * nz; } else { ux = -ny * nx; uy = 1 - ny * ny; uz = -ny * nz; }
+  const un = r / Math.sqrt(ux * ux + uy * uy + uz * uz);
+  ux *= un; uy *= un; uz *= un; // r·u
+  const vx = ny * uz - nz * uy, vy = nz * ux - nx * uz, vz = nx * uy - ny * ux; // r·v
+  const n1 = t1.r.length;
+  let minA2 = Infinity;
+  let s1 = 0, s0 = 0, prev = 0, n = 8;
+  const sq = Math.sqrt(qtol);
+  for (;;) {
+    const { c, s } = added(n);
+    let abs = 0;
+    for (let j = 0; j < c.length; j++) {
+      const co = c[j]!, si = s[j]!;
+      const wx = cx + co * ux + si * vx, wy = cy + co * uy + si * vy, wz = cz + co * uz + si * vz;
+      const tx = -si * ux + co * vx, ty = -si * uy + co * vy;
+      const rho = Math.sqrt(wx * wx + wy * wy);
+      const geo = wx * ty - wy * tx; // (ẑ × w)·dP/dt
+      let a1 = 0;
+      for (let k = 0; k < n1; k++) {
+        const dz = wz - t1.z[k]!;
+        const dm = t1.r[k]! - rho;
+        const z2 = dz * dz;
+        const al2 = dm * dm + z2;
+        if (al2 < minA2) minA2 = al2;
+        if (al2 === 0) { ring.minA2 = 0; ring.v1 = ring.v0 = 0; ring.err = Infinity; return; }
+        a1 += t1.w[k]! * aOverRhoKernel(t1.r[k]!, rho, z2, al2);
+      }
+      const f1 = a1 * geo;
+      s1 += f1;
+      abs += Math.abs(f1);
+      if (t0) {
+        const dz = wz - t0.z[0]!;
+        const dm = t0.r[0]! - rho;
+        const al2 = dm * dm + dz * dz;
+        if (al2 > 0) s0 += t0.w[0]! * aOverRhoKernel(t0.r[0]!, rho, dz * dz, al2) * geo;
+      }
+    }
+    const v = ((2 * Math.PI) / n) * s1;
+    if (n > 8) {
+      const diff = Math.abs(v - prev);
+      const scale = Math.max(Math.abs(v), 1e-3 * ((2 * Math.PI) / (n / 2)) * abs, floor);
+      if ((n >= 16 && diff <= 0.1 * sq * scale) || n >= 256) {
+        ring.v1 = v;
+        ring.v0 = ((2 * Math.PI) / n) * s0;
+        ring.err = n >= 256 && diff > 0.1 * sq * scale ? diff : (diff * diff) / scale;
+        ring.minA2 = minA2;
+        return;
+      }
+    }
+    prev = v;
+    n *= 2;
+  }
+}
+
+function checkCoil(c: Coil, field: string): void {
+  if (!c || !Array.isArray(c.filaments) || c.filaments.length === 0 || !c.conductor) {
+    throw new TanklightInputError([{ path: field, message: "must be a Coil with at least one filament and a conductor", value: c }], "couplingEvaluator");
+  }
+}
+
+/**
+ * A coupling evaluator for one transmitter–receiver pair, built once and evaluated at many
+ * poses — much faster than pairing every filament (a 20-turn transmitter and a 30-turn token:
+ * 600 filament pairs per pose) and agreeing with it to `relTol`.
+ *
+ * Method. A coil made of coaxial circles (any roundCoil, solenoid or circular flatSpiral) is
+ * lumped into representative loops by matching moments of its turn distribution in (r², z):
+ * order 0 is one loop at the means; order 1 the 2 × 2 tensor product of the two-point rules
+ * ū ± σ_u, z̄ ± σ_z (exact for every moment of total degree ≤ 3 of a product distribution).
+ * M is the line integral of the transmitter lumps' closed-form vector potential (Smythe 1950
+ * §7.10) around the receiver lumps — Stokes' form of integrating the transmitter's field over
+ * the receiver's discs — by the nested periodic trapezoidal rule (its own error estimate).
+ *
+ * Level A: both coils at order 1. Lumping error falls by (extent/D)² per order (D the
+ * smallest distance from a receiver node to a transmitter lump wire), so each coil's order-1
+ * error is estimated as 3·(extent/D)²·|M(order 1) − M(order 0)|. Accepted when the sum of
+ * estimates ≤ max(relTol·|M|, absTol) and D > 2 extents.
+ * Level B (near the winding, near zero crossings): every transmitter turn exact; the receiver
+ * refined as a bisection tree of turn groups (1, 2, 4, … loops, the last one loop per turn:
+ * exact), the error of each level by Richardson's rule |M_ℓ − M_{ℓ−1}|/3 (error ∝ group size²)
+ * times a safety factor 3.
+ * Level C: per-pair adaptive line integrals (mutualInductance's method) where a receiver turn
+ * grazes a transmitter wire. Coils that are not coaxial circles (polygons, tilted turns)
+ * always use level C.
+ *
+ * @param tx transmitter coil (own frame). @param rx receiver coil (own frame).
+ * @param options `{ relTol? = 1e-3, absTol? (H), frequency? (Hz, for L₁, L₂) }`.
+ * @returns `{ mutual(poseTx, poseRx), coupling(poseTx, poseRx), evaluate(poseTx, poseRx), selfTx, selfRx, stats }`.
+ * @example const ev = couplingEvaluator(tx, token); ev.coupling({ position: [0,0,0] }, { position: [0.01, 0, 0.02] })
+ * @see mutualInductance (one pose, exact), couplingFactor
+ */
+export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluatorOptions = {}): CouplingEvaluator {
+  checkCoil(tx, "tx");
+  checkCoil(rx, "rx");
+  const relTol = options.relTol ?? 1e-3;
+  if (!(relTol > 0 && relTol < 1)) {
+    throw new TanklightInputError([{ path: "options.relTol", message: "must be in (0, 1)", value: relTol }], "couplingEvaluator");
+  }
+  if (options.absTol !== undefined && !(Number.isFinite(options.absTol) && options.absTol >= 0)) {
+    throw new TanklightInputError([{ path: "options.absTol", message: "must be a finite inductance ≥ 0 H", value: options.absTol }], "couplingEvaluator");
+  }
+  const selfTx = selfInductance(tx, options.frequency === undefined ? {} : { frequency: options.frequency });
+  const selfRx = selfInductance(rx, options.frequency === undefined ? {} : { frequency: options.frequency });
+  const norm = 1 / Math.sqrt(selfTx * selfRx);
+  const txTurns = coaxialTurns(tx.filaments);
+  const rxTurns = coaxialTurns(rx.filaments);
+  const clearance = conductorRadius(tx.conductor) + conductorRadius(rx.conductor);
+  const stats = { lumped: 0, exact: 0 };
+  const fast = txTurns !== undefined && rxTurns !== undefined;
+  const txLevels = fast ? groupLevels(txTurns) : [];
+  const rxLevels = fast ? groupLevels(rxTurns) : [];
+  const t0 = txLevels[0]!;
+  const t1 = fast ? momentLumps(txTurns) : t0;
+  const rx0 = rxLevels[0]!;
+  const rx1 = fast ? momentLumps(rxTurns) : rx0;
+  const tExact = txLevels[txLevels.length - 1]!;
+  const rxTotal = fast ? Math.abs(rxLevels[0]!.w[0]!) : 1;
+
+  let absTol = options.absTol ?? 0;
+  if (options.absTol === undefined && fast) {
+    ringIntegral(0, 0, t0.z[0]!, 0, 0, 1, rxLevels[0]!.r[0]!, t0, undefined, 1e-8, 0);
+    absTol = 1e-2 * relTol * Math.abs(ring.v1 * rxLevels[0]!.w[0]!);
+  }
+  // ring quadrature target: a tenth of the overall tolerance (its own estimate joins the error sum)
+  const qtol = 0.1 * relTol;
+
+  let lastError = 0;
+  let lastMethod: "lumped" | "exact" = "exact";
+  let lastWarnings: string[] = [];
+
+  // receiver origin and axis in the transmitter's frame (set per pose)
+  let ox = 0, oy = 0, oz = 0, nx = 0, ny = 0, nz = 1;
+  const sums = { m: 0, m0: 0, err: 0, minA2: Infinity };
+  /** Σ over the receiver lumps `rl` of w·∮A·dl, transmitter lumps `tl` (and `tl0` alongside). */
+  const sumRings = (rl: Lumps, tl: Lumps, tl0: Lumps | undefined): void => {
+    let m = 0, m0 = 0, err = 0, minA2 = Infinity;
+    const floor = absTol / rxTotal;
+    for (let k = 0; k < rl.r.length; k++) {
+      const h = rl.z[k]!;
+      ringIntegral(ox + h * nx, oy + h * ny, oz + h * nz, nx, ny, nz, rl.r[k]!, tl, tl0, qtol, floor);
+      m += rl.w[k]! * ring.v1;
+      m0 += rl.w[k]! * ring.v0;
+      err += Math.abs(rl.w[k]!) * ring.err;
+      if (ring.minA2 < minA2) minA2 = ring.minA2;
+    }
+    sums.m = m; sums.m0 = m0; sums.err = err; sums.minA2 = minA2;
+  };
+
+  const exact = (fTx: Frame, fRx: Frame): number => {
+    // receiver filaments in the transmitter's frame: x_tx = R_txᵀ(R_rx p + p_rx − p_tx)
+    const Rt = fTx.R, Rr = fRx.R;
+    const M = new Float64Array(9);
+    for (let i = 0; i < 3; i++) for (let j = 0; j < 3; j++) M[3 * i + j] = Rt[i]! * Rr[j]! + Rt[3 + i]! * Rr[3 + j]! + Rt[6 + i]! * Rr[6 + j]!;
+    const d = [fRx.position[0] - fTx.position[0], fRx.position[1] - fTx.position[1], fRx.position[2] - fTx.position[2]];
+    const t = [0, 1, 2].map((i) => Rt[i]! * d[0]! + Rt[3 + i]! * d[1]! + Rt[6 + i]! * d[2]!);
+    const map = (p: readonly number[]): [number, number, number] => [
+      M[0]! * p[0]! + M[1]! * p[1]! + M[2]! * p[2]! + t[0]!,
+      M[3]! * p[0]! + M[4]! * p[1]! + M[5]! * p[2]! + t[1]!,
+      M[6]! * p[0]! + M[7]! * p[1]! + M[8]! * p[2]! + t[2]!,
+    ];
+    const dir = (p: readonly number[]): [number, number, number] => {
+      const q = [M[0]! * p[0]! + M[1]! * p[1]! + M[2]! * p[2]!, M[3]! * p[0]! + M[4]! * p[1]! + M[5]! * p[2]!, M[6]! * p[0]! + M[7]! * p[1]! + M[8]! * p[2]!];
+      const l = Math.hypot(q[0]!, q[1]!, q[2]!);
+      return [q[0]! / l, q[1]! / l, q[2]! / l];
+    };
+    let sum = 0;
+    let min2 = Infinity;
+    for (const g of rx.filaments) {
+      const gw: Filament = g.kind === "circle"
+        ? { kind: "circle", center: map(g.center), axis: dir(g.axis), radius: g.radius, turns: g.turns }
+        : { kind: "path", points: g.points.map(map), turns: g.turns };
+      for (const f of tx.filaments) {
+        const ft: Filament = f.kind === "circle" ? { ...f, axis: dir0(f.axis) } : f;
+        sum += f.turns * g.turns * filamentMutual(ft, gw, Math.min(1e-6, qtol));
+        const d2 = lastFilamentDistance2();
+        if (d2 < min2) min2 = d2;
+      }
+    }
+    finish(sum, Math.abs(sum) * qtol, "exact", min2);
+    return sum;
+  };
+
+  const finish = (m: number, err: number, method: "lumped" | "exact", minA2: number): void => {
+    lastError = err;
+    lastMethod = method;
+    lastWarnings = [];
+    if (method === "exact" && Math.sqrt(minA2) < clearance) {
+      lastWarnings.push(
+        `the coils' conductors overlap at this pose (filaments ${(Math.sqrt(minA2) * 1e3).toPrecision(3)} mm apart, wire radii sum ${(clearance * 1e3).toPrecision(3)} mm): the filament value is not physical`,
+      );
+    }
+    stats[method]++;
+    void m;
+  };
+
+  const mutual = (poseTx: Pose, poseRx: Pose): number => {
+    const fTx = poseFrame(poseTx, "couplingEvaluator", "poseTx");
+    const fRx = poseFrame(poseRx, "couplingEvaluator", "poseRx");
+    if (!fast) return exact(fTx, fRx);
+    const Rt = fTx.R, Rr = fRx.R;
+    const nW0 = Rr[2]!, nW1 = Rr[5]!, nW2 = Rr[8]!;
+    nx = Rt[0]! * nW0 + Rt[3]! * nW1 + Rt[6]! * nW2;
+    ny = Rt[1]! * nW0 + Rt[4]! * nW1 + Rt[7]! * nW2;
+    nz = Rt[2]! * nW0 + Rt[5]! * nW1 + Rt[8]! * nW2;
+    const dx = fRx.position[0] - fTx.position[0], dy = fRx.position[1] - fTx.position[1], dz = fRx.position[2] - fTx.position[2];
+    ox = Rt[0]! * dx + Rt[3]! * dy + Rt[6]! * dz;
+    oy = Rt[1]! * dx + Rt[4]! * dy + Rt[7]! * dz;
+    oz = Rt[2]! * dx + Rt[5]! * dy + Rt[8]! * dz;
+    const accept = (e: number, m: number) => e <= Math.max(relTol * Math.abs(m), absTol);
+
+    // level A: both coils in order-1 moment lumps, with the order-0 lumps alongside for the error
+    sumRings(rx1, t1, t0);
+    const mA = sums.m, mA0 = sums.m0, errA = sums.err;
+    let minA2 = sums.minA2;
+    sumRings(rxLevels[0]!, t1, undefined);
+    if (sums.minA2 < minA2) minA2 = sums.minA2;
+    const D = Math.sqrt(minA2);
+    // order-1 lumping error ≈ (extent/D)²·(order-0 error) for each coil, with a safety factor
+    const eRx = Math.abs(mA - sums.m) * Math.min(1, (LUMP_SAFETY * rx0.extent * rx0.extent) / (D * D));
+    const eTx = Math.abs(mA - mA0) * Math.min(1, (LUMP_SAFETY * t0.extent * t0.extent) / (D * D));
+    if (D > GUARD * Math.max(rx0.extent, t0.extent) && accept(eRx + eTx + errA, mA)) {
+      finish(mA, eRx + eTx + errA, "lumped", minA2);
+      return mA;
+    }
+    // level B: the transmitter exact (every turn), the receiver refined group by group
+    sumRings(rxLevels[0]!, tExact, undefined);
+    let prev = sums.m;
+    for (let l = 1; l < rxLevels.length; l++) {
+      const rl = rxLevels[l]!;
+      sumRings(rl, tExact, undefined);
+      const last = l === rxLevels.length - 1;
+      // Richardson's |M_ℓ − M_{ℓ−1}|/3 with a safety factor 3: |M_ℓ − M_{ℓ−1}|
+      const e = last ? sums.err : Math.abs(sums.m - prev) + sums.err;
+      if (Math.sqrt(sums.minA2) > GUARD * rl.extent && accept(e, sums.m)) {
+        finish(sums.m, e, last ? "exact" : "lumped", sums.minA2);
+        return sums.m;
+      }
+      prev = sums.m;
+    }
+    // ring quadrature did not converge (a receiver turn grazes a transmitter wire): per-pair adaptive
+    return exact(fTx, fRx);
+  };
+
+  return {
+    mutual,
+    coupling: (a, b) => mutual(a, b) * norm,
+    evaluate: (a, b) => {
+      const m = mutual(a, b);
+      return { mutual: m, coupling: m * norm, error: lastError, method: lastMethod, warnings: lastWarnings };
+    },
+    selfTx,
+    selfRx,
+    stats,
+  };
+}
+
+function dir0(a: readonly [number, number, number]): [number, number, number] {
+  const l = Math.hypot(a[0], a[1], a[2]);
+  return [a[0] / l, a[1] / l, a[2] / l];
+}

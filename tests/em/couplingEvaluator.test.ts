@@ -1,0 +1,68 @@
+import { describe, expect, expectTypeOf, it } from "vitest";
+import { couplingEvaluator, type CouplingEvaluator } from "../../lib/em/couplingEvaluator.ts";
+import { mutualInductanceChecked } from "../../lib/em/mutualInductance.ts";
+import { selfInductance } from "../../lib/em/selfInductance.ts";
+import type { Coil, Pose } from "../../lib/em/types.ts";
+import { expectRelClose } from "../helpers/expectRelClose.ts";
+import { handRoundCoil, rectTurn } from "./helpers.ts";
+
+const tx = handRoundCoil(0.02, 3, 2, 5e-4);
+const token = handRoundCoil(0.004, 8, 2, 2e-4);
+const P0: Pose = { position: [0, 0, 0] };
+
+describe("couplingEvaluator", () => {
+  it("agrees with the filament-by-filament sum within relTol over a map, tilts included (independent of its lumping)", () => {
+    const ev = couplingEvaluator(tx, token);
+    const poses: Pose[] = [];
+    for (let x = -0.035; x <= 0.0351; x += 0.005) {
+      for (const z of [0.003, 0.008, 0.02, 0.05]) {
+        poses.push({ position: [x, 0.002, z] });
+        poses.push({ position: [x, 0, z], axis: [Math.sin(0.6), 0.1, Math.cos(0.6)], spin: 0.4 });
+      }
+    }
+    const ref = poses.map((p) => mutualInductanceChecked(tx, P0, token, p).value);
+    const max = Math.max(...ref.map(Math.abs));
+    poses.forEach((p, i) => {
+      const r = ev.evaluate(P0, p);
+      // the contract: relTol = 1e-3 relative, or 1e-2·relTol of the centre coupling where M is small;
+      // the 0.5 % of the issue's map target is 5× looser
+      expectRelClose(r.mutual, ref[i]!, 1e-3, `pose ${JSON.stringify(p)} (${r.method})`, 2e-5 * max);
+    });
+    expect(ev.stats.lumped).toBeGreaterThan(ev.stats.exact);
+  });
+
+  it("coupling() is mutual()/√(L₁L₂) and a moved transmitter pose gives the same as the relative pose", () => {
+    const ev = couplingEvaluator(tx, token);
+    const pr: Pose = { position: [0.01, 0, 0.012], axis: [0.2, 0, 1] };
+    expectRelClose(ev.coupling(P0, pr), ev.mutual(P0, pr) / Math.sqrt(selfInductance(tx) * selfInductance(token)), 1e-14, "k");
+    expectRelClose(ev.selfTx, selfInductance(tx), 1e-15, "L_tx");
+    // shift both by the same vector: M unchanged (lumps are evaluated in the transmitter's frame)
+    const s = 0.3;
+    expectRelClose(ev.mutual({ position: [s, s, s] }, { ...pr, position: [0.01 + s, s, 0.012 + s] }), ev.mutual(P0, pr), 1e-9, "translation");
+  });
+
+  it("falls back to the exact sum for coils that are not coaxial circles, and warns on overlapping conductors", () => {
+    const sq = rectTurn(0.03, 0.03, 5e-4);
+    const ev = couplingEvaluator(sq, token);
+    const p: Pose = { position: [0.005, 0, 0.01] };
+    const r = ev.evaluate(P0, p);
+    expect(r.method).toBe("exact");
+    expectRelClose(r.mutual, mutualInductanceChecked(sq, P0, token, p).value, 1e-6, "polygon transmitter");
+    const ev2 = couplingEvaluator(tx, token);
+    // a token turn standing upright (axis y) whose rim dips into the transmitter's winding window,
+    // 0.29 mm from a transmitter wire (the wire radii sum to 0.35 mm): conductors overlap
+    const o = ev2.evaluate(P0, { position: [0.0204, 0, 0.0042], axis: [0, 1, 0] });
+    expect(Number.isFinite(o.mutual)).toBe(true);
+    expect(o.warnings.join()).toMatch(/overlap/);
+  });
+
+  it("rejects bad options and coils", () => {
+    expect(() => couplingEvaluator(tx, token, { relTol: 0 })).toThrowErrorMatchingInlineSnapshot(`[TanklightInputError: couplingEvaluator: options.relTol: must be in (0, 1), got 0]`);
+    expect(() => couplingEvaluator(tx, { ...token, filaments: [] } as Coil)).toThrow(/rx/);
+  });
+
+  it("has the documented signature", () => {
+    expectTypeOf(couplingEvaluator).returns.toEqualTypeOf<CouplingEvaluator>();
+    expectTypeOf<CouplingEvaluator["mutual"]>().parameters.toEqualTypeOf<[Pose, Pose]>();
+  });
+});
