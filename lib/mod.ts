@@ -133,6 +133,12 @@ export {
   type SelfInductanceOptions,
   type SelfInductanceDetail,
 } from "./em/selfInductance.ts";
+export {
+  couplingEvaluator,
+  type CouplingEvaluator,
+  type CouplingEvaluation,
+  type CouplingEvaluatorOptions,
+} from "./em/couplingEvaluator.ts";
 // losses, self-capacitance, quality factor (losses)
 export { COPPER, ALUMINIUM, MATERIALS, material, resistivityAt, type Material } from "./em/materials.ts";
 export { skinDepth } from "./em/losses/skinDepth.ts";
