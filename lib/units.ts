@@ -243,7 +243,11 @@ export function parseQuantity(value: QuantityInput, dimension: Dimension, field?
   }
   const mantissa = match[1] ?? "";
   const exponent = Number(match[2] ?? "0");
-  const unitText = text.slice(match[0].length).trim();
+  // "1/s", "1/K": a reciprocal of one unit symbol is written as its power −1 for mathjs
+  const unitText = text
+    .slice(match[0].length)
+    .trim()
+    .replace(/^1\s*\/\s*([A-Za-z]+)$/, "$1^-1");
   const plain = Number(`${mantissa}e${exponent}`);
 
   let result: number;
@@ -270,6 +274,10 @@ export function parseQuantity(value: QuantityInput, dimension: Dimension, field?
     } catch {
       const hint = caseHint(unitText) ?? separatedPrefixHint(mantissa, match[2], unitText);
       throw quantityError(field, value, dimension, expectation(dimension), `unknown unit '${unitText}'${hint === undefined ? "" : "; " + hint}`);
+    }
+    if ((u as unknown as { value: unknown }).value !== null) {
+      // mathjs read a number inside the unit text ("5 5 mm", "5 2mm"): one number only
+      throw quantityError(field, value, dimension, expectation(dimension), "more than one number");
     }
     const found = dimensionOf(u);
     if (found !== dimension) {

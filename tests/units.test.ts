@@ -67,6 +67,8 @@ describe("parseQuantity: strings with units", () => {
     expect(parseQuantity("1e3 mm", "length")).toBe(1);
     expect(parseQuantity(".5 mm", "length")).toBe(0.0005);
     expect(parseQuantity("+5 mm", "length")).toBe(0.005);
+    expect(parseQuantity("5 1/s", "frequency")).toBe(5);
+    expect(parseQuantity("5 1/ms", "frequency")).toBe(5000);
   });
 
   it("reads the mil as 0.001 inch = 25.4 µm exactly", () => {
@@ -150,6 +152,10 @@ describe("parseQuantity: rejected strings", () => {
     expect(() => parseQuantity("4.7n F", "capacitance", "c")).toThrowErrorMatchingInlineSnapshot(
       `[TanklightInputError: c: expected a capacitance like '4.7 nF', got '4.7n F' (unknown unit 'n F'; write the prefix with its unit: '4.7 nF'?)]`,
     );
+    expect(() => parseQuantity("5 5 mm", "length", "r")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: r: expected a length like '12 mm', got '5 5 mm' (more than one number)]`,
+    );
+    expect(() => parseQuantity("5 2mm", "length", "r")).toThrow(TanklightInputError);
     expect(() => parseQuantity("mm", "length", "r")).toThrow(TanklightInputError);
     expect(() => parseQuantity("NaN mm", "length", "r")).toThrow(TanklightInputError);
     expect(() => parseQuantity("Infinity m", "length", "r")).toThrow(TanklightInputError);
