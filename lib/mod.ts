@@ -221,6 +221,7 @@ export {
   type ReservoirState,
   type CurrentFedBridgeResult,
 } from "./circuit/loads/rectifier.ts";
+export { tokenResponse, type TokenResponse, type TokenResponseInput } from "./circuit/loads/tokenResponse.ts";
 // end parts and loads
 // link: drives, coupled tanks, operating point (issue 6)
 export {
