@@ -15,6 +15,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { selfInductance } from "../../lib/em/selfInductance.ts";
+import { mutualInductance } from "../../lib/em/mutualInductance.ts";
 import { solenoid } from "../../lib/em/builders/solenoid.ts";
 import { roundCoil } from "../../lib/em/builders/roundCoil.ts";
 import { flatSpiral } from "../../lib/em/builders/flatSpiral.ts";
@@ -221,4 +222,33 @@ describe("rectLoop against Grover's rectangle formula", () => {
       expectOutside({ quantity: `rectangle ${r.a}×${r.b} m, d=${r.d} m`, source: "source: Grover 1946, Inductance Calculations, rectangle formula", ours: selfInductance(rectLoop({ width: r.a, height: r.b, wire: { diameter: r.d } })), reference: groverRectangleInductance(r.a, r.b, r.d / 2), rtol: 1e-12, unit: "H" });
     });
   }
+});
+
+describe("polygon turns against circle turns (independent method: the polygon machinery against the circle closed form)", () => {
+  const a = 0.02;
+  const d = 0.5e-3;
+  const circle = solenoid({ radius: a, turns: 1, wire: { diameter: d } });
+  const rounded = (cornerSegments: number) =>
+    rectSpiral({ outerWidth: 2 * a + d, outerHeight: 2 * a + d, cornerRadius: a + d / 2, turns: 1, pitch: d, cornerSegments, wire: { diameter: d } });
+
+  it("a square with corner radius = half its side is a circle: its L converges to µ0a(ln(8a/r) − 7/4) quadratically in the chord angle", () => {
+    const Lc = selfInductance(circle);
+    const e16 = selfInductance(rounded(16)) / Lc - 1;
+    const e32 = selfInductance(rounded(32)) / Lc - 1;
+    // chords of Δθ = 90°/n: the polygon's area and perimeter fall short by O(Δθ²); halving Δθ quarters the error
+    expectRelClose(e16 / e32, 4, 0.1, "quadratic convergence");
+    // at 32 chords a quarter the shortfall is ≈ 2.7e-4; 5e-4 allows it
+    expectRelClose(selfInductance(rounded(32)), Lc, 5e-4, "128-gon vs circle");
+  });
+
+  it("polygons circulate in the same sense as circle filaments (counter-clockwise about +z): coaxial pairs couple positively", () => {
+    const square = rectLoop({ width: 0.04, height: 0.04, wire: { diameter: d } });
+    const here = { position: [0, 0, 0] as const };
+    const above = { position: [0, 0, 0.01] as const };
+    expect(mutualInductance(square, here, circle, above)).toBeGreaterThan(0);
+    // a 40 mm square and a 40 mm circle 10 mm apart link about as much flux as two such circles (square area 4/π larger)
+    const ratio = mutualInductance(square, here, circle, above) / mutualInductance(circle, here, circle, above);
+    expect(ratio).toBeGreaterThan(1);
+    expect(ratio).toBeLessThan(4 / Math.PI);
+  });
 });
