@@ -142,7 +142,7 @@ export {
 // losses, self-capacitance, quality factor (losses)
 export { COPPER, ALUMINIUM, MATERIALS, material, resistivityAt, type Material } from "./em/materials.ts";
 export { skinDepth } from "./em/losses/skinDepth.ts";
-export { roundWireAcFactor } from "./em/losses/roundWireAcFactor.ts";
+export { roundWireAcFactor, roundWireInternalInductanceFactor } from "./em/losses/roundWireAcFactor.ts";
 export { roundWireProximityFactor, turnFieldsPerAmpere, type TurnFields } from "./em/losses/proximity.ts";
 export { dowellFactor, dowellDelta } from "./em/losses/dowell.ts";
 export { litzResistancePerLength, type LitzResistance } from "./em/losses/litz.ts";

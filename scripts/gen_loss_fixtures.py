@@ -116,13 +116,22 @@ def ac_factor(r_over_delta):
     return mp.re(u / 2 * mp.besselj(0, u) / mp.besselj(1, u))
 
 
+def internal_y(r_over_delta):
+    # Internal inductance factor Y = 2πL'_int/μ0 (1/4 at DC): ωL'_int = Im Z, so
+    # Y = Im[(ka/2) J0(ka)/J1(ka)] / (a/δ)² (δ² = 2ρ/(ωμ0)).
+    x = mp.mpf(r_over_delta)
+    u = x * (1 - 1j)
+    return mp.im(u / 2 * mp.besselj(0, u) / mp.besselj(1, u)) / x ** 2
+
+
 ratios = [1e-3, 0.01, 0.1, 0.3, 0.5, 0.8, 1, 1.2, 1.5, 2, 2.5, 3, 4, 5, 7, 10, 12.7, 15, 20, 30, 50, 100, 300, 1000]
 dump("round_wire_ac_factor.json", {
-    "source": "exact isolated round wire, R_ac/R_dc = Re[(ka/2) J0(ka)/J1(ka)], k = (1-j)/δ "
+    "source": "exact isolated round wire, R_ac/R_dc = Re[(ka/2) J0(ka)/J1(ka)], k = (1-j)/δ; "
+              "internalY = 2πL'_int/μ0 = Im[(ka/2) J0/J1]/(a/δ)² "
               "(Ramo, Whinnery & Van Duzer 1994 §5.14; evaluated with mpmath complex Bessel J)",
     "generator": GEN,
     "digits": 17,
-    "cases": [{"rOverDelta": s17(r), "factor": s17(ac_factor(r))} for r in ratios],
+    "cases": [{"rOverDelta": s17(r), "factor": s17(ac_factor(r)), "internalY": s17(internal_y(r))} for r in ratios],
 })
 
 

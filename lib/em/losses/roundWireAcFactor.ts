@@ -49,3 +49,35 @@ export function roundWireAcFactor(radius: number, f: number, resistivity: number
   const delta = Math.sqrt(resistivity / (Math.PI * f * MU0));
   return acFactorFromQ((Math.SQRT2 * radius) / delta);
 }
+
+/**
+ * Internal-inductance factor Y of an isolated straight round wire: Y = 2πL′_int/μ₀, exactly.
+ *
+ * From the same internal impedance as roundWireAcFactor: ωL′_int = Im Z′, giving with
+ * q = √2·r/δ  Y = (ber q·ber′q + bei q·bei′q) / (q·(ber′²q + bei′²q))  — 1/4 at DC (uniform
+ * current), → δ/(2r) at high frequency (Ramo, Whinnery & Van Duzer §5.14, Kelvin form). It is the
+ * Y of the own-turn term μ₀a(ln(8a/r) − 2 + Y) (Rosa & Grover) without a fitted blend.
+ * @param radius bare conductor radius, m, > 0.
+ * @param f frequency, Hz, ≥ 0 (0 → exactly 1/4).
+ * @param resistivity Ω·m, > 0 (non-magnetic conductor).
+ * @returns Y, dimensionless, in (0, 1/4].
+ * @example roundWireInternalInductanceFactor(0.25e-3, 200e3, 1.7241e-8) // → 0.2314
+ */
+export function roundWireInternalInductanceFactor(radius: number, f: number, resistivity: number): number {
+  requirePositive(radius, "radius", "m", "roundWireInternalInductanceFactor");
+  requirePositive(resistivity, "resistivity", "Ω·m", "roundWireInternalInductanceFactor");
+  if (!(typeof f === "number" && Number.isFinite(f) && f >= 0)) {
+    throw new TanklightInputError([{ path: "f", message: "must be a finite number ≥ 0 Hz", value: f, expected: "≥ 0 Hz" }], "roundWireInternalInductanceFactor");
+  }
+  if (f === 0) return 0.25;
+  const q = (Math.SQRT2 * radius) / Math.sqrt(resistivity / (Math.PI * f * MU0));
+  // small q: ber′ = (ber₁ + bei₁)/√2 cancels to O(q³), so use the series Y = 1/4 − x⁴/384 + O(x⁸),
+  // x = r/δ = q/√2 (checked against the exact fixture); at x < 0.05 the O(x⁸) rest is < 1e-14
+  if (q < 0.05 * Math.SQRT2) return 0.25 - (q * q * q * q) / 1536;
+  kelvinScaledInto(q, buf);
+  const br = buf[0]!, bi = buf[1]!;
+  const b1r = buf[2]!, b1i = buf[3]!;
+  const dr = (b1r + b1i) * Math.SQRT1_2;
+  const di = (b1i - b1r) * Math.SQRT1_2;
+  return (br * dr + bi * di) / (q * (dr * dr + di * di));
+}

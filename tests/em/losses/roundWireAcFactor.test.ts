@@ -1,5 +1,5 @@
 import { describe, expect, expectTypeOf, it } from "vitest";
-import { roundWireAcFactor } from "../../../lib/em/losses/roundWireAcFactor.ts";
+import { roundWireAcFactor, roundWireInternalInductanceFactor } from "../../../lib/em/losses/roundWireAcFactor.ts";
 import { skinDepth } from "../../../lib/em/losses/skinDepth.ts";
 import { TanklightInputError } from "../../../lib/errors.ts";
 import { expectOutside } from "../../helpers/validation.ts";
@@ -53,6 +53,22 @@ describe("roundWireAcFactor(radius, f, resistivity)", () => {
       last = v;
     }
     expectRelClose(roundWireAcFactor(0.25e-3, 200e3, RHO), 1.1504241913449067, 1e-12, "doc example 0.5 mm copper at 200 kHz");
+  });
+
+  it("roundWireInternalInductanceFactor equals the exact internal inductance (Y = 1/4 at DC → δ/2r)", () => {
+    // reference library: mpmath — Y = Im[(ka/2)J0(ka)/J1(ka)]/(a/δ)², the same exact solution;
+    // measured worst error ~1e-13, tolerance 1e-11 for the cancellation in ber·ber′ + bei·bei′ at small q.
+    for (const c of exact.cases) {
+      expectOutside({
+        quantity: `internal inductance factor Y at r/δ = ${c.rOverDelta}`,
+        source: "reference library: mpmath besselj, exact round-wire internal impedance",
+        ours: roundWireInternalInductanceFactor(c.rOverDelta * DELTA, F, RHO),
+        reference: c.internalY,
+        rtol: 1e-11,
+      });
+    }
+    expect(roundWireInternalInductanceFactor(1e-3, 0, RHO)).toBe(0.25);
+    expectRelClose(roundWireInternalInductanceFactor(0.25e-3, 200e3, RHO), 0.2314057165937073, 1e-12, "doc example");
   });
 
   it("rejects bad input", () => {
