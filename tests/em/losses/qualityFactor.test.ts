@@ -16,9 +16,9 @@ const tx = roundCoil({ meanRadius: 0.04, turns: 20, wire: roundWire(0.5e-3, { in
 describe("qualityFactor(coil, f)", () => {
   it("puts the 40 mm, 20-turn, 0.5 mm copper transmitter coil at 100–300 kHz inside the practitioners' Q band 50–200", () => {
     // trade practice (no source): hand-wound air-core coils of this size (tens of µH, wire a
-    // few skin depths thick) are reported with Q of roughly 50–200 at 100–300 kHz. We check our
-    // value against the band's geometric centre, 100, with a tolerance that spans the band
-    // (50…200 = 100 ×/÷ 2): rtol 1 on the low side is expressed as the explicit band below.
+    // few skin depths thick) are reported with Q of roughly 50–200 at 100–300 kHz. The recorded
+    // check uses the band's midpoint 125 with rtol 0.6, which is exactly the band 50…200; the two
+    // explicit bounds below say the same in plain terms.
     for (const f of [100e3, 200e3, 300e3]) {
       const q = qualityFactor(tx, f);
       expectOutside({ quantity: `Q of the 20-turn transmitter at ${f / 1e3} kHz`, source: "trade practice (no source): Q ≈ 50–200 for such coils", ours: q, reference: 125, rtol: 0.6 });
