@@ -85,6 +85,9 @@ function math(): ReturnType<typeof create> {
     // The gauss (CGS unit of flux density), 1 G = 1e-4 T exactly by definition; common in
     // older magnetics literature and on cheap field meters. Prefixes allowed ("mG").
     m.createUnit("gauss", { definition: "1e-4 T", prefixes: "short", aliases: [] });
+    // The oersted (CGS unit of field strength), 1 Oe = 1000/(4π) A/m exactly (the CGS–SI
+    // relation of H); found in ferrite and magnet data.
+    m.createUnit("oersted", { definition: `${1000 / (4 * Math.PI)} A/m`, prefixes: "none", aliases: ["Oe"] });
     mathInstance = m;
   }
   return mathInstance;
@@ -340,8 +343,8 @@ const PREFIXES = ["q", "r", "y", "z", "a", "f", "p", "n", "µ", "m", "", "k", "M
 const PREFIX_OFFSET = 10;
 
 /**
- * Units printed without an SI prefix: levels, ratios and units that take no prefixes by
- * convention (°C and degrees of angle: SI Brochure 2019 §5.3.4 and Table 8; %, ppm; dB).
+ * Units printed without an SI prefix, by our choice: levels and ratios (dB…, %, ppm) are not
+ * scalable quantities; angles and temperatures read better unprefixed ("298 K", "25.0 °C").
  */
 const UNPREFIXED = new Set(["", "%", "ppm", "°C", "°", "deg", "degC", "dB", "dBm", "dBµA/m", "dBµV/m", "dBuA/m", "dBuV/m", "rad", "sr", "K", "°F"]);
 

@@ -115,8 +115,14 @@ describe("parseQuantity: strings with units", () => {
     expect(parseQuantity(" 0.5 ", "dimensionless")).toBe(0.5);
   });
 
-  it("accepts the gauss for flux density (1 G = 1e-4 T by definition)", () => {
+  it("accepts the gauss and the oersted (CGS units, defined in SI)", () => {
     expect(parseQuantity("1 gauss", "fluxDensity")).toBe(1e-4);
+    expect(parseQuantity("100 mgauss", "fluxDensity")).toBe(1e-5);
+    // source: SI Brochure, 8th ed. (2006), Table 9 (CGS units): 1 Oe ≙ (10³/4π) A/m. Reference value
+    // 10³/(4π) = 79.5774715459476678844… (mpmath, 30 digits), rounded to the nearest double.
+    // Tolerance: one rounding in the definition string (≤ 1 ulp ≈ 1.8e-16 relative).
+    expectOutside({ quantity: "1 Oe in A/m", source: "source: SI Brochure 8th ed. (2006) Table 9, Oe ≙ (10³/4π) A/m", ours: parseQuantity("1 Oe", "fieldStrength"), reference: 79.57747154594767, rtol: 4e-16, unit: "A/m" });
+    expect(parseQuantity("2 oersted", "fieldStrength")).toBe(2 * parseQuantity("1 Oe", "fieldStrength"));
   });
 });
 
