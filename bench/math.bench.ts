@@ -3,7 +3,7 @@
  * The others are reported without a target, for the engines that call them.
  */
 import type { Workload } from "./harness.ts";
-import { ellipticKE } from "../lib/math/elliptic.ts";
+import { ellipticKE, ellipticKEInto } from "../lib/math/elliptic.ts";
 import { integrateAdaptive, integrateGaussLegendre } from "../lib/math/quadrature.ts";
 import { lambertW } from "../lib/math/lambertW.ts";
 import { luFactor, luSolve } from "../lib/math/lu.ts";
@@ -30,6 +30,7 @@ const a2 = Float64Array.of(2, 1, 0, 1, 0, -1, 3, 0);
 const b2 = Float64Array.of(1, 0, 0, 1);
 const x2 = new Float64Array(4);
 
+const keOut = new Float64Array(2);
 const smooth = (x: number): number => Math.exp(-x) * Math.cos(3 * x);
 
 export const workloads: Workload[] = [
@@ -38,6 +39,16 @@ export const workloads: Workload[] = [
     size: "1 evaluation",
     target: 60e-9,
     fn: () => ellipticKE(ms[i++ & 1023]!),
+  },
+  {
+    name: "ellipticKEInto (m and m1 given, writes into out)",
+    size: "1 evaluation",
+    target: 60e-9,
+    fn: () => {
+      const m = ms[i++ & 1023]!;
+      ellipticKEInto(m, 1 - m, keOut);
+      return keOut[0];
+    },
   },
   {
     name: "Gauss–Legendre 32-point integral (cached rule)",

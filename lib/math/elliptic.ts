@@ -27,8 +27,12 @@
 import { TanklightInputError } from "../errors.ts";
 
 const HALF_PI = Math.PI / 2;
-/** AGM stop: |c_n| ≤ this × a_n. Convergence is quadratic, so c_{n+1} ≈ c_n²/(4a) is then below rounding. */
-const AGM_TOLERANCE = 1e-15;
+/**
+ * AGM stop: |c_{n+1}| ≤ this × a_{n+1}. Convergence is quadratic: the next gap is
+ * c_{n+2} = c_{n+1}²/(4a_{n+2}) ≤ 2.5e-17·a, below half an ulp, so a_{n+1} is already the limit
+ * to rounding and the remaining terms of S are below 1e-30 (one AGM step fewer than 1e-15).
+ */
+const AGM_TOLERANCE = 1e-8;
 /** ellipticKEInto: largest accepted |m + m₁ − 1| (both formed from the same geometry agree far better). */
 const SUM_TOLERANCE = 1e-12;
 /** Below this m₁, E is taken from Legendre's relation (two AGM runs) instead of K·(1 − S). */
