@@ -91,8 +91,9 @@ const RING_SAMPLES = 24;
  * per cent at low frequency and are neglected (docs/methods/losses.md). For coaxial circle
  * filaments (every builder's circular coil) the field is the same all round a turn and one point
  * suffices; otherwise RING_SAMPLES points around the turn are averaged.
- * @param coil the coil (circle filaments; polygon paths give a TanklightInputError here — their
- *   proximity loss is not modelled yet).
+ * @param coil the coil, circle filaments only (a path filament throws TanklightInputError here;
+ *   coilResistance maps polygon turns to equal-area circles, and a spiral polygon to its rings,
+ *   before calling this).
  * @returns per-filament mean |H|², its axial and in-plane parts, and conductor lengths.
  */
 export function turnFieldsPerAmpere(coil: Coil): TurnFields {
