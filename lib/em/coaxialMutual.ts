@@ -21,8 +21,8 @@ import { coaxialKernel } from "./loopKernel.ts";
  * @param d axial distance between the loop planes, m, finite (sign irrelevant).
  * @returns M, H (> 0 for currents in the same sense). Coincident filaments (a = b, d = 0)
  *   have no finite filament mutual inductance: TanklightInputError.
- * @example coaxialLoopMutualInductance(0.04, 0.006, 0.03) // → 6.7829e-10 H
- * @example coaxialLoopMutualInductance(0.04, 0.006, 100) // → 1.4212e-19 H (= μ₀πa²b²/(2d³) to 1e-6)
+ * @example coaxialLoopMutualInductance(0.04, 0.006, 0.03) // → 9.0560e-10 H
+ * @example coaxialLoopMutualInductance(0.04, 0.006, 100) // → 1.1370e-19 H (= μ₀πa²b²/(2d³) to 1e-7)
  * @see loopMutualInductance (any relative position), mutualInductance (coils)
  */
 export function coaxialLoopMutualInductance(ra: number, rb: number, d: number): number {

@@ -87,7 +87,7 @@ export function mutualInductanceChecked(a: Coil, poseA: Pose, b: Coil, poseB: Po
  * @returns M, H. Throws TanklightInputError when the conductors overlap (filaments closer than
  *   the sum of the bare wire radii: e.g. a token intersecting the transmitter winding) —
  *   use {@link mutualInductanceChecked} to get the value with a warning instead.
- * @example mutualInductance(tx, { position: [0, 0, 0] }, token, { position: [0, 0, 0.03] }) // → H
+ * @example mutualInductance(tx, { position: [0, 0, 0] }, token, { position: [0, 0, 0.03] }) // → 5.5375e-7 H (tx, token of docs/methods/em.md)
  * @see couplingFactor, couplingEvaluator (fast sweeps)
  */
 export function mutualInductance(a: Coil, poseA: Pose, b: Coil, poseB: Pose): number {
@@ -102,7 +102,7 @@ export function mutualInductance(a: Coil, poseA: Pose, b: Coil, poseB: Pose): nu
  * Coupling factor k = M/√(L₁L₂) of two coils in any poses (low-frequency self-inductances,
  * selfInductance without frequency). Sign as M.
  * @returns k, dimensionless, |k| < 1. Throws like {@link mutualInductance} on overlap.
- * @example couplingFactor(tx, { position: [0,0,0] }, token, { position: [0,0,0.03], axis: [Math.sin(0.5),0,Math.cos(0.5)] })
+ * @example couplingFactor(tx, { position: [0, 0, 0] }, token, { position: [0.02, 0, 0.03], axis: [Math.sin(π/6), 0, Math.cos(π/6)] }) // → 0.0151 (docs/methods/em.md)
  */
 export function couplingFactor(a: Coil, poseA: Pose, b: Coil, poseB: Pose): number {
   const M = mutualInductance(a, poseA, b, poseB);

@@ -10,6 +10,7 @@ import type { Coil, Pose } from "../../lib/em/types.ts";
 import { expectRelClose } from "../helpers/expectRelClose.ts";
 import { expectOutside } from "../helpers/validation.ts";
 import { handRoundCoil, polygonTurn, rectTurn, singleTurn } from "./helpers.ts";
+import { roundCoil } from "../../lib/em/builders/roundCoil.ts";
 
 const tx = handRoundCoil(0.02, 3, 2, 5e-4);
 const token = handRoundCoil(0.005, 4, 1, 2e-4);
@@ -122,6 +123,16 @@ describe("mutualInductance", () => {
     // (terms of order (d/a)² ln(d/a) neglected: 1 % covers them at d/a = 0.1)
     expectOutside({ quantity: "k of two 10 mm turns 1 mm apart", source: "source: Maxwell 1873 Treatise §705 (near-limit of the coaxial formula; article number from memory)", ours: kk, reference: (Math.log(80) - 2) / (Math.log(800) - 1.75), rtol: 1e-2 });
     expect(kk).toBeLessThan(1);
+  });
+
+  it("runs the docs/methods/em.md example: k = 0.0151 for the 30° tilted token", () => {
+    const txc = roundCoil({ innerRadius: "40 mm", turns: 20, layers: 4, wire: { diameter: "0.5 mm" } });
+    const tok = roundCoil({ innerRadius: "6 mm", turns: 30, wire: { diameter: "0.1 mm" } });
+    const tilt = (30 * Math.PI) / 180;
+    const k = couplingFactor(txc, { position: [0, 0, 0] }, tok, { position: [0.02, 0, 0.03], axis: [Math.sin(tilt), 0, Math.cos(tilt)] });
+    // pins the documented value (a regression check, not an outside source): 4 printed digits
+    expectRelClose(k, 0.015129857872209806, 1e-9, "docs example k");
+    expect(k.toFixed(4)).toBe("0.0151");
   });
 
   it("has the documented signatures", () => {
