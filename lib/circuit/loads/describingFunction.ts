@@ -44,9 +44,9 @@ function junctionBranch(j: Junction): JunctionBranch {
 
 function evalJunction(j: Junction, A: number, r: JunctionResult): void {
   if (r.j === j && r.A === A) return;
-  halfWaveIntegrals(junctionBranch(j), A, 0, fwd);
-  const nvt = j.n * j.thermalVoltage;
-  reverseHalfIntegrals(j.is, nvt, A, rev);
+  const br = junctionBranch(j);
+  halfWaveIntegrals(br, A, 0, fwd);
+  reverseHalfIntegrals(br, A, rev);
   r.i1 = fwd[0]! - rev[0]!;
   r.slope = fwd[2]! + rev[2]!;
   r.avg = (fwd[1]! + rev[1]!) / (2 * Math.PI) - j.is;

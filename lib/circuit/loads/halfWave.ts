@@ -232,23 +232,25 @@ function panel(br: Branch, A: number, offset: number, a: number, b: number, out:
 }
 
 /**
- * The reverse half-cycle of a junction, i⁺ = I_s·exp(−A·sin θ/nV_T) (series drop negligible
- * at |i| ≤ I_s): out[0] = ∫₀^π i⁺ sin θ dθ, out[1] = ∫₀^π i⁺ dθ, out[2] = ∫₀^π g sin²θ dθ with
- * g = i⁺/nV_T. 16-point Gauss–Legendre on [0, π/2]; its absolute error is below I_s·nV_T/A,
- * far below any current that matters (the term itself is at most I_s).
+ * The reverse half-cycle of a junction branch (voltage −A·sin θ): out[0] = ∫₀^π i⁺ sin θ dθ,
+ * out[1] = ∫₀^π i⁺ dθ, out[2] = ∫₀^π g sin²θ dθ, with i⁺ ∈ [0, I_s] the exact branch current
+ * (its series drop matters when I_s·r/nV_T is not small, e.g. leaky Schottky diodes).
+ * 16-point Gauss–Legendre on [0, π/2]: the integrand is smooth; far in reverse it is a
+ * boundary layer of width nV_T/A at θ = 0 whose absolute error stays below I_s·nV_T/A, far
+ * below any current that matters (the whole term is at most I_s).
  */
-export function reverseHalfIntegrals(is: number, nvt: number, A: number, out: Float64Array): void {
+export function reverseHalfIntegrals(br: Branch, A: number, out: Float64Array): void {
   const { nodes, weights } = gaussLegendre(16);
   const h = Math.PI / 4;
   let s1 = 0, s0 = 0, g2 = 0;
   for (let k = 0; k < 16; k++) {
     const th = h + h * nodes[k]!;
     const s = Math.sin(th);
-    const i = is * Math.exp((-A * s) / nvt);
+    br.evalAt(-A * s);
     const w = weights[k]!;
-    s1 += w * i * s;
-    s0 += w * i;
-    g2 += (w * i * s * s) / nvt;
+    s1 += w * br.i * s;
+    s0 += w * br.i;
+    g2 += w * br.g * s * s;
   }
   out[0] = 2 * h * s1;
   out[1] = 2 * h * s0;

@@ -223,3 +223,24 @@ describe("plain-data loads are checked", () => {
     expect(() => averageLoadCurrent({ kind: "led", led: {} as Led }, 1)).toThrow(/load\.led/);
   });
 });
+
+describe("fixed rule over the whole parameter space", () => {
+  it("agrees with adaptive Gauss–Kronrod for random junctions (I_s 1e-30…1e-6 A, n 1…4, r_s 0.1…300 Ω, A 1 mV…1 kV)", async () => {
+    const { createRandom } = await import("../../../lib/math/random.ts");
+    const rng = createRandom(2026);
+    for (let k = 0; k < 150; k++) {
+      const is = 10 ** rng.uniformIn(-30, -6);
+      const n = rng.uniformIn(1, 4);
+      const rs = 10 ** rng.uniformIn(-1, 2.5);
+      const A = 10 ** rng.uniformIn(-3, 3);
+      const j = led({ saturationCurrent: is, idealityFactor: n, seriesResistance: rs, leakage: 0 });
+      const ref = describingFunctionReference(j.current, A, 1e-13);
+      const ctx = `I_s ${is.toExponential(2)}, n ${n.toFixed(2)}, r_s ${rs.toPrecision(3)}, A ${A.toPrecision(3)}`;
+      // fundamental: ≲ 1e-10 measured, 1e-8 allowed
+      expectRelClose(fundamentalConductance(singleLed(j), A) * A, ref.inPhase, 1e-8, ctx);
+      // average: the reverse half's boundary layer at θ = 0 leaves an absolute error below
+      // I_s·nV_T/A (measured ≲ 2e-9 of |average| + I_s): 1e-8 of |average| + I_s allowed
+      expectRelClose(averageLoadCurrent(singleLed(j), A)[0]!.current, ref.average, 1e-8, ctx, 1e-8 * (Math.abs(ref.average) + is));
+    }
+  });
+});
