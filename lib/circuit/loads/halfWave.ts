@@ -30,8 +30,9 @@ export interface Branch {
   readonly nvt: number;
   /** total series resistance of the path, Ω */
   readonly rs: number;
-  /** sum of the junctions' I_s (for the small-signal limit only), A */
+  /** current i⁺ at the last evalAt, A (scratch, avoids allocating a result) */
   i: number;
+  /** dI/du at the last evalAt, S */
   g: number;
   /** evaluates i⁺(u) (A) and its derivative (S) into `i`, `g` */
   evalAt(u: number): void;
