@@ -26,6 +26,8 @@ export interface LoopMutualOptions {
 export const LOOP_MUTUAL_TOL = 1e-10;
 /** Largest trapezoidal rule tried before the adaptive Gauss–Kronrod fallback. */
 const MAX_TRAPEZOID = 512;
+/** Smallest accepted trapezoidal rule (compared with the rule of half as many nodes). */
+const MIN_NODES = 16;
 const TWO_PI = 2 * Math.PI;
 
 // cos/sin of the odd nodes (2j+1)π/N for N = 8·2^i: the new nodes when the rule doubles to N
@@ -144,8 +146,8 @@ export function circleMutualCore(
     const diff = Math.abs(value - prev);
     // exponential convergence of the trapezoidal rule on an analytic periodic integrand
     // (Trefethen & Weideman 2014, SIAM Rev. 56(3) §3): e_2N ≈ e_N²/C, so |T_2N − T_N| ≤ 0.1·√tol·scale
-    // puts e_2N two orders below tol·scale; n ≥ 32 keeps out of the pre-asymptotic range.
-    if (n >= 32 && diff <= 0.1 * sq * scale) {
+    // puts e_2N two orders below tol·scale; n ≥ MIN_NODES keeps out of the pre-asymptotic range.
+    if (n >= MIN_NODES && diff <= 0.1 * sq * scale) {
       circleMutualState.minDistance2 = minA2;
       circleMutualState.error = (diff * diff) / scale;
       circleMutualState.evaluations = evaluations;
