@@ -160,6 +160,35 @@ describe("class E", () => {
   });
 });
 
+describe("class-E equivalent against a time-domain simulation of the ideal circuit", () => {
+  const off = JSON.parse(readFileSync(new URL("../fixtures/link/class-e-offnominal.json", import.meta.url), "utf8")) as {
+    cases: { loadedQ: number; loadRatio: number; simulatedCurrent: number; equivalentCurrent: number; simulatedPeakSwitchVoltage: number }[];
+  };
+  const src = "independent method: RK4 simulation of the ideal class-E circuit, Q_L = 10 (scripts/gen_classe_offnominal.py)";
+
+  it("at the nominal load the equivalent source gives the simulated network current", () => {
+    const nominal = off.cases.find((c) => c.loadRatio === 1)!;
+    const d = classEDesign({ supply: 1, frequency: 1 / (2 * Math.PI), resistance: 1 });
+    const e = classEDrive(d);
+    const ours = e.amplitude / Math.hypot(1, d.excessReactance);
+    // rtol 3 %: the relations assume an infinite loaded Q and choke; at Q_L = 10 the simulated
+    // fundamental is 2.0 % higher (and the peak switch voltage 3.74 rather than 3.562 V_DD)
+    expectOutside({ quantity: "class-E network current at nominal load (V_DD = 1 V, R = 1 Ω)", source: src, ours, reference: nominal.simulatedCurrent, rtol: 0.03, unit: "A" });
+    expectOutside({ quantity: "class-E peak switch voltage at Q_L = 10", source: src, ours: d.peakSwitchVoltage, reference: nominal.simulatedPeakSwitchVoltage, rtol: 0.06, unit: "V" });
+  });
+
+  it("off the nominal load (R'/R from 0.25 to 4) the equivalent stays within 15 % of the simulation (measured ≤ 12.7 %)", () => {
+    // the measured band of the equivalent's error, reported in docs/methods/link.md: it
+    // under-predicts light loads (+9 % at R'/R = 0.25) and over-predicts heavy ones (−13 % at 4)
+    for (const c of off.cases) {
+      expectRelClose(c.equivalentCurrent, c.simulatedCurrent, 0.15, `R'/R = ${c.loadRatio}`);
+      const d = classEDesign({ supply: 1, frequency: 1 / (2 * Math.PI), resistance: 1 });
+      const ours = classEDrive(d).amplitude / Math.hypot(c.loadRatio, d.excessReactance);
+      expectRelClose(ours, c.equivalentCurrent, 1e-4, "the fixture's equivalent is ours");
+    }
+  });
+});
+
 describe("parallel-tank single switch", () => {
   it("its tank fundamental is π/2 of the supply (half sine of peak πV_DD averaging to V_DD)", () => {
     // independent method: numerical Fourier integral of the half-sine switch waveform whose
