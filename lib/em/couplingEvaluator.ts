@@ -219,10 +219,14 @@ function ringIntegral(
     if (n > 8) {
       const diff = Math.abs(v - prev);
       const scale = Math.max(Math.abs(v), 1e-3 * ((2 * Math.PI) / (n / 2)) * abs, floor);
-      if ((n >= 16 && diff <= 0.1 * sq * scale) || n >= 256) {
+      // converged only when the node spacing 2πr/N is also below the closest approach to a
+      // lump wire (a narrower peak can hide between the nodes of both rules)
+      const resolved = n * n * minA2 >= 4 * Math.PI * Math.PI * r * r;
+      const converged = n >= 16 && diff <= 0.1 * sq * scale && resolved;
+      if (converged || n >= 256) {
         ring.v1 = v;
         ring.v0 = ((2 * Math.PI) / n) * s0;
-        ring.err = n >= 256 && diff > 0.1 * sq * scale ? diff : (diff * diff) / scale;
+        ring.err = converged ? (diff * diff) / scale : Infinity;
         ring.minA2 = minA2;
         return;
       }

@@ -147,7 +147,9 @@ export function circleMutualCore(
     // exponential convergence of the trapezoidal rule on an analytic periodic integrand
     // (Trefethen & Weideman 2014, SIAM Rev. 56(3) §3): e_2N ≈ e_N²/C, so |T_2N − T_N| ≤ 0.1·√tol·scale
     // puts e_2N two orders below tol·scale; n ≥ MIN_NODES keeps out of the pre-asymptotic range.
-    if (n >= MIN_NODES && diff <= 0.1 * sq * scale) {
+    // and only once the node spacing 2π·rb/N is below the closest approach to a's wire: a peak
+    // narrower than the spacing can hide between the nodes of both rules (false convergence)
+    if (n >= MIN_NODES && diff <= 0.1 * sq * scale && n * n * minA2 >= TWO_PI * TWO_PI * rb * rb) {
       circleMutualState.minDistance2 = minA2;
       circleMutualState.error = (diff * diff) / scale;
       circleMutualState.evaluations = evaluations;
