@@ -238,7 +238,7 @@ export {
 } from "./circuit/drive.ts";
 export { solveLink, linkNetwork, type LinkSystem, type LinkSolution, type LinkNetworkBuild } from "./circuit/link.ts";
 export { solveLinkNetwork, LinkConvergenceError } from "./circuit/link/solveNetwork.ts";
-export { tokenLoadModel } from "./circuit/link/tokenLoad.ts";
+export { tokenLoadModel, type TokenLoadModelOptions } from "./circuit/link/tokenLoad.ts";
 export {
   DEFAULT_LIT_THRESHOLD,
   type LinkNetwork,
