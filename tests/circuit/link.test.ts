@@ -236,6 +236,29 @@ describe("solveLinkNetwork: nonlinear loads (describing function)", () => {
     expectRelClose(independentLosses(net, r), r.power.input, 1e-9, "power balance, 12 tokens");
   });
 
+  it("tokens side by side detune each other: the token–token coupling changes both, symmetrically", () => {
+    const m01 = 0.04 * Math.sqrt(L1 * L2);
+    const twin = (k12: number): LinkNetwork => ({
+      frequency: f,
+      inductance: [
+        [L1, m01, m01],
+        [m01, L2, k12 * L2],
+        [m01, k12 * L2, L2],
+      ],
+      transmitter: { resistance: 0.25, compensation: "series", capacitance: tuned(L1), drive: sineDrive(2, 0.5) },
+      receivers: [0, 1].map(() => ({ resistance: 6.5, topology: "parallel" as const, capacitance: tuned(L2), capacitorEsr: 0.4, load: led })),
+    });
+    const apart = solveLinkNetwork(twin(0));
+    const close = solveLinkNetwork(twin(-0.08)); // coplanar neighbours: negative mutual
+    // identical tokens in identical positions: identical amplitudes (symmetry), to the tolerance
+    expectRelClose(close.receivers[0]!.loadVoltage, close.receivers[1]!.loadVoltage, 1e-9, "symmetry");
+    // the neighbour's coupling detunes each tank: its LED current changes by more than 1 %
+    const a = apart.receivers[0]!.leds[0]!.averageCurrent;
+    const b = close.receivers[0]!.leds[0]!.averageCurrent;
+    expect(Math.abs(b / a - 1)).toBeGreaterThan(0.01);
+    expect(close.converged).toBe(true);
+  });
+
   it("non-convergence throws a LinkConvergenceError naming the receiver (never NaN), or warns on request", () => {
     // a pathological load that is open below 1 V and 1 Ω above (a discontinuous clamp):
     // open, the tank rises far above 1 V; loaded, it falls below — no amplitude is consistent
