@@ -244,3 +244,20 @@ describe("fixed rule over the whole parameter space", () => {
     }
   });
 });
+
+describe("shape of the describing function", () => {
+  it("G(A) of a single LED rises monotonically with the amplitude (what makes the clamp and the link's Newton well behaved)", () => {
+    for (const colour of ["red", "green-ingan"] as LedColour[]) {
+      const load = singleLed(ledPreset(colour));
+      let last = fundamentalConductance(load, 0);
+      for (let A = 0.05; A < 50; A *= 1.05) {
+        const g = fundamentalConductance(load, A);
+        expect(g, `${colour} at ${A} V`).toBeGreaterThanOrEqual(last * (1 - 1e-12));
+        last = g;
+      }
+      // and tends to 1/(2r_s) far above the knee: a half-wave rectified sine through r_s has
+      // the fundamental A/(2r_s) (closed form); at 100 kV the knee shifts it by ~V_F/A ≈ 3e-5
+      expectRelClose(fundamentalConductance(load, 1e5), 1 / (2 * ledPreset(colour).rs), 1e-4, `${colour} G(∞) = 1/(2r_s)`);
+    }
+  });
+});

@@ -164,3 +164,19 @@ describe("led(spec): Shockley junction with series resistance, exact by Lambert 
     expectTypeOf<Diode["kind"]>().toEqualTypeOf<"diode">();
   });
 });
+
+describe("properties of the junction model", () => {
+  it("current(v) is strictly increasing and voltage(current(v)) = v (fast-check)", () => {
+    const l = ledPreset("yellow");
+    fc.assert(
+      fc.property(fc.double({ min: -20, max: 20, noNaN: true }), fc.double({ min: 1e-6, max: 1, noNaN: true }), (v, dv) => {
+        const ok = l.current(v + dv) > l.current(v);
+        // inverse: relative 1e-12 in forward bias; in reverse the current is flat (−I_s − g·v)
+        // and v is recovered through the leakage term only to ~1e-9 V
+        const back = l.voltage(l.current(v));
+        return ok && Math.abs(back - v) <= 1e-9 * Math.max(1, Math.abs(v));
+      }),
+      { numRuns: 500 },
+    );
+  });
+});
