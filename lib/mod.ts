@@ -250,3 +250,25 @@ export {
 export type { LinkResult, TransmitterState, ReceiverState, LedState, LinkPower, Phasor } from "./circuit/link/result.ts";
 export { maxLinkEfficiency, optimalLoad } from "./circuit/linkLimits.ts";
 export { frequencySweep, type FrequencySweep, type SweepFrequencies } from "./circuit/frequencySweep.ts";
+// transient: time-domain engine (issue 7)
+export {
+  GROUND,
+  type TransientCircuit,
+  type CircuitElement,
+  type ResistorElement,
+  type CapacitorElement,
+  type InductorElement,
+  type CouplingElement,
+  type VoltageSourceElement,
+  type CurrentSourceElement,
+  type SwitchElement,
+  type DiodeElement,
+  type Waveform,
+} from "./circuit/transient/circuit.ts";
+export { simulate, voltageBetween, type SimulateOptions, type TransientResult, type SteadyState } from "./circuit/transient/simulate.ts";
+export { TransientConvergenceError } from "./circuit/transient/errors.ts";
+export { sineWaveform, stepWaveform, periodicGate } from "./circuit/transient/waveforms.ts";
+export { waveformHarmonics, type Harmonics } from "./circuit/transient/harmonics.ts";
+export { singleSwitchDrive, bridgeDrive, type DriveCircuit, type SingleSwitchDriveSpec, type BridgeDriveSpec } from "./circuit/transient/drives.ts";
+export { addToken, type TokenSpec, type TokenCircuit } from "./circuit/transient/token.ts";
+// end transient
