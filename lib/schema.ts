@@ -42,8 +42,10 @@ function ruleText(dimension: Dimension, opts: QuantityOptions): string {
   const unit = DIMENSIONS[dimension].unit;
   const show = (x: number): string => formatQuantity(x, unit, 4);
   const parts: string[] = [];
-  if (opts.positive) parts.push(`> ${show(0)}`);
-  else if (opts.nonNegative) parts.push(`≥ ${show(0)}`);
+  // the sign rule is not printed when min already implies it ("≥ 100 kHz", not "> 0 Hz and ≥ 100 kHz")
+  const min = opts.min;
+  if (opts.positive && !(min !== undefined && min > 0)) parts.push(`> ${show(0)}`);
+  else if (!opts.positive && opts.nonNegative && !(min !== undefined && min >= 0)) parts.push(`≥ ${show(0)}`);
   if (opts.min !== undefined) parts.push(`≥ ${show(opts.min)}`);
   if (opts.max !== undefined) parts.push(`≤ ${show(opts.max)}`);
   return parts.join(" and ");
@@ -65,6 +67,7 @@ function ruleText(dimension: Dimension, opts: QuantityOptions): string {
  */
 export function quantity(dimension: Dimension, opts: QuantityOptions = {}): QuantitySchema {
   const info = DIMENSIONS[dimension];
+  checkOptions(opts);
   const example = opts.example ?? info.example;
   const rule = ruleText(dimension, opts);
   const unit = info.unit;
@@ -109,6 +112,21 @@ export function quantity(dimension: Dimension, opts: QuantityOptions = {}): Quan
   return schema.meta({ ...meta }) as unknown as QuantitySchema;
 }
 
+/** Range options must be finite SI numbers with min ≤ max (a programming error otherwise). */
+function checkOptions(opts: QuantityOptions): void {
+  const issues: { path: string; message: string; value: unknown }[] = [];
+  for (const key of ["min", "max"] as const) {
+    const v = opts[key];
+    if (v !== undefined && !(typeof v === "number" && Number.isFinite(v))) {
+      issues.push({ path: key, message: "must be a finite number in SI units", value: v });
+    }
+  }
+  if (issues.length === 0 && opts.min !== undefined && opts.max !== undefined && opts.min > opts.max) {
+    issues.push({ path: "min", message: `must be ≤ max (${opts.max})`, value: opts.min });
+  }
+  if (issues.length > 0) throw new TanklightInputError(issues, "quantity");
+}
+
 /** The metadata of a schema made by {@link quantity}, or undefined. */
 export function quantityMeta(schema: z.ZodType): QuantityMeta | undefined {
   const m = schema.meta() as Partial<QuantityMeta> | undefined;
@@ -118,49 +136,58 @@ export function quantityMeta(schema: z.ZodType): QuantityMeta | undefined {
 
 // ── shorthands ───────────────────────────────────────────────────────────────
 // Sizes of things and circuit element values are positive by default (a coil radius, a wire
-// diameter, a frequency, an inductance, a capacitance, a resistance, a time step): zero or
-// negative has no physical meaning there. Signed by default: voltage, current (phasor and
-// bias values may be negative), angle, and the components of positions (vec3).
-// Temperature is absolute and ≥ 0 K by parseQuantity itself. Pass options to change.
+// diameter, a frequency, an inductance, a capacitance, a time step): zero or negative has no
+// physical meaning there. Resistance, conductance, power, energy: ≥ 0. Signed by default:
+// voltage, current, charge, angle, field components, plain numbers, and positions (vec3).
+// Temperature is absolute and ≥ 0 K by parseQuantity itself.
+// Options add to the default: `length({ max: 0.1 })` is still > 0. The sign rule is replaced
+// only when the options name one: `length({ nonNegative: true })` allows 0,
+// `length({ positive: false })` allows any sign.
+
+/** The shorthand's default sign rule, unless the options give their own. */
+function withDefaultSign(sign: "positive" | "nonNegative" | "any", opts: QuantityOptions): QuantityOptions {
+  if (opts.positive !== undefined || opts.nonNegative !== undefined || sign === "any") return opts;
+  return sign === "positive" ? { ...opts, positive: true } : { ...opts, nonNegative: true };
+}
 
 /** Length in m, > 0 by default ("12 mm", "0.5 mil"). */
-export const length = (opts: QuantityOptions = { positive: true }): QuantitySchema => quantity("length", opts);
+export const length = (opts: QuantityOptions = {}): QuantitySchema => quantity("length", withDefaultSign("positive", opts));
 /** Area in m², > 0 by default ("1.5 mm^2"). */
-export const area = (opts: QuantityOptions = { positive: true }): QuantitySchema => quantity("area", opts);
+export const area = (opts: QuantityOptions = {}): QuantitySchema => quantity("area", withDefaultSign("positive", opts));
 /** Frequency in Hz, > 0 by default ("217 kHz"). */
-export const frequency = (opts: QuantityOptions = { positive: true }): QuantitySchema => quantity("frequency", opts);
+export const frequency = (opts: QuantityOptions = {}): QuantitySchema => quantity("frequency", withDefaultSign("positive", opts));
 /** Inductance in H, > 0 by default ("24 uH"). */
-export const inductance = (opts: QuantityOptions = { positive: true }): QuantitySchema => quantity("inductance", opts);
+export const inductance = (opts: QuantityOptions = {}): QuantitySchema => quantity("inductance", withDefaultSign("positive", opts));
 /** Capacitance in F, > 0 by default ("4.7 nF"). */
-export const capacitance = (opts: QuantityOptions = { positive: true }): QuantitySchema => quantity("capacitance", opts);
+export const capacitance = (opts: QuantityOptions = {}): QuantitySchema => quantity("capacitance", withDefaultSign("positive", opts));
 /** Resistance in Ω, ≥ 0 by default (a zero series resistance is a legal ideal part) ("0.5 ohm"). */
-export const resistance = (opts: QuantityOptions = { nonNegative: true }): QuantitySchema => quantity("resistance", opts);
+export const resistance = (opts: QuantityOptions = {}): QuantitySchema => quantity("resistance", withDefaultSign("nonNegative", opts));
 /** Conductance in S, ≥ 0 by default ("20 mS"). */
-export const conductance = (opts: QuantityOptions = { nonNegative: true }): QuantitySchema => quantity("conductance", opts);
+export const conductance = (opts: QuantityOptions = {}): QuantitySchema => quantity("conductance", withDefaultSign("nonNegative", opts));
 /** Voltage in V, any sign by default ("3.3 V"). */
-export const voltage = (opts: QuantityOptions = {}): QuantitySchema => quantity("voltage", opts);
+export const voltage = (opts: QuantityOptions = {}): QuantitySchema => quantity("voltage", withDefaultSign("any", opts));
 /** Current in A, any sign by default ("150 mA"). */
-export const current = (opts: QuantityOptions = {}): QuantitySchema => quantity("current", opts);
+export const current = (opts: QuantityOptions = {}): QuantitySchema => quantity("current", withDefaultSign("any", opts));
 /** Power in W, ≥ 0 by default ("2 W"). */
-export const power = (opts: QuantityOptions = { nonNegative: true }): QuantitySchema => quantity("power", opts);
+export const power = (opts: QuantityOptions = {}): QuantitySchema => quantity("power", withDefaultSign("nonNegative", opts));
 /** Energy in J, ≥ 0 by default ("5 mJ"). */
-export const energy = (opts: QuantityOptions = { nonNegative: true }): QuantitySchema => quantity("energy", opts);
+export const energy = (opts: QuantityOptions = {}): QuantitySchema => quantity("energy", withDefaultSign("nonNegative", opts));
 /** Charge in C, any sign by default ("10 nC"). */
-export const charge = (opts: QuantityOptions = {}): QuantitySchema => quantity("charge", opts);
+export const charge = (opts: QuantityOptions = {}): QuantitySchema => quantity("charge", withDefaultSign("any", opts));
 /** Angle in rad, any sign by default ("30 deg"). */
-export const angle = (opts: QuantityOptions = {}): QuantitySchema => quantity("angle", opts);
+export const angle = (opts: QuantityOptions = {}): QuantitySchema => quantity("angle", withDefaultSign("any", opts));
 /** Absolute temperature in K, ≥ 0 K always ("25 degC" → 298.15). */
-export const temperature = (opts: QuantityOptions = {}): QuantitySchema => quantity("temperature", opts);
+export const temperature = (opts: QuantityOptions = {}): QuantitySchema => quantity("temperature", withDefaultSign("any", opts));
 /** Resistivity in Ω·m, > 0 by default ("1.72e-8 ohm m"). */
-export const resistivity = (opts: QuantityOptions = { positive: true }): QuantitySchema => quantity("resistivity", opts);
+export const resistivity = (opts: QuantityOptions = {}): QuantitySchema => quantity("resistivity", withDefaultSign("positive", opts));
 /** Flux density in T, any sign by default ("27 uT"). */
-export const fluxDensity = (opts: QuantityOptions = {}): QuantitySchema => quantity("fluxDensity", opts);
+export const fluxDensity = (opts: QuantityOptions = {}): QuantitySchema => quantity("fluxDensity", withDefaultSign("any", opts));
 /** Magnetic field strength in A/m, any sign by default ("21 A/m"). */
-export const fieldStrength = (opts: QuantityOptions = {}): QuantitySchema => quantity("fieldStrength", opts);
+export const fieldStrength = (opts: QuantityOptions = {}): QuantitySchema => quantity("fieldStrength", withDefaultSign("any", opts));
 /** Time in s, > 0 by default ("10 us"). */
-export const time = (opts: QuantityOptions = { positive: true }): QuantitySchema => quantity("time", opts);
+export const time = (opts: QuantityOptions = {}): QuantitySchema => quantity("time", withDefaultSign("positive", opts));
 /** Plain number, any sign by default ("0.5", "5 %"). */
-export const dimensionless = (opts: QuantityOptions = {}): QuantitySchema => quantity("dimensionless", opts);
+export const dimensionless = (opts: QuantityOptions = {}): QuantitySchema => quantity("dimensionless", withDefaultSign("any", opts));
 
 /** Output and input types of {@link vec3}. */
 export type Vec3Schema = z.ZodType<readonly [number, number, number], readonly [number | string, number | string, number | string]>;

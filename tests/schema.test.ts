@@ -41,13 +41,31 @@ describe("quantity schemas", () => {
 
   it("length() is positive by default; options widen or narrow the range", () => {
     expect(() => parseInput(length(), 0, "f")).toThrowErrorMatchingInlineSnapshot(`[TanklightInputError: f: must be > 0 m, got 0]`);
-    expect(parseInput(length({}), "-5 mm", "f")).toBe(-0.005);
+    expect(parseInput(length({ positive: false }), "-5 mm", "f")).toBe(-0.005);
     expect(parseInput(length({ nonNegative: true }), 0, "f")).toBe(0);
     expect(() => parseInput(length({ positive: true, max: 0.1 }), "20 cm", "f")).toThrowErrorMatchingInlineSnapshot(
       `[TanklightInputError: f: must be > 0 m and ≤ 100.0 mm, got '20 cm' (= 200 mm)]`,
     );
     expect(() => parseInput(frequency({ min: 100e3, max: 1e6 }), "50 kHz", "drive")).toThrowErrorMatchingInlineSnapshot(
       `[TanklightInputError: drive: must be ≥ 100.0 kHz and ≤ 1.000 MHz, got '50 kHz' (= 50.0 kHz)]`,
+    );
+  });
+
+  it("options add to a shorthand's sign rule unless they name one", () => {
+    expect(() => parseInput(length({ max: 0.1 }), 0, "gap")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: gap: must be > 0 m and ≤ 100.0 mm, got 0]`,
+    );
+    expect(parseInput(length({ nonNegative: true, max: 0.1 }), 0, "gap")).toBe(0);
+    expect(parseInput(resistance({ max: 10 }), 0, "esr")).toBe(0);
+    expect(() => parseInput(resistance({ max: 10 }), -1, "esr")).toThrow(TanklightInputError);
+  });
+
+  it("rejects non-finite or crossed range options when the schema is built", () => {
+    expect(() => quantity("length", { min: NaN })).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: quantity: min: must be a finite number in SI units, got NaN]`,
+    );
+    expect(() => quantity("length", { min: 2, max: 1 })).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: quantity: min: must be ≤ max (1), got 2]`,
     );
   });
 
