@@ -9,6 +9,8 @@
  * from memory (unverified); the same curve in any circuits text).
  */
 import { TanklightInputError, requirePositive } from "../errors.ts";
+import { bestCombination, type CombinationTopology } from "./combination.ts";
+import type { ESeries } from "./eseries.ts";
 
 /**
  * Capacitance that tunes an inductance to a frequency: C = 1/((2πf)²·L).
@@ -177,4 +179,47 @@ export function detuningTolerance(q: number, fraction: number): DetuningWindow {
     relativeHalfWidth: (upper - lower) / 2,
     capacitanceChange: [1 / (upper * upper) - 1, 1 / (lower * lower) - 1],
   };
+}
+
+/** One way to tune a coil with standard capacitors. */
+export interface TuningChoice {
+  /** the capacitors, F, ascending */
+  readonly parts: readonly number[];
+  /** how they are connected ("single", "parallel", "series", or a mixed form) */
+  readonly topology: string;
+  /** total capacitance, F */
+  readonly capacitance: number;
+  /** resulting resonant frequency, Hz */
+  readonly frequency: number;
+  /** (frequency − target)/target */
+  readonly frequencyError: number;
+}
+
+/**
+ * Tunes a coil to a frequency with standard capacitors: the ideal capacitance
+ * 1/((2πf)²L), then the best one-, two- or three-part combinations of an E-series
+ * (bestCombination), each with the frequency it actually gives (f ∝ 1/√C: a capacitance
+ * error ε moves f by ≈ −ε/2).
+ * @param L inductance, H > 0; f target frequency, Hz > 0;
+ * @param options series (default "E12"), maxParts (default 2), count (default 5), topology.
+ * @returns `{ capacitance, choices }`, choices ranked by |frequencyError| then part count.
+ * @example tuneWithStandardParts(100e-6, 200e3).choices[0] // → 6.8 nF in series with 100 nF: 6.367 nF, 199457.9 Hz (−0.27 %)
+ */
+export function tuneWithStandardParts(
+  L: number,
+  f: number,
+  options: { readonly series?: ESeries; readonly maxParts?: 1 | 2 | 3; readonly count?: number; readonly topology?: CombinationTopology } = {},
+): { readonly capacitance: number; readonly choices: readonly TuningChoice[] } {
+  const c = resonantCapacitance(L, f);
+  const combos = bestCombination(c, options.series ?? "E12", {
+    maxParts: options.maxParts ?? 2,
+    count: options.count ?? 5,
+    kind: "capacitor",
+    ...(options.topology ? { topology: options.topology } : {}),
+  });
+  const choices = combos.map((k) => {
+    const fr = 1 / (2 * Math.PI * Math.sqrt(L * k.value));
+    return { parts: k.parts, topology: k.topology, capacitance: k.value, frequency: fr, frequencyError: (fr - f) / f };
+  });
+  return { capacitance: c, choices };
 }

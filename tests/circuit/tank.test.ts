@@ -89,3 +89,22 @@ describe("tankQuality / bandwidth / detuningTolerance", () => {
     expectTypeOf(resonantFrequency).returns.toEqualTypeOf<number>();
   });
 });
+
+describe("tuneWithStandardParts", () => {
+  it("each choice's frequency follows from its capacitance, and the ranking is by |error| then part count", async () => {
+    const { tuneWithStandardParts } = await import("../../lib/circuit/tank.ts");
+    const L = 100e-6, f = 200e3;
+    const r = tuneWithStandardParts(L, f, { series: "E12", maxParts: 2 });
+    expectRelClose(r.capacitance, resonantCapacitance(L, f), 1e-15, "ideal C");
+    for (const c of r.choices) {
+      expectRelClose(c.frequency, resonantFrequency(L, c.capacitance), 1e-14, "f from C");
+      // f ∝ C^(−1/2): a small capacitance error ε moves f by ≈ −ε/2
+      const eps = c.capacitance / r.capacitance - 1;
+      expectRelClose(c.frequencyError, 1 / Math.sqrt(1 + eps) - 1, 1e-9, "error relation", 1e-15);
+    }
+    expect(r.choices[0]).toMatchObject({ parts: [6.8e-9, 1e-7], topology: "series" });
+    // a single E12 part is worse than the best pair
+    const single = tuneWithStandardParts(L, f, { maxParts: 1 }).choices[0]!;
+    expect(Math.abs(single.frequencyError)).toBeGreaterThan(Math.abs(r.choices[0]!.frequencyError));
+  });
+});
