@@ -172,6 +172,8 @@ export {
   tankQuality,
   tankBandwidth,
   detuningTolerance,
+  tuneWithStandardParts,
+  type TuningChoice,
   type TankLosses,
   type TankQuality,
   type DetuningWindow,
