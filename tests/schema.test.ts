@@ -1,5 +1,6 @@
 import { describe, expect, expectTypeOf, it } from "vitest";
 import { z } from "zod";
+import fc from "fast-check";
 import {
   angle,
   capacitance,
@@ -202,6 +203,27 @@ describe("parseInput", () => {
     const S = z.object({ r: z.string().transform((v) => parseQuantity(v, "length", "r")) });
     expect(() => parseInput(S, { r: "5 kHz" }, "tokenBuilder")).toThrowErrorMatchingInlineSnapshot(
       `[TanklightInputError: tokenBuilder: r: expected a length like '12 mm', got '5 kHz' (a frequency)]`,
+    );
+  });
+
+  it("reports exactly one issue per bad field, at its path (property)", () => {
+    const S = z.object({ a: length(), b: frequency(), c: capacitance(), d: voltage() });
+    const good = { a: "12 mm", b: "217 kHz", c: "4.7 nF", d: "-3.3 V" };
+    const bad = fc.constantFrom<unknown>("5 kg", "", "  ", NaN, Infinity, -Infinity, "12", "5 furlongs", null, {}, [], "1e400 m", undefined);
+    fc.assert(
+      fc.property(fc.record({ a: fc.boolean(), b: fc.boolean(), c: fc.boolean(), d: fc.boolean() }), bad, (which, value) => {
+        const input: Record<string, unknown> = { ...good };
+        for (const k of Object.keys(which) as (keyof typeof which)[]) if (which[k]) input[k] = value;
+        const expected = (Object.keys(which) as (keyof typeof which)[]).filter((k) => which[k]);
+        try {
+          parseInput(S, input, "prop");
+          return expected.length === 0;
+        } catch (e) {
+          if (!(e instanceof TanklightInputError)) return false;
+          return JSON.stringify(e.issues.map((i) => i.path)) === JSON.stringify(expected) && e.message.startsWith("prop: ");
+        }
+      }),
+      { numRuns: 300 },
     );
   });
 
