@@ -99,8 +99,10 @@ function driveOf(d: LinkSystemParsed["transmitter"]["drive"], f: number, l1: num
   }
 }
 
-function loadModelOf(load: TokenLoad | LinkLoadModel): LinkLoadModel {
-  return typeof (load as LinkLoadModel).conductance === "function" ? (load as LinkLoadModel) : tokenLoadModel(load as TokenLoad);
+function loadModelOf(load: TokenLoad | LinkLoadModel, tabulate: boolean): LinkLoadModel {
+  return typeof (load as LinkLoadModel).conductance === "function"
+    ? (load as LinkLoadModel)
+    : tokenLoadModel(load as TokenLoad, { tabulate });
 }
 
 function esrOf(c: { capacitance: number; esr?: number | undefined; dissipationFactor?: number | undefined }, w: number): number {
@@ -116,9 +118,11 @@ const ORIGIN: Pose = { position: [0, 0, 0] };
  * inductances and AC resistances of every coil at the drive frequency, every mutual inductance
  * (transmitter–receiver and receiver–receiver), capacitor ESRs and the drive's equivalent.
  * @param system see {@link solveLink}.
+ * @param options.tabulateLoads tabulate each token load's describing function once (fast
+ *   sweeps; ≈ 1e-8 relative in G, see tokenLoadModel) — default false (exact).
  * @returns `{ network, coupling, warnings }`.
  */
-export function linkNetwork(system: LinkSystem): LinkNetworkBuild {
+export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoads?: boolean } = {}): LinkNetworkBuild {
   const s = parseInput(LinkSystemInput, system, "solveLink");
   const f = s.frequency;
   const w = 2 * Math.PI * f;
@@ -180,7 +184,7 @@ export function linkNetwork(system: LinkSystem): LinkNetworkBuild {
       capacitorEsr: esrOf(r.capacitor, w),
       ...(r.capacitor.rating !== undefined ? { capacitorRating: r.capacitor.rating } : {}),
       ...(rxNums[k]!.selfResonance !== undefined ? { selfResonance: rxNums[k]!.selfResonance } : {}),
-      load: loadModelOf(r.load),
+      load: loadModelOf(r.load, options.tabulateLoads ?? false),
     })),
   };
   return { network, coupling, warnings };
@@ -207,7 +211,8 @@ export function linkNetwork(system: LinkSystem): LinkNetworkBuild {
  *   capacitor, load: TokenLoad | LinkLoadModel, resistance? }`.
  * @param system.temperature conductor temperature for the coil resistances, K (default 20 °C).
  * @param options lit threshold (A; default 0.5 mA — trade practice: 0.1–1 mA visible indoors),
- *   brightness reference, caution voltage, iteration cap, what to do on non-convergence.
+ *   brightness reference, caution voltage, iteration cap, what to do on non-convergence, and
+ *   `tabulateLoads` (default false) to tabulate the loads' describing functions for sweeps.
  * @returns {@link LinkSolution} (SI; amplitudes peak, RMS named).
  * @throws TanklightInputError naming the field on bad input; LinkConvergenceError if the
  *   operating point is not found (unless options.onNonConvergence is "warn").
@@ -218,8 +223,8 @@ export function linkNetwork(system: LinkSystem): LinkNetworkBuild {
  *     capacitor: { capacitance: "2.2 nF" }, load: { kind: "led", led: ledPreset("red") } }] })
  *     .receivers[0].leds[0].lit // → true
  */
-export function solveLink(system: LinkSystem, options: LinkOptions = {}): LinkSolution {
-  const built = linkNetwork(system);
+export function solveLink(system: LinkSystem, options: LinkOptions & { readonly tabulateLoads?: boolean } = {}): LinkSolution {
+  const built = linkNetwork(system, { tabulateLoads: options.tabulateLoads ?? false });
   const r = solveLinkNetwork(built.network, options);
   return { ...r, warnings: [...built.warnings, ...r.warnings], coupling: built.coupling, network: built.network };
 }

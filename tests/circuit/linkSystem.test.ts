@@ -72,6 +72,13 @@ describe("solveLink(system)", () => {
     expect(a!.averageCurrent).toBeGreaterThan(b!.averageCurrent);
   });
 
+  it("tabulateLoads gives the same operating point to the table's accuracy", () => {
+    const exact = solveLink(system([tokenAt(0, "50 mm")]));
+    const fast = solveLink(system([tokenAt(0, "50 mm")]), { tabulateLoads: true });
+    // rtol 1e-7: the tabulated describing function is within ≈ 1e-8 of the exact one
+    expectRelClose(fast.receivers[0]!.loadVoltage, exact.receivers[0]!.loadVoltage, 1e-7, "amplitude");
+  });
+
   it("names the bad field: wrong dimension, missing capacitor", () => {
     const bad = system([{ ...tokenAt(0, "40 mm"), capacitor: { capacitance: "5 kHz" } }]);
     expect(() => solveLink(bad)).toThrow(TanklightInputError);
