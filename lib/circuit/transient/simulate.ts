@@ -323,6 +323,10 @@ class Engine {
   private readonly indWSaved: Float64Array;
   private readonly switchState: Uint8Array;
   private readonly diodeV: Float64Array;
+  /** diode currents of the last accepted solution (linearised at the converged voltage), A */
+  private readonly diodeI: Float64Array;
+  private readonly diodeG: Float64Array;
+  private readonly diodeI0: Float64Array;
   private readonly nL: number;
   private readonly maxNewton: number;
   // cache of the linear matrix
@@ -364,6 +368,9 @@ class Engine {
     this.indWSaved = new Float64Array(cc.inductors.length);
     this.switchState = new Uint8Array(cc.switches.length);
     this.diodeV = new Float64Array(cc.diodes.length);
+    this.diodeI = new Float64Array(cc.diodes.length);
+    this.diodeG = new Float64Array(cc.diodes.length);
+    this.diodeI0 = new Float64Array(cc.diodes.length);
     this.nL = cc.inductors.length;
   }
 
@@ -639,7 +646,10 @@ class Engine {
           const e = diodes[d]!;
           const v0 = this.diodeV[d]!;
           const g = e.model.conductance(v0);
-          const ieq = e.model.current(v0) - g * v0;
+          const i0 = e.model.current(v0);
+          this.diodeG[d] = g;
+          this.diodeI0[d] = i0;
+          const ieq = i0 - g * v0;
           const a = e.a;
           const c = e.b;
           if (a >= 0) {
@@ -668,6 +678,8 @@ class Engine {
           const e = diodes[d]!;
           const v = (e.a >= 0 ? xt[e.a]! : 0) - (e.b >= 0 ? xt[e.b]! : 0);
           if (Math.abs(v - this.diodeV[d]!) > NEWTON_RELTOL * Math.abs(v) + VOLTAGE_ABSTOL) ok = false;
+          // current of the linearised diode at the solution (equals model.current(v) at convergence)
+          this.diodeI[d] = this.diodeI0[d]! + this.diodeG[d]! * (v - this.diodeV[d]!);
           this.diodeV[d] = v;
         }
         x.set(xt);
@@ -710,7 +722,7 @@ class Engine {
       const s = cc.switches[i]!;
       out[k++]![slot] = (this.switchState[i] ? s.gOn : s.gOff) * this.across(s.a, s.b);
     }
-    for (const d of cc.diodes) out[k++]![slot] = d.model.current(this.across(d.a, d.b));
+    for (let d = 0; d < cc.diodes.length; d++) out[k++]![slot] = this.diodeI[d]!;
   }
 
   /** v(a) − v(b) at the present solution (index −1 is ground). */
