@@ -100,6 +100,7 @@ export function circleMutualCore(
   const Dv = rb * (Dx * vx + Dy * vy + Dz * vz);
   const Nn = rb * rb * (nax * nbx + nay * nby + naz * nbz);
   let minA2 = Infinity;
+  let maxA2 = 0;
   const f = (c: number, s: number): number => {
     const px = Dx + c * Xx + s * Yx;
     const py = Dy + c * Xy + s * Yy;
@@ -113,6 +114,7 @@ export function circleMutualCore(
       minA2 = alpha2;
       if (alpha2 === 0) intersecting();
     }
+    if (alpha2 > maxA2) maxA2 = alpha2;
     return aOverRhoKernel(ra, rho, z2, alpha2) * (c * Dv - s * Du + Nn);
   };
 
@@ -149,13 +151,17 @@ export function circleMutualCore(
     // puts e_2N two orders below tol·scale; n ≥ MIN_NODES keeps out of the pre-asymptotic range.
     // and only once the node spacing 2π·rb/N is below the closest approach to a's wire: a peak
     // narrower than the spacing can hide between the nodes of both rules (false convergence)
-    if (n >= MIN_NODES && diff <= 0.1 * sq * scale && n * n * minA2 >= TWO_PI * TWO_PI * rb * rb) {
+    // (the spacing rule applies where the distance to a's wire varies along b by more than 2×)
+    const peaky = maxA2 > 4 * minA2;
+    if (n >= MIN_NODES && diff <= 0.1 * sq * scale && (!peaky || n * n * minA2 >= TWO_PI * TWO_PI * rb * rb)) {
       circleMutualState.minDistance2 = minA2;
       circleMutualState.error = (diff * diff) / scale;
       circleMutualState.evaluations = evaluations;
       return value;
     }
     prev = value;
+    // the spacing rule alone will need more than MAX_TRAPEZOID nodes: go adaptive now
+    if (peaky && MAX_TRAPEZOID * MAX_TRAPEZOID * minA2 < TWO_PI * TWO_PI * rb * rb) break;
   }
   // near pass: adaptive Gauss–Kronrod over one period starting where b is closest to a's wire
   let tStar = 0;
