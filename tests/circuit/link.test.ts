@@ -268,7 +268,7 @@ describe("solveLinkNetwork: nonlinear loads (describing function)", () => {
         fc.array(fc.double({ min: -0.3, max: 0.3, noNaN: true }), { minLength: 16, maxLength: 16 }),
         fc.double({ min: 0.05, max: 20, noNaN: true }),
         (n, ks, amp) => {
-          const L = Array.from({ length: n + 1 }, (_, i) => Array.from({ length: n + 1 }, (_, j) => (i === j ? (i === 0 ? L1 : L2) : 0)));
+          const L: number[][] = Array.from({ length: n + 1 }, (_, i) => Array.from({ length: n + 1 }, (_, j) => (i === j ? (i === 0 ? L1 : L2) : 0)));
           let c = 0;
           for (let i = 0; i <= n; i++) {
             for (let j = i + 1; j <= n; j++) {
