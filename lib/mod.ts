@@ -241,6 +241,7 @@ export {
 export { solveLink, linkNetwork, type LinkSystem, type LinkSolution, type LinkNetworkBuild } from "./circuit/link.ts";
 export { solveLinkNetwork, LinkConvergenceError } from "./circuit/link/solveNetwork.ts";
 export { tokenLoadModel, type TokenLoadModelOptions } from "./circuit/link/tokenLoad.ts";
+export { summarizeLink, type LinkSummary, type LinkSummaryRow } from "./circuit/link/summary.ts";
 export {
   DEFAULT_LIT_THRESHOLD,
   type LinkNetwork,
