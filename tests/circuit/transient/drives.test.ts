@@ -1,9 +1,9 @@
 import { describe, expect, expectTypeOf, it } from "vitest";
 import { bridgeDrive, singleSwitchDrive, type DriveCircuit } from "../../../lib/circuit/transient/drives.ts";
-import { simulate } from "../../../lib/circuit/transient/simulate.ts";
+import { simulate, voltageBetween } from "../../../lib/circuit/transient/simulate.ts";
 import { waveformHarmonics } from "../../../lib/circuit/transient/harmonics.ts";
 import { addToken } from "../../../lib/circuit/transient/token.ts";
-import { classEDesign, CLASS_E } from "../../../lib/circuit/drive.ts";
+import { classEDesign, CLASS_E, parallelTankDrive } from "../../../lib/circuit/drive.ts";
 import { ledPreset } from "../../../lib/circuit/loads/ledPresets.ts";
 import { expectRelClose } from "../../helpers/expectRelClose.ts";
 import { expectOutside } from "../../helpers/validation.ts";
@@ -126,6 +126,25 @@ describe("single-switch drive, parallel-tank arrangement (the common low-cost fo
     let avg = 0;
     for (let i = iled.length - 201; i < iled.length - 1; i++) avg += iled[i]! / 200;
     expect(avg).toBeGreaterThan(1e-3);
+  });
+});
+
+describe("parallel-tank single-switch drive against its fundamental equivalent", () => {
+  it("near zero-voltage switching the coil voltage's fundamental is about π·V_DD/2 (parallelTankDrive)", () => {
+    const w = 2 * Math.PI * f;
+    const L1 = 10e-6;
+    // tank resonance 1.29 × the switching frequency: near zero-voltage turn-on for this coil
+    // resistance (0.5 Ω, unloaded); found by scanning the tuning (1.25 → +7 % of V_DD, 1.3 → −7 %)
+    const d = singleSwitchDrive({ supply: V, frequency: f, coilInductance: L1, coilResistance: 0.5, tankCapacitance: 1 / (w * w * L1) / 1.29 ** 2 });
+    const r = simulate(d.circuit, { stop: 2000 / f, stepsPerCycle: SPC, frequency: f, untilSteady: { tolerance: 1e-6 }, keepCycles: 1 });
+    const vs = r.nodeVoltages.switch!;
+    expect(Math.abs(vs[vs.length - 1]!)).toBeLessThan(0.05 * V);
+    const h = waveformHarmonics(r.time, voltageBetween(r, "supply", "switch"), { frequency: f });
+    // independent method: the equivalent of lib/circuit/drive.ts (half-sine of peak π·V_DD,
+    // fundamental πV_DD/2, Fourier series of a half-wave rectified sine). 3 %: the true
+    // off-state swing is not an exact half sine (the coil current ramps while the switch is
+    // closed, and ZVS is only approximate); measured ≈ 1 %.
+    expectOutside({ quantity: "parallel-tank single-switch drive, coil-voltage fundamental", source: "independent method: parallelTankDrive equivalent (half-wave sine Fourier series)", ours: h.amplitude[1]!, reference: parallelTankDrive(V).amplitude, rtol: 0.03, unit: "V" });
   });
 });
 
