@@ -75,10 +75,10 @@ describe("transient steady state vs the frequency-domain link solver", () => {
   });
 
   // The describing-function (fundamental-only) model against the true waveform, single red LED,
-  // across drive levels. Measured band (this machine, 400 steps a cycle):
-  //   drive 0.25 V: LED 1.1 mA — average current −0.9 %, tank fundamental +1.0 %, Tx current −0.3 %
-  //   drive 1 V:    LED 8.6 mA — average current +1.8 %, tank fundamental +9 %,   Tx current −0.4 %
-  //   drive 4 V:    LED 43 mA  — average current +9 %,   tank fundamental +17 %,  Tx current −0.2 %
+  // across drive levels. Measured band (describing function relative to transient, 400 steps a cycle):
+  //   drive 0.25 V: LED 1.1 mA — average current +0.9 %, tank fundamental −1.0 %, Tx current +0.3 %
+  //   drive 1 V:    LED 8.6 mA — average current −1.8 %, tank fundamental −8 %,   Tx current +0.4 %
+  //   drive 4 V:    LED 43 mA  — average current −8 %,   tank fundamental −15 %,  Tx current +0.2 %
   // The brightness (average current) is what the fast model is used for; it stays within 10 %
   // up to twice the rated current. The tank fundamental is underestimated more because the
   // clipped waveform is asymmetric (the free half-cycle swings further), which a symmetric
