@@ -80,7 +80,19 @@ function coilNumbers(coil: Coil, f: number, temperature: number | undefined, war
   return made;
 }
 
-function driveOf(d: LinkSystemParsed["transmitter"]["drive"], f: number, l1: number): DriveEquivalent {
+function driveOf(
+  d: LinkSystemParsed["transmitter"]["drive"],
+  f: number,
+  l1: number,
+  compensation: string,
+  warnings: string[],
+): DriveEquivalent {
+  if (d.kind === "parallelTank" && compensation !== "parallel") {
+    warnings.push(`transmitter: the parallel-tank drive assumes a parallel-compensated transmitter (got '${compensation}')`);
+  }
+  if (d.kind === "classE" && compensation !== "series") {
+    warnings.push(`transmitter: the class-E equivalent assumes a series load network (got '${compensation}' compensation)`);
+  }
   switch (d.kind) {
     case "sine":
       return sineDrive(d.amplitude, d.outputResistance ?? 0);
@@ -92,8 +104,11 @@ function driveOf(d: LinkSystemParsed["transmitter"]["drive"], f: number, l1: num
       return currentDrive(d.amplitude);
     case "parallelTank":
       return parallelTankDrive(d.supply, d.onResistance ?? 0);
-    case "classE":
-      return classEDrive(classEDesign({ supply: d.supply, frequency: f, power: d.power, inductance: l1 }), d.onResistance ?? 0);
+    case "classE": {
+      const design = classEDesign({ supply: d.supply, frequency: f, power: d.power, inductance: l1 });
+      warnings.push(...design.warnings);
+      return classEDrive(design, d.onResistance ?? 0);
+    }
     default:
       return d as DriveEquivalent;
   }
@@ -174,7 +189,7 @@ export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoad
           }
         : {}),
       ...(txNum.selfResonance !== undefined ? { selfResonance: txNum.selfResonance } : {}),
-      drive: driveOf(tx.drive, f, txNum.inductance),
+      drive: driveOf(tx.drive, f, txNum.inductance, tx.compensation, warnings),
     },
     receivers: s.receivers.map((r, k) => ({
       label: r.label ?? `receiver ${k + 1}`,

@@ -95,6 +95,9 @@ describe("solveLink(system)", () => {
     expectRelClose(a.transmitter.coilCurrent, 1.5, 1e-14, "current-regulated coil current");
     const b = solveLink({ ...system([tokenAt(0, "40 mm")], { kind: "halfBridge", supply: "12 V" }), transmitter: { ...system([]).transmitter, compensation: "series", drive: { kind: "halfBridge", supply: "12 V" } } });
     expect(b.drive.label).toMatch(/half bridge/);
+    // a drive used outside its assumptions is flagged
+    const c = solveLink({ ...system([tokenAt(0, "40 mm")]), transmitter: { ...system([]).transmitter, compensation: "series", drive: { kind: "parallelTank", supply: "5 V" } } });
+    expect(c.warnings.join(" ")).toMatch(/parallel-tank drive assumes a parallel-compensated transmitter/);
     expectTypeOf(solveLink).returns.toEqualTypeOf<LinkSolution>();
   });
 });
