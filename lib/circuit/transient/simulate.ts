@@ -574,7 +574,7 @@ class Engine {
       [
         {
           path: "circuit",
-          message: `singular circuit matrix at t = ${this.t} s: the ${what} is not determined (a loop of inductors and voltage sources with no resistance, a cut of current sources, or an element value far out of scale)`,
+          message: `singular circuit matrix at t = ${this.t} s: the ${what} is not determined (e.g. inductors coupled with |k| ≈ 1 in parallel, or element values far out of scale)`,
           value: cc.unknownNames[k],
         },
       ],

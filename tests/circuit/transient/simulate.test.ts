@@ -275,6 +275,18 @@ describe("simulate: clear errors naming the elements", () => {
     ).toThrow(/K12, K23, K13 give an inductance matrix that is not positive definite/);
   });
 
+  it("a singular matrix names the unknown that cannot be determined", () => {
+    const c: TransientCircuit = {
+      elements: [
+        { kind: "currentSource", name: "I1", from: "ground", to: "a", waveform: () => 1 },
+        { kind: "inductor", name: "L1", a: "a", b: "ground", inductance: 1e-6 },
+        { kind: "inductor", name: "L2", a: "a", b: "ground", inductance: 1e-6 },
+        { kind: "coupling", name: "K", inductors: ["L1", "L2"], k: 1 - 1e-15 },
+      ],
+    };
+    expect(() => simulate(c, opts)).toThrow(/singular circuit matrix at t = 0 s: the current of L2 is not determined/);
+  });
+
   it("duplicate names are refused", () => {
     expect(() =>
       simulate({ elements: [
