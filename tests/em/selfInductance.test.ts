@@ -64,6 +64,13 @@ describe("selfInductance", () => {
     }
   });
 
+  it("a PCB-trace turn uses the rectangle's geometric mean distance 0.2235(w + t)", () => {
+    const a = 0.02, w = 1e-3, t = 35e-6;
+    const coil: Coil = { ...singleTurn(a, 1e-3), conductor: { kind: "trace", width: w, thickness: t } };
+    // source: Grover 1946, Inductance Calculations (GMD of a rectangle ≈ 0.2235(w + t)); loop L = μ₀a[ln(8a/g) − 2]
+    expectOutside({ quantity: "trace turn L (a=20 mm, 1 mm × 35 µm)", source: "source: Grover 1946, GMD of a rectangle with the ring formula", ours: selfInductance(coil), reference: MU0 * a * (Math.log((8 * a) / (0.2235 * (w + t))) - 2), rtol: 1e-14, unit: "H" });
+  });
+
   it("rejects bad input and warns on thin-wire violations", () => {
     expect(() => selfInductance(singleTurn(0.01, 1e-3), { frequency: -1 })).toThrowErrorMatchingInlineSnapshot(`[TanklightInputError: selfInductance: options.frequency: must be a finite frequency ≥ 0 Hz, got -1]`);
     expect(selfInductanceDetail(singleTurn(0.001, 1e-3)).warnings.join()).toMatch(/wire radii/);
