@@ -84,6 +84,7 @@ const VOLTAGE_ABSTOL = 1e-6; // V — Newton convergence floor on node voltages
 const CURRENT_ABSTOL = 1e-9; // A — Newton convergence floor on branch currents
 const NEWTON_RELTOL = 1e-7;
 const MAX_HALVINGS = 24;
+const MAX_PIECES_PER_STEP = 4096; // sub-steps (after halving) allowed inside one output step
 const EDGE_RESOLUTION = 1e-10; // switching instants located to this fraction of a step
 
 /**
@@ -473,7 +474,15 @@ class Engine {
   private stepWithHalving(hs: number, h: number): void {
     let remaining = hs;
     let tries = 0;
+    let pieces = 0;
     while (remaining > EDGE_RESOLUTION * h) {
+      if (++pieces > MAX_PIECES_PER_STEP) {
+        const names = this.cc.diodes.map((d) => d.name);
+        throw new TransientConvergenceError(
+          `simulate: the step collapsed at t = ${this.t} s (more than ${MAX_PIECES_PER_STEP} sub-steps in one step; nonlinear elements: ${names.join(", ") || "none"})`,
+          this.t, this.subStep, names,
+        );
+      }
       const len = Math.min(remaining, this.subStep);
       const tNew = this.t + len;
       const nonlinear = this.cc.diodes.length > 0;

@@ -4,6 +4,7 @@ import type { TransientCircuit } from "../../../lib/circuit/transient/circuit.ts
 import { sineWaveform, stepWaveform } from "../../../lib/circuit/transient/waveforms.ts";
 import { waveformHarmonics } from "../../../lib/circuit/transient/harmonics.ts";
 import { TanklightInputError } from "../../../lib/errors.ts";
+import { TransientConvergenceError } from "../../../lib/circuit/transient/errors.ts";
 import { expectRelClose } from "../../helpers/expectRelClose.ts";
 import { expectOutside } from "../../helpers/validation.ts";
 
@@ -285,6 +286,20 @@ describe("simulate: clear errors naming the elements", () => {
       ],
     };
     expect(() => simulate(c, opts)).toThrow(/singular circuit matrix at t = 0 s: the current of L2 is not determined/);
+  });
+
+  it("Newton failure after repeated step halving throws TransientConvergenceError naming the diodes", () => {
+    // a pathological "diode" whose current jumps at 0 V while claiming a tiny slope: Newton cycles
+    const jumpy = { current: (v: number) => (v > 0 ? 1 : -1), conductance: () => 1e-3, label: "jumpy" };
+    const c: TransientCircuit = {
+      elements: [
+        { kind: "voltageSource", name: "V1", plus: "a", minus: "ground", waveform: sineWaveform({ amplitude: 1, frequency: 1e6 }) },
+        { kind: "resistor", name: "R1", a: "a", b: "b", resistance: 1 },
+        { kind: "diode", name: "D1", anode: "b", cathode: "ground", model: jumpy },
+      ],
+    };
+    expect(() => simulate(c, { stop: 1e-6, step: 1e-8 })).toThrow(TransientConvergenceError);
+    expect(() => simulate(c, { stop: 1e-6, step: 1e-8 })).toThrow(/nonlinear elements: D1/);
   });
 
   it("duplicate names are refused", () => {
