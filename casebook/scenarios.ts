@@ -1,5 +1,6 @@
 /** The casebook's scenarios by name (design.md §7). */
 import * as coaxialLoops from "./coaxialLoops.ts";
+import * as pebbleDrawer from "./pebbleDrawer.ts";
 
 export interface Scenario {
   /** one line: what question the scenario answers */
@@ -8,5 +9,6 @@ export interface Scenario {
 }
 
 export const scenarios: Record<string, Scenario> = {
+  "pebble-drawer": { title: "Will every pebble glow, wherever a visitor puts it?", run: pebbleDrawer.run },
   "coaxial-loops": { title: "How fast does coupling fall with height?", run: coaxialLoops.run },
 };
