@@ -5,12 +5,12 @@
  * The system is validated with zod (quantities with units accepted); the coils' inductances
  * (selfInductance at the drive frequency), AC resistances (coilResistance), self-resonances
  * (selfResonance) and every mutual inductance — transmitter–token and token–token
- * (mutualInductanceChecked) — come from lib/em; the numeric core (./link/solveNetwork.ts)
+ * (couplingEvaluator, exact where its estimate is not good enough) — come from lib/em; the numeric core (./link/solveNetwork.ts)
  * then solves the coupled-circuit matrix with each load's describing function.
  */
 import { parseInput } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
-import { mutualInductanceChecked } from "../em/mutualInductance.ts";
+import { couplingEvaluator, type CouplingEvaluator } from "../em/couplingEvaluator.ts";
 import { selfInductance } from "../em/selfInductance.ts";
 import { coilResistance } from "../em/losses/coilResistance.ts";
 import { selfResonance } from "../em/selfCapacitance.ts";
@@ -56,6 +56,29 @@ interface CoilNumbers {
   readonly selfResonance?: number;
 }
 const coilCache = new WeakMap<Coil, Map<string, CoilNumbers>>();
+
+/**
+ * Mutual inductances come from one couplingEvaluator per pair of coil objects (lib/em), built
+ * once and reused: tokens of one design share their coil object, so a drawer of twelve tokens
+ * needs two evaluators. It falls back to the exact filament sum wherever its own error
+ * estimate exceeds MUTUAL_RTOL — 0.1 %, the evaluator's own default, far below the spread of
+ * the loss models and LED presets that the link also depends on.
+ */
+const MUTUAL_RTOL = 1e-3;
+const evaluatorCache = new WeakMap<Coil, WeakMap<Coil, CouplingEvaluator>>();
+function evaluatorFor(a: Coil, b: Coil): CouplingEvaluator {
+  let inner = evaluatorCache.get(a);
+  if (inner === undefined) {
+    inner = new WeakMap();
+    evaluatorCache.set(a, inner);
+  }
+  let ev = inner.get(b);
+  if (ev === undefined) {
+    ev = couplingEvaluator(a, b, { relTol: MUTUAL_RTOL });
+    inner.set(b, ev);
+  }
+  return ev;
+}
 
 /** L, R and the self-resonance of a coil at a frequency and temperature, memoised per coil object. */
 function coilNumbers(coil: Coil, f: number, temperature: number | undefined, warnings: string[], label: string): CoilNumbers {
@@ -160,10 +183,10 @@ export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoad
     for (let j = i + 1; j < n; j++) {
       const a = coils[i]!;
       const b = coils[j]!;
-      const m = mutualInductanceChecked(a.coil, a.pose, b.coil, b.pose);
+      const m = evaluatorFor(a.coil, b.coil).evaluate(a.pose, b.pose);
       for (const wtext of m.warnings) warnings.push(`${a.label} – ${b.label}: ${wtext}`);
-      L[i]![j] = m.value;
-      L[j]![i] = m.value;
+      L[i]![j] = m.mutual;
+      L[j]![i] = m.mutual;
     }
   }
   const coupling = L.map((row, i) => row.map((m, j) => (i === j ? 1 : m / Math.sqrt(L[i]![i]! * L[j]![j]!))));
