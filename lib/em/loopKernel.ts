@@ -31,6 +31,34 @@ const HALF_PI = Math.PI / 2;
 const AGM_STOP = 1e-9;
 const MU0_OVER_PI = MU0 / Math.PI;
 
+/** K(m) of the last {@link agmScaledSum} call (module scratch: the kernels are hot paths and allocate nothing). */
+let agmK = 0;
+
+/**
+ * The AGM with the scaled sum of the header: returns T = Σ 2^{n−1}(c_n/m)² and leaves
+ * K = π/(2a_∞) in `agmK`. m = 4aρ/β², m₁ = α²/β², both from the geometry.
+ */
+function agmScaledSum(m: number, m1: number): number {
+  let an = 1;
+  let bn = Math.sqrt(m1);
+  let g = 1 / (2 * (1 + bn)); // γ₁ = c₁/m
+  let T = g * g;
+  let w = 1;
+  // invariant: g = γ_{n+1} = (a_n − b_n)/(2m). Once c_{n+1} ≤ 1e-9·a, the next correction
+  // c_{n+2} ≈ c_{n+1}²/4 is below rounding, so a_{n+1} is the AGM limit and T is complete.
+  for (let i = 0; i < 30; i++) {
+    const an1 = 0.5 * (an + bn);
+    bn = Math.sqrt(an * bn);
+    an = an1;
+    if (m * g <= AGM_STOP * an) break;
+    g = (m * g * g) / (2 * (an + bn)); // c_{n+2} = c_{n+1}²/(4 a_{n+2})
+    w *= 2;
+    T += w * g * g;
+  }
+  agmK = HALF_PI / an;
+  return T;
+}
+
 /** Indices into the kernel's output array. */
 export const K_A_OVER_RHO = 0;
 export const K_B_RHO = 1;
@@ -53,24 +81,8 @@ export function loopKernel(a: number, rho: number, z: number, out: Float64Array,
   const beta2 = dp * dp + z2;
   const m1 = alpha2 / beta2;
   const m = (4 * a * rho) / beta2;
-  // AGM with the scaled sum T (see header)
-  let an = 1;
-  let bn = Math.sqrt(m1);
-  let g = 1 / (2 * (1 + bn)); // γ₁ = c₁/m
-  let T = g * g;
-  let w = 1;
-  // invariant: g = γ_{n+1} = (a_n − b_n)/(2m). Once c_{n+1} ≤ 1e-9·a, the next correction
-  // c_{n+2} ≈ c_{n+1}²/4 is below rounding, so a_{n+1} is the AGM limit and T is complete.
-  for (let i = 0; i < 30; i++) {
-    const an1 = 0.5 * (an + bn);
-    bn = Math.sqrt(an * bn);
-    an = an1;
-    if (m * g <= AGM_STOP * an) break;
-    g = (m * g * g) / (2 * (an + bn)); // c_{n+2} = c_{n+1}²/(4 a_{n+2})
-    w *= 2;
-    T += w * g * g;
-  }
-  const K = HALF_PI / an;
+  const T = agmScaledSum(m, m1);
+  const K = agmK;
   const beta = Math.sqrt(beta2);
   const beta3 = beta2 * beta;
   out[K_A_OVER_RHO] = (8 * MU0_OVER_PI * a * a * K * T) / beta3;
@@ -104,21 +116,8 @@ export function coaxialKernel(ra: number, rb: number, d: number): number {
   const beta2 = dp * dp + d2;
   const m1 = alpha2 / beta2;
   const m = (4 * ra * rb) / beta2;
-  let an = 1;
-  let bn = Math.sqrt(m1);
-  let g = 1 / (2 * (1 + bn));
-  let T = g * g;
-  let w = 1;
-  for (let i = 0; i < 30; i++) {
-    const an1 = 0.5 * (an + bn);
-    bn = Math.sqrt(an * bn);
-    an = an1;
-    if (m * g <= AGM_STOP * an) break;
-    g = (m * g * g) / (2 * (an + bn));
-    w *= 2;
-    T += w * g * g;
-  }
-  return MU0 * m * m * Math.sqrt(beta2) * (HALF_PI / an) * T;
+  const T = agmScaledSum(m, m1);
+  return MU0 * m * m * Math.sqrt(beta2) * agmK * T;
 }
 
 /**
@@ -130,19 +129,6 @@ export function aOverRhoKernel(a: number, rho: number, z2: number, alpha2: numbe
   const beta2 = dp * dp + z2;
   const m1 = alpha2 / beta2;
   const m = (4 * a * rho) / beta2;
-  let an = 1;
-  let bn = Math.sqrt(m1);
-  let g = 1 / (2 * (1 + bn));
-  let T = g * g;
-  let w = 1;
-  for (let i = 0; i < 30; i++) {
-    const an1 = 0.5 * (an + bn);
-    bn = Math.sqrt(an * bn);
-    an = an1;
-    if (m * g <= AGM_STOP * an) break;
-    g = (m * g * g) / (2 * (an + bn));
-    w *= 2;
-    T += w * g * g;
-  }
-  return (8 * MU0_OVER_PI * a * a * (HALF_PI / an) * T) / (beta2 * Math.sqrt(beta2));
+  const T = agmScaledSum(m, m1);
+  return (8 * MU0_OVER_PI * a * a * agmK * T) / (beta2 * Math.sqrt(beta2));
 }
