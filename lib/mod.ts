@@ -1,17 +1,14 @@
 /**
- * tanklight — the one public entry (design.md §2). Re-exports the public names of every layer.
+ * tanklight — the designer's entry (`import … from "tanklight"`): coil builders, M/L/k, losses,
+ * tanks and parts, loads, link, transient and, as they arrive, analysis, safety and reports.
+ * Kernels and numerics (elliptic integrals, quadrature, LU, complex arithmetic, field kernels,
+ * loss-model internals, input-guard helpers) live in `tanklight/advanced` (lib/advanced.ts).
+ * Layers and the rule for which entry a name belongs to: docs/design.md §2 and §4.
  * Each layer keeps its own section below; add new names to your layer's section.
  */
 
 // ── errors, constants, units ─────────────────────────────────────────────────
-export {
-  TanklightInputError,
-  type InputIssue,
-  requirePositive,
-  requireFinite,
-  describeValue,
-  formatIssue,
-} from "./errors.ts";
+export { TanklightInputError, type InputIssue } from "./errors.ts";
 export * from "./constants.ts";
 export {
   parseQuantity,
@@ -23,54 +20,6 @@ export {
   type DimensionInfo,
   type QuantityInput,
 } from "./units.ts";
-export {
-  quantity,
-  quantityMeta,
-  parseInput,
-  vec3,
-  unitVector,
-  type Vec3Schema,
-  type UnitVectorSchema,
-  type QuantityOptions,
-  type QuantityMeta,
-  type QuantitySchema,
-} from "./schema.ts";
-/** Schema shorthands by dimension: `schema.length()`, `schema.frequency()`, … (lib/schema.ts). */
-export * as schema from "./schema.ts";
-
-// ── lib/math ─────────────────────────────────────────────────────────────────
-export {
-  ellipticK,
-  ellipticE,
-  ellipticKE,
-  ellipticKEComplement,
-  ellipticKEInto,
-  type EllipticPair,
-} from "./math/elliptic.ts";
-export {
-  gaussLegendre,
-  integrateGaussLegendre,
-  integrateAdaptive,
-  type GaussRule,
-  type IntegrationResult,
-  type AdaptiveOptions,
-} from "./math/quadrature.ts";
-export { lambertW, lambertWOfLog } from "./math/lambertW.ts";
-export {
-  complexMul,
-  complexMulConj,
-  complexDiv,
-  complexInv,
-  complexAbs,
-  complexArg,
-  complexSqrt,
-  complexFromPolar,
-  type Complex,
-} from "./math/complex.ts";
-export { solveComplex, solveComplex2x2 } from "./math/solveComplex.ts";
-export { luFactor, luSolve, solveLinear, SingularMatrixError, LU_PIVOT_RTOL } from "./math/lu.ts";
-export { createRandom, createRandomFromState, type RandomSource } from "./math/random.ts";
-export { kelvin, kelvinScaled, ber, bei, berPrime, beiPrime, type KelvinValues } from "./math/kelvin.ts";
 
 // ── lib/em ───────────────────────────────────────────────────────────────────
 export type { Vec3, Pose, Filament, Conductor, Coil } from "./em/types.ts";
@@ -93,14 +42,9 @@ export {
   type RoundWireOptions,
   type LitzWireOptions,
 } from "./em/builders/conductor.ts";
-export { archimedeanArcLength } from "./em/builders/common.ts";
 export type { CoilShape } from "./em/types.ts";
 export {
-  INCH,
-  MICROHENRY,
   awgDiameter,
-  nagaokaCoefficient,
-  lundinNagaokaCoefficient,
   currentSheetInductance,
   wheeler1982Inductance,
   wheelerSingleLayerInductance,
@@ -109,16 +53,12 @@ export {
   mohanModifiedWheelerInductance,
   mohanCurrentSheetInductance,
   groverRectangleInductance,
-  rosaB,
-  rosaRoundWireCorrection,
   type SpiralOutline,
 } from "./em/classicFormulas.ts";
 // fields and inductance (EM core)
 export { loopField, type LoopFieldValue } from "./em/loopField.ts";
-export { loopVectorPotential } from "./em/vectorPotential.ts";
 export { coaxialLoopMutualInductance } from "./em/coaxialMutual.ts";
 export { loopMutualInductance, type CircleFilament, type LoopMutualOptions } from "./em/loopMutual.ts";
-export { poseFrame, worldFilaments, type Frame } from "./em/frames.ts";
 export { magneticField } from "./em/magneticField.ts";
 export {
   mutualInductance,
@@ -129,7 +69,6 @@ export {
 export {
   selfInductance,
   selfInductanceDetail,
-  internalInductanceFactor,
   type SelfInductanceOptions,
   type SelfInductanceDetail,
 } from "./em/selfInductance.ts";
@@ -142,11 +81,7 @@ export {
 // losses, self-capacitance, quality factor (losses)
 export { COPPER, ALUMINIUM, MATERIALS, material, resistivityAt, type Material } from "./em/materials.ts";
 export { skinDepth } from "./em/losses/skinDepth.ts";
-export { roundWireAcFactor, roundWireInternalInductanceFactor } from "./em/losses/roundWireAcFactor.ts";
-export { roundWireProximityFactor, turnFieldsPerAmpere, type TurnFields } from "./em/losses/proximity.ts";
-export { dowellFactor, dowellDelta } from "./em/losses/dowell.ts";
-export { litzResistancePerLength, type LitzResistance } from "./em/losses/litz.ts";
-export { traceResistancePerLength, slabSkinFactor, type TraceResistance } from "./em/losses/trace.ts";
+export { roundWireAcFactor } from "./em/losses/roundWireAcFactor.ts";
 export {
   coilResistance,
   coilResistanceDetail,
@@ -158,8 +93,6 @@ export {
   selfCapacitance,
   selfCapacitanceDetail,
   selfResonance,
-  medhurstCoefficient,
-  MEDHURST_TABLE,
   type SelfCapacitanceDetail,
 } from "./em/selfCapacitance.ts";
 
@@ -196,7 +129,6 @@ export {
   led,
   diode,
   fitShockley,
-  wOfLog,
   type Led,
   type Diode,
   type Junction,
@@ -210,10 +142,8 @@ export type { TokenLoad, TokenLoadKind, LedCurrent } from "./circuit/loads/types
 export { singleLed, antiParallelPair, sameDirectionPair, bridgeRectifier, halfWaveReservoir, resistorLoad } from "./circuit/loads/tokenCircuits.ts";
 export {
   fundamentalConductance,
-  fundamentalCurrentSlope,
   loadResponse,
   averageLoadCurrent,
-  describingFunctionReference,
   type FundamentalResponse,
 } from "./circuit/loads/describingFunction.ts";
 export {
@@ -224,8 +154,7 @@ export {
   type CurrentFedBridgeResult,
 } from "./circuit/loads/rectifier.ts";
 export { tokenResponse, type TokenResponse, type TokenResponseInput } from "./circuit/loads/tokenResponse.ts";
-// end parts and loads
-// link: drives, coupled tanks, operating point (issue 6)
+// link: drives, coupled tanks, operating point
 export {
   sineDrive,
   halfBridgeDrive,
@@ -240,7 +169,6 @@ export {
 } from "./circuit/drive.ts";
 export { solveLink, linkNetwork, type LinkSystem, type LinkSolution, type LinkNetworkBuild } from "./circuit/link.ts";
 export { solveLinkNetwork, LinkConvergenceError } from "./circuit/link/solveNetwork.ts";
-export { tokenLoadModel, type TokenLoadModelOptions } from "./circuit/link/tokenLoad.ts";
 export { summarizeLink, type LinkSummary, type LinkSummaryRow } from "./circuit/link/summary.ts";
 export {
   DEFAULT_LIT_THRESHOLD,
@@ -253,7 +181,7 @@ export {
 export type { LinkResult, TransmitterState, ReceiverState, LedState, LinkPower, Phasor } from "./circuit/link/result.ts";
 export { maxLinkEfficiency, optimalLoad } from "./circuit/linkLimits.ts";
 export { frequencySweep, type FrequencySweep, type SweepFrequencies } from "./circuit/frequencySweep.ts";
-// transient: time-domain engine (issue 7)
+// transient: time-domain engine
 export {
   GROUND,
   type TransientCircuit,
@@ -274,4 +202,3 @@ export { sineWaveform, stepWaveform, periodicGate } from "./circuit/transient/wa
 export { waveformHarmonics, type Harmonics } from "./circuit/transient/harmonics.ts";
 export { singleSwitchDrive, bridgeDrive, type DriveCircuit, type SingleSwitchDriveSpec, type BridgeDriveSpec } from "./circuit/transient/drives.ts";
 export { addToken, type TokenSpec, type TokenCircuit } from "./circuit/transient/token.ts";
-// end transient

@@ -3,7 +3,7 @@
  * and type-checks against the library.
  *
  * Rules: a block whose first line is `// not run` is skipped; `from "tanklight"` (and
- * `import("tanklight")`) is rewritten to the path of lib/mod.ts; each block is its own
+ * `import("tanklight")`) is rewritten to the path of lib/mod.ts, `"tanklight/advanced"` to lib/advanced.ts; each block is its own
  * module (top-level await allowed). A failure names the doc file and line:
  * `docs/methods/units.md:42: TanklightInputError: …`.
  * tests/fixtures/docs/ holds fixture docs that prove the runner fails when it should; they are
@@ -17,6 +17,7 @@ import ts from "typescript";
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), "..");
 const modPath = join(root, "lib", "mod.ts");
+const advancedPath = join(root, "lib", "advanced.ts");
 const workDir = join(root, "out", "docs-test", String(process.pid));
 
 /** One fenced TypeScript block of a Markdown file. */
@@ -74,11 +75,13 @@ function extractBlocks(path: string): DocBlock[] {
 /** The block's source as a module importing the library by absolute path. */
 function rewrite(code: string): string {
   // relative from the temporary module (tsc's rewriteRelativeImportExtensions rejects absolute .ts paths)
-  const target = JSON.stringify(relative(workDir, modPath).replace(/\\/g, "/"));
+  const target = (p: string): string => JSON.stringify(relative(workDir, p).replace(/\\/g, "/"));
   return (
     code
-      .replace(/(\bfrom\s*)(["'])tanklight\2/g, `$1${target}`)
-      .replace(/(\bimport\s*\(\s*)(["'])tanklight\2/g, `$1${target}`) +
+      .replace(/(\bfrom\s*)(["'])tanklight\/advanced\2/g, `$1${target(advancedPath)}`)
+      .replace(/(\bimport\s*\(\s*)(["'])tanklight\/advanced\2/g, `$1${target(advancedPath)}`)
+      .replace(/(\bfrom\s*)(["'])tanklight\2/g, `$1${target(modPath)}`)
+      .replace(/(\bimport\s*\(\s*)(["'])tanklight\2/g, `$1${target(modPath)}`) +
     // keep line numbers: only append; `export {}` makes every block its own module
     "\nexport {};\n"
   );
