@@ -1,5 +1,5 @@
 /**
- * A tiny benchmark harness (design.md §8): each workload runs in batches until enough time
+ * A tiny benchmark harness (docs/design.md §8): each workload runs in batches until enough time
  * has passed; the median time per call over the batches is printed with the workload size
  * and, where an issue sets one, the target.
  */

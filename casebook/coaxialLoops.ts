@@ -5,7 +5,7 @@
  * geometry alone sets how much of the transmitter's flux the token catches. This run prints
  * the mutual inductance and coupling factor of a 40 mm transmitter loop and a 6 mm token loop
  * from touching distance to 12 cm, and shows the 1/d³ dipole fall-off taking over beyond the
- * transmitter's radius (physics-notes.md: range grows only as the cube root of drive).
+ * transmitter's radius (docs/physics-notes.md: range grows only as the cube root of drive).
  *
  * Demo data: the radii and heights are our own example, not a product.
  */

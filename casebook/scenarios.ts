@@ -1,4 +1,4 @@
-/** The casebook's scenarios by name (design.md §7). */
+/** The casebook's scenarios by name (docs/design.md §7). */
 import * as coaxialLoops from "./coaxialLoops.ts";
 import * as pebbleDrawer from "./pebbleDrawer.ts";
 

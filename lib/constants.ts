@@ -1,5 +1,5 @@
 /**
- * Physical constants with value, unit and source (style.md §11).
+ * Physical constants with value, unit and source (docs/style.md §11).
  * CODATA 2018 values (NIST, https://physics.nist.gov/constants), unchanged in CODATA 2022
  * for these entries.
  */

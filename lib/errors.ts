@@ -1,5 +1,5 @@
 /**
- * The one error type for bad user input (design.md §3, style.md §8).
+ * The one error type for bad user input (docs/design.md §3, docs/style.md §8).
  * Structured first: `issues` lists every problem; the message is readable second.
  */
 

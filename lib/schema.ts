@@ -1,5 +1,5 @@
 /**
- * zod schemas for user inputs that carry units (design.md §3, style.md §10): a quantity field
+ * zod schemas for user inputs that carry units (docs/design.md §3, docs/style.md §10): a quantity field
  * accepts an SI number or a string with a unit ("12 mm") and yields the SI number; range rules
  * (positive, bounds) are part of the schema; `parseInput` turns every problem into one
  * TanklightInputError with dotted paths.

@@ -1,6 +1,6 @@
 /**
  * Quantities at the edge: parse "12 mm", "217 kHz", "4.7 nF" into SI numbers, and format SI
- * numbers back into engineering notation (design.md §3, "SI inside, strings at the edge").
+ * numbers back into engineering notation (docs/design.md §3, "SI inside, strings at the edge").
  *
  * Parsing uses one private mathjs instance (mathjs units) for the unit algebra and the
  * dimension check. Units are parsed once at the boundary; hot paths never call these functions.

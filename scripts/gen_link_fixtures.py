@@ -101,7 +101,7 @@ net = {
 with open(os.path.join(OUT, "coupled-3coil.json"), "w") as fh:
     json.dump(net, fh, indent=1)
 
-# ── published class-E spot values, as printed (references.md: checked) ──
+# ── published class-E spot values, as printed (docs/references.md: checked) ──
 spot = {
     "source": "Sokal & Sokal, IEEE JSSC SC-10(3), 1975; Raab, IEEE TCAS 24(12), 1977 (4-digit design values)",
     "generator": "typed from the published design equations (handbook spot values)",

@@ -14,9 +14,9 @@ Writes JSON fixtures { source, generator, digits, cases } to tests/fixtures/loss
   proximity_uniform_field.json  eddy loss per unit length of a round wire in a uniform
                                 transverse field: the exact 2-D solution (modified Bessel
                                 functions of complex argument, loss by quadrature of |J|^2)
-                                beside the Kelvin-function formula of references.md; the
+                                beside the Kelvin-function formula of docs/references.md; the
                                 generator asserts the two agree (that is the verification of
-                                the formula, which references.md says was never seen in print)
+                                the formula, which docs/references.md says was never seen in print)
   dowell_layer_factor.json      Dowell 1966 F_R for a few (Delta, m) at 40 digits
 
 Run: python3 scripts/gen_loss_fixtures.py
@@ -154,7 +154,7 @@ def prox_exact(gamma):
 
 
 def prox_kelvin(gamma):
-    """references.md: P'σ/Ĥ² = −2πγ (ber2 γ ber'γ + bei2 γ bei'γ)/(ber²γ + bei²γ)."""
+    """docs/references.md: P'σ/Ĥ² = −2πγ (ber2 γ ber'γ + bei2 γ bei'γ)/(ber²γ + bei²γ)."""
     g = mp.mpf(gamma)
     ber, bei = mp.ber(0, g), mp.bei(0, g)
     dber = mp.diff(lambda t: mp.ber(0, t), g)
@@ -173,7 +173,7 @@ for g in gammas:
 dump("proximity_uniform_field.json", {
     "source": "exact 2-D eddy-current solution for a round non-magnetic wire in a uniform transverse field "
               "(modified Bessel I0, I1 of complex argument, loss by quadrature); the Kelvin-function formula of "
-              "references.md agrees with it to 1e-20 (asserted by the generator); quantity P'·σ/Ĥ², Ĥ peak, "
+              "docs/references.md agrees with it to 1e-20 (asserted by the generator); quantity P'·σ/Ĥ², Ĥ peak, "
               "γ = d/(δ√2); lowFrequency = πσω²B²a⁴/8 (derived in docs/methods/losses.md)",
     "generator": GEN,
     "digits": 17,

@@ -7,7 +7,7 @@ mpmath and written as the correctly rounded double (Python repr, 17 significant 
 most), so "digits": 17. Arguments are written as doubles too, and the reference is computed
 for that exact double, never for a decimal the double only approximates.
 
-Conventions (style.md §3): tanklight's ellipticK(m)/ellipticE(m) take the parameter m = k².
+Conventions (docs/style.md §3): tanklight's ellipticK(m)/ellipticE(m) take the parameter m = k².
 mpmath.ellipk(m) and mpmath.ellipe(m) use the same parameter m, so no conversion is needed.
 """
 import json

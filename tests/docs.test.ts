@@ -1,5 +1,5 @@
 /**
- * Executable docs (style.md §15): every ```ts block of README.md and docs/**\/*.md runs here,
+ * Executable docs (docs/style.md §15): every ```ts block of README.md and docs/**\/*.md runs here,
  * and type-checks against the library.
  *
  * Rules: a block whose first line is `// not run` is skipped; `from "tanklight"` (and

@@ -3,12 +3,12 @@
  *
  * Tables (mantissas of one decade, 1 ≤ m < 10):
  * - E3, E6, E12, E24: two significant digits, typed from IEC 60063 (E24 checked against
- *   references.md; E3/E6/E12 are every 8th/4th/2nd E24 value).
+ *   docs/references.md; E3/E6/E12 are every 8th/4th/2nd E24 value).
  * - E48, E96: three significant digits, the rounding rule round(10^(i/N), 3 digits) with no
- *   exception (references.md). Written out from the rule; E96 also compared, value by value,
+ *   exception (docs/references.md). Written out from the rule; E96 also compared, value by value,
  *   with the catalogue series as remembered (identical) — the published table was not at hand.
  * - E192: three digits by the same rule except 920 (the rule gives 919) — the exception is
- *   from memory (unverified), references.md; the published table was not at hand: verify.
+ *   from memory (unverified), docs/references.md; the published table was not at hand: verify.
  * The rule itself (10^(i/N) rounded) and its listed E24 exceptions (2.7 3.0 3.3 3.6 3.9 4.3 4.7
  * 8.2) are checked against these tables in tests/circuit/eseries.test.ts.
  */

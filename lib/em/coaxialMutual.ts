@@ -14,7 +14,7 @@ import { coaxialKernel } from "./loopKernel.ts";
  * β² = (a+b)² + d² and the positive AGM sum T of loopKernel.ts: no cancellation far away (the
  * bracket is O(k³) there; the dipole limit μ₀πa²b²/(2d³) comes out to rounding) and the
  * complementary parameter m₁ = ((a−b)² + d²)/β² is formed from the geometry, so touching
- * filaments (m → 1) keep every digit (physics-notes.md).
+ * filaments (m → 1) keep every digit (docs/physics-notes.md).
  *
  * @param ra radius of loop a, m, > 0.
  * @param rb radius of loop b, m, > 0.

@@ -4,7 +4,7 @@
  *
  * For a circle of radius a, a point at distance ρ from its axis and height z above its
  * plane, with α² = (a−ρ)² + z², β² = (a+ρ)² + z², m = 4aρ/β², m₁ = α²/β² (both formed from
- * the geometry, physics-notes.md), the arithmetic–geometric mean (A&S 1964 §17.6) with
+ * the geometry, docs/physics-notes.md), the arithmetic–geometric mean (A&S 1964 §17.6) with
  * a₀ = 1, b₀ = √m₁, c_{n+1} = c_n²/(4a_{n+1}) gives K = π/(2a_∞) and
  *
  *   (1 − m/2)·K − E = K · Σ_{n≥1} 2^{n−1} c_n²  ≡  K · m² · T,      T = Σ 2^{n−1} (c_n/m)²,

@@ -1,6 +1,6 @@
 /**
  * Conductor materials as plain data: resistivity at 20 °C, its linear temperature coefficient
- * and the relative permeability (design.md §5 "Losses").
+ * and the relative permeability (docs/design.md §5 "Losses").
  *
  * ρ(T) = ρ₂₀·(1 + α₂₀·(T − 293.15 K)), the linear law that IEC 60028 uses to correct copper
  * resistance to 20 °C. Temperatures are in kelvin (SI), like everything inside the library.

@@ -3,7 +3,7 @@
  *
  * - Single-layer circular coils (solenoid, one-layer roundCoil): Medhurst's empirical table,
  *   C = H·D (pF, D in cm), H interpolated log–log in ℓ/D (Medhurst, Wireless Engineer 24,
- *   1947, pp. 35–43 and 80–92; table in references.md). Medhurst measured real single-layer coils
+ *   1947, pp. 35–43 and 80–92; table in docs/references.md). Medhurst measured real single-layer coils
  *   in free space; turn-to-turn models are badly wrong for them (Knight 2010–2013).
  * - Multi-layer roundCoil: the turn-to-turn cell capacitance of Massarini & Kazimierczuk
  *   (IEEE TPEL 12(4):671–676, 1997) between turns of adjacent layers, combined over the winding
@@ -23,7 +23,7 @@ import { ellipticK } from "../math/elliptic.ts";
 import { selfInductance } from "./selfInductance.ts";
 import type { Coil, Conductor } from "./types.ts";
 
-/** Medhurst 1947 table: ℓ/D → H (pF per cm of diameter). references.md, status "checked". */
+/** Medhurst 1947 table: ℓ/D → H (pF per cm of diameter). docs/references.md, status "checked". */
 export const MEDHURST_TABLE: readonly (readonly [number, number])[] = [
   [0.1, 0.96], [0.2, 0.7], [0.3, 0.6], [0.5, 0.5], [0.8, 0.46], [1, 0.46], [1.5, 0.47], [2, 0.5], [3, 0.61],
   [4, 0.72], [5, 0.81], [7, 1.01], [10, 1.32], [15, 1.86], [20, 2.36], [30, 3.4], [50, 5.8],

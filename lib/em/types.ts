@@ -1,5 +1,5 @@
 /**
- * Core geometric types (design.md §4). A coil is a set of weighted current filaments in its
+ * Core geometric types (docs/design.md §4). A coil is a set of weighted current filaments in its
  * own frame (axis +z, origin at the centre of the winding) plus the conductor that carries
  * the current. All lengths in metres.
  */

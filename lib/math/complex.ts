@@ -1,7 +1,7 @@
 /**
  * Small complex arithmetic for hot paths: plain numbers in, results written into a caller's
  * Float64Array at an offset (re at out[i], im at out[i + 1]) — no allocation per call.
- * Phasor convention e^{jωt} (design.md §3); these helpers know no physics.
+ * Phasor convention e^{jωt} (docs/design.md §3); these helpers know no physics.
  *
  * Methods: division by Smith's algorithm (R. L. Smith, "Algorithm 116: Complex division",
  * Comm. ACM 5(8):435, 1962), which avoids overflow/underflow of |b|²; modulus by

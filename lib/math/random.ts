@@ -15,7 +15,7 @@
  *   second deviate of each pair for the next call.
  *
  * Randomness in tanklight comes only through a generator made here from an explicit seed
- * (design.md §3); the same seed gives the same stream on every platform.
+ * (docs/design.md §3); the same seed gives the same stream on every platform.
  */
 import { TanklightInputError } from "../errors.ts";
 

@@ -1,6 +1,6 @@
 /**
  * Complex linear systems A·x = b: a closed-form 2×2 path for hot loops (one transmitter and
- * one receiver) and mathjs's LU solve for larger systems (design.md §3: mathjs objects stay
+ * one receiver) and mathjs's LU solve for larger systems (docs/design.md §3: mathjs objects stay
  * at the edges, e.g. general complex solves of more than two coils).
  *
  * Methods: 2×2 by Cramer's rule with Smith's complex division (Smith, Comm. ACM 5(8), 1962);

@@ -82,7 +82,7 @@ describe("square-wave bridges", () => {
 describe("class E", () => {
   it("the closed-form constants agree with the published 4-digit design values", () => {
     // source: Sokal & Sokal, IEEE JSSC SC-10(3), 1975; Raab, IEEE TCAS 24(12), 1977
-    // (references.md, checked). Tolerance: half a unit in the last printed decimal.
+    // (docs/references.md, checked). Tolerance: half a unit in the last printed decimal.
     const s = "source: Sokal & Sokal 1975; Raab 1977 (design equations)";
     const rt = (v: number): number => (0.5 * 10 ** -(String(v).split(".")[1]?.length ?? 0)) / v + 1e-12;
     const pairs: [string, number, string][] = [
@@ -117,7 +117,7 @@ describe("class E", () => {
   it("classEDesign sizes a 5 V, 200 kHz, 2 W drive by the published relations", () => {
     const d = classEDesign({ supply: 5, frequency: 200e3, power: 2, inductance: 20e-6 });
     const w = 2 * Math.PI * 200e3;
-    // source: Sokal & Sokal 1975 / Raab 1977 design relations (references.md); rtol 1e-3:
+    // source: Sokal & Sokal 1975 / Raab 1977 design relations (docs/references.md); rtol 1e-3:
     // the printed coefficients carry 4 digits
     const s = "source: Sokal & Sokal 1975; Raab 1977 (design equations)";
     expectOutside({ quantity: "class E R for 5 V, 2 W", source: s, ours: d.resistance, reference: (0.5768 * 25) / 2, rtol: 1e-3, unit: "Ω" });

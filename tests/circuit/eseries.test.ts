@@ -15,11 +15,11 @@ function rule(series: ESeries): number[] {
 
 describe("standardValues(series): IEC 60063 tables", () => {
   it("E24 and E12 equal the published tables", () => {
-    // source: IEC 60063 (E24 as in references.md, checked); exact decimal values
+    // source: IEC 60063 (E24 as in docs/references.md, checked); exact decimal values
     expect(standardValues("E24")).toEqual(iec.E24!.values);
     expect(standardValues("E12")).toEqual(iec.E12!.values);
     for (const [k, v] of iec.E24!.values.entries()) {
-      expectOutside({ quantity: `E24[${k}]`, source: "source: IEC 60063 E24 (references.md, checked)", ours: standardValues("E24")[k]!, reference: v, rtol: 0 });
+      expectOutside({ quantity: `E24[${k}]`, source: "source: IEC 60063 E24 (docs/references.md, checked)", ours: standardValues("E24")[k]!, reference: v, rtol: 0 });
     }
   });
 
@@ -53,7 +53,7 @@ describe("standardValues(series): IEC 60063 tables", () => {
     expect(standardValues("E96")).toEqual(rule("E96"));
     const r = rule("E192");
     const diff = standardValues("E192").filter((v, i) => v !== r[i]);
-    expect(diff).toEqual(iec.E192exceptions!.values); // memory (unverified), references.md
+    expect(diff).toEqual(iec.E192exceptions!.values); // memory (unverified), docs/references.md
   });
 
   it("each series is a subset of the next finer one up to E24, and of E192 from E48", () => {

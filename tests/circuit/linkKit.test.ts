@@ -125,7 +125,7 @@ describe("trade-practice range of a 5 V single-switch kit", () => {
   it("sliding sideways on the surface the token goes dark sooner than it does along the axis", () => {
     // trade practice (no source): less range sideways at the surface. The physics behind it:
     // near the winding the flux through a flat token reverses and passes through zero
-    // (physics-notes.md), so a dark ring sits just outside the winding radius.
+    // (docs/physics-notes.md), so a dark ring sits just outside the winding radius.
     for (const threshold of [0.1e-3, 0.3e-3, 1e-3]) {
       const side = sidewaysRange("red", threshold);
       const axial = axialRange("red", threshold);

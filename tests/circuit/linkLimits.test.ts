@@ -8,7 +8,7 @@ import type { LinkNetwork } from "../../lib/circuit/link/network.ts";
 import { sineDrive } from "../../lib/circuit/drive.ts";
 import { resistorLoad } from "./linkStubs.ts";
 
-const SRC = "source: k²Q₁Q₂/(1+√(1+k²Q₁Q₂))², follows from Kurs et al., Science 317:83–86 (2007) (references.md, checked)";
+const SRC = "source: k²Q₁Q₂/(1+√(1+k²Q₁Q₂))², follows from Kurs et al., Science 317:83–86 (2007) (docs/references.md, checked)";
 
 function seriesPair(k: number, r1: number, r2: number, rl: number, topology: "series" | "parallel" = "series"): LinkNetwork {
   const f = 200e3;

@@ -24,7 +24,7 @@ const wire = roundWire(0.5e-3, { insulation: 25e-6 });
 describe("selfCapacitance(coil) — Medhurst 1947 for single-layer coils", () => {
   it("reproduces Medhurst's tabulated C = H·D for solenoids at tabulated ℓ/D", () => {
     // source: Medhurst, Wireless Engineer 24 (1947) 35–43, 80–92, table of H (pF/cm) by ℓ/D
-    // (references.md, "checked"). At a tabulated ratio our interpolation returns the table value,
+    // (docs/references.md, "checked"). At a tabulated ratio our interpolation returns the table value,
     // so the only error is rounding of ℓ/D from the builder's geometry: rtol 1e-9.
     const D = 0.04;
     for (const [lOverD, H] of [[0.2, 0.7], [0.5, 0.5], [1, 0.46], [2, 0.5], [5, 0.81]] as const) {

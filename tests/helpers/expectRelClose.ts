@@ -1,7 +1,7 @@
 import { expect } from "vitest";
 
 /**
- * Relative-tolerance assertion (style.md §5): |actual − expected| ≤ rtol·|expected|.
+ * Relative-tolerance assertion (docs/style.md §5): |actual − expected| ≤ rtol·|expected|.
  * On failure it prints the context, actual, expected, Δ, the relative error and the tolerance.
  * Where expected is exactly 0 pass `atol` (absolute floor) and say why in the test.
  */

@@ -4,12 +4,12 @@ import { dirname, join, relative } from "node:path";
 import { fileURLToPath } from "node:url";
 import { expectRelClose } from "./expectRelClose.ts";
 
-/** One check of our value against something outside the project (design.md §6). */
+/** One check of our value against something outside the project (docs/design.md §6). */
 export interface OutsideCheck {
   /** what is compared, with its arguments, e.g. "K(m = 0.5)" */
   readonly quantity: string;
   /**
-   * where the reference comes from, in one of the design.md §6 forms:
+   * where the reference comes from, in one of the docs/design.md §6 forms:
    * "source: A&S 1964 Table 17.1", "reference library: @stdlib/...",
    * "trade practice (no source)", "from memory (unverified)", "independent method: ..."
    */

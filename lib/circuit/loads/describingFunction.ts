@@ -240,7 +240,7 @@ function ledEntry(role: LedCurrent["role"], l: Led, avg: number, peak: number): 
 /**
  * Average (DC) current of every LED in a token load at tank amplitude A, with its peak current
  * and relative brightness (average current / rated current). Brightness follows the average
- * current, not the fundamental (physics-notes.md, "The token").
+ * current, not the fundamental (docs/physics-notes.md, "The token").
  * @param load token load; amplitude V (peak) ≥ 0.
  * @returns one entry per LED (none for a resistor): `{ role, label, current, peakCurrent, relativeBrightness }`.
  * @example averageLoadCurrent({ kind: "led", led: ledPreset("red") }, 2.2)[0].current // → 0.008489958975518656 A

@@ -44,7 +44,7 @@ export interface JunctionOptions {
   readonly referenceTemperature?: number;
   /**
    * forward-voltage temperature coefficient at the reference current, V/K; default −0.002
-   * (about −2 mV/K: from memory (unverified), references.md "LED forward voltage")
+   * (about −2 mV/K: from memory (unverified), docs/references.md "LED forward voltage")
    */
   readonly temperatureCoefficient?: number;
   /** current at which the temperature coefficient holds, A; default: the largest fit point or 20 mA */

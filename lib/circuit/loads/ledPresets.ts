@@ -3,7 +3,7 @@
  * labelled with where its numbers come from.
  *
  * Provenance (read before relying on a preset):
- * - LED forward voltage at 20 mA lies inside the ranges of references.md ("reference tables,
+ * - LED forward voltage at 20 mA lies inside the ranges of docs/references.md ("reference tables,
  *   not a handbook"): red AlInGaP 1.8–2.1 V, orange 2.0–2.1, yellow 2.1–2.2, green InGaN
  *   3.0–3.5, yellow-green GaP about 2.1, blue 3.0–3.3, white 3.0–3.3.
  * - The 1 mA and 5 mA points (the shape of the curve below rated current) are from memory
@@ -35,7 +35,7 @@ export interface LedPresetData {
   readonly source: string;
 }
 
-const TABLE_20MA = "V_F at 20 mA inside the references.md range (reference tables, not a handbook)";
+const TABLE_20MA = "V_F at 20 mA inside the docs/references.md range (reference tables, not a handbook)";
 const LOW_POINTS = "1 mA and 5 mA points from memory (unverified), typical indicator-LED curve";
 
 /** The preset table (plain data, exported for docs and tests). */

@@ -180,7 +180,7 @@ export function currentFedBridge(diode: Junction, loadResistance: number, curren
  * Steigerwald 1988 first-harmonic equivalent resistance of a full-bridge rectifier:
  * capacitor filter (current-fed) R_ac = 8R_L/π²; inductor filter (voltage-fed) R_ac = π²R_L/8.
  * Source: Steigerwald, IEEE Trans. Power Electron. 3(2), 1988 — from memory (unverified),
- * references.md. It does NOT describe a reservoir capacitor fed by a sinusoidal tank voltage
+ * docs/references.md. It does NOT describe a reservoir capacitor fed by a sinusoidal tank voltage
  * (the parallel-tuned token), where the charge balance gives about R_L/2 instead.
  * @param loadResistance R_L, Ω > 0; filter "capacitor" | "inductor".
  * @example steigerwaldEquivalentResistance(100, "capacitor") // → 81.05694691387022

@@ -1,6 +1,6 @@
 /**
  * A token (receiver: coil L₂ with its series resistance R₂, tank capacitor C₂ across it, and
- * any `TokenLoad` across C₂ — physics-notes.md "The token") coupled through a mutual
+ * any `TokenLoad` across C₂ — docs/physics-notes.md "The token") coupled through a mutual
  * inductance to an inductor of an existing circuit, expanded into transient elements.
  *
  * The token's lower tank node is tied to "ground": a single connection carries no current,

@@ -1,7 +1,7 @@
 /**
  * Source waveforms and switch gates for the transient engine, as plain functions of time.
  * Cosine phase convention, so a sine source of amplitude A and phase φ has the phasor A·e^{jφ}
- * (phasors e^{jωt}, design.md §3).
+ * (phasors e^{jωt}, docs/design.md §3).
  */
 
 import { requireFinite, requirePositive, TanklightInputError } from "../../errors.ts";

@@ -22,7 +22,7 @@ const buf = new Float64Array(6);
  * g(γ) = P′·σ/Ĥ² of a round wire in a uniform transverse field (hot path, no checks), γ ≥ 0.
  *
  * g(γ) = −2πγ·(ber₂γ·ber′γ + bei₂γ·bei′γ)/(ber²γ + bei²γ), γ = d/(δ√2)
- * (references.md; we verified it against the exact 2-D eddy-current solution to 1e-20 in
+ * (docs/references.md; we verified it against the exact 2-D eddy-current solution to 1e-20 in
  * scripts/gen_loss_fixtures.py). Low frequency g → πγ⁴/8, i.e. P′ = πσω²B̂²a⁴/8.
  */
 export function proximityG(gamma: number): number {
@@ -43,7 +43,7 @@ export function proximityG(gamma: number): number {
  *
  * P′ = G·Ĥ², G = ρ·g(γ), γ = d/(δ√2), g(γ) = −2πγ(ber₂γ ber′γ + bei₂γ bei′γ)/(ber²γ + bei²γ)
  * (Ferreira 1994's orthogonal proximity term for a round conductor; the Kelvin form of
- * references.md, checked here against the exact 2-D solution). Low frequency:
+ * docs/references.md, checked here against the exact 2-D solution). Low frequency:
  * P′ = πσω²μ₀²Ĥ²a⁴/8 (Faraday's law with the unperturbed field; derived in docs/methods/losses.md).
  * High frequency: G grows like √f (the field is excluded; surface loss).
  * @param diameter bare wire diameter d, m, > 0.

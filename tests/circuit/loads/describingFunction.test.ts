@@ -129,7 +129,7 @@ describe("fundamentalConductance / averageLoadCurrent", () => {
     const load = antiParallelPair(ledPreset("red"), ledPreset("green-gap"));
     const A = clampAmplitude(load, 5e-3, 1.6e-4);
     const [red, green] = averageLoadCurrent(load, A) as [LedCurrent, LedCurrent];
-    // "conducts" = above the visibility threshold of physics-notes.md (0.1 mA, trade practice)
+    // "conducts" = above the visibility threshold of docs/physics-notes.md (0.1 mA, trade practice)
     expect(red.current).toBeGreaterThan(1e-4);
     expect(green.current).toBeGreaterThan(1e-4);
     // the describing function (sinusoidal tank voltage) says the lower-V_F red takes more
@@ -160,7 +160,7 @@ describe("fundamentalConductance / averageLoadCurrent", () => {
       // trade practice (no source): "about 2 V green indicator, about 1.7 V red"; the green of
       // that lore is the GaP yellow-green. Drives from a just-visible LED (0.1 mA average) to
       // 10× that Norton current (≈ 2.5 mA average, a bright indicator); tolerance ±15 %: a
-      // single quoted figure against LED bins that spread ±0.2–0.4 V (references.md), and the
+      // single quoted figure against LED bins that spread ±0.2–0.4 V (docs/references.md), and the
       // clamp rises with the log of the drive.
       const load = singleLed(ledPreset(colour));
       const Gt = 1.6e-4;

@@ -135,7 +135,7 @@ describe("led(spec): Shockley junction with series resistance, exact by Lambert 
     const hot = ledPreset("red", { temperature: 298.15 + 50 });
     expectOutside({
       quantity: "red LED V_F(20 mA) temperature coefficient",
-      source: "from memory (unverified): about −2 mV/K (references.md)",
+      source: "from memory (unverified): about −2 mV/K (docs/references.md)",
       ours: (hot.voltage(20e-3) - cold.voltage(20e-3)) / 50,
       reference: -0.002,
       rtol: 1e-6, // the model holds this coefficient by construction; the check pins that it does

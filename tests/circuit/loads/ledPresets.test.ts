@@ -5,7 +5,7 @@ import { expectOutside } from "../../helpers/validation.ts";
 import { expectRelClose } from "../../helpers/expectRelClose.ts";
 import { PLANCK, SPEED_OF_LIGHT, ELEMENTARY_CHARGE } from "../../../lib/constants.ts";
 
-// references.md: LED forward voltage at about 20 mA (reference tables, not a handbook)
+// docs/references.md: LED forward voltage at about 20 mA (reference tables, not a handbook)
 const RANGES: Record<LedColour, [number, number]> = {
   red: [1.8, 2.1],
   orange: [2.0, 2.1],
@@ -18,13 +18,13 @@ const RANGES: Record<LedColour, [number, number]> = {
 
 describe("ledPreset(colour)", () => {
   for (const colour of Object.keys(RANGES) as LedColour[]) {
-    it(`${colour}: V_F at 20 mA lies in the references.md range and the fit reproduces the preset points`, () => {
+    it(`${colour}: V_F at 20 mA lies in the docs/references.md range and the fit reproduces the preset points`, () => {
       const l = ledPreset(colour);
       const [lo, hi] = RANGES[colour];
       // a range, checked as its midpoint ± half-width
       expectOutside({
         quantity: `${colour} LED V_F at 20 mA`,
-        source: "reference tables, not a handbook (references.md, LED forward voltage)",
+        source: "reference tables, not a handbook (docs/references.md, LED forward voltage)",
         ours: l.voltage(20e-3),
         reference: (lo + hi) / 2,
         rtol: (hi - lo) / (lo + hi) + 1e-12,
@@ -40,7 +40,7 @@ describe("ledPreset(colour)", () => {
     });
   }
 
-  it("V_F at 20 mA is not far below the photon energy hc/(qλ) (the ≳ of references.md, memory)", () => {
+  it("V_F at 20 mA is not far below the photon energy hc/(qλ) (the ≳ of docs/references.md, memory)", () => {
     for (const colour of Object.keys(RANGES) as LedColour[]) {
       const d = LED_PRESET_DATA[colour];
       const photon = (PLANCK.value * SPEED_OF_LIGHT.value) / (ELEMENTARY_CHARGE.value * d.wavelength);

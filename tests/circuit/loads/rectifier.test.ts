@@ -123,7 +123,7 @@ describe("current-fed full bridge (Steigerwald 1988's case)", () => {
     const r = currentFedBridge(d, RL, 0.05); // V_o ≈ 64 V, diode drops ≈ 0.8 V
     expectOutside({
       quantity: "current-fed bridge R_ac, R_L = 2 kΩ, I = 50 mA",
-      source: "from memory (unverified): Steigerwald, IEEE TPEL 3(2), 1988, R_ac = 8R_L/π² (references.md)",
+      source: "from memory (unverified): Steigerwald, IEEE TPEL 3(2), 1988, R_ac = 8R_L/π² (docs/references.md)",
       ours: r.equivalentResistance,
       reference: steigerwaldEquivalentResistance(RL, "capacitor"),
       rtol: 0.03, // the two diode drops add ≈ 2·v_D/V_o ≈ 2 % to the ideal square wave

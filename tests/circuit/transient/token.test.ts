@@ -54,10 +54,10 @@ describe("LED tokens in the time domain", () => {
     const runs = [0.25, 0.5, 1].map((V) => run({ kind: "led", led: red }, V));
     for (const x of runs) {
       // trade practice (no source): an LED across a tank clips it near its forward voltage.
-      // Reference: the middle of the red AlInGaP range 1.8–2.1 V at 20 mA (references.md,
+      // Reference: the middle of the red AlInGaP range 1.8–2.1 V at 20 mA (docs/references.md,
       // reference tables). 15 %: the clamp sits at V_F of the *peak* current (2–6 × the
       // average), a few tenths of a volt above V_F(20 mA) at the stronger drives.
-      expectOutside({ quantity: `red LED tank clamp (positive peak), LED average ${(x.avg("led") * 1e3).toFixed(1)} mA`, source: "trade practice (no source); V_F range from references.md (reference tables)", ours: x.max, reference: 1.95, rtol: 0.15, unit: "V" });
+      expectOutside({ quantity: `red LED tank clamp (positive peak), LED average ${(x.avg("led") * 1e3).toFixed(1)} mA`, source: "trade practice (no source); V_F range from docs/references.md (reference tables)", ours: x.max, reference: 1.95, rtol: 0.15, unit: "V" });
       expect(x.avg("led")).toBeGreaterThan(1e-3);
     }
     // clamping: over a fourfold drive the clipped (positive) peak grows with an exponent

@@ -13,7 +13,7 @@ const RHO = 1.7241e-8;
 describe("proximityG(γ) and roundWireProximityFactor(d, f, ρ)", () => {
   it("equal the exact 2-D eddy loss of a round wire in a uniform transverse field (1e-12)", () => {
     // reference library: mpmath — the exact 2-D solution with I0, I1 of complex argument and the
-    // loss by quadrature (scripts/gen_loss_fixtures.py), which also confirms the references.md
+    // loss by quadrature (scripts/gen_loss_fixtures.py), which also confirms the docs/references.md
     // Kelvin formula to 1e-20. Regime: 0.01 ≤ γ ≤ 30; our Kelvin functions are good to ~1e-13.
     for (const c of exact.cases) {
       expectOutside({

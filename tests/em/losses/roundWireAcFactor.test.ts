@@ -36,11 +36,11 @@ describe("roundWireAcFactor(radius, f, resistivity)", () => {
   });
 
   it("follows the high-frequency asymptote r/2δ + 1/4 + 3δ/32r for r/δ ≥ 10", () => {
-    // source: standard asymptotic expansion of the Kelvin ratio (references.md, "standard (memory)");
+    // source: standard asymptotic expansion of the Kelvin ratio (docs/references.md, "standard (memory)");
     // the next term is O((δ/r)²) absolute, i.e. O((δ/r)³) relative: tolerance 0.02·(δ/r)³.
     for (const x of [10, 30, 100, 1000]) {
       const ref = x / 2 + 0.25 + 3 / (32 * x);
-      expectOutside({ quantity: `R_ac/R_dc at r/δ = ${x}`, source: "source: asymptote r/2δ + 1/4 + 3δ/(32r) (references.md)", ours: roundWireAcFactor(x * DELTA, F, RHO), reference: ref, rtol: 0.02 / (x * x * x) + 2e-13 });
+      expectOutside({ quantity: `R_ac/R_dc at r/δ = ${x}`, source: "source: asymptote r/2δ + 1/4 + 3δ/(32r) (docs/references.md)", ours: roundWireAcFactor(x * DELTA, F, RHO), reference: ref, rtol: 0.02 / (x * x * x) + 2e-13 });
     }
   });
 
