@@ -10,6 +10,7 @@
 // ── errors, constants, units ─────────────────────────────────────────────────
 export { TanklightInputError, type InputIssue } from "./errors.ts";
 export * from "./constants.ts";
+export * from "./hazards.ts";
 export {
   parseQuantity,
   formatQuantity,
@@ -114,7 +115,7 @@ export {
 export { standardValues, standardValuesBetween, nearestStandardValue, SERIES_TOLERANCE, type ESeries } from "./circuit/eseries.ts";
 export { bestCombination, type Combination, type CombinationOptions, type CombinationTopology, type PartKind } from "./circuit/combination.ts";
 export { resonantFrequencyWindow, type ToleranceInput, type FrequencyWindow } from "./circuit/tolerance.ts";
-export { capacitorStress, HIGH_VOLTAGE_CAUTION, type CapacitorStress, type CapacitorStressInput } from "./circuit/stress.ts";
+export { capacitorStress, type CapacitorStress, type CapacitorStressInput } from "./circuit/stress.ts";
 export {
   DIELECTRICS,
   VOLTAGE_RATINGS,

@@ -4,6 +4,7 @@
  * current (I = ωC·V for a capacitor; RMS = peak/√2; P = I_rms²·ESR).
  */
 import { TanklightInputError, requirePositive } from "../errors.ts";
+import { HIGH_VOLTAGE } from "../hazards.ts";
 import { DIELECTRICS, esrFromDissipationFactor, recommendCapacitor, type CapacitorRecommendation, type Dielectric } from "./dielectrics.ts";
 
 /** Inputs of {@link capacitorStress}: give the voltage amplitude or the current amplitude. */
@@ -41,9 +42,6 @@ export interface CapacitorStress {
   /** safety cautions (high voltage) */
   readonly cautions: readonly string[];
 }
-
-/** Peak voltage above which the result carries a high-voltage caution, V (trade practice: 50 V). */
-export const HIGH_VOLTAGE_CAUTION = 50;
 
 /**
  * Peak/RMS voltage and current, reactive power and ESR loss of a tank capacitor, with a
@@ -86,7 +84,7 @@ export function capacitorStress(input: CapacitorStressInput): CapacitorStress {
     else if (input.ratedVoltage < recommendation.derating * vp) warnings.push(`rating ${input.ratedVoltage} V is below ${recommendation.derating} × the peak voltage (trade-practice derating)`);
   }
   const cautions: string[] = [];
-  if (vp > HIGH_VOLTAGE_CAUTION) {
+  if (vp > HIGH_VOLTAGE.value) {
     cautions.push(
       `tank voltage ${vp.toPrecision(3)} V peak: a resonant tank can hold voltages that shock and burn; insulate it, discharge before handling, and follow local codes, regulations and licensed practice`,
     );

@@ -5,6 +5,7 @@
  * and parts; `solveLinkNetwork(network)` (./solveNetwork.ts) solves it.
  */
 import type { DriveEquivalent } from "../drive.ts";
+import { HIGH_VOLTAGE } from "../../hazards.ts";
 
 /**
  * A receiver's load as the link solver sees it: a describing function (fundamental admittance
@@ -83,7 +84,7 @@ export interface LinkOptions {
   readonly litThreshold?: number;
   /** LED current taken as relative brightness 1, A (default 20 mA) */
   readonly brightnessReference?: number;
-  /** peak voltage above which a caution is issued, V (default 42.4 V = 30 V RMS) */
+  /** peak voltage above which a caution is issued, V (default HIGH_VOLTAGE of lib/hazards.ts, 42.4 V = 30 V RMS) */
   readonly cautionVoltage?: number;
   /** iteration cap of the damped Newton (default 80) */
   readonly maxIterations?: number;
@@ -100,8 +101,5 @@ export interface LinkOptions {
 export const DEFAULT_LIT_THRESHOLD = 0.5e-3;
 /** Default brightness reference: 20 mA, the usual nominal current of an indicator LED (trade practice, no source). */
 export const DEFAULT_BRIGHTNESS_REFERENCE = 20e-3;
-/**
- * Default caution voltage: 42.4 V peak (30 V RMS), the touch-safety threshold many product
- * standards use for extra-low voltage — the applicable code decides (trade practice, no source).
- */
-export const DEFAULT_CAUTION_VOLTAGE = 42.4;
+/** Default caution voltage, V peak: the one high-voltage threshold, HIGH_VOLTAGE in lib/hazards.ts (42.4 V peak = 30 V RMS). */
+export const DEFAULT_CAUTION_VOLTAGE = HIGH_VOLTAGE.value;

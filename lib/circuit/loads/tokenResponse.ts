@@ -15,6 +15,7 @@
 import type { TokenLoad, LedCurrent } from "./types.ts";
 import { averageLoadCurrent, fundamentalConductance } from "./describingFunction.ts";
 import { TanklightInputError, requirePositive } from "../../errors.ts";
+import { HIGH_VOLTAGE } from "../../hazards.ts";
 
 /** Inputs of {@link tokenResponse}. */
 export interface TokenResponseInput {
@@ -109,7 +110,7 @@ export function tokenResponse(input: TokenResponseInput): TokenResponse {
   // coil current |e − V|/|Z_L| = A·|Y_C + G|
   const coilCurrent = A * Math.hypot(ycr + g, yci);
   const warnings: string[] = [];
-  if (A > 50) {
+  if (A > HIGH_VOLTAGE.value) {
     warnings.push(
       `tank amplitude ${A.toPrecision(3)} V peak: high voltage on the token's capacitor; check its rating (capacitorStress) and follow local codes, regulations and licensed practice`,
     );
