@@ -8,6 +8,7 @@ import { MU0 } from "../constants.ts";
 import { integrateAdaptive } from "../math/quadrature.ts";
 import { TanklightInputError } from "../errors.ts";
 import { aOverRhoKernel } from "./loopKernel.ts";
+import { segmentLog } from "./segmentPotential.ts";
 import type { Vec3 } from "./types.ts";
 
 const MU0_OVER_4PI = MU0 / (4 * Math.PI);
@@ -16,21 +17,6 @@ export const POLYGON_MUTUAL_TOL = 1e-10;
 
 /** Smallest squared distance (m²) between quadrature nodes and the other conductor seen by the last call. */
 export const polygonMutualState = { minDistance2: Infinity };
-
-/**
- * ln((R₁ + R₂ + L)/(R₁ + R₂ − L)) for a point at axial coordinate t along a segment of
- * length L and perpendicular distance² d2 from its line — the vector potential factor of a
- * straight segment (Hanson & Hirshman 2002, eq. 7), with R₁ + R₂ − L formed as
- * (R₁ − t) + (R₂ − (L − t)) and each difference rewritten as d²/(R + ·) where it would cancel.
- */
-function segmentLog(t: number, d2: number, L: number): number {
-  const u = L - t;
-  const R1 = Math.sqrt(t * t + d2);
-  const R2 = Math.sqrt(u * u + d2);
-  const e1 = t > 0 ? d2 / (R1 + t) : R1 - t;
-  const e2 = u > 0 ? d2 / (R2 + u) : R2 - u;
-  return Math.log((R1 + R2 + L) / (e1 + e2));
-}
 
 function overlapError(where: string): never {
   throw new TanklightInputError(

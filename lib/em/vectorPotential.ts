@@ -1,7 +1,7 @@
 /**
- * Magnetic vector potential of a circular filament (closed form) and of a straight segment.
+ * Magnetic vector potential of a circular filament (closed form); a straight segment's is in
+ * segmentPotential.ts.
  */
-import { MU0 } from "../constants.ts";
 import { TanklightInputError, requireFinite, requirePositive } from "../errors.ts";
 import { K_A_OVER_RHO, loopKernel } from "./loopKernel.ts";
 
@@ -31,20 +31,4 @@ export function loopVectorPotential(radius: number, current: number, rho: number
     throw new TanklightInputError([{ path: "rho, z", message: "the point lies on the filament", value: [rho, z] }], "loopVectorPotential");
   }
   return current * rho * scratch[K_A_OVER_RHO]!;
-}
-
-const MU0_OVER_4PI = MU0 / (4 * Math.PI);
-
-/**
- * Scalar factor of the vector potential of a straight current segment from p to q, per ampere:
- * A(x) = (μ₀/4π)·ŝ·ln((R₁ + R₂ + L)/(R₁ + R₂ − L)) = (μ₀/4π)·ŝ·2·atanh(L/(R₁ + R₂)),
- * R₁ = |x − p|, R₂ = |x − q|, L = |q − p|, ŝ = (q − p)/L (Hanson & Hirshman 2002, Phys. Plasmas
- * 9(8):3529, eq. 7). Returns the magnitude along ŝ in T·m/A; +∞ on the segment itself.
- * Private helper shared with the polygon mutual inductance (no validation).
- */
-export function segmentPotentialFactor(R1: number, R2: number, L: number): number {
-  const s = R1 + R2;
-  // 2·atanh(L/s) = ln((s + L)/(s − L)); s − L formed as ((s² − L²))/(s + L) would not help
-  // when the point is on the segment (both are 0); the caller keeps points off the wire.
-  return MU0_OVER_4PI * Math.log((s + L) / (s - L));
 }

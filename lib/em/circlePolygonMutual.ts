@@ -1,0 +1,148 @@
+/**
+ * Mutual inductance of a circular filament and a set of straight segments (closed polygons):
+ * the line integral, around the circle, of the segments' closed-form vector potential
+ * (Stokes: M = ∮ A·dl per unit current), by the periodic trapezoidal rule.
+ */
+import { MU0 } from "../constants.ts";
+import { TanklightInputError, type InputIssue } from "../errors.ts";
+import { segmentLog } from "./segmentPotential.ts";
+import { packPolygons, SEG_STRIDE } from "./straightMutual.ts";
+import type { Vec3 } from "./types.ts";
+
+const MU0_OVER_4PI = MU0 / (4 * Math.PI);
+/** The doubling stops at this many nodes; a ring that needs more grazes a wire (caller falls back). */
+export const RING_MAX_NODES = 1024;
+
+/** Result of {@link ringSegmentsIntegral} (a workspace the caller passes in). */
+export interface RingResult {
+  /** M, H (segment weights applied) */
+  value: number;
+  /** |T_N − T_{N/2}|, H: a conservative error estimate of value */
+  error: number;
+  /** smallest squared distance from a node to a segment, m² */
+  minDist2: number;
+  /** true when the doubling met the tolerance */
+  converged: boolean;
+  /** nodes used */
+  nodes: number;
+}
+
+/** A fresh RingResult workspace. */
+export function ringResult(): RingResult {
+  return { value: 0, error: 0, minDist2: Infinity, converged: false, nodes: 0 };
+}
+
+/**
+ * ∮ A·dl around a circle (centre c, unit normal n, radius r; counter-clockwise about n) of the
+ * packed segments `segs` (stride SEG_STRIDE, weights applied), per ampere, H — i.e. the mutual
+ * inductance of the circle and the segments' polygons. Periodic trapezoidal rule on
+ * N = 8, 16, 32, … nodes (each doubling reuses the previous nodes; for a smooth periodic
+ * integrand it converges geometrically — it is the Gauss rule for trigonometric polynomials),
+ * stopping when |T_N − T_{N/2}| ≤ max(relTol·|T_N|, absTol, 1e-3·relTol·∮|A·dl|) and N ≥ 16, and the node spacing
+ * 2πr/N is below twice the closest approach to a segment (a narrower peak could hide between
+ * nodes). Writes into `out`; no allocation, no validation (hot path).
+ */
+export function ringSegmentsIntegral(
+  segs: Float64Array,
+  cx: number, cy: number, cz: number, nx: number, ny: number, nz: number, r: number,
+  relTol: number, absTol: number, out: RingResult,
+): RingResult {
+  // in-plane orthonormal u, v = n × u
+  let ux: number, uy: number, uz: number;
+  if (Math.abs(nx) < 0.9) { ux = 1 - nx * nx; uy = -nx * ny; uz = -nx * nz; } else { ux = -ny * nx; uy = 1 - ny * ny; uz = -ny * nz; }
+  const un = 1 / Math.sqrt(ux * ux + uy * uy + uz * uz);
+  ux *= un; uy *= un; uz *= un;
+  const vx = ny * uz - nz * uy, vy = nz * ux - nx * uz, vz = nx * uy - ny * ux;
+  const ns = segs.length / SEG_STRIDE;
+  let minD2 = Infinity;
+  let sum = 0, absSum = 0, prev = 0;
+  let n = 8;
+  for (;;) {
+    // nodes added at this level: all 8 at the start, then the odd multiples of 2π/n
+    const first = n === 8;
+    const count = first ? 8 : n / 2;
+    for (let j = 0; j < count; j++) {
+      const th = first ? (2 * Math.PI * j) / 8 : ((2 * j + 1) * Math.PI) / count;
+      const co = Math.cos(th), si = Math.sin(th);
+      const px = cx + r * (co * ux + si * vx), py = cy + r * (co * uy + si * vy), pz = cz + r * (co * uz + si * vz);
+      const tx = -si * ux + co * vx, ty = -si * uy + co * vy, tz = -si * uz + co * vz; // dl/(r dθ)
+      let f = 0;
+      for (let k = 0; k < ns; k++) {
+        const o = k * SEG_STRIDE;
+        const sx = segs[o + 3]!, sy = segs[o + 4]!, sz = segs[o + 5]!;
+        const proj = sx * tx + sy * ty + sz * tz;
+        if (proj === 0) continue;
+        const wx = px - segs[o]!, wy = py - segs[o + 1]!, wz = pz - segs[o + 2]!;
+        const L = segs[o + 6]!;
+        const t = wx * sx + wy * sy + wz * sz;
+        const qx = wy * sz - wz * sy, qy = wz * sx - wx * sz, qz = wx * sy - wy * sx;
+        const d2 = qx * qx + qy * qy + qz * qz;
+        const dist2 = d2 + (t < 0 ? t * t : t > L ? (t - L) * (t - L) : 0);
+        if (dist2 < minD2) minD2 = dist2;
+        f += segs[o + 7]! * proj * segmentLog(t, d2, L);
+      }
+      sum += f;
+      absSum += Math.abs(f);
+    }
+    const value = (MU0_OVER_4PI * 2 * Math.PI * r * sum) / n;
+    if (n >= 16) {
+      const diff = Math.abs(value - prev);
+      const resolved = n * n * minD2 >= Math.PI * Math.PI * r * r;
+      // floor: relTol·1e-3 of ∮|A·dl| (a ring whose M cancels to 0 by symmetry still converges)
+      const floor = 1e-3 * relTol * ((MU0_OVER_4PI * 2 * Math.PI * r * absSum) / n);
+      const converged = Number.isFinite(value) && resolved && diff <= Math.max(relTol * Math.abs(value), absTol, floor);
+      if (converged || n >= RING_MAX_NODES || !Number.isFinite(value)) {
+        out.value = value;
+        out.error = Number.isFinite(value) ? diff : Infinity;
+        out.minDist2 = minD2;
+        out.converged = converged;
+        out.nodes = n;
+        return out;
+      }
+    }
+    prev = value;
+    n *= 2;
+  }
+}
+
+/**
+ * Mutual inductance of a circular filament and a closed polygon filament, per turn, H: the
+ * circle's line integral of the polygon's closed-form segment vector potential
+ * (Hanson & Hirshman 2002 eq. 7; see segmentVectorPotential), by the periodic trapezoidal rule
+ * with node doubling to `relTol` (see {@link ringSegmentsIntegral}).
+ *
+ * @param circle `{ center (m), axis (unit normal, any length), radius (m, > 0) }`, world frame.
+ * @param polygon vertices, m, closed back to the first, ≥ 2 points.
+ * @param options.relTol relative accuracy target, default 1e-10.
+ * @returns M, H. Throws TanklightInputError on bad input or when the circle passes through the
+ *   polygon's wire (the rule cannot resolve it).
+ * @example circlePolygonMutual({ center: [0,0,0.02], axis: [0,0,1], radius: 0.006 }, square40mm) // token over a square loop
+ * @see loopMutualInductance (circle–circle), polygonPairMutual (polygon–polygon)
+ */
+export function circlePolygonMutual(
+  circle: { readonly center: Vec3; readonly axis: Vec3; readonly radius: number },
+  polygon: readonly Vec3[],
+  options: { readonly relTol?: number } = {},
+): number {
+  const where = "circlePolygonMutual";
+  const fin = (v: unknown) => Array.isArray(v) && v.length === 3 && v.every((x) => typeof x === "number" && Number.isFinite(x));
+  const issues: InputIssue[] = [];
+  if (!circle || !fin(circle.center)) issues.push({ path: "circle.center", message: "must be three finite coordinates in m", value: circle?.center });
+  if (!circle || !fin(circle.axis) || Math.hypot(...circle.axis) === 0) issues.push({ path: "circle.axis", message: "must be a non-zero direction", value: circle?.axis });
+  if (!circle || !(typeof circle.radius === "number" && Number.isFinite(circle.radius) && circle.radius > 0)) issues.push({ path: "circle.radius", message: "must be a finite length > 0 m", value: circle?.radius });
+  if (!Array.isArray(polygon) || polygon.length < 2 || !polygon.every(fin)) issues.push({ path: "polygon", message: "must be at least 2 vertices [x, y, z] in m", value: polygon });
+  const relTol = options.relTol ?? 1e-10;
+  if (!(relTol > 0 && relTol < 1)) issues.push({ path: "options.relTol", message: "must be in (0, 1)", value: relTol });
+  if (issues.length > 0) throw new TanklightInputError(issues, where);
+  const segs = packPolygons([{ points: polygon, turns: 1 }]);
+  const [ax, ay, az] = circle.axis;
+  const al = Math.hypot(ax, ay, az);
+  const res = ringSegmentsIntegral(segs, circle.center[0], circle.center[1], circle.center[2], ax / al, ay / al, az / al, circle.radius, relTol, 0, ringResult());
+  if (!res.converged) {
+    throw new TanklightInputError(
+      [{ path: "circle", message: `passes within ${Math.sqrt(res.minDist2).toPrecision(3)} m of the polygon's wire: the line integral is not resolved at ${res.nodes} nodes`, value: circle.radius }],
+      where,
+    );
+  }
+  return res.value;
+}
