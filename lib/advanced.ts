@@ -62,6 +62,7 @@ export { kelvin, kelvinScaled, ber, bei, berPrime, beiPrime, type KelvinValues }
 
 // ── lib/em kernels ───────────────────────────────────────────────────────────
 export { loopVectorPotential } from "./em/vectorPotential.ts";
+export { segmentVectorPotential } from "./em/segmentPotential.ts";
 export { poseFrame, worldFilaments, type Frame } from "./em/frames.ts";
 export { archimedeanArcLength } from "./em/builders/common.ts";
 export { internalInductanceFactor } from "./em/selfInductance.ts";

@@ -81,7 +81,6 @@ export {
 } from "./em/couplingEvaluator.ts";
 // straight conductors in closed form (segments, polygons, circle–polygon)
 export { straightFilamentMutual, polygonPairMutual } from "./em/straightMutual.ts";
-export { segmentVectorPotential } from "./em/segmentPotential.ts";
 export { circlePolygonMutual } from "./em/circlePolygonMutual.ts";
 // losses, self-capacitance, quality factor (losses)
 export { COPPER, ALUMINIUM, MATERIALS, material, resistivityAt, type Material } from "./em/materials.ts";
