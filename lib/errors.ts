@@ -32,13 +32,17 @@ export class TanklightInputError extends Error {
 
 /**
  * One issue as text: "coil.radius: expected a length like '12 mm', got '5 kHz' (a frequency)".
+ * @example formatIssue({ path: "coil.radius", message: "must be > 0 m", value: -0.01 }) // → "coil.radius: must be > 0 m, got -0.01"
  */
 export function formatIssue(issue: InputIssue): string {
   const detail = issue.detail ? ` (${issue.detail})` : "";
   return `${issue.path ? issue.path + ": " : ""}${issue.message}, got ${describeValue(issue.value)}${detail}`;
 }
 
-/** A short, quoted rendering of a received value for error messages. */
+/**
+ * A short, quoted rendering of a received value for error messages.
+ * @example describeValue("5 kHz") // → "'5 kHz'";  describeValue(null) // → "null"
+ */
 export function describeValue(value: unknown): string {
   if (typeof value === "string") return `'${value}'`;
   if (typeof value === "number") return Number.isNaN(value) ? "NaN" : String(value);
@@ -66,7 +70,10 @@ export function requirePositive(x: number, field: string, unit: string, where: s
   return x;
 }
 
-/** Guard for hot paths: throws TanklightInputError unless x is a finite number (any sign). */
+/**
+ * Guard for hot paths: throws TanklightInputError unless x is a finite number (any sign).
+ * @example requireFinite(0.2, "radius", "m", "myBuilder") // → 0.2;  requireFinite(NaN, "radius", "m", "myBuilder") // → throws TanklightInputError
+ */
 export function requireFinite(x: number, field: string, unit: string, where: string): number {
   if (!(typeof x === "number" && Number.isFinite(x))) {
     throw new TanklightInputError(

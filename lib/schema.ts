@@ -127,7 +127,10 @@ function checkOptions(opts: QuantityOptions): void {
   if (issues.length > 0) throw new TanklightInputError(issues, "quantity");
 }
 
-/** The metadata of a schema made by {@link quantity}, or undefined. */
+/**
+ * The metadata of a schema made by {@link quantity}, or undefined.
+ * @example quantityMeta(schema.length()).unit // → "m"
+ */
 export function quantityMeta(schema: z.ZodType): QuantityMeta | undefined {
   const m = schema.meta() as Partial<QuantityMeta> | undefined;
   if (m === undefined || typeof m.dimension !== "string" || typeof m.unit !== "string") return undefined;
@@ -328,7 +331,7 @@ function toInputIssues(issue: z.core.$ZodIssue, input: unknown, prefix: readonly
  * @param where the public function or builder name, prefixed to the message.
  * @returns the parsed output (quantities in SI numbers).
  * @throws TanklightInputError with `issues[]` (path, message, value, expected, detail).
- * @example parseInput(z.object({ radius: length() }), { radius: "12 mm" }, "roundCoil") // → { radius: 0.012 }
+ * @example parseInput(z.object({ radius: schema.length() }), { radius: "12 mm" }, "roundCoil") // → { radius: 0.012 }
  */
 export function parseInput<T>(schema: z.ZodType<T>, input: unknown, where: string): T {
   let result: z.ZodSafeParseResult<T>;

@@ -159,6 +159,7 @@ const ORIGIN: Pose = { position: [0, 0, 0] };
  * @param options.tabulateLoads tabulate each token load's describing function once (fast
  *   sweeps; ≈ 1e-8 relative in G, see tokenLoadModel) — default false (exact).
  * @returns `{ network, coupling, warnings }`.
+ * @example linkNetwork(system).coupling[0].length // → 2 (transmitter and one receiver)
  */
 export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoads?: boolean } = {}): LinkNetworkBuild {
   const s = parseInput(LinkSystemInput, system, "solveLink");
@@ -255,9 +256,10 @@ export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoad
  * @throws TanklightInputError naming the field on bad input; LinkConvergenceError if the
  *   operating point is not found (unless options.onNonConvergence is "warn").
  * @example
- *   solveLink({ frequency: "200 kHz", transmitter: { coil: tx, compensation: "parallel",
- *     capacitor: { capacitance: "100 nF" }, drive: { kind: "parallelTank", supply: "5 V" } },
- *     receivers: [{ coil: token, pose: { position: [0, 0, "60 mm"] }, topology: "parallel",
+ *   // drawerTx: 5 turns, mean radius 50 mm; pebble: 120 turns in 6 layers on 6.5 mm (pebble drawer)
+ *   solveLink({ frequency: "200 kHz", transmitter: { coil: drawerTx, compensation: "parallel",
+ *     capacitor: { capacitance: "56 nF" }, drive: { kind: "parallelTank", supply: "5 V" } },
+ *     receivers: [{ coil: pebble, pose: { position: [0, 0, "30 mm"] }, topology: "parallel",
  *     capacitor: { capacitance: "2.2 nF" }, load: { kind: "led", led: ledPreset("red") } }] })
  *     .receivers[0].leds[0].lit // → true
  */

@@ -16,7 +16,7 @@ import { TanklightInputError, requireFinite, requirePositive } from "../errors.t
  * @param q1 transmitter coil quality factor ωL₁/R₁, > 0.
  * @param q2 receiver coil quality factor ωL₂/R₂, > 0.
  * @returns efficiency, 0…1 (dimensionless).
- * @example maxLinkEfficiency(0.1, 100, 100) // → 0.8181818181818182 (k²Q₁Q₂ = 100)
+ * @example maxLinkEfficiency(0.1, 100, 100) // → 0.8190024875775822 (k²Q₁Q₂ = 100: 100/(1 + √101)²)
  * @example maxLinkEfficiency(0, 100, 100)   // → 0
  */
 export function maxLinkEfficiency(k: number, q1: number, q2: number): number {

@@ -156,6 +156,7 @@ export function currentSheetInductance(radius: number, length: number, turns: nu
  * against the exact Nagaoka form).
  * @param radius a, m, > 0. @param length ℓ, m, > 0. @param turns N, > 0.
  * @returns H.
+ * @example wheeler1982Inductance(0.01, 0.02, 20) // → 5.4355e-6 (H; 20 turns, radius 10 mm, 20 mm long)
  */
 export function wheeler1982Inductance(radius: number, length: number, turns: number): number {
   check("wheeler1982Inductance", "radius", radius);
@@ -264,6 +265,7 @@ function spiralMeans(where: string, turns: number, dOut: number, dIn: number): {
  * @param turns n, > 0. @param outerDiameter d_out, m. @param innerDiameter d_in, m, < d_out.
  * @param outline "square" | "hexagonal" | "octagonal".
  * @returns H.
+ * @example mohanModifiedWheelerInductance(10, 0.02, 0.01, "square") // → 2.3013e-6 (H)
  */
 export function mohanModifiedWheelerInductance(
   turns: number,
@@ -288,6 +290,7 @@ export function mohanModifiedWheelerInductance(
  * Typical error 2–3 % (fine-pitch spirals); grows as the spacing grows against the width.
  * @param outline "square" | "hexagonal" | "octagonal" | "circle".
  * @returns H.
+ * @example mohanCurrentSheetInductance(10, 0.02, 0.01, "square") // → 2.2749e-6 (H)
  */
 export function mohanCurrentSheetInductance(
   turns: number,
@@ -354,6 +357,7 @@ export function groverRectangleInductance(
  * sheet's strips, in units of µ₀aN. Values: B(1) = 0, B(2) = 3/2 − 2 ln 2 = 0.11371 (Rosa's table
  * gives 0.1137 — from memory), rising towards about 0.3 for many turns.
  * @param turns N, integer ≥ 1.
+ * @example rosaB(10) // → 0.2664
  */
 export function rosaB(turns: number): number {
   if (!(Number.isInteger(turns) && turns >= 1)) {
@@ -379,6 +383,7 @@ export function rosaB(turns: number): number {
  * valid while p ≪ a.
  * @param radius a, m. @param turns N, integer ≥ 1. @param pitch p, m. @param wireDiameter d, m, ≤ p.
  * @returns ΔL = µ₀aN(A + B), H (subtract it from the sheet's inductance).
+ * @example rosaRoundWireCorrection(0.01, 20, 1e-3, 0.5e-3) // → 4.0231e-8 (H)
  */
 export function rosaRoundWireCorrection(radius: number, turns: number, pitch: number, wireDiameter: number): number {
   const where = "rosaRoundWireCorrection";

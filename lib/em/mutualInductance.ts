@@ -44,6 +44,7 @@ function checkCoil(c: Coil, field: string, where: string): void {
  * actually touch (then TanklightInputError).
  *
  * @returns `{ value (H), minFilamentDistance (m), warnings }`.
+ * @example mutualInductanceChecked(tx, { position: [0, 0, 0] }, token, { position: [0, 0, 0.03] }).value // → 5.5375e-7 (H; tx, token of docs/methods/em.md)
  */
 export function mutualInductanceChecked(a: Coil, poseA: Pose, b: Coil, poseB: Pose): MutualInductanceResult {
   const where = "mutualInductance";

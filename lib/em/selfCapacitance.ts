@@ -134,8 +134,7 @@ function medhurst(length: number, diameter: number, warnings: string[]): number 
  * other spirals).
  * @param coil a builder's coil (uses coil.shape; without a shape the filament extents are used).
  * @returns `{ value (F), model, external, internal, warnings }`.
- * @example selfCapacitanceDetail(solenoid({ radius: 0.02, turns: 40, pitch: 1e-3, wire: … })).value
- *   // → ℓ/D = 1: C = 0.46 pF/cm × 4 cm = 1.84 pF
+ * @example selfCapacitanceDetail(solenoid({ radius: 0.02, turns: 40, pitch: 1e-3, wire: { diameter: 0.5e-3 } })).value // → 1.84e-12 (ℓ/D = 1: 0.46 pF/cm × 4 cm)
  */
 export function selfCapacitanceDetail(coil: Coil): SelfCapacitanceDetail {
   const warnings: string[] = [];
@@ -206,7 +205,7 @@ function equivalentRadius(points: readonly (readonly [number, number, number])[]
  * Self-capacitance of a coil, F (Medhurst 1947 single layer; Massarini & Kazimierczuk 1997
  * multi-layer; an estimate for flat spirals — see selfCapacitanceDetail).
  * @param coil the coil. @returns C, F.
- * @example selfCapacitance(roundCoil({ meanRadius: 0.04, turns: 20, wire: … 0.5 mm })) // → 6.72e-12 F (ℓ/D = 11 mm / 80 mm = 0.1375)
+ * @example selfCapacitance(roundCoil({ meanRadius: 0.04, turns: 20, wire: { diameter: 0.5e-3 } })) // → 6.94e-12 (F; one layer, ℓ/D = 10 mm / 80 mm)
  */
 export function selfCapacitance(coil: Coil): number {
   return selfCapacitanceDetail(coil).value;
@@ -220,7 +219,7 @@ const srfCache = new WeakMap<Coil, number>();
  * L is selfInductance(coil, { frequency: f_sr }) (one fixed-point step from the DC value; the
  * internal-inductance change moves f_sr by well under 1 %).
  * @param coil the coil. @returns f_sr, Hz.
- * @example selfResonance(transmitter20Turns) // → 8.1e6 Hz (the 40 mm, 20-turn, 0.5 mm transmitter)
+ * @example selfResonance(tx20Turns) // → 8.19e6 (Hz; radius 40 mm, 20 turns of 0.5 mm wire with 25 µm enamel)
  */
 export function selfResonance(coil: Coil): number {
   const cached = srfCache.get(coil);

@@ -37,6 +37,7 @@ const Y_BLEND_POWER = 4.8;
  * which has both exact limits (1/4 for x → 0, 1/(2x) for x → ∞) and stays within 0.7 % of
  * the exact Y everywhere (tests/fixtures/em/internalInductance.json). Y is a small part of L
  * (≈ 1/4 against ln(8a/r) − 2 ≈ 3–6), so this costs < 0.1 % of L.
+ * @example internalInductanceFactor(0) // → 0.25
  */
 export function internalInductanceFactor(x: number): number {
   return 0.25 / Math.pow(1 + Math.pow(x / 2, Y_BLEND_POWER), 1 / Y_BLEND_POWER);
@@ -93,6 +94,7 @@ export function ownTurnInductance(f: Filament, r: number, Y: number): number {
 
 /**
  * Self-inductance with its breakdown and warnings; see {@link selfInductance}.
+ * @example selfInductanceDetail(roundCoil({ meanRadius: 0.04, turns: 1, wire: { diameter: 1e-3 } })).Y // → 0.25 (uniform current: no frequency given)
  */
 export function selfInductanceDetail(coil: Coil, options: SelfInductanceOptions = {}): SelfInductanceDetail {
   const where = "selfInductance";
@@ -145,7 +147,7 @@ function normalise(v: readonly [number, number, number]): [number, number, numbe
  * @param coil a Coil (any builder's output or hand-made filaments).
  * @param options `{ frequency? }`, Hz ≥ 0.
  * @returns L, H.
- * @example selfInductance(singleTurn40mmOf1mmWire) // → μ₀·0.04·(ln(640) − 1.75) = 2.3676e-7 H
+ * @example selfInductance(roundCoil({ meanRadius: 0.04, turns: 1, wire: { diameter: 1e-3 } })) // → 2.3682e-7 (H; = µ₀·0.04·(ln 640 − 1.75))
  * @see selfInductanceDetail (breakdown, warnings), couplingFactor
  */
 export function selfInductance(coil: Coil, options: SelfInductanceOptions = {}): number {

@@ -85,7 +85,7 @@ export function complexArg(ar: number, ai: number): number {
 /**
  * out ← √a, principal branch (Re ≥ 0; branch cut on the negative real axis, the upper side
  * for im = +0 as in DLMF §4.2(iv)); cancellation-free (Kahan 1987).
- * @example complexSqrt(-4, 0, out) // out → [0, 2];  complexSqrt(3, 4, out) // → [2, 1]
+ * @example complexSqrt(-4, 0, out) // out → [0, 2];  complexSqrt(3, 4, out) // out → [2, 1]
  */
 export function complexSqrt(ar: number, ai: number, out: Float64Array, offset = 0): void {
   if (ar === 0 && ai === 0) {

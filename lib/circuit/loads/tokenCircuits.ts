@@ -34,14 +34,20 @@ export function singleLed(l: Led): TokenLoad {
   return { kind: "led", led: l };
 }
 
-/** Two LEDs back to back (any two colours): a on the positive, b on the negative half-cycle. */
+/**
+ * Two LEDs back to back (any two colours): a on the positive, b on the negative half-cycle.
+ * @example antiParallelPair(ledPreset("red"), ledPreset("green-gap")).kind // → "antiParallel"
+ */
 export function antiParallelPair(a: Led, b: Led): TokenLoad {
   requireJunction(a, "led", "a", "antiParallelPair");
   requireJunction(b, "led", "b", "antiParallelPair");
   return { kind: "antiParallel", a, b };
 }
 
-/** Two LEDs in parallel pointing the same way. */
+/**
+ * Two LEDs in parallel pointing the same way.
+ * @example sameDirectionPair(ledPreset("red"), ledPreset("green-gap")).kind // → "parallelSameDirection"
+ */
 export function sameDirectionPair(a: Led, b: Led): TokenLoad {
   requireJunction(a, "led", "a", "sameDirectionPair");
   requireJunction(b, "led", "b", "sameDirectionPair");
@@ -51,6 +57,7 @@ export function sameDirectionPair(a: Led, b: Led): TokenLoad {
 /**
  * A full-wave bridge of four identical diodes feeding an LED, with an optional series
  * resistor (Ω ≥ 0) in the DC path.
+ * @example bridgeRectifier(diodePreset("schottky"), ledPreset("red")).kind // → "bridge"
  */
 export function bridgeRectifier(d: Diode, l: Led, seriesResistance = 0): TokenLoad {
   requireJunction(d, "diode", "diode", "bridgeRectifier");
@@ -62,6 +69,7 @@ export function bridgeRectifier(d: Diode, l: Led, seriesResistance = 0): TokenLo
 /**
  * A half-wave rectifier (diode + optional series resistor) charging a reservoir capacitor
  * with the LED across it. capacitance F > 0; frequency Hz > 0 (optional, ripple estimate only).
+ * @example halfWaveReservoir(diodePreset("schottky"), ledPreset("red"), 1e-6).capacitance // → 1e-6 (F)
  */
 export function halfWaveReservoir(
   d: Diode,
@@ -84,7 +92,10 @@ export function halfWaveReservoir(
   };
 }
 
-/** A plain resistor (Ω > 0), for checks. */
+/**
+ * A plain resistor (Ω > 0), for checks.
+ * @example resistorLoad(100).resistance // → 100 (Ω)
+ */
 export function resistorLoad(resistance: number): TokenLoad {
   requirePos(resistance, "resistance", "Ω", "resistorLoad");
   return { kind: "resistor", resistance };

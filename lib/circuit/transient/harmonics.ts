@@ -38,7 +38,7 @@ export interface Harmonics {
  * @param opts.frequency fundamental, Hz > 0; a period must hold a whole number of steps
  * @param opts.count highest harmonic, default 10
  * @param opts.cycles periods analysed, default 1
- * @example waveformHarmonics(t, cos(2π·1e5·t) sampled 200/period, { frequency: 1e5 }).amplitude[1] // → 1
+ * @example waveformHarmonics(Array.from({ length: 201 }, (_, i) => i * 5e-8), Array.from({ length: 201 }, (_, i) => Math.cos((Math.PI * i) / 100)), { frequency: 1e5 }).amplitude[1] // → 1 (a unit cosine sampled 200 times a period)
  */
 export function waveformHarmonics(
   time: Float64Array,

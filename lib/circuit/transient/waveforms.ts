@@ -43,7 +43,7 @@ export function stepWaveform(level: number, opts: { at?: number; before?: number
  * @param spec.duty 0 < duty < 1
  * @param spec.delay s, default 0 (closed from t = 0)
  * @param spec.invert true for the complementary gate (open where the plain gate is closed)
- * @example periodicGate({ frequency: 1e5, duty: 0.5 })(2e-6) // → true;  (6e-6) // → false
+ * @example periodicGate({ frequency: 1e5, duty: 0.5 })(2e-6) // → true;  periodicGate({ frequency: 1e5, duty: 0.5 })(6e-6) // → false
  */
 export function periodicGate(spec: { frequency: number; duty: number; delay?: number; invert?: boolean }): (t: number) => boolean {
   const where = "periodicGate";

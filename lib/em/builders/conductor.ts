@@ -130,7 +130,7 @@ export function roundWire(diameter: LengthInput, opts: RoundWireOptions = {}): R
  * (d = 0.127 mm × 92^((36 − n)/39); see {@link awgDiameter}).
  * @param gauge AWG number, integer −3…56, or "4/0", "3/0", "2/0", "1/0" (= −3, −2, −1, 0).
  * @param opts as {@link roundWire}.
- * @example awgWire(30).diameter // → 2.5446e-4 (0.2546 mm; ASTM B258 rounds to 0.0100 in)
+ * @example awgWire(30).diameter // → 2.5464e-4 (0.2546 mm; ASTM B258 rounds to 0.0100 in)
  */
 export function awgWire(gauge: number | string, opts: RoundWireOptions = {}): RoundWire {
   const d = awgDiameter(gauge);
@@ -212,7 +212,10 @@ export function pcbTrace(width: LengthInput, thickness: LengthInput, opts: { rea
   return { kind: "trace", width: w!, thickness: t!, material: mat };
 }
 
-/** Width a conductor occupies in a winding (outer diameter of wire or litz, width of a trace), m. */
+/**
+ * Width a conductor occupies in a winding (outer diameter of wire or litz, width of a trace), m.
+ * @example conductorFootprint(roundWire("0.5 mm")) // → 0.0005 (m)
+ */
 export function conductorFootprint(c: Conductor): number {
   return c.kind === "trace" ? c.width : c.outerDiameter;
 }

@@ -95,6 +95,7 @@ const RING_SAMPLES = 24;
  *   coilResistance maps polygon turns to equal-area circles, and a spiral polygon to its rings,
  *   before calling this).
  * @returns per-filament mean |H|², its axial and in-plane parts, and conductor lengths.
+ * @example turnFieldsPerAmpere(tx).length.length // → 20 (one entry per filament)
  */
 export function turnFieldsPerAmpere(coil: Coil): TurnFields {
   const fs = coil.filaments;

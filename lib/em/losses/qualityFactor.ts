@@ -29,7 +29,7 @@ export interface QualityFactorDetail {
  * into Q (it raises the apparent L and lowers Q near resonance); above f_sr/3 a warning says so.
  * @param coil the coil. @param f frequency, Hz, > 0. @param opts temperature, K (default 293.15 K).
  * @returns `{ q, inductance (H), resistance (Ω), selfResonance (Hz), warnings }`.
- * @example qualityFactorDetail(tx20Turns, 200e3).q // → 89.7 (radius 40 mm, 20 turns, 0.5 mm copper)
+ * @example qualityFactorDetail(tx20Turns, 200e3).q // → 89.7 (radius 40 mm, 20 turns of 0.5 mm wire with 25 µm enamel)
  */
 export function qualityFactorDetail(coil: Coil, f: number, opts: CoilResistanceOptions = {}): QualityFactorDetail {
   if (!(typeof f === "number" && Number.isFinite(f) && f > 0)) {
