@@ -206,3 +206,11 @@ export { sineWaveform, stepWaveform, periodicGate } from "./circuit/transient/wa
 export { waveformHarmonics, type Harmonics } from "./circuit/transient/harmonics.ts";
 export { singleSwitchDrive, bridgeDrive, type DriveCircuit, type SingleSwitchDriveSpec, type BridgeDriveSpec } from "./circuit/transient/drives.ts";
 export { addToken, type TokenSpec, type TokenCircuit } from "./circuit/transient/token.ts";
+
+// ── lib/report ───────────────────────────────────────────────────────────────
+/** Chart builders returning vega-lite specs: `chart.coverage(…)`, `chart.ledCurrent(…)`, … (lib/report/chart.ts). */
+export * as chart from "./report/chart.ts";
+export type { ChartSpec } from "./report/chart.ts";
+export { renderSvg, type RenderOptions } from "./report/renderSvg.ts";
+export { PALETTE, ledSwatch } from "./report/theme.ts";
+// end report
