@@ -9,7 +9,7 @@
  *
  * Demo data: the radii and heights are our own example, not a product.
  */
-import { coaxialLoopMutualInductance, formatQuantity, MU0 } from "../lib/mod.ts";
+import { chart, coaxialLoopMutualInductance, formatQuantity, MU0, notebook, partsList, roundCoil, selfInductance, type Notebook } from "../lib/mod.ts";
 
 export interface CoaxialLoopsRow {
   /** axial distance, m */
@@ -28,8 +28,8 @@ export interface CoaxialLoopsResult {
   readonly rows: readonly CoaxialLoopsRow[];
 }
 
-/** Runs the scenario and returns its printed text and its numbers. */
-export function run(): { notebook: string; results: CoaxialLoopsResult } {
+/** Runs the scenario and returns its notebook and its numbers. */
+export function run(): { notebook: Notebook; results: CoaxialLoopsResult } {
   const a = 0.04; // transmitter loop radius, m (demo)
   const b = 0.006; // token loop radius, m (demo)
   const heights = [0.002, 0.005, 0.01, 0.02, 0.03, 0.04, 0.06, 0.08, 0.1, 0.12];
@@ -39,25 +39,61 @@ export function run(): { notebook: string; results: CoaxialLoopsResult } {
     smallToken: (MU0 * Math.PI * a * a * b * b) / (2 * (a * a + d * d) ** 1.5),
     dipole: (MU0 * Math.PI * a * a * b * b) / (2 * d ** 3),
   }));
+  // for the coupling factor, single turns of 0.5 mm wire (demo): k = M/√(L_a·L_b)
+  const wire = { diameter: "0.5 mm" };
+  const La = selfInductance(roundCoil({ meanRadius: a, turns: 1, wire }));
+  const Lb = selfInductance(roundCoil({ meanRadius: b, turns: 1, wire }));
   const worstSmall = Math.max(...rows.map((r) => Math.abs(r.smallToken / r.mutual - 1)));
   const last = rows[rows.length - 1]!;
-  const lines = [
-    "# How fast does coupling fall with height?",
-    "",
+  const nb = notebook("How fast does coupling fall with height?", {
+    note: "Demo data: the radii, wire and heights are our own example, not a product.",
+  });
+  nb.text(
     `Transmitter loop radius ${formatQuantity(a, "m")}, token loop radius ${formatQuantity(b, "m")}, coaxial.`,
     "Single turns; multiply M by both turn counts for wound coils.",
-    "",
-    "| height | M (Maxwell, exact) | small-token estimate | ratio | 1/d³ dipole law | ratio |",
-    "|---:|---:|---:|---:|---:|---:|",
-    ...rows.map(
-      (r) =>
-        `| ${formatQuantity(r.height, "m")} | ${formatQuantity(r.mutual, "H")} | ${formatQuantity(r.smallToken, "H")} | ${(r.smallToken / r.mutual).toFixed(4)} | ${formatQuantity(r.dipole, "H")} | ${(r.dipole / r.mutual).toFixed(3)} |`,
-    ),
-    "",
-    `A token this much smaller than the transmitter sees an almost uniform field: the`,
+  );
+  nb.table(
+    ["height", "M (Maxwell, exact)", "small-token estimate", "ratio", "1/d³ dipole law", "ratio"],
+    rows.map((r) => [
+      { value: r.height, unit: "m" },
+      { value: r.mutual, unit: "H" },
+      { value: r.smallToken, unit: "H" },
+      Number((r.smallToken / r.mutual).toFixed(4)),
+      { value: r.dipole, unit: "H" },
+      Number((r.dipole / r.mutual).toFixed(3)),
+    ]),
+  );
+  nb.figure(
+    "coupling-by-height",
+    chart.coupling({
+      title: "Coupling of a 6 mm token loop over a 40 mm loop",
+      subtitle: "single turns of 0.5 mm wire, coaxial",
+      byHeight: [
+        { label: "exact (Maxwell)", distance: heights, k: rows.map((r) => r.mutual / Math.sqrt(La * Lb)) },
+        { label: "1/d³ dipole law", distance: heights, k: rows.map((r) => r.dipole / Math.sqrt(La * Lb)) },
+      ],
+    }),
+    "coupling factor against height: the dipole law overestimates until the token is several transmitter radii away",
+  );
+  nb.text(
+    "A token this much smaller than the transmitter sees an almost uniform field: the",
     `small-token estimate stays within ${(100 * worstSmall).toFixed(1)} % of the exact value at every height.`,
     `The 1/d³ law is reached only slowly: it is still ${(100 * (last.dipole / last.mutual - 1)).toFixed(0)} % high at ${formatQuantity(last.height, "m")}`,
     "(three transmitter radii); from there on, doubling the height cuts the coupling about eightfold.",
-  ];
-  return { notebook: lines.join("\n"), results: { transmitterRadius: a, tokenRadius: b, rows } };
+  );
+  nb.heading("Supply, exposure and emission");
+  nb.text("This run is geometry only: no drive, so no supply current, field strength or emission to assess. The pebble-drawer scenario carries them for a driven design.");
+  nb.parts(
+    partsList({
+      coils: [
+        { item: "transmitter loop", coil: roundCoil({ meanRadius: a, turns: 1, wire }) },
+        { item: "token loop", coil: roundCoil({ meanRadius: b, turns: 1, wire }) },
+      ],
+      capacitors: [],
+      leds: [],
+      supply: { item: "supply", voltage: 0, current: 0 },
+    }).filter((r) => r.item !== "supply"),
+  );
+  nb.cautions(["Geometry only: before driving these loops, see the cautions of a driven design (tank voltages, fields near implanted medical devices, metal heating, radio emission)."]);
+  return { notebook: nb, results: { transmitterRadius: a, tokenRadius: b, rows } };
 }

@@ -17,7 +17,13 @@
  */
 import {
   addToken,
+  chart,
+  fundamentalConductance,
+  notebook,
+  partsList,
+  type Notebook,
   coilResistance,
+  couplingFactor,
   DEFAULT_LIT_THRESHOLD,
   formatQuantity,
   ledPreset,
@@ -34,6 +40,7 @@ import {
   type LedColour,
   type LinkSystem,
 } from "../lib/mod.ts";
+import type { ScenarioOptions } from "./scenarios.ts";
 
 /** What the run computes, for the tests and for anyone reusing the numbers (SI units). */
 export interface PebbleDrawerResults {
@@ -59,6 +66,10 @@ export interface PebbleDrawerResults {
     ledFast: number;
     checkHeight: number;
   };
+  /** DC supply current, A: fast model at the check pose, time-domain run there, fast model on the lid */
+  readonly supply: { fast: number; transient: number; onLid: number };
+  /** peak voltage across the transmitter capacitor in the time-domain run, V */
+  readonly transmitterCapacitorPeak: number;
   readonly cautions: readonly string[];
 }
 
@@ -66,9 +77,13 @@ const SUPPLY = 5; // V, a USB supply (demo)
 const LID = 0.005; // m: a pebble lying on the lid has its coil centre 5 mm above the winding
 const COLOURS: Readonly<Record<"red" | "green", LedColour>> = { red: "red", green: "green-gap" };
 
-/** Runs the scenario: returns the worked notebook (Markdown) and its numbers. */
-export function run(): { notebook: string; results: PebbleDrawerResults } {
-  const nb: string[] = [];
+/** Runs the scenario: returns the worked notebook and its numbers. */
+export function run(options: ScenarioOptions = {}): { notebook: Notebook; results: PebbleDrawerResults } {
+  const nb = notebook("The pebble drawer", {
+    subtitle: "Will every pebble glow, wherever a visitor puts it?",
+    note: "Demo data: the drawer, the coils and the parts are our own example, chosen as a real kit could have them; only the physics is sourced (docs/methods.md).",
+    log: options.log,
+  });
   const q = formatQuantity;
 
   // ── 1. Coils, from geometry ──────────────────────────────────────────────
@@ -77,13 +92,15 @@ export function run(): { notebook: string; results: PebbleDrawerResults } {
   const target = 200e3; // Hz, the design frequency (demo)
   const L2 = selfInductance(token, { frequency: target });
   const tokenTuning = tuneWithStandardParts(L2, target, { series: "E12", maxParts: 1 });
-  const C2 = tokenTuning.choices[0]!.capacitance;
+  const tokenChoice = tokenTuning.choices[0]!;
+  const C2 = tokenChoice.capacitance;
   const f = 1 / (2 * Math.PI * Math.sqrt(L2 * C2)); // the drawer is driven at the pebbles' resonance
   const L1 = selfInductance(tx, { frequency: f });
   // the single switch turns on at zero voltage when the transmitter tank rings about 1.3× faster
   // than the switching frequency (docs/methods/transient.md): tune it there with E12 parts
   const txTuning = tuneWithStandardParts(L1, 1.3 * f, { series: "E12", maxParts: 2 });
-  const C1 = txTuning.choices[0]!.capacitance;
+  const txChoice = txTuning.choices[0]!;
+  const C1 = txChoice.capacitance;
   const txNumbers = {
     inductance: L1,
     resistance: coilResistance(tx, f),
@@ -98,28 +115,25 @@ export function run(): { notebook: string; results: PebbleDrawerResults } {
     selfResonance: selfResonance(token),
     capacitance: C2,
   };
-  nb.push(
-    "# The pebble drawer",
-    "",
-    "Will every pebble glow, wherever a visitor puts it? A 5 V single-switch transmitter under a",
-    "5 mm lid; resin pebbles with a 120-turn coil, one capacitor and one red or green LED. (Demo data.)",
-    "",
-    "## 1. Coils and tanks, from geometry",
-    "",
-    "| | transmitter | pebble |",
-    "|---|---:|---:|",
-    `| winding | 5 turns, 0.8 mm wire, mean radius 50 mm | 120 turns in 6 layers, 0.1 mm wire, former radius 6.5 mm |`,
-    `| inductance | ${q(L1, "H")} | ${q(L2, "H")} |`,
-    `| AC resistance at ${q(f, "Hz")} | ${q(txNumbers.resistance, "Ω")} | ${q(tokenNumbers.resistance, "Ω")} |`,
-    `| quality factor Q | ${txNumbers.quality.toFixed(0)} | ${tokenNumbers.quality.toFixed(0)} |`,
-    `| self-resonance | ${q(txNumbers.selfResonance, "Hz")} | ${q(tokenNumbers.selfResonance, "Hz")} |`,
-    `| tank capacitor (E12) | ${q(C1, "F")} | ${q(C2, "F")} |`,
-    "",
+  const partsText = (c: typeof txChoice) => c.parts.map((p) => q(p, "F")).join(c.topology === "series" ? " in series with " : " ∥ ");
+  nb.text("A 5 V single-switch transmitter under a 5 mm lid; resin pebbles with a 120-turn coil, one capacitor and one red or green LED.");
+  nb.heading("1. Coils and tanks, from geometry");
+  nb.table(
+    ["", "transmitter", "pebble"],
+    [
+      ["winding", "5 turns, 0.8 mm wire, mean radius 50 mm", "120 turns in 6 layers, 0.1 mm wire, former radius 6.5 mm"],
+      ["inductance", { value: L1, unit: "H" }, { value: L2, unit: "H" }],
+      [`AC resistance at ${q(f, "Hz")}`, { value: txNumbers.resistance, unit: "Ω" }, { value: tokenNumbers.resistance, unit: "Ω" }],
+      ["quality factor Q", Math.round(txNumbers.quality), Math.round(tokenNumbers.quality)],
+      ["self-resonance", { value: txNumbers.selfResonance, unit: "Hz" }, { value: tokenNumbers.selfResonance, unit: "Hz" }],
+      ["tank capacitor (E12)", `${q(C1, "F")} = ${partsText(txChoice)}`, `${q(C2, "F")} = ${partsText(tokenChoice)}`],
+    ],
+  );
+  nb.text(
     `The pebble's E12 capacitor puts its resonance at ${q(f, "Hz")}; the drawer is switched there.`,
     `The transmitter capacitor rings the tank at ${q(1 / (2 * Math.PI * Math.sqrt(L1 * C1)), "Hz")}, about 1.3× the switching`,
     "frequency, where the single switch turns on at zero voltage. Q and resistance come from the",
     "loss models (skin and proximity effect), not from a guess.",
-    "",
   );
 
   // ── 2. Brightness against height and offset ───────────────────────────────
@@ -145,8 +159,12 @@ export function run(): { notebook: string; results: PebbleDrawerResults } {
     solveLink(system(colour, x, z)).receivers[0]!.leds[0]!.averageCurrent;
   const threshold = DEFAULT_LIT_THRESHOLD;
 
+  const tick = nb.step("brightness by height and offset");
   const heights = [0.005, 0.01, 0.02, 0.03, 0.04, 0.06, 0.08, 0.1, 0.12];
-  const profile = heights.map((z) => ({ height: z, red: ledCurrent("red", 0, z), green: ledCurrent(COLOURS.green, 0, z) }));
+  const profile = heights.map((z, i) => {
+    tick(i + 1, heights.length);
+    return { height: z, red: ledCurrent("red", 0, z), green: ledCurrent(COLOURS.green, 0, z) };
+  });
 
   const bisect = (lit: (s: number) => boolean, lo: number, hi: number): number => {
     while (hi - lo > 2e-4) {
@@ -172,16 +190,40 @@ export function run(): { notebook: string; results: PebbleDrawerResults } {
   const faintRange = bisect((z) => ledCurrent("red", 0, z) >= faintThreshold, LID, 0.3);
   const near = solveLink(system("red", 0, LID));
 
-  nb.push(
-    "## 2. How bright, how far",
-    "",
-    `LED average current on the axis above the centre (lit: ≥ ${q(threshold, "A")}, trade practice for an`,
-    "indicator LED seen indoors):",
-    "",
-    "| height | red LED | green (GaP) LED |",
-    "|---:|---:|---:|",
-    ...profile.map((p) => `| ${q(p.height, "m")} | ${q(p.red, "A")}${p.red >= threshold ? "" : " (dark)"} | ${q(p.green, "A")}${p.green >= threshold ? "" : " (dark)"} |`),
-    "",
+  nb.heading("2. How bright, how far");
+  nb.text(`LED average current on the axis above the centre (lit: ≥ ${q(threshold, "A")}, trade practice for an indicator LED seen indoors):`);
+  nb.table(
+    ["height", "red LED", "green (GaP) LED"],
+    profile.map((p) => [
+      { value: p.height, unit: "m" },
+      `${q(p.red, "A")}${p.red >= threshold ? "" : " (dark)"}`,
+      `${q(p.green, "A")}${p.green >= threshold ? "" : " (dark)"}`,
+    ]),
+  );
+  nb.figure(
+    "led-current-by-height",
+    chart.ledCurrent({
+      title: "Pebble LED current above the drawer's centre",
+      curves: [
+        { colour: "red", label: "red LED", distance: heights, current: profile.map((p) => p.red) },
+        { colour: "green", label: "green (GaP) LED", distance: heights, current: profile.map((p) => p.green) },
+      ],
+      threshold,
+    }),
+    "LED average current against height on the axis; the dashed line is the lit threshold",
+  );
+  const offsets = Array.from({ length: 13 }, (_, i) => i * 0.01);
+  const kAt = (x: number, z: number): number => couplingFactor(tx, { position: [0, 0, 0] }, token, { position: [x, 0, z] });
+  nb.figure(
+    "coupling",
+    chart.coupling({
+      title: "Coupling between the drawer coil and a pebble",
+      byHeight: [{ label: "on the axis", distance: heights, k: heights.map((z) => kAt(0, z)) }],
+      byOffset: [{ label: "lying on the lid", distance: offsets, k: offsets.map((x) => kAt(x, LID)) }],
+    }),
+    "coupling factor against height on the axis (left) and against sideways offset for a pebble lying on the lid (right): the sign change near the 50 mm winding radius is the dark ring",
+  );
+  nb.text(
     `- On the axis a red pebble glows up to ${q(axialRange.red, "m")}, a green one up to ${q(axialRange.green, "m")}:`,
     "  the lower forward voltage of the red LED clamps its tank lower and starts conducting in a weaker field.",
     `  Just visible (${q(faintThreshold, "A")}), a red pebble still glows faintly at ${q(faintRange, "m")}.`,
@@ -190,11 +232,33 @@ export function run(): { notebook: string; results: PebbleDrawerResults } {
     "  so a dark ring lies at the drawer's 50 mm winding radius. Keep the display area inside it.",
     `- Right on the lid over the centre the pebble's tank swings ${q(near.receivers[0]!.capacitorVoltage, "V")} peak and the transmitter`,
     `  capacitor ${q(near.transmitter.capacitorVoltage, "V")} peak; the transmitter coil carries ${q(near.transmitter.coilCurrentRms, "A")} RMS.`,
-    "",
   );
 
-  // ── 3. The true waveform ──────────────────────────────────────────────────
+  // ── 3. The LED on the pebble's tank (load line) ───────────────────────────
   const checkHeight = 0.03;
+  const at = solveLink(system("red", 0, checkHeight));
+  const M = mutualInductance(tx, { position: [0, 0, 0] }, token, { position: [0, 0, checkHeight] });
+  const line = loadLine({ f, M, transmitterCurrent: at.transmitter.coilCurrent, L2, R2: tokenNumbers.resistance, C2, colour: "red" });
+  nb.heading("3. Where the LED settles on the pebble's tank");
+  nb.figure(
+    "load-line",
+    chart.loadLine({
+      title: `Red pebble ${q(checkHeight, "m")} above the centre`,
+      voltage: line.voltage,
+      available: line.available,
+      led: line.led,
+      operatingPoint: { voltage: at.receivers[0]!.loadVoltage, current: at.receivers[0]!.loadCurrent },
+      colour: "red",
+    }),
+    "the current the tank can still give the LED at each voltage amplitude, against the LED's own fundamental current; the solver's operating point sits where they cross",
+  );
+  nb.text(
+    `The coil's EMF, seen through its own impedance, is a current source of ${q(line.norton, "A")} peak in parallel with the tank.`,
+    `The LED takes almost nothing until its forward voltage and then clamps the tank near ${q(at.receivers[0]!.loadVoltage, "V")} peak:`,
+    "a stronger field raises the LED current, hardly the voltage.",
+  );
+
+  // ── 4. The true waveform ──────────────────────────────────────────────────
   const drive = singleSwitchDrive({
     supply: SUPPLY,
     frequency: f,
@@ -203,7 +267,6 @@ export function run(): { notebook: string; results: PebbleDrawerResults } {
     tankCapacitance: C1,
     onResistance: 0.05,
   });
-  const M = mutualInductance(tx, { position: [0, 0, 0] }, token, { position: [0, 0, checkHeight] });
   const tok = addToken(drive.circuit, {
     coupledTo: drive.coil,
     mutualInductance: M,
@@ -213,37 +276,98 @@ export function run(): { notebook: string; results: PebbleDrawerResults } {
     load: { kind: "led", led: ledPreset("red") },
   });
   const stepsPerCycle = 200;
+  nb.step("time-domain run of the single-switch drive");
   const sim = simulate(tok.circuit, { stop: 800 / f, stepsPerCycle, frequency: f, untilSteady: true, keepCycles: 2 });
-  const h = waveformHarmonics(sim.time, sim.nodeVoltages["switch"]!, { frequency: f });
+  const vsw = sim.nodeVoltages["switch"]!;
+  const h = waveformHarmonics(sim.time, vsw, { frequency: f });
   const iled = sim.currents[tok.leds.led!]!;
+  const isup = sim.currents["Vsupply"]!;
   let ledTransient = 0;
-  for (let i = iled.length - stepsPerCycle; i < iled.length; i++) ledTransient += iled[i]! / stepsPerCycle;
+  let supplyTransient = 0;
+  for (let i = iled.length - stepsPerCycle; i < iled.length; i++) {
+    ledTransient += iled[i]! / stepsPerCycle;
+    supplyTransient += isup[i]! / stepsPerCycle;
+  }
+  supplyTransient = Math.abs(supplyTransient);
   const ledFast = ledCurrent("red", 0, checkHeight);
-  nb.push(
-    "## 3. The real waveform of the single switch",
-    "",
+  // the transmitter capacitor sits across the coil, from the supply to the switch node
+  let tankPeak = 0;
+  for (const v of vsw) tankPeak = Math.max(tankPeak, Math.abs(v - SUPPLY));
+  const w = 2 * Math.PI * f;
+  const fundamental = sim.time.map((t) => h.dc + h.amplitude[1]! * Math.cos(w * t + h.phase[1]!));
+  nb.heading("4. The real waveform of the single switch");
+  nb.text(
     `Time-domain run (${sim.steady?.cycles ?? "?"} cycles to steady state, ${stepsPerCycle} steps a cycle) of the 5 V switch,`,
     `the transmitter tank and one red pebble ${q(checkHeight, "m")} above the centre:`,
-    "",
+  );
+  nb.figure(
+    "switch-waveform",
+    chart.waveform({ title: "Switch-node voltage, two cycles in steady state", time: sim.time, samples: vsw, fundamental, name: "switch-node voltage", unit: "V" }),
+    "the switch node against time (solid) with its fundamental plus mean (dashed): a half-sine while the switch is open, flat while it is closed",
+  );
+  nb.figure(
+    "switch-spectrum",
+    chart.spectrum({ title: "Harmonics of the switch-node voltage", amplitude: h.amplitude, frequency: f, name: "switch-node voltage", unit: "V" }),
+    "peak amplitude of each harmonic, labelled in dB relative to the fundamental",
+  );
+  nb.text(
     `- the switch node swings to ${q(h.peak, "V")} peak, ${(h.peak / SUPPLY).toFixed(2)}× the supply, and is far from a sine`,
-    `  (total harmonic distortion ${(100 * h.distortion).toFixed(0)} %): a half-sine while the switch is open, flat while it is closed;`,
+    `  (total harmonic distortion ${(100 * h.distortion).toFixed(0)} %);`,
     `- the pebble's LED carries ${q(ledTransient, "A")} on average; the fast model used for the maps above says`,
     `  ${q(ledFast, "A")} (${(100 * (ledFast / ledTransient - 1)).toFixed(1).replace("-", "−")} %). The maps are as good as that difference.`,
-    "",
+    `- the transmitter capacitor sees ${q(tankPeak, "V")} peak in the time-domain run, against ${q(at.transmitter.capacitorVoltage, "V")} in the fast model:`,
+    "  the parts list rates it for the larger.",
   );
 
-  // ── 4. Cautions ─────────────────────────────────────────────────────────
+  // ── 5. Supply ──────────────────────────────────────────────────────────
+  const supplyFast = at.power.input / SUPPLY;
+  const supplyNear = near.power.input / SUPPLY;
+  nb.heading("5. Supply");
+  nb.table(
+    ["case", "DC supply current", "power"],
+    [
+      ["one red pebble at 30 mm, fast model (input power / supply)", { value: supplyFast, unit: "A" }, { value: at.power.input, unit: "W" }],
+      ["one red pebble at 30 mm, time-domain run (mean supply current)", { value: supplyTransient, unit: "A" }, { value: supplyTransient * SUPPLY, unit: "W" }],
+      ["one red pebble on the lid over the centre, fast model", { value: supplyNear, unit: "A" }, { value: near.power.input, unit: "W" }],
+    ],
+  );
+  nb.text(
+    `The fast model counts the power of the drive's fundamental only; the time-domain run of the real switch draws ${((supplyTransient / supplyFast - 1) * 100).toFixed(0)} % more.`,
+    "The budget below takes the larger.",
+    "",
+    `A USB 2.0 port gives 500 mA at 5 V (USB 2.0 specification); the drawer draws ${q(Math.max(supplyFast, supplyNear, supplyTransient), "A")} at most here,`,
+    "almost all of it lost in the transmitter coil and switch: the pebbles take milliwatts.",
+  );
+
+  // ── 6. Parts and cautions ─────────────────────────────────────────────────
+  nb.parts(
+    partsList({
+      coils: [
+        { item: "transmitter coil", coil: tx },
+        { item: "pebble coil", coil: token, quantity: 12 },
+      ],
+      capacitors: [
+        { item: "transmitter tank capacitor", parts: txChoice.parts, topology: txChoice.topology, series: "E12", peakVoltage: Math.max(tankPeak, near.transmitter.capacitorVoltage) },
+        { item: "pebble tank capacitor", parts: tokenChoice.parts, topology: tokenChoice.topology, series: "E12", peakVoltage: near.receivers[0]!.capacitorVoltage, quantity: 12 },
+      ],
+      leds: [
+        { item: "pebble LED", colour: "red", quantity: 6 },
+        { item: "pebble LED", colour: "green (GaP)", quantity: 6 },
+      ],
+      supply: { item: "supply", voltage: SUPPLY, current: Math.max(supplyFast, supplyNear, supplyTransient), rating: 0.5 },
+    }),
+  );
   const cautions = [
     ...near.cautions,
     "Pebbles are small enough to swallow: a hands-on exhibit for young children needs pebbles too big to fit a small-parts gauge, and the local toy-safety rules apply.",
-    "People with implanted medical devices: keep the transmitter's field away from them and follow the device makers' and local guidance; this run does not assess exposure.",
+    "People with implanted medical devices: keep the transmitter's field away from them and follow the device makers' and local guidance.",
     "Coins, keys and foil on the lid heat up in the field; the drawer should not be left powered unattended without a check of metal heating.",
     "Any transmitter radiates: radio-emission rules for inductive devices apply to the product; these numbers are design estimates, not a compliance test.",
   ];
-  nb.push("## Cautions", "", ...cautions.map((c) => `- ${c}`), "", "Defer to local codes, regulations and licensed practice.");
+  nb.cautions(cautions);
 
   return {
-    notebook: nb.join("\n"),
+    notebook: nb,
     results: {
       frequency: f,
       transmitter: txNumbers,
@@ -254,7 +378,28 @@ export function run(): { notebook: string; results: PebbleDrawerResults } {
       sidewaysRange,
       litThreshold: threshold,
       waveform: { peakOverSupply: h.peak / SUPPLY, distortion: h.distortion, ledTransient, ledFast, checkHeight },
+      supply: { fast: supplyFast, transient: supplyTransient, onLid: supplyNear },
+      transmitterCapacitorPeak: tankPeak,
       cautions,
     },
   };
+}
+
+/**
+ * The load line of an LED token: the coil's EMF jωM·I₁ through the coil impedance is a Norton
+ * current I_N = jωM·I₁/(R₂ + jωL₂) into Y_t = jωC₂ + 1/(R₂ + jωL₂); with the LED's fundamental
+ * current in phase with the tank voltage V, |I_N|² = (Re Y_t·V + I_LED)² + (Im Y_t·V)², so the
+ * current still available to the LED is √(|I_N|² − (Im Y_t·V)²) − Re Y_t·V (physics notes: the token).
+ */
+function loadLine(p: { f: number; M: number; transmitterCurrent: number; L2: number; R2: number; C2: number; colour: LedColour }) {
+  const w = 2 * Math.PI * p.f;
+  const zr = p.R2, zi = w * p.L2, z2 = zr * zr + zi * zi;
+  const norton = (w * Math.abs(p.M) * p.transmitterCurrent) / Math.sqrt(z2);
+  const g = zr / z2, b = w * p.C2 - zi / z2;
+  const load = { kind: "led" as const, led: ledPreset(p.colour) };
+  const vmax = Math.min(norton / Math.hypot(g, b), 6);
+  const voltage = Array.from({ length: 301 }, (_, i) => (vmax * i) / 300);
+  const available = voltage.map((v) => Math.max(0, Math.sqrt(Math.max(0, norton * norton - (b * v) ** 2)) - g * v));
+  const led = voltage.map((v) => fundamentalConductance(load, v) * v);
+  return { norton, voltage, available, led };
 }

@@ -1,17 +1,19 @@
 /**
- * Runs the casebook: every scenario, or the one named on the command line.
- *   npx tsx casebook/run.ts [scenario]
- *   npx deno run -A casebook/run.ts [scenario]
- * Each scenario prints its worked run and writes out/<scenario>/report.md.
+ * Runs the casebook: every scenario, or the ones named on the command line.
+ *   npx tsx casebook/run.ts [scenario …]
+ *   npx deno run -A casebook/run.ts [scenario …]
+ * Each scenario prints its worked run and writes out/<scenario>/report.md with its SVG
+ * figures beside it and a self-contained out/<scenario>/report.html.
  */
-import { mkdirSync, writeFileSync } from "node:fs";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
+import { notebookText, writeNotebook } from "../lib/mod.ts";
 import { scenarios } from "./scenarios.ts";
 
 const root = join(dirname(fileURLToPath(import.meta.url)), "..");
 const args = typeof Deno !== "undefined" ? Deno.args : process.argv.slice(2);
 const wanted = args.filter((a) => !a.startsWith("-"));
+const log = (line: string): void => console.error(line);
 
 const unknown = wanted.filter((w) => !(w in scenarios));
 if (unknown.length > 0) {
@@ -20,13 +22,13 @@ if (unknown.length > 0) {
 }
 
 for (const name of wanted.length > 0 ? wanted : Object.keys(scenarios)) {
-  const scenario = scenarios[name]!;
-  const { notebook } = await scenario.run();
+  const started = Date.now();
+  log(`── ${name}: ${scenarios[name]!.title}`);
+  const { notebook } = await scenarios[name]!.run({ log });
   const dir = join(root, "out", name);
-  mkdirSync(dir, { recursive: true });
-  writeFileSync(join(dir, "report.md"), notebook + "\n");
-  console.log(notebook);
-  console.log(`\n(written to out/${name}/report.md)\n`);
+  await writeNotebook(notebook, dir, (done, total) => log(`   figures ${done}/${total}`));
+  console.log(notebookText(notebook));
+  console.log(`(written to out/${name}/report.md, report.html and its figures in ${((Date.now() - started) / 1000).toFixed(1)} s)\n`);
 }
 
 declare const Deno: { args: string[] } | undefined;

@@ -1,11 +1,18 @@
-/** The casebook's scenarios by name (docs/design.md §7). */
+/** The casebook's scenarios by name (design.md §7). */
+import type { Notebook } from "../lib/mod.ts";
 import * as coaxialLoops from "./coaxialLoops.ts";
 import * as pebbleDrawer from "./pebbleDrawer.ts";
+
+/** What every scenario's run() accepts. */
+export interface ScenarioOptions {
+  /** receives progress lines of long steps */
+  readonly log?: (line: string) => void;
+}
 
 export interface Scenario {
   /** one line: what question the scenario answers */
   readonly title: string;
-  readonly run: () => { notebook: string; results: unknown } | Promise<{ notebook: string; results: unknown }>;
+  readonly run: (options?: ScenarioOptions) => { notebook: Notebook; results: unknown } | Promise<{ notebook: Notebook; results: unknown }>;
 }
 
 export const scenarios: Record<string, Scenario> = {

@@ -213,4 +213,10 @@ export * as chart from "./report/chart.ts";
 export type { ChartSpec } from "./report/chart.ts";
 export { renderSvg, type RenderOptions } from "./report/renderSvg.ts";
 export { PALETTE, ledSwatch } from "./report/theme.ts";
+export { notebook, DEFER_LINE, type Notebook, type NotebookOptions, type Cell, type Quantity, type TableValue } from "./report/notebook.ts";
+export { partsList, partVoltages, wireText, type PartRow, type PartsInput, type CapacitorBuild } from "./report/partsList.ts";
+export { notebookMarkdown } from "./report/markdown.ts";
+export { notebookHtml } from "./report/html.ts";
+export { notebookText } from "./report/terminal.ts";
+export { renderNotebook, writeNotebook, type RenderedNotebook } from "./report/write.ts";
 // end report

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { scenarios } from "../casebook/scenarios.ts";
+import { DEFER_LINE, notebookMarkdown } from "../lib/mod.ts";
 import * as coaxialLoops from "../casebook/coaxialLoops.ts";
 import { expectOutside } from "./helpers/validation.ts";
 
@@ -7,9 +8,15 @@ import { expectOutside } from "./helpers/validation.ts";
 describe("casebook", () => {
   it("every scenario runs and prints a notebook with units", async () => {
     for (const [name, s] of Object.entries(scenarios)) {
-      const { notebook } = await s.run();
-      expect(notebook.length, name).toBeGreaterThan(100);
-      expect(notebook, name).toMatch(/\d (m|µ|n|p|k)?(H|m|Hz|V|A|W)\b/);
+      const md = notebookMarkdown((await s.run()).notebook);
+      expect(md.length, name).toBeGreaterThan(100);
+      expect(md, name).toMatch(/\d (m|µ|n|p|k)?(H|m|Hz|V|A|W)\b/);
+      // every report carries the parts list and the cautions with the line deferring to local codes
+      expect(md, name).toContain("## Parts list");
+      expect(md, name).toContain("## Cautions");
+      expect(md, name).toContain(DEFER_LINE);
+      // and a supply section (coaxial-loops says it has no drive)
+      expect(md, name).toMatch(/## (\d+\. )?Supply/);
     }
   });
 
@@ -90,5 +97,14 @@ describe("casebook: pebble-drawer", async () => {
       unit: "A",
     });
     expect(r.cautions.length).toBeGreaterThanOrEqual(4);
+  });
+
+  it("budgets the supply from the real switch waveform and rates the transmitter capacitor for its true peak", () => {
+    // independent method: the time-domain run's mean supply current against the fast model's
+    // input power / supply; the fast model sees the drive's fundamental only, so it may read low
+    expect(r.supply.transient).toBeGreaterThan(0.5 * r.supply.fast);
+    expect(r.supply.transient).toBeLessThan(0.5); // inside a USB 2.0 port's 500 mA (USB 2.0 specification)
+    // the tank swings several times the supply (trade practice (no source): π·V_DD for a half-sine)
+    expect(r.transmitterCapacitorPeak).toBeGreaterThan(5);
   });
 });
