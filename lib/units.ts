@@ -2,13 +2,14 @@
  * Quantities at the edge: parse "12 mm", "217 kHz", "4.7 nF" into SI numbers, and format SI
  * numbers back into engineering notation (docs/design.md §3, "SI inside, strings at the edge").
  *
- * Parsing uses one private mathjs instance (mathjs units) for the unit algebra and the
- * dimension check. Units are parsed once at the boundary; hot paths never call these functions.
+ * Parsing reads the unit with the small unit algebra of lib/unitAlgebra.ts (a vocabulary of
+ * SI, CGS and inch units, products, quotients, powers) and checks its dimension. Units are
+ * parsed once at the boundary; hot paths never call these functions.
  * The rules (which strings are accepted, what a bare number means) are documented in
  * docs/methods/units.md.
  */
-import { create, createUnitDependencies, unitDependencies, type FactoryFunctionMap, type Unit } from "mathjs";
 import { TanklightInputError } from "./errors.ts";
+import { reduceUnit, sameDims, UnitSyntaxError, type BaseDims, type ReducedUnit } from "./unitAlgebra.ts";
 
 /** Physical dimension of an input quantity; decides the SI unit it is converted to. */
 export type Dimension =
@@ -39,7 +40,7 @@ export type QuantityInput = number | string;
 export interface DimensionInfo {
   /** the SI unit every parsed value is returned in, as printed ("Ω·m", "m²", "" for none) */
   readonly unit: string;
-  /** the same unit in mathjs syntax, used for the conversion */
+  /** the same unit as typed in a quantity string ("ohm m"), used in hints */
   readonly mathUnit: string;
   /** the dimension in words with its article, for messages: "a length", "an inductance" */
   readonly noun: string;
@@ -72,45 +73,34 @@ export const DIMENSIONS: Readonly<Record<Dimension, DimensionInfo>> = {
 
 const DIMENSION_NAMES = Object.keys(DIMENSIONS) as Dimension[];
 
-// ── the private mathjs instance ──────────────────────────────────────────────
-// One instance, created on first use, so that our few added units never touch the global one.
-// It holds only the unit functions and what they depend on (creating it with `all` costs about
-// four times as long, some 0.6 s).
-let mathInstance: ReturnType<typeof create> | undefined;
-let referenceUnits: Map<Dimension, Unit> | undefined;
+// ── dimensions in base units ─────────────────────────────────────────────────
+/** Base dimensions (m, kg, s, A, K, rad) of each {@link Dimension}'s SI unit. */
+const BASE_DIMS: Readonly<Record<Dimension, BaseDims>> = {
+  length: [1, 0, 0, 0, 0, 0],
+  area: [2, 0, 0, 0, 0, 0],
+  frequency: [0, 0, -1, 0, 0, 0],
+  inductance: [2, 1, -2, -2, 0, 0],
+  capacitance: [-2, -1, 4, 2, 0, 0],
+  resistance: [2, 1, -3, -2, 0, 0],
+  conductance: [-2, -1, 3, 2, 0, 0],
+  voltage: [2, 1, -3, -1, 0, 0],
+  current: [0, 0, 0, 1, 0, 0],
+  power: [2, 1, -3, 0, 0, 0],
+  energy: [2, 1, -2, 0, 0, 0],
+  charge: [0, 0, 1, 1, 0, 0],
+  angle: [0, 0, 0, 0, 0, 1],
+  temperature: [0, 0, 0, 0, 1, 0],
+  resistivity: [3, 1, -3, -2, 0, 0],
+  fluxDensity: [0, 1, -2, -1, 0, 0],
+  fieldStrength: [-1, 0, 0, 1, 0, 0],
+  time: [0, 0, 1, 0, 0, 0],
+  dimensionless: [0, 0, 0, 0, 0, 0],
+};
 
-function math(): ReturnType<typeof create> {
-  if (mathInstance === undefined) {
-    const m = create({ unitDependencies, createUnitDependencies } as FactoryFunctionMap);
-    // The gauss (CGS unit of flux density), 1 G = 1e-4 T exactly by definition; common in
-    // older magnetics literature and on cheap field meters. Prefixes allowed ("mG").
-    m.createUnit("gauss", { definition: "1e-4 T", prefixes: "short", aliases: [] });
-    // The oersted (CGS unit of field strength), 1 Oe = 1000/(4π) A/m exactly (the CGS–SI
-    // relation of H); found in ferrite and magnet data.
-    m.createUnit("oersted", { definition: `${1000 / (4 * Math.PI)} A/m`, prefixes: "none", aliases: ["Oe"] });
-    mathInstance = m;
-  }
-  return mathInstance;
-}
-
-function references(): Map<Dimension, Unit> {
-  if (referenceUnits === undefined) {
-    const m = math();
-    referenceUnits = new Map();
-    for (const d of DIMENSION_NAMES) {
-      const info = DIMENSIONS[d];
-      if (info.mathUnit !== "") referenceUnits.set(d, m.unit(info.mathUnit));
-    }
-  }
-  return referenceUnits;
-}
-
-/** The dimension of a mathjs unit among ours, or undefined when it is none of them. */
-function dimensionOf(u: Unit): Dimension | undefined {
-  const dims = (u as unknown as { dimensions: number[] }).dimensions;
-  if (dims.every((x) => x === 0)) return "dimensionless";
-  for (const [d, ref] of references()) {
-    if (u.equalBase(ref)) return d;
+/** The dimension of a reduced unit among ours, or undefined when it is none of them. */
+function dimensionOf(u: ReducedUnit): Dimension | undefined {
+  for (const d of DIMENSION_NAMES) {
+    if (sameDims(u.dims, BASE_DIMS[d])) return d;
   }
   return undefined;
 }
@@ -150,18 +140,18 @@ function separatedPrefixHint(mantissa: string, exponent: string | undefined, uni
   if (m === null) return undefined;
   const joined = `${m[1]}${m[2]}`;
   try {
-    math().unit(joined);
+    reduceUnit(joined);
   } catch {
     return undefined;
   }
   return `write the prefix with its unit: '${mantissa}${exponent === undefined ? "" : "e" + exponent} ${joined}'?`;
 }
 
-/** Dimensionless unit words mathjs lacks, with their factor (exact by definition). */
+/** Dimensionless unit words, with their factor (exact by definition). */
 const PLAIN_FACTORS: Readonly<Record<string, number>> = { "%": 0.01, ppm: 1e-6 };
 
 /**
- * Rewrite the Unicode spellings people paste (µ, Ω, °C, ², ·, −) into mathjs syntax.
+ * Rewrite the Unicode spellings people paste (µ, Ω, °C, ², ·, −) into the ASCII the unit reader knows.
  * Only symbols are rewritten; words pass unchanged.
  */
 function normalizeUnitText(text: string): string {
@@ -176,6 +166,34 @@ function normalizeUnitText(text: string): string {
     .replace(/\u00B3/g, "^3")
     .replace(/[\u00B7\u22C5]/g, " ") // middle dot, dot operator → product
     .replace(/\s+/g, " "); // no-break, thin and other Unicode spaces → one space
+}
+
+/**
+ * Two spellings people type that we do not read, with what to type instead: a decimal comma
+ * ("4,7 nF" → '4.7 nF'; "1,000 mm" is refused the same way, as the comma could be either a
+ * decimal comma or a thousands separator) and the letter-for-decimal-point marking printed on
+ * parts (IEC 60062 style: "2n2" → '2.2 nF', "4k7" → '4.7 kΩ', "4R7" → '4.7 Ω'). Both are refused
+ * rather than guessed: the marking leaves the unit to the reader, and a comma is ambiguous.
+ */
+function localNotationHint(text: string, dimension: Dimension): string | undefined {
+  const comma = /^([+-]?\d+),(\d+)(.*)$/.exec(text);
+  if (comma !== null) {
+    const rest = (comma[3] ?? "").trim();
+    const unit = rest === "" ? DIMENSIONS[dimension].mathUnit : rest;
+    const u = unit === "" ? "" : " " + unit;
+    const grouped = (comma[2] ?? "").length === 3 ? ` (decimal comma) or '${comma[1]}${comma[2]}${u}' (digit grouping)` : "";
+    return `a comma in the number; write a decimal point and no separators: '${comma[1]}.${comma[2]}${u}'${grouped}`;
+  }
+  const marking = /^([+-]?\d+)([pnumkMGRr])(\d+)\s*(.*)$/.exec(text);
+  if (marking !== null) {
+    const letter = marking[2] ?? "";
+    const prefix = letter === "R" || letter === "r" ? "" : letter;
+    const rest = (marking[4] ?? "").trim();
+    const unit = rest === "" ? DIMENSIONS[dimension].mathUnit : rest;
+    if (unit === "") return undefined;
+    return `a part marking with the prefix as decimal point; write '${marking[1]}.${marking[3]} ${prefix}${unit}'`;
+  }
+  return undefined;
 }
 
 /** Build the one error parseQuantity throws. */
@@ -240,13 +258,17 @@ export function parseQuantity(value: QuantityInput, dimension: Dimension, field?
     throw quantityError(field, value, dimension, expectation(dimension));
   }
   const text = normalizeUnitText(value.trim());
+  const notation = localNotationHint(text, dimension);
+  if (notation !== undefined) {
+    throw quantityError(field, value, dimension, expectation(dimension), notation);
+  }
   const match = NUMBER_PREFIX.exec(text);
   if (match === null) {
     throw quantityError(field, value, dimension, expectation(dimension), "no leading number");
   }
   const mantissa = match[1] ?? "";
   const exponent = Number(match[2] ?? "0");
-  // "1/s", "1/K": a reciprocal of one unit symbol is written as its power −1 for mathjs
+  // "1/s", "1/K": a reciprocal of one unit symbol is read as its power −1
   const unitText = text
     .slice(match[0].length)
     .trim()
@@ -271,31 +293,24 @@ export function parseQuantity(value: QuantityInput, dimension: Dimension, field?
     }
     result = scaleDecimal(mantissa, exponent, PLAIN_FACTORS[unitText] ?? 1);
   } else {
-    let u: Unit;
+    let u: ReducedUnit;
     try {
-      u = math().unit(unitText);
-    } catch {
+      u = reduceUnit(unitText);
+    } catch (e) {
+      if (e instanceof UnitSyntaxError && e.reason === "number") {
+        // a number inside the unit text ("5 5 mm", "5 2mm"): one number only
+        throw quantityError(field, value, dimension, expectation(dimension), "more than one number");
+      }
       const hint = caseHint(unitText) ?? separatedPrefixHint(mantissa, match[2], unitText);
       throw quantityError(field, value, dimension, expectation(dimension), `unknown unit '${unitText}'${hint === undefined ? "" : "; " + hint}`);
-    }
-    if ((u as unknown as { value: unknown }).value !== null) {
-      // mathjs read a number inside the unit text ("5 5 mm", "5 2mm"): one number only
-      throw quantityError(field, value, dimension, expectation(dimension), "more than one number");
     }
     const found = dimensionOf(u);
     if (found !== dimension) {
       const what = found === undefined ? `unit '${unitText}' is not ${DIMENSIONS[dimension].noun}` : found === "dimensionless" ? "a plain number" : DIMENSIONS[found].noun;
       throw quantityError(field, value, dimension, expectation(dimension), what);
     }
-    if (dimension === "temperature") {
-      // Offset units (degC, degF): mathjs converts the absolute value.
-      result = math().unit(plain, unitText).toNumber("K");
-    } else if (dimension === "dimensionless") {
-      result = scaleDecimal(mantissa, exponent, math().unit(1, unitText).toSI().toNumber());
-    } else {
-      const factor = math().unit(1, unitText).toNumber(DIMENSIONS[dimension].mathUnit);
-      result = scaleDecimal(mantissa, exponent, factor);
-    }
+    // Offset scales (degC, degF): T/K = (t + offset)·factor.
+    result = u.offset === undefined ? scaleDecimal(mantissa, exponent, u.factor) : (plain + u.offset) * u.factor;
   }
   if (!Number.isFinite(result)) {
     throw quantityError(field, value, dimension, `${expectation(dimension)} (a finite number)`, "overflows");
