@@ -1,0 +1,25 @@
+/**
+ * `npm run build`, second step: bundles lib/mod.ts and lib/advanced.ts into dist/ (one shared
+ * chunk, minified, names kept) after tsc has written the declarations (tsconfig.build.json).
+ *
+ * Why a bundle: a user's `import "tanklight"` from dist/ otherwise opens and compiles one file
+ * per module (about 70 of ours); on a busy machine each open costs milliseconds. zod stays an
+ * outside package so that user schemas and ours share one zod; small helpers of other
+ * dependencies are inlined where they are used. Measured in bench/import.bench.ts.
+ */
+import { build } from "esbuild";
+
+await build({
+  entryPoints: ["lib/mod.ts", "lib/advanced.ts"],
+  outdir: "dist",
+  bundle: true,
+  splitting: true,
+  format: "esm",
+  platform: "node",
+  target: "node20",
+  minify: true,
+  keepNames: true,
+  sourcemap: true,
+  external: ["zod"],
+  logLevel: "warning",
+});
