@@ -111,7 +111,7 @@ const UNITS: ReadonlyMap<string, UnitDef> = new Map<string, UnitDef>([
   ...plain(["degF", "fahrenheit"], 1 / 1.8, TEMPERATURE, 459.67),
   // inch-based lengths (NIST SP 811 App. B.8)
   ...plain(["in", "inch", "inches"], INCH, LENGTH),
-  ...plain(["mil", "mils", "thou"], INCH / 1000, LENGTH),
+  ...plain(["mil", "mils", "thou"], 2.54e-5, LENGTH), // 0.001 in, exactly
   ...plain(["ft", "foot", "feet"], 0.3048, LENGTH), // 12 in, exactly
 ]);
 
