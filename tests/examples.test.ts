@@ -138,10 +138,11 @@ function casesOf(example: string): Case[] {
   return cases;
 }
 
-function evaluate(source: string, out: Float64Array): unknown {
+/** Evaluates an example expression (which may `await`) with the library's names in scope. */
+async function evaluate(source: string, out: Float64Array): Promise<unknown> {
   const names = Object.keys(scope).filter((n) => /^[\p{L}_$][\p{L}\p{N}_$]*$/u.test(n));
-  // eslint-disable-next-line @typescript-eslint/no-implied-eval
-  return new Function(...names, "out", `"use strict"; return (${source});`)(...names.map((n) => scope[n]), out);
+  const AsyncFunction = Object.getPrototypeOf(async () => undefined).constructor as new (...args: string[]) => (...values: unknown[]) => Promise<unknown>;
+  return await new AsyncFunction(...names, "out", `"use strict"; return (${source});`)(...names.map((n) => scope[n]), out);
 }
 
 describe("public names: doc comments and examples that run", () => {
@@ -167,12 +168,12 @@ describe("public names: doc comments and examples that run", () => {
   });
 
   for (const { n, c } of runnable) {
-    it(`${n.name}: ${c.expr} → ${c.value}`, () => {
+    it(`${n.name}: ${c.expr} → ${c.value}`, async () => {
       const out = new Float64Array(16);
       const where = `${n.entry} ${n.name} @example ${c.expr}`;
       let result: unknown;
       try {
-        result = evaluate(c.expr, out);
+        result = await evaluate(c.expr, out);
       } catch (e) {
         // An example may show a thrown error: "… // → throws TanklightInputError"
         if (c.value !== undefined && /^throws\b/.test(c.value)) return;
@@ -184,7 +185,7 @@ describe("public names: doc comments and examples that run", () => {
       if (src === undefined) return;
       let expected: unknown;
       try {
-        expected = evaluate(src, new Float64Array(16));
+        expected = await evaluate(src, new Float64Array(16));
       } catch {
         return; // a value shown in words ("the same as …"): the call ran, which is what is checked
       }

@@ -92,6 +92,7 @@ code{font:13px ui-monospace,monospace;background:#fff;padding:0 .2rem}
 /**
  * The notebook as a self-contained HTML page.
  * @param svgs rendered figures by name (from renderSvg).
+ * @example notebookHtml(notebook("Drawer"), new Map()).startsWith("<!doctype html>") // → true
  */
 export function notebookHtml(nb: Notebook, svgs: ReadonlyMap<string, string>): string {
   return [

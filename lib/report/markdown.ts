@@ -34,7 +34,10 @@ function cellMarkdown(c: Cell): string[] {
   }
 }
 
-/** The notebook's Markdown text. */
+/**
+ * The notebook's Markdown text.
+ * @example notebookMarkdown(notebook("Drawer")).split("\n")[0] // → "# Drawer"
+ */
 export function notebookMarkdown(nb: Notebook): string {
   const head = [`# ${nb.title}`, "", ...(nb.subtitle ? [`*${nb.subtitle}*`, ""] : []), ...(nb.note ? [`> ${nb.note}`, ""] : [])];
   return [...head, ...nb.cells.flatMap(cellMarkdown)].join("\n").replace(/\n{3,}/g, "\n\n").trimEnd() + "\n";

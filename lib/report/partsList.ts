@@ -59,7 +59,10 @@ function nearestAwg(d: number): number | undefined {
   return err <= 0.02 ? best : undefined;
 }
 
-/** The wire of a coil in words: "0.10 mm enamelled copper (AWG 38)". */
+/**
+ * The wire of a coil in words: "0.10 mm enamelled copper (AWG 38)".
+ * @example wireText(roundWire("0.1 mm", { insulation: "10 um" })) // → "0.10 mm copper wire (AWG 38), 0.12 mm over insulation"
+ */
 export function wireText(c: Conductor): string {
   const mm = (x: number) => `${(x * 1e3).toFixed(x < 1e-3 ? 3 : 2).replace(/0$/, "")} mm`;
   switch (c.kind) {
@@ -76,7 +79,10 @@ export function wireText(c: Conductor): string {
   }
 }
 
-/** Peak voltage across each part of a combination, V (see the module comment). */
+/**
+ * Peak voltage across each part of a combination, V (see the module comment).
+ * @example partVoltages([2.2e-9, 2.2e-9], "series", 3) // → [1.5, 1.5] (V: equal parts in series share the peak)
+ */
 export function partVoltages(parts: readonly number[], topology: string, peak: number): number[] {
   if (topology === "series") {
     const total = 1 / parts.reduce((s, c) => s + 1 / c, 0);
@@ -90,7 +96,7 @@ export function partVoltages(parts: readonly number[], topology: string, peak: n
  * @param input coils, capacitor builds, LEDs and the supply (SI values).
  * @returns one row per purchasable part.
  * @example partsList({ coils: [], capacitors: [{ item: "token tank", parts: [2.2e-9], topology: "single", series: "E12", peakVoltage: 3 }], leds: [], supply: { item: "USB", voltage: 5, current: 0.2 } })[0].part
- * // → "2.20 nF ±10 % (E12), 10 V, class 1 ceramic C0G (NP0)"
+ * // → "2.20 nF ±10 % (E12), 6.3 V, class 1 ceramic C0G (NP0)"
  */
 export function partsList(input: PartsInput): PartRow[] {
   const rows: PartRow[] = [];

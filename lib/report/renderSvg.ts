@@ -18,7 +18,7 @@ export interface RenderOptions {
  * An SVG document for a vega-lite spec.
  * @param spec a vega-lite spec (e.g. from `chart.coverage(…)`).
  * @returns the SVG text, starting with `<svg`.
- * @example (await renderSvg(chart.ledCurrent({ curves, threshold: 5e-4 }))).startsWith("<svg") // → true
+ * @example (await renderSvg(chart.ledCurrent({ curves: [{ colour: "red", distance: [0.01, 0.05], current: [5e-3, 2e-4] }], threshold: 5e-4 }))).startsWith("<svg") // → true
  */
 export async function renderSvg(spec: ChartSpec, options: RenderOptions = {}): Promise<string> {
   const [{ compile }, { parse, View }] = await Promise.all([import("vega-lite"), import("vega")]);

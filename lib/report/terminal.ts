@@ -32,7 +32,10 @@ function cellText(c: Cell): string[] {
   }
 }
 
-/** The notebook as terminal text. */
+/**
+ * The notebook as terminal text.
+ * @example notebookText(notebook("Drawer")).split("\n")[0] // → "Drawer"
+ */
 export function notebookText(nb: Notebook): string {
   const rule = "═".repeat(Math.min(78, [...nb.title].length));
   return [nb.title, rule, ...(nb.subtitle ? [nb.subtitle] : []), ...(nb.note ? [nb.note] : []), ...nb.cells.flatMap(cellText)].join("\n").replace(/\n{3,}/g, "\n\n").trimEnd() + "\n";

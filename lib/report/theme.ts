@@ -26,7 +26,10 @@ export const PALETTE = {
 /** Series colours, in order, for curves that are not LEDs. */
 export const SERIES_COLOURS: readonly string[] = [PALETTE.teal, PALETTE.amber, PALETTE.indigo, PALETTE.brick, PALETTE.moss, PALETTE.plum];
 
-/** A colour that reads as the LED (by preset name or free text containing it). */
+/**
+ * A colour that reads as the LED (by preset name or free text containing it).
+ * @example ledSwatch("green-gap") // → "#2f9a4c"
+ */
 export function ledSwatch(colour: string): string {
   const c = colour.toLowerCase();
   if (c.includes("red")) return "#d23a2a";

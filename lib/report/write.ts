@@ -34,6 +34,7 @@ export async function renderNotebook(nb: Notebook, onProgress?: (done: number, t
 /**
  * Writes report.md, report.html and the SVG figures into `dir` (created if missing).
  * @returns the paths written.
+ * @example await writeNotebook(nb, "out/my-scenario") // writes report.md, report.html and one SVG per figure; returns their paths
  */
 export async function writeNotebook(nb: Notebook, dir: string, onProgress?: (done: number, total: number) => void): Promise<string[]> {
   const r = await renderNotebook(nb, onProgress);
