@@ -220,3 +220,22 @@ export { notebookHtml } from "./report/html.ts";
 export { notebookText } from "./report/terminal.ts";
 export { renderNotebook, writeNotebook, type RenderedNotebook } from "./report/write.ts";
 // end report
+
+// ── lib/analysis: calibration from bench measurements ────────────────────────
+export {
+  calibrate,
+  predictToken,
+  predictRange,
+  drivePlausibility,
+  MeasurementInput,
+  type Measurement,
+  type CalibrationUnknown,
+  type CalibrateOptions,
+  type Calibration,
+  type CalibratedParameter,
+  type CalibrationResidual,
+  type PredictOptions,
+  type PredictedQuantity,
+  type TokenChoice,
+} from "./analysis/calibrate.ts";
+export { CalibrationDesignInput, type CalibrationDesign, type CalibrationParameters } from "./analysis/calibrationModel.ts";
