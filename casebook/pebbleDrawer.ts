@@ -18,7 +18,6 @@
 import {
   addToken,
   chart,
-  fundamentalConductance,
   notebook,
   partsList,
   type Notebook,
@@ -35,6 +34,7 @@ import {
   simulate,
   singleSwitchDrive,
   solveLink,
+  tokenLoadLine,
   tuneWithStandardParts,
   waveformHarmonics,
   type LedColour,
@@ -238,7 +238,15 @@ export function run(options: ScenarioOptions = {}): { notebook: Notebook; result
   const checkHeight = 0.03;
   const at = solveLink(system("red", 0, checkHeight));
   const M = mutualInductance(tx, { position: [0, 0, 0] }, token, { position: [0, 0, checkHeight] });
-  const line = loadLine({ f, M, transmitterCurrent: at.transmitter.coilCurrent, L2, R2: tokenNumbers.resistance, C2, colour: "red" });
+  const line = tokenLoadLine({
+    frequency: f,
+    mutualInductance: M,
+    transmitterCurrent: at.transmitter.coilCurrent,
+    inductance: L2,
+    resistance: tokenNumbers.resistance,
+    capacitance: C2,
+    load: { kind: "led", led: ledPreset("red") },
+  });
   nb.heading("3. Where the LED settles on the pebble's tank");
   nb.figure(
     "load-line",
@@ -246,7 +254,7 @@ export function run(options: ScenarioOptions = {}): { notebook: Notebook; result
       title: `Red pebble ${q(checkHeight, "m")} above the centre`,
       voltage: line.voltage,
       available: line.available,
-      led: line.led,
+      led: line.load,
       operatingPoint: { voltage: at.receivers[0]!.loadVoltage, current: at.receivers[0]!.loadCurrent },
       colour: "red",
     }),
@@ -383,23 +391,4 @@ export function run(options: ScenarioOptions = {}): { notebook: Notebook; result
       cautions,
     },
   };
-}
-
-/**
- * The load line of an LED token: the coil's EMF jωM·I₁ through the coil impedance is a Norton
- * current I_N = jωM·I₁/(R₂ + jωL₂) into Y_t = jωC₂ + 1/(R₂ + jωL₂); with the LED's fundamental
- * current in phase with the tank voltage V, |I_N|² = (Re Y_t·V + I_LED)² + (Im Y_t·V)², so the
- * current still available to the LED is √(|I_N|² − (Im Y_t·V)²) − Re Y_t·V (physics notes: the token).
- */
-function loadLine(p: { f: number; M: number; transmitterCurrent: number; L2: number; R2: number; C2: number; colour: LedColour }) {
-  const w = 2 * Math.PI * p.f;
-  const zr = p.R2, zi = w * p.L2, z2 = zr * zr + zi * zi;
-  const norton = (w * Math.abs(p.M) * p.transmitterCurrent) / Math.sqrt(z2);
-  const g = zr / z2, b = w * p.C2 - zi / z2;
-  const load = { kind: "led" as const, led: ledPreset(p.colour) };
-  const vmax = Math.min(norton / Math.hypot(g, b), 6);
-  const voltage = Array.from({ length: 301 }, (_, i) => (vmax * i) / 300);
-  const available = voltage.map((v) => Math.max(0, Math.sqrt(Math.max(0, norton * norton - (b * v) ** 2)) - g * v));
-  const led = voltage.map((v) => fundamentalConductance(load, v) * v);
-  return { norton, voltage, available, led };
 }

@@ -219,6 +219,9 @@ export { notebookMarkdown } from "./report/markdown.ts";
 export { notebookHtml } from "./report/html.ts";
 export { notebookText } from "./report/terminal.ts";
 export { renderNotebook, writeNotebook, type RenderedNotebook } from "./report/write.ts";
+export { tokenLoadLine, type LoadLine, type LoadLineInput } from "./report/loadLine.ts";
+export { DesignFile, parseDesign, parseDesignText, designJsonSchema, DESIGN_FILE_MAX_BYTES, type Design, type DesignFileInput } from "./report/designFile.ts";
+export { designReport, type DesignResults } from "./report/designReport.ts";
 // end report
 
 // ── lib/analysis: calibration from bench measurements ────────────────────────

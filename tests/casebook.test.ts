@@ -108,3 +108,43 @@ describe("casebook: pebble-drawer", async () => {
     expect(r.transmitterCapacitorPeak).toBeGreaterThan(5);
   });
 });
+
+describe("casebook: through-the-books (a design file)", async () => {
+  const { run, designFile } = await import("../casebook/throughTheBooks.ts");
+  const { designReport, parseDesignText } = await import("../lib/mod.ts");
+  const { readFileSync } = await import("node:fs");
+  const { notebook, results: r } = run();
+
+  it("reaches just past the top of the stack, red further than yellow, and paper does not matter", () => {
+    const gap = 0.08;
+    // demo design at the limit: lit on the top book with about a centimetre to spare
+    expect(r.axialRange.red!).toBeGreaterThan(gap);
+    expect(r.axialRange.red!).toBeLessThan(gap + 0.02);
+    // trade practice (no source): the lower forward voltage of a red LED reaches further than yellow
+    expect(r.axialRange.red!).toBeGreaterThan(r.axialRange.yellow!);
+    // source: skin depth δ = √(2ρ/(ωμ₀)) (any electromagnetics text): paper at ~1e9 Ω·m is kilometres thick
+    expect(r.barrier.skinDepth / r.barrier.thickness).toBeGreaterThan(1e4);
+    // brightness falls monotonically with height
+    const red = r.profile.current.red!;
+    for (let i = 1; i < red.length; i++) expect(red[i]!).toBeLessThan(red[i - 1]!);
+  });
+
+  it("checks the fast model against the time-domain run and budgets a USB supply", () => {
+    // independent method: the transient engine; docs/methods/transient.md reports the describing-function band −2…−8 %
+    expectOutside({
+      quantity: "through-the-books: red LED on the top book, fast model vs transient",
+      source: "independent method: transient engine steady state",
+      ours: r.waveform!.ledFast,
+      reference: r.waveform!.ledTransient,
+      rtol: 0.12,
+      unit: "A",
+    });
+    expect(r.supplyCurrent).toBeGreaterThanOrEqual(r.waveform!.supplyTransient);
+    expect(r.supplyCurrent).toBeLessThan(0.5); // USB 2.0: 500 mA (USB 2.0 specification)
+  });
+
+  it("writes the same report from the design file as from the scenario", () => {
+    const viaFile = designReport(parseDesignText(readFileSync(designFile, "utf8"))).notebook;
+    expect(notebookMarkdown(viaFile)).toBe(notebookMarkdown(notebook));
+  });
+});
