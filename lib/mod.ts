@@ -207,6 +207,30 @@ export { waveformHarmonics, type Harmonics } from "./circuit/transient/harmonics
 export { singleSwitchDrive, bridgeDrive, type DriveCircuit, type SingleSwitchDriveSpec, type BridgeDriveSpec } from "./circuit/transient/drives.ts";
 export { addToken, type TokenSpec, type TokenCircuit } from "./circuit/transient/token.ts";
 
+// ── lib/safety ───────────────────────────────────────────────────────────────
+export { SafetyDesignInput, designFromLink, type SafetyDesign, type SafetyDesignParsed, type DesignFromLinkOptions } from "./safety/design.ts";
+export { RMS_CONVENTION } from "./safety/rms.ts";
+export {
+  EXPOSURE_STANDARDS,
+  referenceLevel,
+  basicRestriction,
+  type Population,
+  type ExposureStandardId,
+  type ExposureStandard,
+  type ReferenceLevel,
+  type BasicRestriction,
+  type SourceStatus,
+} from "./safety/referenceLevels.ts";
+export {
+  exposureCheck,
+  DEFAULT_DISCS,
+  DISC_MODEL,
+  type ExposureOptions,
+  type ExposureCheck,
+  type ReferenceLevelVerdict,
+  type BasicRestrictionVerdict,
+} from "./safety/exposure.ts";
+
 // ── lib/report ───────────────────────────────────────────────────────────────
 /** Chart builders returning vega-lite specs: `chart.coverage(…)`, `chart.ledCurrent(…)`, … (lib/report/chart.ts). */
 export * as chart from "./report/chart.ts";
