@@ -5,13 +5,14 @@
  * rectangular spiral, whose segments take the point-by-point path.
  */
 import type { Workload } from "./harness.ts";
+import type { Coil } from "../lib/em/types.ts";
 import { roundCoil } from "../lib/em/builders/roundCoil.ts";
 import { rectSpiral } from "../lib/em/builders/rectSpiral.ts";
 import { exposureCheck } from "../lib/safety/exposure.ts";
 
 const round = roundCoil({ innerRadius: 0.04, turns: 20, layers: 4, wire: { diameter: 5e-4 } });
 const rect = rectSpiral({ outerWidth: 0.2, outerHeight: 0.2, turns: 6, pitch: 0.003, trace: { width: 0.002, thickness: 35e-6 } });
-const design = (coil: typeof round) => ({ frequency: 200e3, surfaceHeight: 0.005, transmitters: [{ coil, current: 1 }] });
+const design = (coil: Coil) => ({ frequency: 200e3, surfaceHeight: 0.005, transmitters: [{ coil, current: 1 }] });
 const grid = { nx: 41, ny: 41, nz: 11 };
 
 export const workloads: Workload[] = [
