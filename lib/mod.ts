@@ -230,6 +230,18 @@ export {
   type ReferenceLevelVerdict,
   type BasicRestrictionVerdict,
 } from "./safety/exposure.ts";
+export {
+  emissionEstimate,
+  dipoleField,
+  FREE_SPACE_IMPEDANCE,
+  EMISSION_DISTANCES,
+  DIPOLE_MODEL,
+  type EmissionEstimate,
+  type EmissionVerdict,
+  type FieldAtDistance,
+} from "./safety/emission.ts";
+export { EMISSION_RULES, emissionRows, type EmissionRule, type EmissionRow } from "./safety/emissionLimits.ts";
+export { metalHeating, OBJECT_METALS, MetalObjectInput, type MetalObject, type MetalHeating } from "./safety/metalHeating.ts";
 
 // ── lib/report ───────────────────────────────────────────────────────────────
 /** Chart builders returning vega-lite specs: `chart.coverage(…)`, `chart.ledCurrent(…)`, … (lib/report/chart.ts). */

@@ -148,7 +148,7 @@ function transmitterOf(tx: SystemTransmitter, state: TransmitterState, opts: Des
  * @param solution what solveLink returned for it.
  * @param opts.surfaceHeight height of the touchable surface above the transmitter, m (required:
  *   the link does not know the lid).
- * @example designFromLink(system, solveLink(system), { surfaceHeight: 0.003 }).transmitters[0].current // → the solved coil current, A peak
+ * @example designFromLink(system, solveLink(system), { surfaceHeight: 0.003 }) .surfaceHeight // → 0.003 (the lid over a transmitter at the origin)
  */
 export function designFromLink(system: LinkSystem, solution: LinkSolution, opts: DesignFromLinkOptions): SafetyDesign {
   const where = "designFromLink";

@@ -78,7 +78,7 @@ export const DIPOLE_MODEL =
 /**
  * Magnetic-dipole field magnitude, A/m (same convention as m), largest over directions:
  * on the axis m√(1+(kr)²)/(2πr³), broadside m√(1−(kr)²+(kr)⁴)/(4πr³) (Cochran & Heinrich §7.5).
- * @example dipoleField(1, 10, 2*Math.PI*200e3/299792458) // → { value: 1.5918e-4, direction: "axis", … }
+ * @example dipoleField(1, 10, 2*Math.PI*200e3/299792458) .value // → 1.5929e-4 (A/m, on the axis: near field at 10 m)
  */
 export function dipoleField(moment: number, r: number, k: number): { value: number; direction: "axis" | "broadside"; kr: number } {
   const kr = k * r;
@@ -106,7 +106,7 @@ function ruleExtrapolate(dbAtR1: number, r1: number, r2: number): number {
  * @param design see {@link SafetyDesign}.
  * @returns {@link EmissionEstimate}: moment, fields, one verdict per rule with its margin, notes,
  *   warnings and a disclaimer (an estimate, not a compliance test).
- * @example emissionEstimate({ frequency: 200e3, surfaceHeight: 0.005, transmitters: [{ coil, current: 1 }] }).fields[0].dBuAm // → dBµA/m at 10 m
+ * @example emissionEstimate({ frequency: 200e3, surfaceHeight: 0.005, transmitters: [{ coil: tx, current: 1 }] }).moment // → 0.10564 (A·m² peak: 20 turns × 1 A × their mean area)
  */
 export function emissionEstimate(design: SafetyDesign): EmissionEstimate {
   const d = parseSafetyDesign(design, "emissionEstimate");

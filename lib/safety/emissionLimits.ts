@@ -74,7 +74,11 @@ export const EMISSION_RULES: readonly EmissionRule[] = [
   },
 ];
 
-/** The rows of a rule that hold at f: a specific narrow band replaces the general rows strictly inside it. */
+/**
+ * The rows of a rule that hold at f (Hz): both edges of a band included, and a specific narrow
+ * band replaces the general rows strictly inside it.
+ * @example emissionRows(EMISSION_RULES[1], 200e3)[0].limitDb(200e3) // → -15 (dBµA/m at 10 m, CEPT 70-03 Annex 9)
+ */
 export function emissionRows(rule: EmissionRule, f: number): EmissionRow[] {
   const hold = rule.rows.filter((r) => f >= r.fMin && f <= r.fMax);
   const inside = hold.filter((r) => r.specific && f > r.fMin && f < r.fMax);

@@ -233,7 +233,7 @@ function discFluxes(sources: readonly FieldSource[], cx: Float64Array, cy: Float
  * @returns {@link ExposureCheck}: worst point, per-height profile, one verdict per standard
  *   and population with its margin and the height above which it is met, the basic-restriction
  *   verdicts, which governs, conventions, warnings and a disclaimer.
- * @example exposureCheck({ frequency: 200e3, surfaceHeight: 0.005, transmitters: [{ coil, current: 1 }] }).worst.flux // → T RMS at the worst accessible point
+ * @example exposureCheck({ frequency: 200e3, surfaceHeight: 0.005, transmitters: [{ coil: tx, current: 1 }] }).worst.flux // → 5.8632e-4 (T RMS, on the surface over the winding)
  */
 export function exposureCheck(design: SafetyDesign, options: ExposureOptions = {}): ExposureCheck {
   const where = "exposureCheck";

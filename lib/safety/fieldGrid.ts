@@ -142,7 +142,7 @@ function addDirectLevel(src: FieldSource, p: LevelPoints, k: number, cre: number
  * @param sources coils with their peak currents and phases.
  * @param points level points (see {@link LevelPoints}).
  * @returns real and imaginary parts of (B_x, B_y, B_z), index k·n + i.
- * @example fieldPhasors([{ coil, pose: { position: [0, 0, 0] }, current: 1, phase: 0 }], { xs: [0], ys: [0], zs: [0.01] })
+ * @example fieldPhasors([{ coil: tx, pose: { position: [0, 0, 0] }, current: 1, phase: 0 }], { xs: Float64Array.of(0), ys: Float64Array.of(0), zs: Float64Array.of(0.01) }).re[2][0] // → B_z on the axis 10 mm up, T peak
  */
 export function fieldPhasors(sources: readonly FieldSource[], points: LevelPoints): FieldPhasors {
   const total = points.xs.length * points.zs.length;

@@ -37,7 +37,7 @@ function circleExtremes(c: Vec3, n: Vec3, r: number): Vec3[] {
 /**
  * Magnetic moment of a coil per ampere in the world frame: Σ turns × vector area of each
  * filament (circle: πa²·n̂; polygon: ½Σ pᵢ × pᵢ₊₁), rotated by the pose, A·m² per A.
- * @example momentPerAmpere(singleTurn40mm, { position: [0, 0, 0] }) // → [0, 0, 0.0050265] (π·0.04²)
+ * @example momentPerAmpere(tx, { position: [0, 0, 0] })[2] // → 0.10564 (m², Σ turns × πa²)
  */
 export function momentPerAmpere(coil: Coil, pose: Pose): Vec3 {
   let mx = 0, my = 0, mz = 0;

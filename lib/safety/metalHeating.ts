@@ -140,7 +140,8 @@ function fluxProfile(sources: readonly FieldSource[], c: Vec3, a: number): { rho
  * tangential field of a perfectly conducting disc in a perpendicular field,
  * |H_t| = (2H₀/π)·ρ/√(a²−ρ²) (Smythe, Static and Dynamic Electricity, the oblate-spheroid limit;
  * from memory (unverified)), cut off one thickness from the rim where the rim face takes over,
- * lost in the surface resistance R_s = √(ωμ₀/(2σ)): P = ½R_s∮|H_t|²dA.
+ * lost in the surface resistance R_s = √(ωμ₀/(2σ)): P = ½R_s∮|H_t|²dA (for a sheet thinner than
+ * about 2δ the sheet resistance takes over: 2/(σt) in place of R_s, whichever is larger).
  * In between the two limits are combined as 1/P = 1/P_LF + 1/P_FE, exact for a single shorted
  * turn. Ring: a shorted turn, P = (ωΦ)²R/(2(R² + (ωL)²)), R of the band's cross-section (or
  * of a skin layer δ deep round it, whichever is smaller) and L from selfInductance (Rosa &
@@ -153,7 +154,7 @@ function fluxProfile(sources: readonly FieldSource[], c: Vec3, a: number): { rho
  *   the first transmitter).
  * @returns {@link MetalHeating}: power (W), regime, both limits, a temperature-rise estimate and
  *   a caution above the threshold.
- * @example metalHeating(design, { kind: "disc", radius: "12 mm", thickness: "1.7 mm", metal: "cupronickel" }).regime // → e.g. "field-penetrating (low frequency)"
+ * @example metalHeating({ frequency: 200e3, surfaceHeight: 0.005, transmitters: [{ coil: tx, current: 1 }] }, { kind: "disc", radius: "12 mm", thickness: "1.5 mm", metal: "copper" }).regime // → "field-excluding (skin effect)"
  */
 export function metalHeating(design: SafetyDesign, object: MetalObject): MetalHeating {
   const where = "metalHeating";
@@ -170,7 +171,7 @@ export function metalHeating(design: SafetyDesign, object: MetalObject): MetalHe
     throw new TanklightInputError([{ path: "object.position", message: `must lie on or above the surface (z ≥ ${d.surfaceHeight} m)`, value: base }], where);
   }
   const label = o.label ?? `${mat.name} ${o.kind}`;
-  const rs = Math.sqrt((w * MU0) / (2 * sigma)); // surface resistance, Ω
+  const rs = Math.sqrt((w * MU0) / (2 * sigma)); // surface resistance of one face, Ω
   let pLf: number, pFe: number, power: number, param: number, regime: MetalHeating["regime"], fluxRms: number, area: number, model: string;
   if (o.kind === "disc") {
     const a = o.radius, t = o.thickness;
@@ -181,7 +182,9 @@ export function metalHeating(design: SafetyDesign, object: MetalObject): MetalHe
       pLf += (sigma * t * w * w * phi2) / (4 * Math.PI * prof.rho[j]!) * (a / prof.rho.length);
     }
     const b0 = Math.hypot(prof.totalRe, prof.totalIm) / (Math.PI * a * a); // mean B_z, peak
-    pFe = fieldExcludingDiscPower(b0 / MU0, a, t, rs);
+    // a sheet thinner than about 2δ carries its current through the whole thickness: sheet resistance
+    // 1/(σt) for the jump 2H_t, i.e. 2/(σt) in place of the two faces' R_s (the larger of the two holds)
+    pFe = fieldExcludingDiscPower(b0 / MU0, a, t, Math.max(rs, 2 / (sigma * t)));
     param = (a * t) / (2 * delta * delta);
     power = 1 / (1 / pLf + 1 / pFe);
     regime = pLf < pFe / 3 ? "field-penetrating (low frequency)" : pFe < pLf / 3 ? "field-excluding (skin effect)" : "transition";
