@@ -242,6 +242,16 @@ export {
 } from "./safety/emission.ts";
 export { EMISSION_RULES, emissionRows, type EmissionRule, type EmissionRow } from "./safety/emissionLimits.ts";
 export { metalHeating, OBJECT_METALS, MetalObjectInput, type MetalObject, type MetalHeating } from "./safety/metalHeating.ts";
+export {
+  componentStress,
+  WINDING_TEMPERATURE_MODEL,
+  type ComponentStress,
+  type TransmitterStress,
+  type ReceiverStress,
+} from "./safety/componentStress.ts";
+export { checkRating, TYPICAL_INDICATOR_LED, WINDING_CURRENT_DENSITY, type RatingCheck } from "./safety/partRatings.ts";
+export { cautions, type Caution, type CautionContext } from "./safety/cautions.ts";
+export { safetyReport, DEFAULT_METAL_OBJECTS, type SafetyReport, type SafetyReportOptions } from "./safety/safetyReport.ts";
 
 // ── lib/report ───────────────────────────────────────────────────────────────
 /** Chart builders returning vega-lite specs: `chart.coverage(…)`, `chart.ledCurrent(…)`, … (lib/report/chart.ts). */
