@@ -11,4 +11,5 @@ export { waveformChart as waveform, spectrumChart as spectrum, type WaveformChar
 export { yieldHistogramChart as yieldHistogram, type YieldHistogramInput } from "./charts/yieldHistogram.ts";
 export { exposureChart as exposure, type ExposureChartInput } from "./charts/exposure.ts";
 export { tradeoffChart as tradeoff, paretoFront, type TradeoffChartInput, type TradeoffPoint } from "./charts/tradeoff.ts";
+export { measuredPredictedChart as measuredPredicted, type MeasuredPredictedInput } from "./charts/measuredPredicted.ts";
 export type { ChartSpec } from "./charts/spec.ts";
