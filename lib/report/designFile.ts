@@ -99,6 +99,7 @@ export type Design = z.output<typeof DesignFile>;
 /**
  * Validates a design (already parsed JSON).
  * @throws TanklightInputError whose issues carry the JSON path of each bad field.
+ * @example parseDesign({ name: "my pad" }) // → throws TanklightInputError (naming each missing field by its JSON path)
  */
 export function parseDesign(input: unknown): Design {
   return parseInput(DesignFile, input, "design file");
@@ -106,7 +107,7 @@ export function parseDesign(input: unknown): Design {
 
 /**
  * Reads a design file's text: size limit, JSON.parse (no evaluation), then the schema.
- * @example parseDesignText('{"name": …}').token.tuneTo // → 200000
+ * @example parseDesignText("[1, 2") // → throws TanklightInputError (not valid JSON)
  */
 export function parseDesignText(textIn: string): Design {
   const bytes = new TextEncoder().encode(textIn).length;
@@ -125,6 +126,7 @@ export function parseDesignText(textIn: string): Design {
 /**
  * The JSON Schema (draft 2020-12) of design files, for editors: quantities appear as
  * "a number in SI units or a string with a unit", with their dimension and an example.
+ * @example designJsonSchema().type // → "object"
  */
 export function designJsonSchema(): Record<string, unknown> {
   return z.toJSONSchema(DesignFile, {

@@ -104,6 +104,7 @@ function edge(lit: (s: number) => boolean, lo: number, hi: number, resolution = 
  * Runs a validated design and returns its notebook and key numbers.
  * @param design from parseDesign / parseDesignText.
  * @param options log: progress lines of the long steps.
+ * @example designReport(parseDesignText(readFileSync("casebook/designs/through-the-books.json", "utf8"))).notebook // the same report as the through-the-books scenario
  */
 export function designReport(design: Design, options: { readonly log?: (line: string) => void } = {}): { notebook: Notebook; results: DesignResults } {
   const nb = notebook(design.title, { subtitle: design.question, note: design.dataNote, log: options.log });
