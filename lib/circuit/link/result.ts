@@ -11,8 +11,11 @@ export interface Phasor {
   readonly im: number;
 }
 
-/** The transmitter's state. */
-export interface TransmitterState {
+/**
+ * The fields every tank element (transmitter or receiver) reports: its coil and capacitor,
+ * each as peak and RMS, and their losses.
+ */
+export interface TankState {
   readonly label: string;
   /** coil current, A peak */
   readonly coilCurrent: number;
@@ -21,12 +24,20 @@ export interface TransmitterState {
   /** voltage across the coil's terminals (its EMF of self and mutual induction plus its loss), V peak */
   readonly coilVoltage: number;
   readonly coilVoltageRms: number;
-  /** compensation capacitor voltage (including its ESR drop), V peak (0 without a capacitor) */
+  /** capacitor voltage (including its ESR drop), V peak (0 without a capacitor) */
   readonly capacitorVoltage: number;
   readonly capacitorVoltageRms: number;
-  /** compensation capacitor current, A peak */
+  /** capacitor current, A peak */
   readonly capacitorCurrent: number;
   readonly capacitorCurrentRms: number;
+  /** loss in the coil's series resistance, W */
+  readonly coilLoss: number;
+  /** loss in the capacitor's ESR, W */
+  readonly capacitorLoss: number;
+}
+
+/** The transmitter's state: its tank, and what the drive sees. */
+export interface TransmitterState extends TankState {
   /** current out of the drive's equivalent source, A peak */
   readonly sourceCurrent: number;
   readonly sourceCurrentRms: number;
@@ -37,10 +48,6 @@ export interface TransmitterState {
   readonly inputImpedance: Phasor;
   /** impedance the receivers add in series with the transmitter coil, Σ jωM₀ⱼIⱼ / I₀, Ω */
   readonly reflectedImpedance: Phasor;
-  /** loss in the coil's series resistance, W */
-  readonly coilLoss: number;
-  /** loss in the capacitor's ESR, W */
-  readonly capacitorLoss: number;
   /** loss in the drive's source resistance, W */
   readonly driverLoss: number;
 }
@@ -56,21 +63,10 @@ export interface LedState {
   readonly lit: boolean;
 }
 
-/** One receiver's state. */
-export interface ReceiverState {
-  readonly label: string;
+/** One receiver's state: its tank, the load and its LEDs. */
+export interface ReceiverState extends TankState {
   /** EMF induced by all other coils, V peak */
   readonly emf: number;
-  readonly coilCurrent: number;
-  readonly coilCurrentRms: number;
-  readonly coilCurrentPhasor: Phasor;
-  /** voltage across the coil's terminals, V peak */
-  readonly coilVoltage: number;
-  readonly coilVoltageRms: number;
-  readonly capacitorVoltage: number;
-  readonly capacitorVoltageRms: number;
-  readonly capacitorCurrent: number;
-  readonly capacitorCurrentRms: number;
   /** fundamental voltage across the load, V peak (the solved tank amplitude) */
   readonly loadVoltage: number;
   readonly loadVoltageRms: number;
@@ -79,8 +75,6 @@ export interface ReceiverState {
   readonly loadCurrentRms: number;
   /** power into the load, W */
   readonly loadPower: number;
-  readonly coilLoss: number;
-  readonly capacitorLoss: number;
   readonly leds: readonly LedState[];
   /** at least one LED lit */
   readonly lit: boolean;
