@@ -1,0 +1,270 @@
+/**
+ * The integrator state of one simulation and its preallocated workspace: the present solution,
+ * the reactive elements' history (and a saved copy for rejected steps), the switch states, the
+ * diodes' linearisation, the cached linear matrix and its factors. One step at a time
+ * ({@link Engine.tryStep}); where the steps fall is decided by ./stepControl.ts.
+ * Nothing is allocated per step.
+ */
+import { TanklightInputError } from "../../errors.ts";
+import { luFactor, luSolve, SingularMatrixError } from "../../math/lu.ts";
+import type { CompiledCircuit } from "./compile.ts";
+import { TransientConvergenceError } from "./errors.ts";
+import { stampDiodes, stampLinear, stampRhs, updateHistory, type ReactiveHistory } from "./stamps.ts";
+
+const VOLTAGE_ABSTOL = 1e-6; // V — Newton convergence floor on node voltages
+const CURRENT_ABSTOL = 1e-9; // A — Newton convergence floor on branch currents
+const NEWTON_RELTOL = 1e-7;
+
+function history(cc: CompiledCircuit, initial: boolean): ReactiveHistory {
+  return {
+    capV: initial ? Float64Array.from(cc.capacitors, (c) => c.v0) : new Float64Array(cc.capacitors.length),
+    capI: new Float64Array(cc.capacitors.length),
+    indI: initial ? Float64Array.from(cc.inductors, (l) => l.i0) : new Float64Array(cc.inductors.length),
+    indW: new Float64Array(cc.inductors.length),
+  };
+}
+
+/** The integrator state and its preallocated workspace. */
+export class Engine {
+  readonly cc: CompiledCircuit;
+  readonly n: number;
+  readonly nNodes: number;
+  /** solution at the current time */
+  readonly x: Float64Array;
+  private readonly xTry: Float64Array;
+  private readonly xSaved: Float64Array;
+  private readonly base: Float64Array;
+  private readonly work: Float64Array;
+  private readonly rhsBase: Float64Array;
+  private readonly pivots: Int32Array;
+  private readonly hist: ReactiveHistory;
+  private readonly saved: ReactiveHistory;
+  /** 1 closed, 0 open, per switch */
+  readonly switchState: Uint8Array;
+  private readonly diodeV: Float64Array;
+  /** diode currents of the last accepted solution (linearised at the converged voltage), A */
+  private readonly diodeI: Float64Array;
+  private readonly diodeG: Float64Array;
+  private readonly diodeI0: Float64Array;
+  private readonly maxNewton: number;
+  // cache of the linear matrix
+  private baseAlpha = NaN;
+  private baseSwitchVersion = -1;
+  /** bumped whenever a switch state changes (invalidates the cached matrix) */
+  switchVersion = 0;
+  private factoredAlpha = NaN;
+  private factoredVersion = -1;
+  /** simulated time of the present solution, s */
+  t = 0;
+  /** the next step must be backward Euler (start, or just after a switching instant) */
+  afterDiscontinuity = true;
+  /** present sub-step length, s (halved on Newton failure, doubled back on success) */
+  subStep = 0;
+  steps = 0;
+  rejected = 0;
+  newtonIterations = 0;
+  factorizations = 0;
+  switchingEvents = 0;
+  readonly warnings: string[] = [];
+
+  constructor(cc: CompiledCircuit, maxNewton: number) {
+    this.cc = cc;
+    this.n = cc.size;
+    this.nNodes = cc.nodeNames.length;
+    this.maxNewton = maxNewton;
+    const n = this.n;
+    this.x = new Float64Array(n);
+    this.xTry = new Float64Array(n);
+    this.xSaved = new Float64Array(n);
+    this.base = new Float64Array(n * n);
+    this.work = new Float64Array(n * n);
+    this.rhsBase = new Float64Array(n);
+    this.pivots = new Int32Array(n);
+    this.hist = history(cc, true);
+    this.saved = history(cc, false);
+    this.switchState = new Uint8Array(cc.switches.length);
+    this.diodeV = new Float64Array(cc.diodes.length);
+    this.diodeI = new Float64Array(cc.diodes.length);
+    this.diodeG = new Float64Array(cc.diodes.length);
+    this.diodeI0 = new Float64Array(cc.diodes.length);
+  }
+
+  /** Sets the switch states at t = 0 and solves the t = 0 network (a backward-Euler step of 1e-4·h, state then restored). */
+  start(h: number): void {
+    this.cc.switches.forEach((s, i) => (this.switchState[i] = s.closed(0) ? 1 : 0));
+    this.switchVersion++;
+    this.subStep = h;
+    this.saveHistory();
+    const h0 = 1e-4 * h;
+    if (!this.tryStep(h0, h0, true)) {
+      throw new TransientConvergenceError(
+        `simulate: Newton's method did not converge at t = 0 (diodes: ${this.cc.diodes.map((d) => d.name).join(", ")})`,
+        0, h0, this.cc.diodes.map((d) => d.name),
+      );
+    }
+    // keep the node voltages for the t = 0 sample, restore the state
+    this.restoreHistory();
+    this.afterDiscontinuity = true;
+    this.t = 0;
+  }
+
+  /** Copies the state variables (capacitor voltages, then inductor currents) into `out`. */
+  readState(out: Float64Array): void {
+    out.set(this.hist.capV, 0);
+    out.set(this.hist.indI, this.hist.capV.length);
+  }
+
+  /** Saves the history and the solution (before a step that may be rejected). */
+  saveHistory(): void {
+    this.saved.capV.set(this.hist.capV);
+    this.saved.capI.set(this.hist.capI);
+    this.saved.indI.set(this.hist.indI);
+    this.saved.indW.set(this.hist.indW);
+    this.xSaved.set(this.x);
+  }
+
+  /** Restores the history saved by {@link saveHistory} (not the solution). */
+  restoreHistory(): void {
+    this.hist.capV.set(this.saved.capV);
+    this.hist.capI.set(this.saved.capI);
+    this.hist.indI.set(this.saved.indI);
+    this.hist.indW.set(this.saved.indW);
+  }
+
+  /** Restores the solution saved by {@link saveHistory}. */
+  restoreSolution(): void {
+    this.x.set(this.xSaved);
+  }
+
+  /** LU-factorises `m` in place (lib/math/lu.ts); a zero pivot becomes an error naming the elements. */
+  private factor(m: Float64Array): void {
+    this.factorizations++;
+    try {
+      luFactor(m, this.n, this.pivots);
+    } catch (e) {
+      if (e instanceof SingularMatrixError) this.singular(e.pivotIndex);
+      throw e;
+    }
+  }
+
+  /** Throws a TanklightInputError naming the unknown (and its elements) at a zero pivot. */
+  private singular(k: number): never {
+    const cc = this.cc;
+    let what: string;
+    if (k < this.nNodes) {
+      what = `node "${cc.nodeNames[k]}" (elements attached: ${cc.attached[k]!.join(", ")})`;
+    } else {
+      what = cc.unknownNames[k]!;
+    }
+    throw new TanklightInputError(
+      [
+        {
+          path: "circuit",
+          message: `singular circuit matrix at t = ${this.t} s: the ${what} is not determined (e.g. inductors coupled with |k| ≈ 1 in parallel, or element values far out of scale)`,
+          value: cc.unknownNames[k],
+        },
+      ],
+      "simulate",
+    );
+  }
+
+  /** Attempts one step to tNew of length hs; on success x and the history hold the new state. */
+  tryStep(tNew: number, hs: number, backwardEuler: boolean): boolean {
+    const alpha = backwardEuler ? 1 / hs : 2 / hs;
+    const theta = backwardEuler ? 0 : 1;
+    if (alpha !== this.baseAlpha || this.baseSwitchVersion !== this.switchVersion) {
+      stampLinear(this.cc, this.base, this.n, alpha, this.switchState);
+      this.baseAlpha = alpha;
+      this.baseSwitchVersion = this.switchVersion;
+    }
+    stampRhs(this.cc, this.rhsBase, tNew, alpha, theta, this.hist);
+    const ok = this.cc.diodes.length === 0 ? this.solveLinear(alpha) : this.solveNewton();
+    if (!ok) return false;
+    updateHistory(this.cc, this.x, alpha, theta, this.hist);
+    return true;
+  }
+
+  /** A linear circuit: one solve with the cached factors (refactored when α or a switch changed). */
+  private solveLinear(alpha: number): boolean {
+    const n = this.n;
+    if (this.factoredAlpha !== alpha || this.factoredVersion !== this.switchVersion) {
+      this.work.set(this.base);
+      this.factor(this.work);
+      this.factoredAlpha = alpha;
+      this.factoredVersion = this.switchVersion;
+    }
+    const x = this.x;
+    x.set(this.rhsBase);
+    luSolve(this.work, n, this.pivots, x);
+    for (let i = 0; i < n; i++) if (!Number.isFinite(x[i]!)) return false;
+    return true;
+  }
+
+  /**
+   * Newton on the diodes from the previous solution: each iteration stamps the diodes
+   * linearised at their present voltages, solves, and stops when every unknown and every diode
+   * voltage moved less than NEWTON_RELTOL·|x| + the absolute floor (after at least two iterations).
+   */
+  private solveNewton(): boolean {
+    const n = this.n;
+    const x = this.x;
+    const diodes = this.cc.diodes;
+    const nD = diodes.length;
+    this.factoredAlpha = NaN;
+    const xt = this.xTry;
+    for (let d = 0; d < nD; d++) {
+      const e = diodes[d]!;
+      this.diodeV[d] = (e.a >= 0 ? x[e.a]! : 0) - (e.b >= 0 ? x[e.b]! : 0);
+    }
+    for (let it = 0; it < this.maxNewton; it++) {
+      this.newtonIterations++;
+      const W = this.work;
+      W.set(this.base);
+      xt.set(this.rhsBase);
+      stampDiodes(this.cc, W, xt, n, this.diodeV, this.diodeG, this.diodeI0);
+      this.factor(W);
+      luSolve(W, n, this.pivots, xt);
+      let ok = true;
+      for (let i = 0; i < n; i++) {
+        const xi = xt[i]!;
+        if (!Number.isFinite(xi)) return false;
+        const tol = NEWTON_RELTOL * Math.abs(xi) + (i < this.nNodes ? VOLTAGE_ABSTOL : CURRENT_ABSTOL);
+        if (Math.abs(xi - x[i]!) > tol) ok = false;
+      }
+      for (let d = 0; d < nD; d++) {
+        const e = diodes[d]!;
+        const v = (e.a >= 0 ? xt[e.a]! : 0) - (e.b >= 0 ? xt[e.b]! : 0);
+        if (Math.abs(v - this.diodeV[d]!) > NEWTON_RELTOL * Math.abs(v) + VOLTAGE_ABSTOL) ok = false;
+        // current of the linearised diode at the solution (equals model.current(v) at convergence)
+        this.diodeI[d] = this.diodeI0[d]! + this.diodeG[d]! * (v - this.diodeV[d]!);
+        this.diodeV[d] = v;
+      }
+      x.set(xt);
+      if (ok && it > 0) return true;
+    }
+    return false;
+  }
+
+  /** Writes every element's current at the present solution into slot `slot` of the buffers, in compile order. */
+  elementCurrents(t: number, out: readonly Float64Array[], slot: number): void {
+    const cc = this.cc;
+    const x = this.x;
+    let k = 0;
+    for (const r of cc.resistors) out[k++]![slot] = r.g * this.across(r.a, r.b);
+    for (let i = 0; i < cc.capacitors.length; i++) out[k++]![slot] = this.hist.capI[i]!;
+    for (const l of cc.inductors) out[k++]![slot] = x[l.row]!;
+    for (const v of cc.voltageSources) out[k++]![slot] = -x[v.row]!;
+    for (const s of cc.currentSources) out[k++]![slot] = s.waveform(t);
+    for (let i = 0; i < cc.switches.length; i++) {
+      const s = cc.switches[i]!;
+      out[k++]![slot] = (this.switchState[i] ? s.gOn : s.gOff) * this.across(s.a, s.b);
+    }
+    for (let d = 0; d < cc.diodes.length; d++) out[k++]![slot] = this.diodeI[d]!;
+  }
+
+  /** v(a) − v(b) at the present solution (index −1 is ground). */
+  private across(a: number, b: number): number {
+    const x = this.x;
+    return (a >= 0 ? x[a]! : 0) - (b >= 0 ? x[b]! : 0);
+  }
+}
