@@ -10,6 +10,7 @@ import { conductorRadius } from "./mutualInductance.ts";
 import { selfInductance } from "./selfInductance.ts";
 import { poseFrame, type Frame } from "./frames.ts";
 import { coaxialTurns, groupLevels, momentLumps, type Lumps } from "./turnLumps.ts";
+import { polygonCoupling, type PolygonCouplingResult } from "./polygonCoupling.ts";
 import type { Coil, Filament, Pose } from "./types.ts";
 
 /** Options of {@link couplingEvaluator}. */
@@ -180,8 +181,11 @@ function checkCoil(c: Coil, field: string): void {
  * exact), the error of each level by Richardson's rule |M_ℓ − M_{ℓ−1}|/3 (error ∝ group size²)
  * times a safety factor 3.
  * Level C: per-pair adaptive line integrals (mutualInductance's method) where a receiver turn
- * grazes a transmitter wire. Coils that are not coaxial circles (polygons, tilted turns)
- * always use level C.
+ * grazes a transmitter wire. Where one coil is made of polygons (rectLoop, rectSpiral, PCB
+ * traces) and the other of polygons or coaxial circles, the straight-conductor fast path of
+ * polygonCoupling.ts takes the place of levels A–B (closed-form segment formulas, the same
+ * lumping and error estimate) and level C remains its fall-back. Other coils (tilted or
+ * off-centre circles, mixed filaments) always use level C.
  *
  * @param tx transmitter coil (own frame). @param rx receiver coil (own frame).
  * @param options `{ relTol? = 1e-3, absTol? (H), frequency? (Hz, for L₁, L₂) }`.
@@ -207,6 +211,9 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
   const clearance = conductorRadius(tx.conductor) + conductorRadius(rx.conductor);
   const stats = { lumped: 0, exact: 0 };
   const fast = txTurns !== undefined && rxTurns !== undefined;
+  // straight conductors: closed-form fast path (polygonCoupling.ts), exact sum where it declines
+  const poly = fast ? undefined : polygonCoupling(tx, rx, relTol, options.absTol);
+  const polyOut: PolygonCouplingResult = { mutual: 0, error: 0, method: "exact", minDist2: Infinity };
   const txLevels = fast ? groupLevels(txTurns) : [];
   const rxLevels = fast ? groupLevels(rxTurns) : [];
   const t0 = txLevels[0]!;
@@ -296,7 +303,13 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
   const mutual = (poseTx: Pose, poseRx: Pose): number => {
     const fTx = poseFrame(poseTx, "couplingEvaluator", "poseTx");
     const fRx = poseFrame(poseRx, "couplingEvaluator", "poseRx");
-    if (!fast) return exact(fTx, fRx);
+    if (!fast) {
+      if (poly?.evaluate(fTx, fRx, polyOut)) {
+        finish(polyOut.mutual, polyOut.error, polyOut.method, polyOut.minDist2);
+        return polyOut.mutual;
+      }
+      return exact(fTx, fRx);
+    }
     const Rt = fTx.R, Rr = fRx.R;
     const nW0 = Rr[2]!, nW1 = Rr[5]!, nW2 = Rr[8]!;
     nx = Rt[0]! * nW0 + Rt[3]! * nW1 + Rt[6]! * nW2;
