@@ -82,6 +82,7 @@ export {
 // straight conductors in closed form (segments, polygons, circle–polygon)
 export { straightFilamentMutual, polygonPairMutual } from "./em/straightMutual.ts";
 export { circlePolygonMutual } from "./em/circlePolygonMutual.ts";
+export { arrayCoupling, type ArrayCoupling, type ArrayTransmitter } from "./em/arrayCoupling.ts";
 // losses, self-capacitance, quality factor (losses)
 export { COPPER, ALUMINIUM, MATERIALS, material, resistivityAt, type Material } from "./em/materials.ts";
 export { skinDepth } from "./em/losses/skinDepth.ts";

@@ -182,7 +182,7 @@ function isNear(near: Int32Array, count: number, k: number): boolean {
  * @param options.relTol relative accuracy target, default 1e-10.
  * @returns M, H. Throws TanklightInputError on bad input or when the circle passes through the
  *   polygon's wire (the rule cannot resolve it).
- * @example circlePolygonMutual({ center: [0,0,0.02], axis: [0,0,1], radius: 0.006 }, square40mm) // token over a square loop
+ * @example circlePolygonMutual({ center: [0,0,0.02], axis: [0,0,1], radius: 0.006 }, [[-0.02,-0.02,0],[0.02,-0.02,0],[0.02,0.02,0],[-0.02,0.02,0]]) // → 1.2810e-9 (a 6 mm turn 20 mm above a 40 mm square)
  * @see loopMutualInductance (circle–circle), polygonPairMutual (polygon–polygon)
  */
 export function circlePolygonMutual(

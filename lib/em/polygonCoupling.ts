@@ -180,6 +180,15 @@ export function polygonCoupling(tx: Coil, rx: Coil, relTol: number, absTol: numb
       if (!sum.ok) return false;
       const m1 = sum.m, e1 = sum.err, e8 = sum.coarseErr;
       let minD2 = sum.minD2;
+      const guarded = minD2 > GUARD * GUARD * l0.extent * l0.extent;
+      // far from every wire the lumping estimate is small whatever M₀ is (|M₁ − M₀| ≤ 2|M₁| + e8):
+      // accept without the order-0 rings
+      const shrink1 = Math.min(1, (LUMP_SAFETY * l0.extent * l0.extent) / minD2);
+      const bound = (2 * Math.abs(m1) + e8 + e1) * shrink1 + e1;
+      if (guarded && accept(bound, m1)) {
+        out.mutual = m1; out.error = bound; out.method = "lumped"; out.minDist2 = minD2;
+        return true;
+      }
       // order 0 only feeds the lumping estimate, scaled by 3(extent/D)² ≪ 1: the fixed 8-node
       // rule, whose error is taken as that of the order-1 rings at 8 nodes (|M₁ − M₁(8 nodes)| + e1)
       rings(l0, 8);

@@ -43,8 +43,7 @@ function point(v: unknown, path: string, where: string): Vec3 {
  *
  * @param p start, m. @param q end, m (≠ p). @param current I, A. @param x field point, m, off the segment.
  * @returns A, T·m (Wb/m). Throws TanklightInputError on non-finite input, p = q, or x on the segment.
- * @example segmentVectorPotential([0,0,-1], [0,0,1], 1, [0.01,0,0]) // → [0, 0, 1.0597e-6] ≈ (μ₀/2π)·ln(2L/d)
- *   (1 m either side of a point 1 cm away; the infinite-wire potential grows without bound as L → ∞)
+ * @example segmentVectorPotential([0,0,-1], [0,0,1], 1, [0.01,0,0]) // → [0, 0, 1.0597e-6] (1 m either side of a point 1 cm away: ≈ (μ₀/2π)·ln(2L/d); it grows without bound as L → ∞)
  * @see loopVectorPotential, straightFilamentMutual
  */
 export function segmentVectorPotential(p: Vec3, q: Vec3, current: number, x: Vec3): [number, number, number] {

@@ -194,8 +194,7 @@ function overlap(where: string, path: string): never {
  * @param p1, q1 ends of segment 1, m (world coordinates). @param p2, q2 ends of segment 2, m.
  * @returns M per turn, H. Throws TanklightInputError for non-finite points or collinear
  *   segments that overlap (M infinite).
- * @example straightFilamentMutual([0,0,0], [0.1,0,0], [0,0.01,0], [0.1,0.01,0]) // → 4.0290e-8 (two 10 cm wires 1 cm apart)
- *   straightFilamentMutual([0,0,0], [0.1,0,0], [0.1,0,0], [0.2,0,0]) // → (μ₀/4π)·0.2·ln 2 = 1.3863e-8 (collinear, touching)
+ * @example straightFilamentMutual([0,0,0], [0.1,0,0], [0,0.01,0], [0.1,0.01,0]) // → 4.1865e-8 (two 10 cm wires 1 cm apart);  straightFilamentMutual([0,0,0], [0.1,0,0], [0.1,0,0], [0.2,0,0]) // → 1.3863e-8 (collinear and touching: (μ₀/4π)·0.2·ln 2)
  * @see polygonPairMutual, segmentVectorPotential
  */
 export function straightFilamentMutual(p1: Vec3, q1: Vec3, p2: Vec3, q2: Vec3): number {
@@ -234,7 +233,7 @@ export function packedPolygonMutual(a: Float64Array, b: Float64Array): number {
  *
  * @param a vertices of polygon a, m, ≥ 2 points. @param b vertices of polygon b, m, ≥ 2 points.
  * @returns M, H. Throws TanklightInputError for non-finite vertices or overlapping collinear sides.
- * @example polygonPairMutual(square(0.1, z = 0), square(0.1, z = 0.05)) // two coaxial 10 cm squares 5 cm apart
+ * @example polygonPairMutual([[-0.05,-0.05,0],[0.05,-0.05,0],[0.05,0.05,0],[-0.05,0.05,0]], [[-0.05,-0.05,0.05],[0.05,-0.05,0.05],[0.05,0.05,0.05],[-0.05,0.05,0.05]]) // → 3.2228e-8 (two coaxial 10 cm squares 5 cm apart)
  * @see straightFilamentMutual, circlePolygonMutual
  */
 export function polygonPairMutual(a: readonly Vec3[], b: readonly Vec3[]): number {
