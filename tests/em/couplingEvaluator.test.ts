@@ -4,7 +4,7 @@ import { mutualInductanceChecked } from "../../lib/em/mutualInductance.ts";
 import { selfInductance } from "../../lib/em/selfInductance.ts";
 import type { Coil, Pose } from "../../lib/em/types.ts";
 import { expectRelClose } from "../helpers/expectRelClose.ts";
-import { handRoundCoil, rectTurn } from "./helpers.ts";
+import { handRoundCoil } from "./helpers.ts";
 
 const tx = handRoundCoil(0.02, 3, 2, 5e-4);
 const token = handRoundCoil(0.004, 8, 2, 2e-4);
@@ -41,13 +41,14 @@ describe("couplingEvaluator", () => {
     expectRelClose(ev.mutual({ position: [s, s, s] }, { ...pr, position: [0.01 + s, s, 0.012 + s] }), ev.mutual(P0, pr), 1e-9, "translation");
   });
 
-  it("falls back to the exact sum for coils that are not coaxial circles, and warns on overlapping conductors", () => {
-    const sq = rectTurn(0.03, 0.03, 5e-4);
-    const ev = couplingEvaluator(sq, token);
+  it("falls back to the exact sum for coils that are neither coaxial circles nor polygons, and warns on overlapping conductors", () => {
+    // a transmitter with one turn tilted off the coil axis (polygons take the straight-conductor path: polygonCoupling.test.ts)
+    const tilted: Coil = { ...tx, filaments: [...tx.filaments, { kind: "circle", center: [0, 0, 0.002], axis: [0.3, 0, 1], radius: 0.02, turns: 1 }] };
+    const ev = couplingEvaluator(tilted, token);
     const p: Pose = { position: [0.005, 0, 0.01] };
     const r = ev.evaluate(P0, p);
     expect(r.method).toBe("exact");
-    expectRelClose(r.mutual, mutualInductanceChecked(sq, P0, token, p).value, 1e-6, "polygon transmitter");
+    expectRelClose(r.mutual, mutualInductanceChecked(tilted, P0, token, p).value, 1e-6, "tilted-turn transmitter");
     const ev2 = couplingEvaluator(tx, token);
     // a token turn standing upright (axis y) whose rim dips into the transmitter's winding window,
     // 0.29 mm from a transmitter wire (the wire radii sum to 0.35 mm): conductors overlap
