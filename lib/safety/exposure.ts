@@ -68,7 +68,8 @@ export interface ReferenceLevelVerdict {
   /** 20·log10(limit / worst field), dB (negative when exceeded) */
   readonly marginDb?: number;
   /**
-   * height above the surface from which the level is met at every accessible point, m: 0 when
+   * lowest grid height above the surface from which the level is met at every accessible point
+   * of every higher level, m (conservative to one grid spacing: the level below fails); 0 when
    * met everywhere; undefined when not met even at the top of the assessed space.
    */
   readonly compliantAbove?: number;
@@ -170,15 +171,14 @@ function gridOf(o: z.output<typeof ExposureOptionsInput>, sources: readonly Fiel
   return { xs, ys, heights: linspace(hr[0], hr[1], nz), nx, ny };
 }
 
-/** Height above which every level's maximum stays ≤ limit, interpolating ln B linearly in height between levels. */
+/**
+ * The lowest grid height from which every level's maximum stays ≤ limit (conservative: the
+ * true height lies between it and the grid level below), or undefined when the top level fails.
+ */
 function compliantAbove(profile: readonly { height: number; flux: number }[], limit: number): number | undefined {
   let k = profile.length;
   while (k > 0 && profile[k - 1]!.flux <= limit) k--;
-  if (k === profile.length) return undefined;
-  if (k === 0) return 0;
-  const a = profile[k - 1]!, b = profile[k]!;
-  const t = (Math.log(a.flux) - Math.log(limit)) / (Math.log(a.flux) - Math.log(b.flux));
-  return a.height + t * (b.height - a.height);
+  return k === profile.length ? undefined : profile[k]!.height;
 }
 
 function verdictText(ratio: number, what: string): { verdict: "meets" | "exceeds"; text: string; marginDb: number } {
@@ -280,7 +280,7 @@ export function exposureCheck(design: SafetyDesign, options: ExposureOptions = {
       const ratio = worstB / lv.flux;
       const v = verdictText(ratio, `${lv.row} (${fmtT(lv.flux)} RMS)`);
       const above = compliantAbove(profile, lv.flux);
-      const where2 = above === undefined ? `; not met anywhere up to ${fmtM(g.heights[g.heights.length - 1]!)} above the surface` : above > 0 ? `; met from ${fmtM(above)} above the surface` : "";
+      const where2 = above === undefined ? `; not met anywhere up to ${fmtM(g.heights[g.heights.length - 1]!)} above the surface` : above > 0 ? `; met from ${fmtM(above)} above the surface (grid level; the one below fails)` : "";
       referenceLevels.push({
         standard: s.id, population: pop, verdict: v.verdict, limit: lv.flux, limitH: lv.fieldStrength, row: lv.row, status: lv.status,
         ratio, marginDb: v.marginDb, ...(above !== undefined ? { compliantAbove: above } : {}),
