@@ -20,6 +20,7 @@ export {
   type Dimension,
   type DimensionInfo,
   type QuantityInput,
+  type FormatOptions,
 } from "./units.ts";
 
 // ── lib/em ───────────────────────────────────────────────────────────────────

@@ -363,6 +363,18 @@ const PREFIX_OFFSET = 10;
  */
 const UNPREFIXED = new Set(["", "%", "ppm", "°C", "°", "deg", "degC", "dB", "dBm", "dBµA/m", "dBµV/m", "dBuA/m", "dBuV/m", "rad", "sr", "K", "°F"]);
 
+/** Options of {@link formatQuantity}. */
+export interface FormatOptions {
+  /** significant figures, integer 1–17, default 3 */
+  readonly digits?: number;
+  /**
+   * the resolution of the number, in SI units of `unit` (≥ 0, default 0): a value whose
+   * magnitude is below it prints as "0 <unit>" — e.g. `floor: 1e-9` for an LED current that a
+   * solver computed to 1 nA, so a token out of reach shows "0 A" instead of "718 yA"
+   */
+  readonly floor?: number;
+}
+
 /**
  * Format an SI number in engineering notation with an SI prefix: one to three integer
  * digits, `digits` significant figures, prefix between quecto and quetta.
@@ -374,29 +386,77 @@ const UNPREFIXED = new Set(["", "%", "ppm", "°C", "°", "deg", "degC", "dB", "d
  * prefix attaches to the first unit factor; when that factor carries a power ("m²", "m^2",
  * "m³") the prefix is scaled accordingly (1.5e-6 m² → "1.50 mm²"). Pass the SI unit without
  * a prefix ("m", not "mm"). Output parses back with {@link parseQuantity} where the unit is one
- * it knows.
+ * it knows. Values below `floor` in magnitude print as 0 (a stated resolution: numbers far
+ * below what the computation resolves, such as 7e-22 A from a token out of reach, are noise,
+ * not a reading).
  *
- * @param x value in SI units of `unit`, not NaN.
+ * @param x value in SI units of `unit`, not NaN; or a quantity string ("12 mH") when `unit` is
+ *   the SI unit of one of the {@link DIMENSIONS} (it is parsed with {@link parseQuantity} first).
  * @param unit SI unit symbol, e.g. "F", "Hz", "Ω", "A/m", "m²"; "" for a plain number.
- * @param digits significant figures, integer 1–17, default 3.
+ * @param digits significant figures, integer 1–17, default 3; or `{ digits?, floor? }`.
  * @returns the formatted string.
  * @example formatQuantity(4.7e-9, "F") // → "4.70 nF"
  * @example formatQuantity(217000, "Hz") // → "217 kHz"
  * @example formatQuantity(0, "F") // → "0 F"
+ * @example formatQuantity("12 mH", "H") // → "12.0 mH"
+ * @example formatQuantity(7.18e-22, "A", { floor: 1e-12 }) // → "0 A"
  */
-export function formatQuantity(x: number, unit: string, digits = 3): string {
-  if (!(Number.isInteger(digits) && digits >= 1 && digits <= 17)) {
+export function formatQuantity(x: number | string, unit: string, digits: number | FormatOptions = 3): string {
+  const opts: FormatOptions = typeof digits === "number" ? { digits } : digits ?? {};
+  const figures = opts.digits ?? 3;
+  if (!(Number.isInteger(figures) && figures >= 1 && figures <= 17)) {
     throw new TanklightInputError(
-      [{ path: "digits", message: "must be an integer from 1 to 17", value: digits, expected: "1–17" }],
+      [{ path: "digits", message: "must be an integer from 1 to 17", value: figures, expected: "1–17" }],
       "formatQuantity",
     );
   }
-  if (Number.isNaN(x)) {
+  const floor = opts.floor ?? 0;
+  if (!(Number.isFinite(floor) && floor >= 0)) {
+    throw new TanklightInputError(
+      [{ path: "floor", message: `must be a finite number ≥ 0 in ${unit || "SI units"}`, value: floor, expected: "≥ 0" }],
+      "formatQuantity",
+    );
+  }
+  if (typeof unit !== "string") {
+    throw new TanklightInputError(
+      [{ path: "unit", message: "must be an SI unit symbol such as 'H', 'Hz' or '' for a plain number", value: unit }],
+      "formatQuantity",
+    );
+  }
+  if (typeof x === "string") x = parseForFormat(x, unit);
+  if (typeof x !== "number" || Number.isNaN(x)) {
     throw new TanklightInputError(
       [{ path: "x", message: `must be a number in ${unit || "SI units"}`, value: x, expected: "not NaN" }],
       "formatQuantity",
     );
   }
+  if (Math.abs(x) < floor) x = 0;
+  return formatNumber(x, unit, figures);
+}
+
+/** A quantity string given to formatQuantity: parsed in the dimension whose SI unit is `unit`, or refused. */
+function parseForFormat(x: string, unit: string): number {
+  const dimension = DIMENSION_NAMES.find((d) => DIMENSIONS[d].unit === unit);
+  if (dimension === undefined) {
+    throw new TanklightInputError(
+      [
+        {
+          path: "x",
+          message: `a quantity string is read only when unit is the SI unit of a known dimension (${DIMENSION_NAMES.filter((d) => DIMENSIONS[d].unit !== "")
+            .map((d) => `'${DIMENSIONS[d].unit}'`)
+            .join(", ")}); pass the number in ${unit} instead`,
+          value: x,
+          expected: `a number in ${unit}`,
+        },
+      ],
+      "formatQuantity",
+    );
+  }
+  return parseQuantity(x, dimension, "formatQuantity: x");
+}
+
+/** formatQuantity's body for a checked number. */
+function formatNumber(x: number, unit: string, digits: number): string {
   const space = unit === "" ? "" : " ";
   if (x === Infinity) return `∞${space}${unit}`;
   if (x === -Infinity) return `-∞${space}${unit}`;

@@ -368,6 +368,32 @@ describe("formatQuantity", () => {
   });
 });
 
+describe("formatQuantity: strings and a stated floor", () => {
+  it("formats a quantity string when the unit is the SI unit of a dimension", () => {
+    expect(formatQuantity("12 mH", "H")).toBe("12.0 mH");
+    expect(formatQuantity("217 kHz", "Hz", 4)).toBe("217.0 kHz");
+    expect(formatQuantity("0.5", "")).toBe("0.500");
+  });
+
+  it("refuses a quantity string it cannot read in that unit, saying what to pass", () => {
+    expect(() => formatQuantity("12 mH", "Hz")).toThrowErrorMatchingInlineSnapshot(
+      `[TanklightInputError: formatQuantity: x: expected a frequency like '217 kHz', got '12 mH' (an inductance)]`,
+    );
+    expect(() => formatQuantity("-15 dBuA/m", "dBµA/m")).toThrow(/pass the number in dBµA\/m instead/);
+    expect(() => formatQuantity(null as unknown as number, "H")).toThrow(TanklightInputError);
+  });
+
+  it("prints values below the stated floor as 0, and keeps everything above it", () => {
+    // a token out of reach: 7.18e-22 A is far below any current a solver resolves
+    expect(formatQuantity(7.18e-22, "A", { floor: 1e-12 })).toBe("0 A");
+    expect(formatQuantity(-7.18e-22, "A", { floor: 1e-12 })).toBe("0 A");
+    expect(formatQuantity(2.5e-12, "A", { floor: 1e-12 })).toBe("2.50 pA");
+    expect(formatQuantity(4.7e-9, "F", { digits: 2 })).toBe("4.7 nF");
+    expect(() => formatQuantity(1, "A", { floor: -1 })).toThrow(TanklightInputError);
+    expect(() => formatQuantity(1, "A", { floor: NaN })).toThrow(TanklightInputError);
+  });
+});
+
 describe("types", () => {
   it("has the documented signatures", () => {
     expectTypeOf(parseQuantity).parameters.toEqualTypeOf<[number | string, Dimension, (string | undefined)?]>();
