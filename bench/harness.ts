@@ -1,56 +1,89 @@
 /**
- * A tiny benchmark harness (docs/design.md §8): each workload runs in batches until enough time
- * has passed; the median time per call over the batches is printed with the workload size
- * and, where an issue sets one, the target.
+ * The benchmark harness (docs/design.md §8). Each workload is warmed up (its code compiled by
+ * the engine before timing), then timed in several rounds; each round is a batch of calls
+ * calibrated to last about 10 ms (at least one call), and the time per call of every round is
+ * kept. The printed figures are the minimum (the least disturbed round: what the code costs)
+ * and the median (what a user sees on this machine). Workloads that name a `peer` are printed
+ * with the ratio peer/this, taken from the two minima of the same run, so the figure holds on
+ * a shared, noisy machine where absolute times wander by 2–5×.
  */
 
-/** One workload: `fn` is called `batch` times per sample (default: calibrated). */
+/** One workload: `fn` is called `batch` times per round (calibrated). */
 export interface Workload {
   /** e.g. "ellipticK+E pair" */
   readonly name: string;
   /** what one call does, e.g. "1 evaluation", "121×61 poses" */
   readonly size: string;
   readonly fn: () => unknown;
-  /** target time per call, seconds (from the issue), printed beside the result */
+  /** target time per call, seconds (from the issue), judged on the minimum */
   readonly target?: number;
   /** minimum total time to spend measuring, s (default 0.5) */
   readonly minTime?: number;
+  /** minimum number of rounds (default 7) */
+  readonly rounds?: number;
+  /** warm-up time before measuring, s (default 0.2; at least one call) */
+  readonly warmup?: number;
+  /**
+   * the name of another workload of the same file, measured before this one, to print a ratio
+   * against: `ratio` = that workload's min / this one's min
+   */
+  readonly against?: string;
+  /** the smallest acceptable `against` ratio (e.g. 10: at least ten times faster), judged on the minima */
+  readonly targetRatio?: number;
+  /** the largest acceptable ratio this/against (e.g. 1.3: at most 1.3× slower than the reference) */
+  readonly maxSlowdown?: number;
 }
 
 export interface BenchResult {
   readonly name: string;
   readonly size: string;
-  /** median seconds per call */
+  /** fastest round, seconds per call */
+  readonly min: number;
+  /** median round, seconds per call */
   readonly median: number;
   readonly target?: number;
-  readonly samples: number;
+  readonly rounds: number;
 }
 
-let sink: unknown;
+/** Results are written here so the engine cannot drop the calls as dead code. */
+const sink: { value: unknown } = { value: undefined };
 
-/** Runs one workload and returns its median time per call. */
+/** Runs one workload: warm-up, calibration, then rounds until both minTime and the round count are reached. */
 export function runWorkload(w: Workload): BenchResult {
   const minTime = w.minTime ?? 0.5;
-  // calibrate the batch so one sample takes ≈ 10 ms (at least one call)
-  let batch = 1;
-  for (;;) {
+  const minRounds = w.rounds ?? 7;
+  const warmEnd = performance.now() + 1000 * (w.warmup ?? 0.2);
+  let last = 0;
+  do {
     const t0 = performance.now();
-    for (let i = 0; i < batch; i++) sink = w.fn();
+    sink.value = w.fn();
+    last = performance.now() - t0;
+  } while (performance.now() < warmEnd);
+  // calibrate the batch so one round takes ≈ 10 ms (at least one call; long calls need none)
+  let batch = 1;
+  while (last < 10) {
+    const t0 = performance.now();
+    for (let i = 0; i < batch; i++) sink.value = w.fn();
     const dt = (performance.now() - t0) / 1000;
     if (dt > 0.01 || batch > 1e8) break;
     batch *= dt < 1e-4 ? 16 : 2;
   }
-  const samples: number[] = [];
+  const rounds: number[] = [];
   const start = performance.now();
-  while (samples.length < 5 || ((performance.now() - start) / 1000 < minTime && samples.length < 200)) {
+  while (rounds.length < minRounds || ((performance.now() - start) / 1000 < minTime && rounds.length < 200)) {
     const t0 = performance.now();
-    for (let i = 0; i < batch; i++) sink = w.fn();
-    samples.push((performance.now() - t0) / 1000 / batch);
+    for (let i = 0; i < batch; i++) sink.value = w.fn();
+    rounds.push((performance.now() - t0) / 1000 / batch);
   }
-  samples.sort((a, b) => a - b);
-  const median = samples[Math.floor(samples.length / 2)]!;
-  void sink;
-  return { name: w.name, size: w.size, median, target: w.target, samples: samples.length };
+  rounds.sort((a, b) => a - b);
+  return {
+    name: w.name,
+    size: w.size,
+    min: rounds[0]!,
+    median: rounds[Math.floor(rounds.length / 2)]!,
+    ...(w.target === undefined ? {} : { target: w.target }),
+    rounds: rounds.length,
+  };
 }
 
 /** Formats seconds with an SI prefix, e.g. 4.2e-8 → "42.0 ns". */
@@ -61,8 +94,19 @@ export function formatSeconds(s: number): string {
   return `${(s * 1e9).toFixed(1)} ns`;
 }
 
-/** One printed line: name, size, median, and the target with a verdict where there is one. */
-export function formatResult(r: BenchResult): string {
-  const target = r.target === undefined ? "" : `  target ≤ ${formatSeconds(r.target)} ${r.median <= r.target ? "met" : "MISSED"}`;
-  return `${r.name.padEnd(58)} ${r.size.padEnd(26)} median ${formatSeconds(r.median).padStart(12)}${target}`;
+/** One printed line: name, size, min and median, the target with a verdict, the ratio to its reference. */
+export function formatResult(r: BenchResult, w?: Workload, reference?: BenchResult): string {
+  const parts = [
+    `${r.name.padEnd(60)} ${r.size.padEnd(24)} min ${formatSeconds(r.min).padStart(11)}  median ${formatSeconds(r.median).padStart(11)}  (${r.rounds} rounds)`,
+  ];
+  if (r.target !== undefined) parts.push(`target ≤ ${formatSeconds(r.target)} ${r.min <= r.target ? "met" : "MISSED"}`);
+  if (w?.against !== undefined && reference !== undefined) {
+    const ratio = reference.min / r.min;
+    const medRatio = reference.median / r.median;
+    let verdict = "";
+    if (w.targetRatio !== undefined) verdict = ` target ≥ ${w.targetRatio}× ${ratio >= w.targetRatio ? "met" : "MISSED"}`;
+    if (w.maxSlowdown !== undefined) verdict = ` target ≤ ${w.maxSlowdown}× of it ${1 / ratio <= w.maxSlowdown ? "met" : "MISSED"}`;
+    parts.push(`vs "${w.against}": ${ratio >= 1 ? `${ratio.toFixed(2)}× faster` : `${(1 / ratio).toFixed(2)}× its time`} (min; median ${medRatio.toFixed(2)})${verdict}`);
+  }
+  return parts.join("  ");
 }

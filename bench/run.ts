@@ -1,20 +1,26 @@
 /**
  * `npm run bench` — runs every bench/*.bench.ts module (each exports `workloads: Workload[]`)
- * and prints one line per workload. `npm run bench -- em` runs only files whose name contains "em".
+ * and prints one line per workload: min and median per call over the rounds, the target
+ * verdict, and the ratio to the workload named in `against` (measured earlier in the same run).
+ * `npm run bench -- em` runs only files whose name contains "em".
  */
 import { readdirSync } from "node:fs";
 import { dirname, join } from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
-import { formatResult, runWorkload, type Workload } from "./harness.ts";
+import { formatResult, runWorkload, type BenchResult, type Workload } from "./harness.ts";
 
 const here = dirname(fileURLToPath(import.meta.url));
 const filter = process.argv[2];
 const files = readdirSync(here)
   .filter((f) => f.endsWith(".bench.ts") && (!filter || f.includes(filter)))
   .sort();
+console.log(`tanklight benchmarks — ${new Date().toISOString()}, Node ${process.version}; times per call, min and median over rounds`);
 for (const file of files) {
   const mod = (await import(pathToFileURL(join(here, file)).href)) as { workloads?: Workload[] };
+  const done = new Map<string, BenchResult>();
   for (const w of mod.workloads ?? []) {
-    console.log(formatResult(runWorkload(w)));
+    const r = runWorkload(w);
+    done.set(w.name, r);
+    console.log(formatResult(r, w, w.against === undefined ? undefined : done.get(w.against)));
   }
 }
