@@ -20,44 +20,15 @@
  * (the integral forms of Ortner et al. 2023, Magnetism 3(1), eqs. for Bulirsch's cel with
  * p = k_c², evaluated here by the AGM sum instead of cel). Near the wire (m > M_SPLIT) the
  * bracket ½ + mT − 2T cancels instead, and the textbook forms of Simpson et al. 2001 are
- * exact to rounding there, so the kernel switches to them.
+ * exact to rounding there, so the kernel switches to them. The AGM itself is agmScaledSum of
+ * lib/math/elliptic.ts, the one implementation in the code base.
  */
 import { MU0 } from "../constants.ts";
+import { agmScaledSum, type AgmSums } from "../math/elliptic.ts";
 
 /** Above this m the near-wire (textbook) field forms are used; below it the AGM-sum forms. */
 const M_SPLIT = 0.7;
-const HALF_PI = Math.PI / 2;
-/** Stop the AGM when c_{n+1}/a_{n+1} falls below this (the next step changes nothing at double precision). */
-const AGM_STOP = 1e-9;
 const MU0_OVER_PI = MU0 / Math.PI;
-
-/** K(m) of the last {@link agmScaledSum} call (module scratch: the kernels are hot paths and allocate nothing). */
-let agmK = 0;
-
-/**
- * The AGM with the scaled sum of the header: returns T = Σ 2^{n−1}(c_n/m)² and leaves
- * K = π/(2a_∞) in `agmK`. m = 4aρ/β², m₁ = α²/β², both from the geometry.
- */
-function agmScaledSum(m: number, m1: number): number {
-  let an = 1;
-  let bn = Math.sqrt(m1);
-  let g = 1 / (2 * (1 + bn)); // γ₁ = c₁/m
-  let T = g * g;
-  let w = 1;
-  // invariant: g = γ_{n+1} = (a_n − b_n)/(2m). Once c_{n+1} ≤ 1e-9·a, the next correction
-  // c_{n+2} ≈ c_{n+1}²/4 is below rounding, so a_{n+1} is the AGM limit and T is complete.
-  for (let i = 0; i < 30; i++) {
-    const an1 = 0.5 * (an + bn);
-    bn = Math.sqrt(an * bn);
-    an = an1;
-    if (m * g <= AGM_STOP * an) break;
-    g = (m * g * g) / (2 * (an + bn)); // c_{n+2} = c_{n+1}²/(4 a_{n+2})
-    w *= 2;
-    T += w * g * g;
-  }
-  agmK = HALF_PI / an;
-  return T;
-}
 
 /** Indices into the kernel's output array. */
 export const K_A_OVER_RHO = 0;
@@ -81,8 +52,9 @@ export function loopKernel(a: number, rho: number, z: number, out: Float64Array,
   const beta2 = dp * dp + z2;
   const m1 = alpha2 / beta2;
   const m = (4 * a * rho) / beta2;
-  const T = agmScaledSum(m, m1);
-  const K = agmK;
+  const sums: AgmSums = { K: 0, T: 0 };
+  agmScaledSum(m, m1, sums);
+  const K = sums.K, T = sums.T;
   const beta = Math.sqrt(beta2);
   const beta3 = beta2 * beta;
   out[K_A_OVER_RHO] = (8 * MU0_OVER_PI * a * a * K * T) / beta3;
@@ -116,8 +88,9 @@ export function coaxialKernel(ra: number, rb: number, d: number): number {
   const beta2 = dp * dp + d2;
   const m1 = alpha2 / beta2;
   const m = (4 * ra * rb) / beta2;
-  const T = agmScaledSum(m, m1);
-  return MU0 * m * m * Math.sqrt(beta2) * agmK * T;
+  const sums: AgmSums = { K: 0, T: 0 };
+  agmScaledSum(m, m1, sums);
+  return MU0 * m * m * Math.sqrt(beta2) * sums.K * sums.T;
 }
 
 /**
@@ -129,6 +102,7 @@ export function aOverRhoKernel(a: number, rho: number, z2: number, alpha2: numbe
   const beta2 = dp * dp + z2;
   const m1 = alpha2 / beta2;
   const m = (4 * a * rho) / beta2;
-  const T = agmScaledSum(m, m1);
-  return (8 * MU0_OVER_PI * a * a * agmK * T) / (beta2 * Math.sqrt(beta2));
+  const sums: AgmSums = { K: 0, T: 0 };
+  agmScaledSum(m, m1, sums);
+  return (8 * MU0_OVER_PI * a * a * sums.K * sums.T) / (beta2 * Math.sqrt(beta2));
 }

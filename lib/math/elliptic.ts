@@ -28,11 +28,11 @@ import { TanklightInputError } from "../errors.ts";
 
 const HALF_PI = Math.PI / 2;
 /**
- * AGM stop: |c_{n+1}| ≤ this × a_{n+1}. Convergence is quadratic: the next gap is
- * c_{n+2} = c_{n+1}²/(4a_{n+2}) ≤ 2.5e-17·a, below half an ulp, so a_{n+1} is already the limit
- * to rounding and the remaining terms of S are below 1e-30 (one AGM step fewer than 1e-15).
+ * AGM stop: c_{n+1} ≤ this × a_{n+1}. Convergence is quadratic: the next gap is
+ * c_{n+2} = c_{n+1}²/(4a_{n+2}) ≤ 2.5e-19·a, below rounding, so a_{n+1} is already the limit
+ * and the remaining terms of the sums are below 1e-34 relative.
  */
-const AGM_TOLERANCE = 1e-8;
+const AGM_STOP = 1e-9;
 /** ellipticKEInto: largest accepted |m + m₁ − 1| (both formed from the same geometry agree far better). */
 const SUM_TOLERANCE = 1e-12;
 /** Below this m₁, E is taken from Legendre's relation (two AGM runs) instead of K·(1 − S). */
@@ -44,37 +44,72 @@ export interface EllipticPair {
   readonly E: number;
 }
 
-// Results of the last agm() call (module scratch, so that the hot path allocates nothing).
-let agmK = 0;
-let agmS = 0;
+/** The two outputs of {@link agmScaledSum}: K and the scaled sum T. A small workspace the caller owns. */
+export interface AgmSums {
+  K: number;
+  T: number;
+}
 
-/** One AGM run for parameter m (c₀² = m) and complement m₁ (b₀ = √m₁): sets agmK and agmS = S(m). */
-function agm(m: number, m1: number): void {
-  let a = 1;
-  let b = Math.sqrt(m1);
-  let sum = 0.5 * m; // n = 0 term: 2^{−1}·c₀²
-  let weight = 0.5;
-  for (let i = 0; i < 40; i++) {
-    const c = 0.5 * (a - b);
-    const an = 0.5 * (a + b);
-    b = Math.sqrt(a * b);
-    a = an;
-    weight *= 2;
-    sum += weight * c * c;
-    if (Math.abs(c) <= AGM_TOLERANCE * a) break;
+/**
+ * The one AGM of the code base (A&S 1964 §17.6), in the scaled form that keeps every digit of
+ * the combination (1 − m/2)K − E: with a₀ = 1, b₀ = √m₁, c₀ = √m and c_{n+1} = c_n²/(4a_{n+1}),
+ * writes K = π/(2a_∞) and T = Σ_{n≥1} 2^{n−1}(c_n/m)² into `out`, so that
+ *
+ *   S(m) = Σ_{n≥0} 2^{n−1} c_n² = m/2 + m²·T,   E = K·(1 − S),   (1 − m/2)K − E = K·m²·T,
+ *
+ * every term of T positive (T → 1/16 as m → 0). m and m₁ = 1 − m are both formed by the caller
+ * from its geometry (m₁ > 0). No checks, no allocation: the hot-path core of ellipticKE,
+ * ellipticKEInto and the circular-filament kernels of lib/em (loopKernel.ts). A workspace
+ * created next to the call (`const w = { K: 0, T: 0 }`) costs nothing once the engine inlines.
+ *
+ * @param m parameter k², 0 ≤ m < 1.  @param m1 complement 1 − m, > 0.
+ * @param out receives K and T.
+ * @example agmScaledSum(0.5, 0.5, w) // w.K → 1.8540746773013719; E = w.K·(1 − 0.25 − 0.25·w.T) → 1.3506438810476755
+ */
+export function agmScaledSum(m: number, m1: number, out: AgmSums): void {
+  let an = 1;
+  let bn = Math.sqrt(m1);
+  let g = 1 / (2 * (1 + bn)); // γ₁ = c₁/m
+  let T = g * g;
+  let w = 1;
+  // invariant: g = γ_{n+1} = (a_n − b_n)/(2m). Once c_{n+1} ≤ 1e-9·a, the next correction
+  // c_{n+2} ≈ c_{n+1}²/4 is below rounding, so a_{n+1} is the AGM limit and T is complete.
+  for (let i = 0; i < 30; i++) {
+    const an1 = 0.5 * (an + bn);
+    bn = Math.sqrt(an * bn);
+    an = an1;
+    if (m * g <= AGM_STOP * an) break;
+    g = (m * g * g) / (2 * (an + bn)); // c_{n+2} = c_{n+1}²/(4 a_{n+2})
+    w *= 2;
+    T += w * g * g;
   }
-  agmK = HALF_PI / a;
-  agmS = sum;
+  out.K = HALF_PI / an;
+  out.T = T;
+}
+
+/** E near m = 1 (m₁ < 0.01) from Legendre's relation, given K: E = π/(2K′) + K·S(m₁), S(m₁) = m₁/2 + m₁²T′. */
+function ellipticENearOne(m: number, m1: number, K: number): number {
+  const sums: AgmSums = { K: 0, T: 0 };
+  agmScaledSum(m1, m, sums); // K′ = K(m₁), T′
+  return HALF_PI / sums.K + K * (0.5 * m1 + m1 * m1 * sums.T);
 }
 
 /** K and E for a validated pair (m, m₁ = 1 − m), m₁ > 0. */
 function pair(m: number, m1: number): EllipticPair {
-  agm(m, m1);
-  const K = agmK;
-  if (m1 >= LEGENDRE_BELOW_M1) return { K, E: K * (1 - agmS) };
-  agm(m1, m);
-  // Legendre's relation: E = π/(2K′) + K·S(m₁), K′ = K(m₁)
-  return { K, E: HALF_PI / agmK + K * agmS };
+  const sums: AgmSums = { K: 0, T: 0 };
+  agmScaledSum(m, m1, sums);
+  const K = sums.K;
+  return { K, E: m1 >= LEGENDRE_BELOW_M1 ? K * (1 - 0.5 * m - m * m * sums.T) : ellipticENearOne(m, m1, K) };
+}
+
+/** The error of ellipticKEInto for a bad (m, m₁). */
+function pairError(m: number, m1: number): TanklightInputError {
+  if (!(m >= 0 && m <= 1)) return domainError("ellipticKEInto", "m", m);
+  if (!(m1 >= 0 && m1 <= 1)) return domainError("ellipticKEInto", "m1", m1);
+  return new TanklightInputError(
+    [{ path: "m1", message: `must equal 1 − m to within ${SUM_TOLERANCE} (m = ${m})`, value: m1, expected: "m + m1 = 1" }],
+    "ellipticKEInto",
+  );
 }
 
 function domainError(where: string, field: string, value: number): TanklightInputError {
@@ -110,29 +145,20 @@ export function ellipticKEComplement(m1: number): EllipticPair {
  * Method: AGM, A&S 1964 §17.6; Legendre's relation 17.3.13 for E when m₁ < 0.01.
  * @example ellipticKEInto(0.5, 0.5, out) // out → [1.8540746773013719, 1.3506438810476755]
  */
-export function ellipticKEInto(m: number, m1: number, out: Float64Array, offset = 0): void {
-  if (!(m >= 0 && m <= 1)) throw domainError("ellipticKEInto", "m", m);
-  if (!(m1 >= 0 && m1 <= 1)) throw domainError("ellipticKEInto", "m1", m1);
-  if (!(Math.abs(m + m1 - 1) <= SUM_TOLERANCE)) {
-    throw new TanklightInputError(
-      [{ path: "m1", message: `must equal 1 − m to within ${SUM_TOLERANCE} (m = ${m})`, value: m1, expected: "m + m1 = 1" }],
-      "ellipticKEInto",
-    );
+export function ellipticKEInto(m: number, m1: number, out: Float64Array, offset?: number): void {
+  // one test on the hot path; the diagnosis only when it fails
+  if (!(m >= 0 && m1 >= 0 && Math.abs(m + m1 - 1) <= SUM_TOLERANCE && m <= 1 && m1 <= 1)) throw pairError(m, m1);
+  const at = offset ?? 0;
+  let K = Infinity;
+  let E = 1;
+  if (m1 > 0) {
+    const sums: AgmSums = { K: 0, T: 0 };
+    agmScaledSum(m, m1, sums);
+    K = sums.K;
+    E = m1 >= LEGENDRE_BELOW_M1 ? K * (1 - 0.5 * m - m * m * sums.T) : ellipticENearOne(m, m1, K);
   }
-  if (m1 === 0) {
-    out[offset] = Infinity;
-    out[offset + 1] = 1;
-    return;
-  }
-  agm(m, m1);
-  const K = agmK;
-  out[offset] = K;
-  if (m1 >= LEGENDRE_BELOW_M1) {
-    out[offset + 1] = K * (1 - agmS);
-  } else {
-    agm(m1, m);
-    out[offset + 1] = HALF_PI / agmK + K * agmS;
-  }
+  out[at] = K;
+  out[at + 1] = E;
 }
 
 /**
@@ -162,8 +188,9 @@ export function ellipticKE(m: number): EllipticPair {
 export function ellipticK(m: number): number {
   if (!(m >= 0 && m <= 1)) throw domainError("ellipticK", "m", m);
   if (m === 1) return Infinity;
-  agm(m, 1 - m);
-  return agmK;
+  const sums: AgmSums = { K: 0, T: 0 };
+  agmScaledSum(m, 1 - m, sums);
+  return sums.K;
 }
 
 /**
