@@ -25,6 +25,7 @@ import {
   partsList,
   predictRange,
   roundCoil,
+  safetyReport,
   selfInductance,
   type CalibrationDesign,
   type Measurement,
@@ -40,6 +41,8 @@ export interface UnknownDriverResults {
   readonly litThreshold: number;
   readonly identified: boolean;
   readonly plausible: boolean;
+  /** safety findings that need attention at the calibrated current (empty: none) */
+  readonly safetyAttention: readonly string[];
   /** predicted axial reach of the old red pebble and the new one, m: nominal and 95 % band */
   readonly oldRed: { readonly nominal: number; readonly low: number; readonly high: number };
   readonly newRed: { readonly nominal: number; readonly low: number; readonly high: number };
@@ -124,7 +127,7 @@ export function run(): { notebook: Notebook; results: UnknownDriverResults } {
     { inductance: selfInductance(pad, { frequency: f }), resistance: coilResistance(pad, f), frequency: f },
     { supply: 5, currentLimit: 1 },
   );
-  nb.heading("3. Is that a current a 5 V driver can make?");
+  nb.heading("3. Supply: is that a current a 5 V driver can make?");
   nb.text(
     `The coil's voltage amplitude ωLI is ${q(plaus.coilVoltage, "V")}; a single switch fed from 5 V`,
     `swings its tank to at most about ${q(plaus.maxCoilVoltage, "V")} (3.562 × supply, the class-E peak switch`,
@@ -162,12 +165,20 @@ export function run(): { notebook: Notebook; results: UnknownDriverResults } {
       supply: { item: "existing pad's 5 V adapter (coil loss only; the driver's own loss is unknown)", voltage: 5, current: plaus.coilLoss / 5, rating: 1 },
     }),
   );
+  // ── 5. Exposure, emission and metal heating at the calibrated current ─────────
+  const safety = safetyReport({ frequency: f, surfaceHeight: LYING, transmitters: [{ coil: pad, current: cal.values.coilCurrent }] });
+  nb.heading("5. Exposure, emission and metal heating (estimates, not a compliance test)");
+  nb.text(
+    "With the coil current now known, the pad's field can be assessed where people reach (the",
+    "space above the surface) against the reference levels, and its emission against the rules:",
+  );
+  nb.text(...safety.exposure.governs);
+  nb.text(...safety.emission.limits.filter((l) => l.verdict === "meets" || l.verdict === "exceeds").map((l) => l.text));
+  nb.text(...safety.metal.map((m) => m.text));
+  if (safety.attention.length > 0) nb.text("Needs attention:", ...safety.attention);
   nb.cautions([
     "A calibrated model is only as good as the bench numbers behind it: check a built pebble against the prediction before ordering a batch.",
-    "People with implanted medical devices: keep the pad's field away from them and follow the device makers' and local guidance.",
-    "Coins, keys and foil on the pad heat up in the field; do not leave it powered unattended without a check of metal heating.",
-    "Pebbles are small enough to swallow: keep them from young children and follow the local toy-safety rules.",
-    "Any transmitter radiates: radio-emission rules for inductive devices apply; these numbers are design estimates, not a compliance test.",
+    ...safety.cautions.map((c) => c.text),
   ]);
 
   return {
@@ -178,6 +189,7 @@ export function run(): { notebook: Notebook; results: UnknownDriverResults } {
       litThreshold: cal.values.litThreshold,
       identified: cal.identified,
       plausible: plaus.plausible,
+      safetyAttention: safety.attention,
       oldRed: { nominal: oldRed.nominal, low: oldRed.low, high: oldRed.high },
       newRed: { nominal: newRed.nominal, low: newRed.low, high: newRed.high },
     },
