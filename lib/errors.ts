@@ -83,3 +83,19 @@ export function requireFinite(x: number, field: string, unit: string, where: str
   }
   return x;
 }
+
+/**
+ * Runs `fn`; a TanklightInputError thrown inside (by a helper the public function calls) is
+ * re-thrown under the public function's name, its issues kept, each path prefixed with
+ * `pathPrefix` (e.g. "options.").
+ * @example underName("awgWire", () => awgDiameter(99)) // throws "awgWire: gauge: …"
+ */
+export function underName<T>(where: string, fn: () => T, pathPrefix = ""): T {
+  try {
+    return fn();
+  } catch (e) {
+    if (!(e instanceof TanklightInputError)) throw e;
+    const issues = e.issues.map((i) => ({ ...i, path: pathPrefix + i.path }));
+    throw new TanklightInputError(issues, where);
+  }
+}

@@ -277,16 +277,109 @@ function cleanMessage(issue: z.core.$ZodIssue): string {
   return issue.message.replace(/^(Invalid input|Invalid option|Too small|Too big): /, "").replace(/, received \w+$/, "");
 }
 
+// ── unknown keys: "did you mean" ─────────────────────────────────────────────
+
+/**
+ * Edit distance of two strings (optimal string alignment: insert, delete, substitute, or swap
+ * two neighbouring characters, each costing 1), case-insensitive.
+ * @example editDistance("axsi", "axis") // → 1
+ */
+export function editDistance(a: string, b: string): number {
+  const s = a.toLowerCase();
+  const t = b.toLowerCase();
+  const rows: number[][] = [];
+  for (let i = 0; i <= s.length; i++) {
+    const row = [i];
+    for (let j = 1; j <= t.length; j++) {
+      if (i === 0) { row.push(j); continue; }
+      const prev = rows[i - 1]!;
+      let d = Math.min(prev[j]! + 1, row[j - 1]! + 1, prev[j - 1]! + (s[i - 1] === t[j - 1] ? 0 : 1));
+      if (i > 1 && j > 1 && s[i - 1] === t[j - 2] && s[i - 2] === t[j - 1]) d = Math.min(d, rows[i - 2]![j - 2]! + 1);
+      row.push(d);
+    }
+    rows.push(row);
+  }
+  return rows[s.length]![t.length]!;
+}
+
+/**
+ * The valid key nearest to a mistyped one, or undefined when none is close: at most 1 edit
+ * for keys of up to 4 characters, 2 up to 8, 3 beyond (or a match ignoring case).
+ * @param key the key the user wrote, e.g. "axsi".
+ * @param valid the keys the object accepts.
+ * @example nearestKey("axsi", ["position", "axis", "spin"]) // → "axis"
+ * @example nearestKey("colour", ["position", "axis"]) // → undefined
+ */
+export function nearestKey(key: string, valid: readonly string[]): string | undefined {
+  const limit = key.length <= 4 ? 1 : key.length <= 8 ? 2 : 3;
+  let best: string | undefined;
+  let bestD = Infinity;
+  for (const v of valid) {
+    const d = editDistance(key, v);
+    if (d < bestD) { bestD = d; best = v; }
+  }
+  return bestD <= limit ? best : undefined;
+}
+
+/**
+ * The message for an unknown key: "unknown field; did you mean 'axis'?" or, with no close
+ * key, "unknown field (accepted: position, axis, spin)".
+ */
+export function unknownKeyMessage(key: string, valid: readonly string[]): string {
+  const near = nearestKey(key, valid);
+  if (near !== undefined) return `unknown field; did you mean '${near}'?`;
+  return valid.length > 0 ? `unknown field (accepted: ${valid.join(", ")})` : "unknown field";
+}
+
+type SchemaDef = { type: string; [k: string]: unknown };
+const defOf = (s: unknown): SchemaDef | undefined => (s as { _zod?: { def?: SchemaDef } } | undefined)?._zod?.def;
+
+/** The keys an object schema accepts at a path of the input (through wrappers, arrays, tuples, unions). */
+function keysAt(schema: unknown, path: readonly PropertyKey[]): string[] {
+  const def = defOf(schema);
+  if (def === undefined) return [];
+  switch (def.type) {
+    case "optional": case "nullable": case "readonly": case "default": case "prefault": case "catch": case "nonoptional":
+      return keysAt(def["innerType"], path);
+    case "pipe":
+      return keysAt(def["in"], path);
+    case "lazy":
+      return keysAt((def["getter"] as () => unknown)(), path);
+    case "union": {
+      const all = (def["options"] as unknown[]).flatMap((o) => keysAt(o, path));
+      return [...new Set(all)];
+    }
+    case "object": {
+      const shape = def["shape"] as Record<string, unknown>;
+      if (path.length === 0) return Object.keys(shape);
+      const next = shape[String(path[0])];
+      return next === undefined ? [] : keysAt(next, path.slice(1));
+    }
+    case "array":
+      return path.length === 0 ? [] : keysAt(def["element"], path.slice(1));
+    case "tuple": {
+      if (path.length === 0) return [];
+      const items = def["items"] as unknown[];
+      return keysAt(items[Number(path[0])] ?? def["rest"], path.slice(1));
+    }
+    case "record":
+      return path.length === 0 ? [] : keysAt(def["valueType"], path.slice(1));
+    default:
+      return [];
+  }
+}
+
 /**
  * One zod issue as our InputIssues: one per unknown key; a union's issues are those of the one
  * branch whose form matched (its discriminator or type), else one issue listing the forms.
  */
-function toInputIssues(issue: z.core.$ZodIssue, input: unknown, prefix: readonly PropertyKey[] = []): InputIssue[] {
+function toInputIssues(issue: z.core.$ZodIssue, input: unknown, schema: unknown, prefix: readonly PropertyKey[] = []): InputIssue[] {
   const full = [...prefix, ...issue.path];
   if (issue.code === "unrecognized_keys") {
+    const valid = keysAt(schema, full);
     return issue.keys.map((key) => ({
       path: dottedPath([...full, key]),
-      message: "unknown field",
+      message: unknownKeyMessage(key, valid),
       value: valueAt(input, [...full, key]),
     }));
   }
@@ -298,7 +391,7 @@ function toInputIssues(issue: z.core.$ZodIssue, input: unknown, prefix: readonly
     }
     const matching = issue.errors.filter((branch) => !branchMismatch(branch));
     const best = matching.length === 1 ? matching[0] : undefined;
-    if (best !== undefined) return best.flatMap((i) => toInputIssues(i, input, full));
+    if (best !== undefined) return best.flatMap((i) => toInputIssues(i, input, schema, full));
     const wanted = [...new Set(issue.errors.map(branchWanted))];
     return [
       {
@@ -345,7 +438,7 @@ export function parseInput<T>(schema: z.ZodType<T>, input: unknown, where: strin
     throw e;
   }
   if (result.success) return result.data;
-  const issues = result.error.issues.flatMap((i) => toInputIssues(i, input));
+  const issues = result.error.issues.flatMap((i) => toInputIssues(i, input, schema));
   throw new TanklightInputError(issues, where);
 }
 

@@ -14,6 +14,8 @@ import {
   unitVector,
   vec3,
   voltage,
+  editDistance,
+  nearestKey,
   type QuantitySchema,
 } from "../lib/schema.ts";
 import { TanklightInputError } from "../lib/errors.ts";
@@ -126,7 +128,7 @@ describe("parseInput", () => {
       extra: 1,
     };
     expect(() => parseInput(CoilInput, bad, "roundCoil")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: roundCoil: coil.radius: expected a length like '12 mm', got '5 kHz' (a frequency); coil.turns: expected number to be >0, got 0; frequency: must be > 0 Hz, got -3; position[2]: expected a length like '12 mm' (a finite number), got Infinity; tuning: expected a capacitance like '4.7 nF', got '4.7n F' (unknown unit 'n F'; write the prefix with its unit: '4.7 nF'?); extra: unknown field, got 1]`,
+      `[TanklightInputError: roundCoil: coil.radius: expected a length like '12 mm', got '5 kHz' (a frequency); coil.turns: expected number to be >0, got 0; frequency: must be > 0 Hz, got -3; position[2]: expected a length like '12 mm' (a finite number), got Infinity; tuning: expected a capacitance like '4.7 nF', got '4.7n F' (unknown unit 'n F'; write the prefix with its unit: '4.7 nF'?); extra: unknown field (accepted: coil, frequency, position, tuning, gap), got 1]`,
     );
     try {
       parseInput(CoilInput, bad, "roundCoil");
@@ -251,5 +253,26 @@ describe("types", () => {
     expectTypeOf(parseInput(length(), "1 m", "x")).toEqualTypeOf<number>();
     expectTypeOf(quantity).returns.toEqualTypeOf<QuantitySchema>();
     expectTypeOf<z.output<ReturnType<typeof unitVector>>>().toEqualTypeOf<readonly [number, number, number]>();
+  });
+});
+
+describe("unknown keys: did you mean", () => {
+  const Pose = z.strictObject({ position: vec3(), axis: unitVector().optional(), spin: angle().optional() });
+  it("editDistance counts a swap of neighbours as one edit", () => {
+    expect(editDistance("axsi", "axis")).toBe(1);
+    expect(editDistance("positon", "position")).toBe(1);
+    expect(editDistance("Spin", "spin")).toBe(0);
+    expect(editDistance("", "abc")).toBe(3);
+  });
+  it("nearestKey suggests only a close key", () => {
+    expect(nearestKey("axsi", ["position", "axis", "spin"])).toBe("axis");
+    expect(nearestKey("colour", ["position", "axis", "spin"])).toBeUndefined();
+  });
+  it("parseInput names the unknown key and the nearest valid one, also inside arrays and unions", () => {
+    expect(() => parseInput(Pose, { position: [0, 0, 0.02], axsi: [1, 0, 0] }, "couplingFactor")).toThrowErrorMatchingInlineSnapshot(`[TanklightInputError: couplingFactor: axsi: unknown field; did you mean 'axis'?, got [1,0,0]]`);
+    expect(() => parseInput(z.array(Pose), [{ position: [0, 0, 0] }, { positon: [0, 0, 0], position: [0, 0, 1] }], "f")).toThrowErrorMatchingInlineSnapshot(`[TanklightInputError: f: [1].positon: unknown field; did you mean 'position'?, got [0,0,0]]`);
+    const U = z.union([z.strictObject({ kind: z.literal("a"), radius: length() }), z.strictObject({ kind: z.literal("b"), width: length() })]);
+    expect(() => parseInput(U, { kind: "a", radius: 1, radus: 2 }, "f")).toThrowErrorMatchingInlineSnapshot(`[TanklightInputError: f: radus: unknown field; did you mean 'radius'?, got 2]`);
+    expect(() => parseInput(Pose, { position: [0, 0, 0], toString: 1 }, "f")).toThrowErrorMatchingInlineSnapshot(`[TanklightInputError: f: toString: unknown field (accepted: position, axis, spin), got 1]`);
   });
 });

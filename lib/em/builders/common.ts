@@ -109,8 +109,34 @@ export function archimedeanArcLength(r0: number, r1: number, pitch: number): num
   return (f(r1) - f(r0)) / (2 * b);
 }
 
-/** zod schema of a count: a whole number ≥ min (default 1), with a plain message. */
-export function count(min = 1): z.ZodNumber {
+/**
+ * Size limits of the builders: each bounds a count whose memory or time grows with it, and the
+ * error states the limit and why.
+ */
+export const SIZE_LIMITS = {
+  /** turns of one coil: one filament per turn, and self-inductance sums turns² filament pairs (10⁸ at the limit, minutes) */
+  turns: { max: 10_000, why: "each turn is one filament and self-inductance sums turns² filament pairs" },
+  /** layers of a wound coil (no more layers than turns) */
+  layers: { max: 10_000, why: "each layer holds at least one turn" },
+  /** chords per 90° corner of a rounded rectangle: every field and inductance evaluation pays for each chord */
+  cornerSegments: { max: 256, why: "every field and inductance evaluation pays for each chord" },
+  /** chords per turn of a spiral polygon */
+  segmentsPerTurn: { max: 4096, why: "every field and inductance evaluation pays for each chord" },
+  /** vertices of all polygon filaments of one coil together (memory, and time of every evaluation) */
+  points: { max: 1_000_000, why: "memory and the time of every field and inductance evaluation grow with the vertex count" },
+  /** strands of a litz wire */
+  strands: { max: 100_000, why: "beyond it no litz wire is made; the strand model loses meaning" },
+} as const;
+
+/**
+ * zod schema of a count: a whole number ≥ min (default 1) and, when a limit is named, at most
+ * its maximum, with a message that says why.
+ * @example count(1, "turns") // rejects 1e9 with "must be a whole number ≥ 1 and ≤ 10000 (each turn is one filament …)"
+ */
+export function count(min = 1, limit?: keyof typeof SIZE_LIMITS): z.ZodNumber {
   const message = `must be a whole number ≥ ${min}`;
-  return z.number({ error: message }).int({ error: message }).min(min, { error: message });
+  const base = z.number({ error: message }).int({ error: message }).min(min, { error: message });
+  if (limit === undefined) return base;
+  const { max, why } = SIZE_LIMITS[limit];
+  return base.max(max, { error: `must be a whole number ≥ ${min} and ≤ ${max} (${why})` });
 }

@@ -3,13 +3,13 @@
  * records (lib/em/types.ts). Lengths accept SI numbers (m) or quantity strings ("0.5 mm").
  */
 import { z } from "zod";
-import { TanklightInputError } from "../../errors.ts";
-import { length } from "../../schema.ts";
+import { TanklightInputError, underName } from "../../errors.ts";
+import { dimensionless, length, parseInput } from "../../schema.ts";
 import { parseQuantity } from "../../units.ts";
 import { awgDiameter } from "../classicFormulas.ts";
 import { MATERIALS } from "../materials.ts";
 import type { Conductor } from "../types.ts";
-import { IssueList, isPositiveInteger, metres } from "./common.ts";
+import { IssueList, SIZE_LIMITS, count, isPositiveInteger, metres } from "./common.ts";
 
 /** A round solid wire. */
 export type RoundWire = Extract<Conductor, { kind: "round" }>;
@@ -29,6 +29,23 @@ export interface RoundWireOptions {
   readonly outerDiameter?: LengthInput;
   /** material name (default "copper") */
   readonly material?: string;
+}
+
+const lengthOrString = z.union([z.number(), z.string()], { error: "expected a length like '0.5 mm' or a number in m" });
+/** Strict shape of {@link RoundWireOptions} (the values are checked by the builder). */
+const RoundWireOptionsShape = z.strictObject({ insulation: lengthOrString.optional(), outerDiameter: lengthOrString.optional(), material: z.string().optional() });
+/** Strict shape of {@link LitzWireOptions}. */
+const LitzWireOptionsShape = z.strictObject({
+  outerDiameter: lengthOrString.optional(),
+  strandInsulation: lengthOrString.optional(),
+  fillFactor: dimensionless().optional(),
+  material: z.string().optional(),
+});
+/** Strict shape of the options of {@link pcbTrace}. */
+const TraceOptionsShape = z.strictObject({ material: z.string().optional() });
+/** Options given as `undefined` mean none; anything else must be an options object (paths start with "opts."). */
+function readOptions<T>(shape: z.ZodType<T>, opts: unknown, where: string): T {
+  return underName(where, () => parseInput(shape.optional(), opts, where) ?? ({} as T), "opts.");
 }
 
 /** Density of annealed copper, kg/m³ (IEC 60028:1925, the International Annealed Copper Standard: 8.89 g/cm³ at 20 °C). */
@@ -116,7 +133,8 @@ function outerOf(issues: IssueList, bare: number | undefined, opts: RoundWireOpt
  * @returns `{ kind: "round", diameter, outerDiameter, material }`, SI.
  * @example roundWire("0.5 mm", { insulation: "20 um" }) // → { kind: "round", diameter: 5e-4, outerDiameter: 5.4e-4, material: "copper" }
  */
-export function roundWire(diameter: LengthInput, opts: RoundWireOptions = {}): RoundWire {
+export function roundWire(diameter: LengthInput, options?: RoundWireOptions): RoundWire {
+  const opts = readOptions(RoundWireOptionsShape, options, "roundWire");
   const issues = new IssueList("roundWire");
   const d = readLength(issues, diameter, "diameter", "positive");
   const od = outerOf(issues, d, opts, "");
@@ -132,8 +150,9 @@ export function roundWire(diameter: LengthInput, opts: RoundWireOptions = {}): R
  * @param opts as {@link roundWire}.
  * @example awgWire(30).diameter // → 2.5464e-4 (0.2546 mm; ASTM B258 rounds to 0.0100 in)
  */
-export function awgWire(gauge: number | string, opts: RoundWireOptions = {}): RoundWire {
-  const d = awgDiameter(gauge);
+export function awgWire(gauge: number | string, options?: RoundWireOptions): RoundWire {
+  const opts = readOptions(RoundWireOptionsShape, options, "awgWire");
+  const d = underName("awgWire", () => awgDiameter(gauge));
   const issues = new IssueList("awgWire");
   const od = outerOf(issues, d, opts, "");
   const mat = checkMaterial(issues, opts.material, "material");
@@ -163,10 +182,11 @@ export interface LitzWireOptions {
  * @param strandDiameter bare strand diameter, m, > 0.
  * @example litzWire(100, "0.071 mm", { outerDiameter: "1 mm" }).strands // → 100
  */
-export function litzWire(strands: number, strandDiameter: LengthInput, opts: LitzWireOptions = {}): LitzWire {
+export function litzWire(strands: number, strandDiameter: LengthInput, options?: LitzWireOptions): LitzWire {
+  const opts = readOptions(LitzWireOptionsShape, options, "litzWire");
   const issues = new IssueList("litzWire");
-  if (!(typeof strands === "number" && isPositiveInteger(strands))) {
-    issues.add("strands", "must be a whole number ≥ 1", strands, "integer ≥ 1");
+  if (!(typeof strands === "number" && isPositiveInteger(strands) && strands <= SIZE_LIMITS.strands.max)) {
+    issues.add("strands", `must be a whole number ≥ 1 and ≤ ${SIZE_LIMITS.strands.max} (${SIZE_LIMITS.strands.why})`, strands, `integer 1…${SIZE_LIMITS.strands.max}`);
   }
   const ds = readLength(issues, strandDiameter, "strandDiameter", "positive");
   const fill = opts.fillFactor ?? 0.7;
@@ -195,7 +215,8 @@ export function litzWire(strands: number, strandDiameter: LengthInput, opts: Lit
  * @param thickness copper thickness, m, > 0, or "<n> oz".
  * @example pcbTrace("0.5 mm", "1 oz").thickness // → 3.4325e-5
  */
-export function pcbTrace(width: LengthInput, thickness: LengthInput, opts: { readonly material?: string } = {}): PcbTrace {
+export function pcbTrace(width: LengthInput, thickness: LengthInput, options?: { readonly material?: string }): PcbTrace {
+  const opts = readOptions(TraceOptionsShape, options, "pcbTrace");
   const issues = new IssueList("pcbTrace");
   const w = readLength(issues, width, "width", "positive");
   let t: number | undefined;
@@ -241,7 +262,7 @@ export const WireInput = z.strictObject({
   diameter: length().optional(),
   insulation: length({ nonNegative: true }).optional(),
   outerDiameter: length().optional(),
-  strands: z.number().int().positive().optional(),
+  strands: count(1, "strands").optional(),
   strandDiameter: length().optional(),
   material: z.string().optional(),
 });

@@ -19,7 +19,7 @@
 import { z } from "zod";
 import { parseInput, length } from "../../schema.ts";
 import type { Coil, CoilShape, Filament, Vec3 } from "../types.ts";
-import { IssueList, count, archimedeanArcLength, circleTurn, metres } from "./common.ts";
+import { IssueList, SIZE_LIMITS, count, archimedeanArcLength, circleTurn, metres } from "./common.ts";
 import { conductorFields, conductorFootprint, resolveConductor } from "./conductor.ts";
 
 /** Input of {@link flatSpiral}: lengths as SI numbers (m) or strings. */
@@ -28,12 +28,12 @@ export const FlatSpiralSpec = z.strictObject({
   innerRadius: length().optional(),
   /** outermost conductor edge, m */
   outerRadius: length().optional(),
-  turns: count(),
+  turns: count(1, "turns"),
   /** radial advance per turn, m, ≥ conductor width */
   pitch: length(),
   model: z.enum(["rings", "spiral"]).optional(),
   /** chords per turn of the "spiral" model, integer ≥ 8 (default 64) */
-  segmentsPerTurn: count(8).optional(),
+  segmentsPerTurn: count(8, "segmentsPerTurn").optional(),
   ...conductorFields,
 });
 /** What {@link flatSpiral} accepts. */
@@ -75,8 +75,12 @@ export function flatSpiral(spec: FlatSpiralInput): FlatSpiral {
       field === "innerRadius" ? `≥ ${metres(w / 2)}` : `≥ ${metres(w / 2 + N * p + w)}`,
     );
   }
-  issues.throwIfAny();
   const model = s.model ?? "rings";
+  const vertices = model === "spiral" ? N * (s.segmentsPerTurn ?? 64) : 0;
+  if (vertices > SIZE_LIMITS.points.max) {
+    issues.add("segmentsPerTurn", `gives ${vertices} vertices (turns × segmentsPerTurn), more than ${SIZE_LIMITS.points.max}: ${SIZE_LIMITS.points.why}`, spec.segmentsPerTurn ?? 64, `turns × segmentsPerTurn ≤ ${SIZE_LIMITS.points.max}`);
+  }
+  issues.throwIfAny();
   const r0 = innerRadius + w / 2;
   const outerRadius = innerRadius + N * p + w;
   let filaments: Filament[];

@@ -14,21 +14,21 @@
 import { z } from "zod";
 import { parseInput, length } from "../../schema.ts";
 import type { Coil, CoilShape, Filament } from "../types.ts";
-import { IssueList, count, metres, roundedRectangle, roundedRectanglePerimeter } from "./common.ts";
+import { IssueList, SIZE_LIMITS, count, metres, roundedRectangle, roundedRectanglePerimeter } from "./common.ts";
 import { conductorFields, conductorFootprint, resolveConductor } from "./conductor.ts";
 
 /** Input of {@link rectSpiral}: lengths as SI numbers (m) or strings. */
 export const RectSpiralSpec = z.strictObject({
   outerWidth: length(),
   outerHeight: length(),
-  turns: count(),
+  turns: count(1, "turns"),
   pitch: length(),
   /** corner radius of the outline's outer edge, m (default 0) */
   cornerRadius: length({ nonNegative: true }).optional(),
   /** "planar" (default) or "axial" */
   stacking: z.enum(["planar", "axial"]).optional(),
   /** chords per rounded corner (default 8) */
-  cornerSegments: count().optional(),
+  cornerSegments: count(1, "cornerSegments").optional(),
   ...conductorFields,
 });
 /** What {@link rectSpiral} accepts. */
@@ -65,6 +65,10 @@ export function rectSpiral(spec: RectSpiralInput): RectSpiral {
   const innerHeight = H - 2 * inset - 2 * w;
   if (!(innerWidth > 0)) issues.add("outerWidth", `is too small for ${N} turns at ${metres(p)} pitch of a ${metres(w)} conductor`, spec.outerWidth, `> ${metres(2 * inset + 2 * w)}`);
   if (!(innerHeight > 0)) issues.add("outerHeight", `is too small for ${N} turns at ${metres(p)} pitch of a ${metres(w)} conductor`, spec.outerHeight, `> ${metres(2 * inset + 2 * w)}`);
+  const vertices = N * 4 * (R > 0 ? cornerSegments + 1 : 1);
+  if (vertices > SIZE_LIMITS.points.max) {
+    issues.add("cornerSegments", `gives ${vertices} vertices (turns × 4 corners × (cornerSegments + 1)), more than ${SIZE_LIMITS.points.max}: ${SIZE_LIMITS.points.why}`, cornerSegments, `turns × 4 × (cornerSegments + 1) ≤ ${SIZE_LIMITS.points.max}`);
+  }
   issues.throwIfAny();
   const filaments: Filament[] = [];
   let wireLength = 0;

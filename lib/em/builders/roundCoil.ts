@@ -24,9 +24,9 @@ export const RoundCoilSpec = z.strictObject({
   /** mean radius (inner + outer)/2 of the winding window, m */
   meanRadius: length().optional(),
   /** total turns, integer ≥ 1 */
-  turns: count(),
+  turns: count(1, "turns"),
   /** layers, integer ≥ 1 (default 1); turns per full layer = ⌈turns/layers⌉ */
-  layers: count().optional(),
+  layers: count(1, "layers").optional(),
   /** axial centre-to-centre distance of turns, m (default: wire outer diameter) */
   pitch: length().optional(),
   /** radial centre-to-centre distance of layers, m (default: wire outer diameter) */

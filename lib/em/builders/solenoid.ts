@@ -16,7 +16,7 @@ import { layeredTurns } from "./roundCoil.ts";
 export const SolenoidSpec = z.strictObject({
   /** radius of the wire centres, m */
   radius: length(),
-  turns: count(),
+  turns: count(1, "turns"),
   /** centre-to-centre distance of neighbouring turns, m (give pitch or length; default: outer diameter) */
   pitch: length().optional(),
   /** winding length = turns·pitch, m */
