@@ -16,8 +16,11 @@
  * could have them; only the physics is sourced (docs/methods.md).
  */
 import {
+  addSafetySections,
   addToken,
   chart,
+  designFromLink,
+  safetyReport,
   notebook,
   partsList,
   type Notebook,
@@ -70,6 +73,15 @@ export interface PebbleDrawerResults {
   readonly supply: { fast: number; transient: number; onLid: number };
   /** peak voltage across the transmitter capacitor in the time-domain run, V */
   readonly transmitterCapacitorPeak: number;
+  /** worst accessible RMS flux density, T, and the findings that need attention */
+  readonly safety: {
+    worstFlux: number;
+    /** height above the lid from which the ICNIRP 2010 general-public reference level is met, m */
+    publicLevelMetAbove: number;
+    /** largest induced-field / basic-restriction ratio of the public discs (< 1: met) */
+    basicRestrictionRatio: number;
+    attention: readonly string[];
+  };
   readonly cautions: readonly string[];
 }
 
@@ -347,7 +359,18 @@ export function run(options: ScenarioOptions = {}): { notebook: Notebook; result
     "almost all of it lost in the transmitter coil and switch: the pebbles take milliwatts.",
   );
 
-  // ── 6. Parts and cautions ─────────────────────────────────────────────────
+  // ── 6. Safety: exposure, emission, stress, metal heating ─────────────────────
+  nb.step("exposure, emission, stress and metal heating");
+  const lidTop = 0.003; // m: the lid's top surface over the winding, where hands and coins land (demo)
+  const safety = safetyReport(designFromLink(system("red", 0, LID), near, { surfaceHeight: lidTop }));
+  const safetyCautions = addSafetySections(nb, safety, { coil: tx, current: near.transmitter.coilCurrent, surfaceHeight: lidTop, reach: 0.1 });
+  nb.text(
+    "In words: right on the lid over the winding the field is above the general-public reference level, a few centimetres up it is below it, and the",
+    "induced field in a hand on the lid stays well inside the basic restriction the level protects. For a hands-on exhibit that is a finding to take to",
+    "a dosimetric assessment or to design away (a thicker lid, a lower coil current), not one to ignore.",
+  );
+
+  // ── 7. Parts and cautions ─────────────────────────────────────────────────
   nb.parts(
     partsList({
       coils: [
@@ -365,13 +388,7 @@ export function run(options: ScenarioOptions = {}): { notebook: Notebook; result
       supply: { item: "supply", voltage: SUPPLY, current: Math.max(supplyFast, supplyNear, supplyTransient), rating: 0.5 },
     }),
   );
-  const cautions = [
-    ...near.cautions,
-    "Pebbles are small enough to swallow: a hands-on exhibit for young children needs pebbles too big to fit a small-parts gauge, and the local toy-safety rules apply.",
-    "People with implanted medical devices: keep the transmitter's field away from them and follow the device makers' and local guidance.",
-    "Coins, keys and foil on the lid heat up in the field; the drawer should not be left powered unattended without a check of metal heating.",
-    "Any transmitter radiates: radio-emission rules for inductive devices apply to the product; these numbers are design estimates, not a compliance test.",
-  ];
+  const cautions = [...new Set([...near.cautions, ...safetyCautions])];
   nb.cautions(cautions);
 
   return {
@@ -388,6 +405,12 @@ export function run(options: ScenarioOptions = {}): { notebook: Notebook; result
       waveform: { peakOverSupply: h.peak / SUPPLY, distortion: h.distortion, ledTransient, ledFast, checkHeight },
       supply: { fast: supplyFast, transient: supplyTransient, onLid: supplyNear },
       transmitterCapacitorPeak: tankPeak,
+      safety: {
+        worstFlux: safety.exposure.worst.flux,
+        publicLevelMetAbove: safety.exposure.referenceLevels.find((l) => l.standard === "ICNIRP 2010" && l.population === "public")?.compliantAbove ?? Infinity,
+        basicRestrictionRatio: Math.max(...safety.exposure.basicRestriction.filter((b) => b.population === "public").map((b) => b.ratio ?? Infinity)),
+        attention: safety.attention,
+      },
       cautions,
     },
   };

@@ -270,6 +270,7 @@ export { renderNotebook, writeNotebook, type RenderedNotebook } from "./report/w
 export { tokenLoadLine, type LoadLine, type LoadLineInput } from "./report/loadLine.ts";
 export { DesignFile, parseDesign, parseDesignText, designJsonSchema, DESIGN_FILE_MAX_BYTES, type Design, type DesignFileInput } from "./report/designFile.ts";
 export { designReport, type DesignResults } from "./report/designReport.ts";
+export { addSafetySections, type FieldMapInput } from "./report/safetySection.ts";
 // end report
 
 // ── lib/analysis: calibration from bench measurements ────────────────────────

@@ -15,8 +15,15 @@ describe("casebook", () => {
       expect(md, name).toContain("## Parts list");
       expect(md, name).toContain("## Cautions");
       expect(md, name).toContain(DEFER_LINE);
-      // and a supply section (coaxial-loops says it has no drive)
+      // and a supply section (coaxial-loops says it has no drive); unknown-driver (the analysis
+      // scenario of issue 18) is checked by its own tests below
+      if (name === "unknown-driver") continue;
       expect(md, name).toMatch(/## (\d+\. )?Supply/);
+      if (name !== "coaxial-loops") {
+        expect(md, name).toContain("## Exposure (an estimate, not a compliance test)");
+        expect(md, name).toContain("## Radiated emission (an estimate, not a compliance test)");
+        expect(md, name).toContain("## Metal objects on the surface");
+      }
     }
   });
 
@@ -97,6 +104,15 @@ describe("casebook: pebble-drawer", async () => {
       unit: "A",
     });
     expect(r.cautions.length).toBeGreaterThanOrEqual(4);
+    // the cautions cover the hazards design.md §9 names
+    for (const hazard of [/implant/i, /metal|coin|foil/i, /child|swallow|small part/i, /radio|emission/i]) expect(r.cautions.some((c) => hazard.test(c))).toBe(true);
+    // right over the winding the field exceeds the ICNIRP 2010 general-public reference level
+    // (27 µT RMS, Table 4; docs/references.md), is met a few centimetres up, and the induced field
+    // in a hand-sized disc stays within the basic restriction (1.35e-4·f V/m, Table 2)
+    expect(r.safety.worstFlux).toBeGreaterThan(27e-6);
+    expect(r.safety.publicLevelMetAbove).toBeLessThan(0.05);
+    expect(r.safety.basicRestrictionRatio).toBeLessThan(1);
+    expect(r.safety.attention.some((a) => /ICNIRP 2010/.test(a))).toBe(true);
   });
 
   it("budgets the supply from the real switch waveform and rates the transmitter capacitor for its true peak", () => {

@@ -77,6 +77,7 @@ export const DesignFile = z.strictObject({
     gap: length({ max: 1 }).describe("token coil centre above the transmitter winding centre when the token lies on the surface"),
     /** how far out from the centre the display area reaches */
     reach: length({ max: 2 }).describe("how far from the centre the display area reaches"),
+    touchHeight: length({ max: 1 }).optional().describe("height above the winding of the nearest surface people touch (default: 2 mm below the token coil centre)"),
     /** heights above the winding to tabulate (default: the gap to 6 × the gap) */
     heights: z.array(length({ max: 2 })).min(2).max(60).optional(),
     /** what lies between transmitter and token */

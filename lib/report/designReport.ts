@@ -27,7 +27,10 @@ import { selfResonance } from "../em/selfCapacitance.ts";
 import type { Coil } from "../em/types.ts";
 import { TanklightInputError } from "../errors.ts";
 import { formatQuantity as q } from "../units.ts";
+import { designFromLink } from "../safety/design.ts";
+import { safetyReport, type SafetyReport } from "../safety/safetyReport.ts";
 import * as chart from "./chart.ts";
+import { addSafetySections } from "./safetySection.ts";
 import type { Design } from "./designFile.ts";
 import { tokenLoadLine } from "./loadLine.ts";
 import { notebook, type Notebook } from "./notebook.ts";
@@ -50,6 +53,8 @@ export interface DesignResults {
   readonly supplyCurrent: number;
   /** time-domain check (single switch only) */
   readonly waveform?: { readonly peakOverSupply: number; readonly distortion: number; readonly ledFast: number; readonly ledTransient: number; readonly supplyTransient: number };
+  /** the safety report (exposure, emission, stress, metal heating, cautions) */
+  readonly safety: SafetyReport;
   readonly cautions: readonly string[];
 }
 
@@ -290,6 +295,12 @@ export function designReport(design: Design, options: { readonly log?: (line: st
   );
   nb.text(`Budget: ${q(supplyCurrent, "A")} from a ${q(supplyV, "V")} supply rated ${q(design.supply.rating, "A")} — ${supplyCurrent <= design.supply.rating ? `${((100 * supplyCurrent) / design.supply.rating).toFixed(0)} % of its rating` : "MORE than its rating: choose a larger supply or a weaker drive"}.`);
 
+  // ── safety ──
+  const touch = design.surface.touchHeight ?? Math.max(0.001, gap - 0.002);
+  nb.step("exposure, emission, stress and metal heating");
+  const safety = safetyReport(designFromLink(system(first, 0, gap), onSurface, { surfaceHeight: touch }));
+  const safetyCautions = addSafetySections(nb, safety, { coil: tx, current: onSurface.transmitter.coilCurrent, surfaceHeight: touch, reach: Math.max(design.surface.reach, 0.05) });
+
   nb.parts(
     partsList({
       coils: [{ item: "transmitter coil", coil: tx }, { item: "token coil", coil: token, quantity: design.token.count }],
@@ -301,13 +312,7 @@ export function designReport(design: Design, options: { readonly log?: (line: st
       supply: { item: "supply", voltage: supplyV, current: supplyCurrent, rating: design.supply.rating },
     }),
   );
-  const cautions = [
-    ...onSurface.cautions,
-    "Tokens are small parts: where young children can reach them, they must be too big to swallow, and the local toy-safety rules apply.",
-    "People with implanted medical devices: keep the transmitter's field away from them and follow the device makers' and local guidance.",
-    "Coins, keys, foil and rings on the surface heat up in the field; do not leave the transmitter powered unattended without a check of metal heating.",
-    "Any transmitter radiates: radio-emission rules for inductive devices apply to the product; these numbers are design estimates, not a compliance test.",
-  ];
+  const cautions = [...new Set([...onSurface.cautions, ...safetyCautions])];
   nb.cautions(cautions);
   return {
     notebook: nb,
@@ -317,7 +322,7 @@ export function designReport(design: Design, options: { readonly log?: (line: st
       token: { inductance: L2, resistance: R2, quality: Q2, capacitance: C2 },
       axialRange, sidewaysRange, profile: { heights, current },
       barrier: { skinDepth: delta, thickness: b.thickness },
-      supplyCurrent, waveform, cautions,
+      supplyCurrent, waveform, safety, cautions,
     },
   };
 }
