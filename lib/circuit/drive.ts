@@ -36,6 +36,8 @@ export type DriveEquivalent =
       readonly label: string;
       /** where the source sits: "series" (in series with the transmitter network) */
       readonly assumptions: readonly string[];
+      /** the drive's real waveform, for harmonic balance (absent: a sinusoidal EMF) */
+      readonly waveform?: DriveWaveform;
     }
   | {
       readonly kind: "current";
@@ -44,6 +46,34 @@ export type DriveEquivalent =
       readonly label: string;
       readonly assumptions: readonly string[];
     };
+
+/**
+ * What a drive really applies, beyond its fundamental equivalent — read by the harmonic-balance
+ * solver (lib/circuit/harmonic/), ignored by the describing-function solver:
+ * - `square`: the EMF switches between `low` and `high` at 50 % duty (half and full bridge),
+ *   aligned so that its fundamental is the equivalent's real amplitude;
+ * - `singleSwitch`: a switch from the bottom of a parallel transmitter tank to ground, fed
+ *   from `supply` at the top, closed for `duty` of each period from t = 0 (the parallel-tank
+ *   single-switch drive); its switch-node waveform is solved with the tank, not assumed.
+ */
+export type DriveWaveform =
+  | { readonly kind: "square"; readonly low: number; readonly high: number }
+  | {
+      readonly kind: "singleSwitch";
+      /** V_DD, V */
+      readonly supply: number;
+      /** Ω, > 0 */
+      readonly onResistance: number;
+      /** Ω, > onResistance */
+      readonly offResistance: number;
+      /** fraction of the period closed, 0 < duty < 1 */
+      readonly duty: number;
+    };
+
+/** Smallest switch on-resistance the harmonic-balance model of a single switch uses, Ω (an ideal switch has none). */
+export const MIN_SWITCH_ON_RESISTANCE = 1e-3;
+/** Off-resistance of a drive's switch in harmonic balance, Ω (as the time-domain engine's default). */
+export const SWITCH_OFF_RESISTANCE = 1e6;
 
 /**
  * A sine source with output resistance.
@@ -87,6 +117,7 @@ export function halfBridgeDrive(supply: number, onResistance = 0): DriveEquivale
       "only the fundamental drives the tank (harmonics see a high-Q tank's high impedance)",
       "switching losses and dead time not modelled",
     ],
+    waveform: { kind: "square", low: 0, high: supply },
   };
 }
 
@@ -111,6 +142,7 @@ export function fullBridgeDrive(supply: number, onResistance = 0): DriveEquivale
       "only the fundamental drives the tank (harmonics see a high-Q tank's high impedance)",
       "switching losses and dead time not modelled",
     ],
+    waveform: { kind: "square", low: -supply, high: supply },
   };
 }
 
@@ -339,6 +371,13 @@ export function parallelTankDrive(supply: number, onResistance = 0): DriveEquiva
       "use with a parallel-compensated transmitter: the source sits across the tank",
       "switch conduction loss estimated as R_on/2 in series",
     ],
+    waveform: {
+      kind: "singleSwitch",
+      supply,
+      onResistance: Math.max(onResistance, MIN_SWITCH_ON_RESISTANCE),
+      offResistance: SWITCH_OFF_RESISTANCE,
+      duty: 0.5,
+    },
   };
 }
 

@@ -6,6 +6,7 @@
  */
 import type { DriveEquivalent } from "../drive.ts";
 import { HIGH_VOLTAGE } from "../../hazards.ts";
+import type { TokenLoad } from "../loads/types.ts";
 
 /**
  * A receiver's load as the link solver sees it: a describing function (fundamental admittance
@@ -17,6 +18,8 @@ export interface LinkLoadModel {
   readonly label: string;
   /** true when the admittance does not depend on the amplitude (a resistor) */
   readonly linear?: boolean;
+  /** the token load itself, when the model was built from one: harmonic balance evaluates it in time */
+  readonly token?: TokenLoad;
   /** fundamental (in-phase) conductance at peak amplitude v ≥ 0, S, ≥ 0, finite */
   conductance(amplitude: number): number;
   /** fundamental susceptance at peak amplitude v, S (default 0) */

@@ -71,6 +71,7 @@ export function tokenLoadModel(load: TokenLoad, options: TokenLoadModelOptions =
   const label = loadLabel(load);
   const exact: LinkLoadModel = {
     label,
+    token: load,
     linear: load.kind === "resistor",
     conductance: (amplitude: number) => fundamentalConductance(load, amplitude),
     ledCurrents: (amplitude: number) =>
@@ -97,6 +98,7 @@ export function tokenLoadModel(load: TokenLoad, options: TokenLoadModelOptions =
   const top = tab.n * h;
   return {
     label,
+    token: load,
     conductance(a: number): number {
       if (!(a >= h && a < top)) return fundamentalConductance(load, a);
       // cubic Hermite on ln G between nodes j and j+1 (node j at (j+1)·h)
