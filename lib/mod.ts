@@ -187,6 +187,17 @@ export {
 export type { LinkResult, TransmitterState, ReceiverState, LedState, LinkPower, Phasor } from "./circuit/link/result.ts";
 export { maxLinkEfficiency, optimalLoad } from "./circuit/linkLimits.ts";
 export { frequencySweep, type FrequencySweep, type SweepFrequencies } from "./circuit/frequencySweep.ts";
+// steady state beyond the fundamental: harmonic balance, model choice (issue 14)
+export {
+  solveLinkHarmonic,
+  DEFAULT_HARMONIC_ORDER,
+  type HarmonicOptions,
+  type HarmonicLinkResult,
+  type HarmonicDetail,
+} from "./circuit/harmonic/solveHarmonic.ts";
+export type { ModelBand } from "./circuit/harmonic/modelBand.ts";
+export type { DriveWaveform } from "./circuit/drive.ts";
+// end steady state
 // transient: time-domain engine
 export {
   GROUND,
