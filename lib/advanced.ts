@@ -78,3 +78,4 @@ export { medhurstCoefficient, MEDHURST_TABLE } from "./em/selfCapacitance.ts";
 export { wOfLog } from "./circuit/loads/led.ts";
 export { fundamentalCurrentSlope, describingFunctionReference } from "./circuit/loads/describingFunction.ts";
 export { tokenLoadModel, type TokenLoadModelOptions } from "./circuit/link/tokenLoad.ts";
+export { fundamentalCheck, type FundamentalCheck } from "./circuit/harmonic/modelChoice.ts";

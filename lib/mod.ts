@@ -195,6 +195,13 @@ export {
   type HarmonicLinkResult,
   type HarmonicDetail,
 } from "./circuit/harmonic/solveHarmonic.ts";
+export {
+  solveLinkModel,
+  FUNDAMENTAL_ACCEPT,
+  type LinkModel,
+  type ModelOptions,
+  type ModelledLinkResult,
+} from "./circuit/harmonic/modelChoice.ts";
 export type { ModelBand } from "./circuit/harmonic/modelBand.ts";
 export type { DriveWaveform } from "./circuit/drive.ts";
 // end steady state

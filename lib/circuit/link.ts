@@ -29,7 +29,9 @@ import type { TokenLoad } from "./loads/types.ts";
 import { LinkSystemInput, type LinkSystem, type LinkSystemParsed } from "./link/schema.ts";
 import type { LinkLoadModel, LinkNetwork, LinkOptions } from "./link/network.ts";
 import type { LinkResult } from "./link/result.ts";
-import { solveLinkNetwork } from "./link/solveNetwork.ts";
+import { solveLinkModel, type ModelOptions } from "./harmonic/modelChoice.ts";
+import type { HarmonicDetail } from "./harmonic/result.ts";
+import type { ModelBand } from "./harmonic/modelBand.ts";
 import { tokenLoadModel } from "./link/tokenLoad.ts";
 
 export type { LinkSystem } from "./link/schema.ts";
@@ -42,8 +44,17 @@ export interface LinkNetworkBuild {
   readonly warnings: readonly string[];
 }
 
-/** What solveLink returns: the link result plus the coupling factors and the network it solved. */
+/**
+ * What solveLink returns: the link result plus the model that produced it and its error band,
+ * the coupling factors and the network it solved (harmonic balance adds `harmonic`).
+ */
 export interface LinkSolution extends LinkResult {
+  /** "fundamental" (describing function) or "harmonic" (harmonic balance) */
+  readonly model: "fundamental" | "harmonic";
+  /** relative error band on LED average currents and coil currents, and where it comes from */
+  readonly errorBand: ModelBand;
+  /** every harmonic, waveform peaks and the truncation indicator (harmonic balance only) */
+  readonly harmonic?: HarmonicDetail;
   /** coupling factors kᵢⱼ, index 0 = transmitter, 1… the receivers */
   readonly coupling: readonly (readonly number[])[];
   /** the numeric network that was solved (inductance matrix, resistances, parts) */
@@ -238,7 +249,13 @@ export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoad
  *
  * Method: coupled-circuit (loop) impedance matrix at the drive frequency with transmitter–token
  * and token–token mutual inductances from lib/em; nonlinear loads by their describing functions,
- * solved by damped Newton on the tokens' tank amplitudes (./link/solveNetwork.ts).
+ * solved by damped Newton on the tokens' tank amplitudes (./link/solveNetwork.ts) — or, where
+ * the fundamental is not enough, by harmonic balance over the drive frequency and its harmonics
+ * (./harmonic/, Kundert, White & Sangiovanni-Vincentelli 1990). `options.model` chooses:
+ * "auto" (default) keeps the describing function where one harmonic-balance step from it
+ * changes no LED current and not the transmitter current by more than 0.5 %, and runs harmonic
+ * balance elsewhere (rectifying or hard-clipping loads, the single-switch drive); "fundamental"
+ * and "harmonic" force one. The result names its `model` and `errorBand`.
  *
  * @param system.frequency drive frequency, Hz or "200 kHz".
  * @param system.transmitter `{ coil, pose? (default origin, +z), compensation: "series" |
@@ -250,8 +267,10 @@ export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoad
  *   capacitor, load: TokenLoad | LinkLoadModel, resistance? }`.
  * @param system.temperature conductor temperature for the coil resistances, K (default 20 °C).
  * @param options lit threshold (A; default 0.5 mA — trade practice: 0.1–1 mA visible indoors),
- *   brightness reference, caution voltage, iteration cap, what to do on non-convergence, and
- *   `tabulateLoads` (default false) to tabulate the loads' describing functions for sweeps.
+ *   brightness reference, caution voltage, iteration cap, what to do on non-convergence,
+ *   `tabulateLoads` (default false) to tabulate the loads' describing functions for sweeps,
+ *   `model` ("auto" default, "fundamental", "harmonic"), and harmonic balance's `order` (default 15)
+ *   and `samples`.
  * @returns {@link LinkSolution} (SI; amplitudes peak, RMS named).
  * @throws TanklightInputError naming the field on bad input; LinkConvergenceError if the
  *   operating point is not found (unless options.onNonConvergence is "warn").
@@ -263,8 +282,8 @@ export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoad
  *     capacitor: { capacitance: "2.2 nF" }, load: { kind: "led", led: ledPreset("red") } }] })
  *     .receivers[0].leds[0].lit // → true
  */
-export function solveLink(system: LinkSystem, options: LinkOptions & { readonly tabulateLoads?: boolean } = {}): LinkSolution {
+export function solveLink(system: LinkSystem, options: ModelOptions & { readonly tabulateLoads?: boolean } = {}): LinkSolution {
   const built = linkNetwork(system, { tabulateLoads: options.tabulateLoads ?? false });
-  const r = solveLinkNetwork(built.network, options);
+  const r = solveLinkModel(built.network, options);
   return { ...r, warnings: [...built.warnings, ...r.warnings], coupling: built.coupling, network: built.network };
 }

@@ -52,9 +52,11 @@ describe("solveLink(system)", () => {
   });
 
   it("solves a real LED token: the amplitude is a fixed point of the LED's describing function and power balances", () => {
-    const r = solveLink(system([tokenAt(0, "50 mm")]));
+    // the describing-function model (its fixed point is what this pins)
+    const r = solveLink(system([tokenAt(0, "50 mm")]), { model: "fundamental" });
+    expect(r.model).toBe("fundamental");
     const s = r.receivers[0]!;
-    const frozen = solveLink(system([tokenAt(0, "50 mm", { kind: "resistor", resistance: 1 / fundamentalConductance(red, s.loadVoltage) })]));
+    const frozen = solveLink(system([tokenAt(0, "50 mm", { kind: "resistor", resistance: 1 / fundamentalConductance(red, s.loadVoltage) })]), { model: "fundamental" });
     // independent linear re-solve; rtol 1e-9 (Newton tolerance 1e-10)
     expectRelClose(frozen.receivers[0]!.loadVoltage, s.loadVoltage, 1e-9, "fixed point with the red preset");
     const p = r.power;

@@ -34,6 +34,8 @@ export interface HarmonicDetail {
     readonly minimum: number;
     /** total harmonic distortion √(Σ_{h≥2}|V_h|²)/|V₁| over the harmonics kept */
     readonly distortion: number;
+    /** the truncation indicator of the switch port (large, ≳ 0.25, under hard switching) */
+    readonly truncation: number;
   };
   readonly receivers: readonly {
     /** load (tank) voltage, V, harmonics 0…H */
@@ -45,8 +47,8 @@ export interface HarmonicDetail {
     readonly coilCurrent: HarmonicPhasors;
   }[];
   /**
-   * truncation indicator: the port-voltage change the dropped harmonics H+1…2H of the port
-   * currents would make, relative to the fundamental (largest over the ports)
+   * truncation indicator: the tank-voltage change the dropped harmonics H+1…2H of each token
+   * load's current would make, relative to the fundamental (largest over the tokens)
    */
   readonly truncation: number;
   /** largest residual entry at the solution, V */
@@ -170,7 +172,7 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
   const capV: Phasor[] = [];
   const srcI: Phasor[] = [];
   const termV: Phasor[] = [];
-  let switchDetail: HarmonicDetail["switchNode"];
+  let switchDetail: Omit<NonNullable<HarmonicDetail["switchNode"]>, "truncation"> | undefined;
   let input = 0;
   let driverLoss = 0;
   if (wf?.kind === "singleSwitch") {
@@ -344,6 +346,7 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
 
   // ── truncation indicator: harmonics H+1…2H of the port currents through |T_pp,H|·H/h ──
   let truncation = 0;
+  let switchTruncation = 0;
   if (P > 0) {
     const hi = new Float64Array(4 * H + 1);
     for (let p = 0; p < P; p++) {
@@ -352,7 +355,12 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
       let dv = 0;
       for (let h = H + 1; h <= 2 * H && 2 * h < N; h++) dv += (tpp * H * Math.hypot(hi[2 * h - 1]!, hi[2 * h]!)) / h;
       const v1 = Math.hypot(z[p * B + 1]!, z[p * B + 2]!);
-      if (v1 > 0) truncation = Math.max(truncation, dv / v1);
+      if (!(v1 > 0)) continue;
+      // token ports make the indicator; the switch's own jump leaves large dropped harmonics at
+      // its node that hardly reach the coil current under zero-voltage switching, so it is kept
+      // apart (large under hard switching: the discharge spike)
+      if (ports.portReceiver[p]! < 0) switchTruncation = dv / v1;
+      else truncation = Math.max(truncation, dv / v1);
     }
   }
 
@@ -430,7 +438,7 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
       samples: N,
       transmitterCurrent: i0,
       transmitterCurrentPeak: t1Peak,
-      ...(switchDetail ? { switchNode: switchDetail } : {}),
+      ...(switchDetail ? { switchNode: { ...switchDetail, truncation: switchTruncation } } : {}),
       receivers: rxDetail,
       truncation,
       residual: a.residual,
