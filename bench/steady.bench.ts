@@ -1,0 +1,71 @@
+/**
+ * Steady-state workloads (issue 14): harmonic balance against the describing function for one
+ * LED token (target: HB with 9 harmonics ≤ 20× the describing function's time, same run), and a
+ * 121 × 61 map with model "auto" over a bi-colour token (red + InGaN green back to back; target
+ * ≤ 1 s; M per pose computed once in the set-up, as a map would reuse it). Loads tabulated for
+ * the describing function (tokenLoadModel tabulate), as sweeps use them.
+ */
+import type { Workload } from "./harness.ts";
+import { solveLinkNetwork } from "../lib/circuit/link/solveNetwork.ts";
+import type { LinkNetwork } from "../lib/circuit/link/network.ts";
+import { tokenLoadModel } from "../lib/circuit/link/tokenLoad.ts";
+import { solveLinkHarmonic } from "../lib/circuit/harmonic/solveHarmonic.ts";
+import { solveLinkModel } from "../lib/circuit/harmonic/modelChoice.ts";
+import { fullBridgeDrive, sineDrive } from "../lib/circuit/drive.ts";
+import { ledPreset } from "../lib/circuit/loads/ledPresets.ts";
+import { roundCoil } from "../lib/em/builders/roundCoil.ts";
+import { selfInductance } from "../lib/em/selfInductance.ts";
+import { coilResistance } from "../lib/em/losses/coilResistance.ts";
+import { couplingEvaluator } from "../lib/em/couplingEvaluator.ts";
+
+const f = 200e3;
+const w = 2 * Math.PI * f;
+const red = { kind: "led" as const, led: ledPreset("red") };
+const bicolour = { kind: "antiParallel" as const, a: ledPreset("red"), b: ledPreset("green-ingan") };
+
+// one token, one pose: 10 µH series-tuned transmitter, 30 µH parallel-tuned token, k = 0.05, sine 1 V
+const L1 = 10e-6;
+const L2 = 30e-6;
+const M = 0.05 * Math.sqrt(L1 * L2);
+const one: LinkNetwork = {
+  frequency: f,
+  inductance: [[L1, M], [M, L2]],
+  transmitter: { resistance: 1.5, compensation: "series", capacitance: 1 / (w * w * L1), drive: sineDrive(1) },
+  receivers: [{ resistance: 1.2, topology: "parallel", capacitance: 1 / (w * w * L2), load: tokenLoadModel(red, { tabulate: true }) }],
+};
+
+// the map: a 5-turn, 50 mm transmitter on a 12 V full bridge; a pebble token (120 turns) with a red + green pair
+const tx = roundCoil({ meanRadius: 0.05, turns: 5, wire: { diameter: 0.8e-3, insulation: 0.03e-3 } });
+const token = roundCoil({ innerRadius: 0.0065, turns: 120, layers: 6, wire: { diameter: 0.1e-3, insulation: 0.01e-3 } });
+const Ltx = selfInductance(tx, { frequency: f });
+const Ltok = selfInductance(token, { frequency: f });
+const ev = couplingEvaluator(tx, token, { frequency: f });
+const bicolourModel = tokenLoadModel(bicolour, { tabulate: true });
+const mapNets: LinkNetwork[] = [];
+for (let iz = 0; iz < 61; iz++) {
+  for (let ix = 0; ix < 121; ix++) {
+    const m = ev.mutual({ position: [0, 0, 0] }, { position: [(ix - 60) * 1e-3, 0, 0.005 + iz * 1e-3] });
+    mapNets.push({
+      frequency: f,
+      inductance: [[Ltx, m], [m, Ltok]],
+      transmitter: { resistance: coilResistance(tx, f), compensation: "series", capacitance: 1 / (w * w * Ltx), drive: fullBridgeDrive(5, 0.05) },
+      receivers: [{ resistance: coilResistance(token, f), topology: "parallel", capacitance: 1 / (w * w * Ltok), load: bicolourModel }],
+    });
+  }
+}
+
+export const workloads: Workload[] = [
+  { name: "steady: describing function, 1 red LED token", size: "1 pose (M given)", fn: () => solveLinkNetwork(one) },
+  { name: "steady: harmonic balance, 1 red LED token, 9 harmonics", size: "1 pose, 72 samples", fn: () => solveLinkHarmonic(one, { order: 9 }) },
+  {
+    name: "steady: 121×61 map, model auto, bi-colour token",
+    size: "7381 poses (M given)",
+    target: 1,
+    minTime: 2,
+    fn: () => {
+      let lit = 0;
+      for (const n of mapNets) if (solveLinkModel(n, { model: "auto" }).receivers[0]!.leds[1]!.lit) lit++;
+      return lit;
+    },
+  },
+];
