@@ -273,6 +273,29 @@ export { checkRating, TYPICAL_INDICATOR_LED, WINDING_CURRENT_DENSITY, type Ratin
 export { cautions, type Caution, type CautionContext } from "./safety/cautions.ts";
 export { safetyReport, DEFAULT_METAL_OBJECTS, type SafetyReport, type SafetyReportOptions } from "./safety/safetyReport.ts";
 
+// ── lib/analysis ─────────────────────────────────────────────────────────────
+// coverage maps, range, supply budget, worker threads
+export {
+  coverageMap,
+  type CoverageMap,
+  type CoverageOptions,
+  type DeadZone,
+} from "./analysis/coverageMap.ts";
+export { findRange, type RangeResult, type RangeOptions, type RangePoint, type RayInput } from "./analysis/findRange.ts";
+export { type RegionInput, type OrientationInput, type GridAxis } from "./analysis/region.ts";
+export {
+  supplyBudget,
+  supplyVerdict,
+  USB_SUPPLIES,
+  SUPPLY_DERATING,
+  type SupplyInput,
+  type SupplyVerdict,
+  type SupplyBudget,
+  type UsbSupply,
+} from "./analysis/supplyBudget.ts";
+export type { Progress, ProgressCallback } from "./analysis/progress.ts";
+export { taskPool, type TaskPool, type ThreadsOption } from "./analysis/pool.ts";
+
 // ── lib/report ───────────────────────────────────────────────────────────────
 /** Chart builders returning vega-lite specs: `chart.coverage(…)`, `chart.ledCurrent(…)`, … (lib/report/chart.ts). */
 export * as chart from "./report/chart.ts";

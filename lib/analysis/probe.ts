@@ -1,0 +1,148 @@
+/**
+ * A token probe: the link of one system solved with one of its tokens moved to many poses,
+ * fast. The network (self inductances, resistances, parts, drive) is built once with
+ * `linkNetwork`; per pose only the moving token's mutual inductances change, computed with
+ * `couplingEvaluator` (lib/em), and the small coupled-circuit network is solved with the
+ * nonlinear link solver (`solveLinkNetwork`). No full `solveLink` rebuild per point.
+ *
+ * The probe's description (`ProbeSpec`, made by ./probeSpec.ts) is plain data — coils, numbers
+ * and loads encoded by ./loadCodec.ts — so worker threads can rebuild the same probe and give
+ * identical numbers. This module imports only the numeric core (no schemas, no unit parser), so
+ * a worker thread starts quickly.
+ */
+import { couplingEvaluator, type CouplingEvaluator } from "../em/couplingEvaluator.ts";
+import type { Coil, Pose, Vec3 } from "../em/types.ts";
+import type { LinkLoadModel, LinkNetwork, ReceiverNetwork } from "../circuit/link/network.ts";
+import { solveLinkNetwork } from "../circuit/link/solveNetwork.ts";
+import { tokenLoadModel } from "../circuit/link/tokenLoad.ts";
+import { decodeLoad, type LoadData } from "./loadCodec.ts";
+
+/** Relative accuracy of the per-pose mutual inductances (couplingEvaluator relTol), the link solver's own choice. */
+export const PROBE_MUTUAL_RTOL = 1e-3;
+
+/** Plain-data description of a probe (structured-clone safe when `models` is absent). */
+export interface ProbeSpec {
+  readonly frequency: number;
+  /** the network's transmitter and receivers without their loads (SI numbers) */
+  readonly inductance: readonly (readonly number[])[];
+  readonly transmitter: LinkNetwork["transmitter"];
+  readonly receivers: readonly Omit<ReceiverNetwork, "load">[];
+  /** each receiver's load as data, or null where the system gave a ready load model */
+  readonly loads: readonly (LoadData | null)[];
+  /** the coils, referenced by index below */
+  readonly coils: readonly Coil[];
+  readonly txCoil: number;
+  readonly txPose: Pose;
+  /** index of the moving token among the receivers */
+  readonly token: number;
+  readonly tokenCoil: number;
+  /** the other receivers present: receiver index, coil index, pose */
+  readonly others: readonly { readonly receiver: number; readonly coil: number; readonly pose: Pose }[];
+  /** token axes to try at every position (unit vectors); the worst one counts */
+  readonly axes: readonly Vec3[];
+  /** lit threshold, A */
+  readonly litThreshold: number;
+  /** the drive's DC supply voltage, V (undefined for sine and current-regulated drives) */
+  readonly supplyVoltage?: number;
+}
+
+/** What the probe returns for a batch of positions (one entry per position; mutual per position × axis). */
+export interface ProbeValues {
+  /** the dimmest LED's average current, worst over the axes, A */
+  readonly current: Float64Array;
+  /** transmitter–token mutual inductance, H: mutual[p·axes + a] */
+  readonly mutual: Float64Array;
+  /** DC supply current, highest over the axes, A (0 when the drive has no DC supply) */
+  readonly supply: Float64Array;
+  /** how many solves did not converge (their values are the solver's last iterate) */
+  readonly unconverged: number;
+}
+
+/** True when the spec can be sent to worker threads (every load given as data). */
+export function transferable(spec: ProbeSpec): boolean {
+  return spec.loads.every((l) => l !== null);
+}
+
+/** The spec without its in-thread load models (for posting to a worker). */
+export function portableSpec(spec: ProbeSpec & { readonly models?: unknown }): ProbeSpec {
+  const { models: _m, ...rest } = spec;
+  return rest;
+}
+
+/** A ready probe: evaluates batches of token positions. */
+export interface Probe {
+  readonly spec: ProbeSpec;
+  /** positions as [x, y, z, x, y, z, …] (m) */
+  evaluate(positions: Float64Array): ProbeValues;
+  /** the worst-LED current at one pose (position and axis), A, and the mutual inductance, H */
+  at(position: Vec3, axis: Vec3): { readonly current: number; readonly mutual: number; readonly supply: number; readonly converged: boolean };
+}
+
+/**
+ * Makes a probe from its spec: one couplingEvaluator per coil pair, the loads' describing
+ * functions tabulated once (tokenLoadModel tabulate), then per pose M and a nonlinear solve.
+ */
+export function makeProbe(spec: ProbeSpec & { readonly models?: readonly LinkLoadModel[] }): Probe {
+  const models: LinkLoadModel[] = spec.loads.map((l, i) => (l !== null ? tokenLoadModel(decodeLoad(l), { tabulate: true }) : spec.models![i]!));
+  const evs = new Map<string, CouplingEvaluator>();
+  const ev = (a: number, b: number): CouplingEvaluator => {
+    const key = `${a}|${b}`;
+    let e = evs.get(key);
+    if (!e) {
+      e = couplingEvaluator(spec.coils[a]!, spec.coils[b]!, { relTol: PROBE_MUTUAL_RTOL });
+      evs.set(key, e);
+    }
+    return e;
+  };
+  const evTx = ev(spec.txCoil, spec.tokenCoil);
+  const evOthers = spec.others.map((o) => ev(o.coil, spec.tokenCoil));
+  const n = spec.receivers.length + 1;
+  const t = spec.token + 1;
+  const receivers: ReceiverNetwork[] = spec.receivers.map((r, i) => ({ ...r, load: models[i]! }));
+  const options = { litThreshold: spec.litThreshold, onNonConvergence: "warn" as const };
+  const at = (position: Vec3, axis: Vec3): { current: number; mutual: number; supply: number; converged: boolean } => {
+    const pose: Pose = { position, axis };
+    const L = spec.inductance.map((row) => row.slice());
+    const m0 = evTx.mutual(spec.txPose, pose);
+    L[0]![t] = m0;
+    L[t]![0] = m0;
+    spec.others.forEach((o, j) => {
+      const m = evOthers[j]!.mutual(o.pose, pose);
+      L[o.receiver + 1]![t] = m;
+      L[t]![o.receiver + 1] = m;
+    });
+    void n;
+    const r = solveLinkNetwork({ frequency: spec.frequency, inductance: L, transmitter: spec.transmitter, receivers }, options);
+    let current = Infinity;
+    for (const led of r.receivers[spec.token]!.leds) current = Math.min(current, led.averageCurrent);
+    const supply = spec.supplyVoltage !== undefined ? Math.max(0, r.power.input) / spec.supplyVoltage : 0;
+    return { current: Math.max(0, current), mutual: m0, supply, converged: r.converged };
+  };
+  return {
+    spec,
+    at,
+    evaluate(positions: Float64Array): ProbeValues {
+      const count = positions.length / 3;
+      const na = spec.axes.length;
+      const current = new Float64Array(count);
+      const mutual = new Float64Array(count * na);
+      const supply = new Float64Array(count);
+      let unconverged = 0;
+      for (let p = 0; p < count; p++) {
+        const pos: Vec3 = [positions[3 * p]!, positions[3 * p + 1]!, positions[3 * p + 2]!];
+        let worst = Infinity;
+        let most = 0;
+        for (let a = 0; a < na; a++) {
+          const v = at(pos, spec.axes[a]!);
+          worst = Math.min(worst, v.current);
+          most = Math.max(most, v.supply);
+          mutual[p * na + a] = v.mutual;
+          if (!v.converged) unconverged++;
+        }
+        current[p] = worst;
+        supply[p] = most;
+      }
+      return { current, mutual, supply, unconverged };
+    },
+  };
+}
