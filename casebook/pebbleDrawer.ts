@@ -27,6 +27,7 @@ import {
   coilResistance,
   couplingFactor,
   DEFAULT_LIT_THRESHOLD,
+  findRange,
   formatQuantity,
   ledPreset,
   mutualInductance,
@@ -178,28 +179,18 @@ export function run(options: ScenarioOptions = {}): { notebook: Notebook; result
     return { height: z, red: ledCurrent("red", 0, z), green: ledCurrent(COLOURS.green, 0, z) };
   });
 
-  const bisect = (lit: (s: number) => boolean, lo: number, hi: number): number => {
-    while (hi - lo > 2e-4) {
-      const m = 0.5 * (lo + hi);
-      if (lit(m)) lo = m;
-      else hi = m;
-    }
-    return lo;
-  };
-  const axialRange = {
-    red: bisect((z) => ledCurrent("red", 0, z) >= threshold, LID, 0.3),
-    green: bisect((z) => ledCurrent(COLOURS.green, 0, z) >= threshold, LID, 0.3),
-  };
-  // sliding on the lid: first step outward in 2 mm steps, then bisect the edge of the lit patch
-  const sideways = (colour: LedColour): number => {
-    let x = 0;
-    while (x < 0.2 && ledCurrent(colour, x + 2e-3, LID) >= threshold) x += 2e-3;
-    return bisect((s) => ledCurrent(colour, s, LID) >= threshold, x, x + 2e-3);
-  };
+  // how far a pebble still glows: findRange scans outward and bisects each lit/unlit boundary
+  // to 0.1 mm (bracketing and bisection; a sign change of M between scan points is a dark line)
+  const axial = (colour: LedColour, litThreshold = threshold): number =>
+    LID + findRange(system(colour, 0, 0), { from: [0, 0, LID], along: [0, 0, 1] }, { max: 0.3, litThreshold }).range;
+  const axialRange = { red: axial("red"), green: axial(COLOURS.green) };
+  // sliding on the lid: the lit patch around the centre ends where the flux first fails
+  const sideways = (colour: LedColour): number =>
+    findRange(system(colour, 0, 0), { from: [0, 0, LID], along: [1, 0, 0] }, { max: 0.2 }).range;
   const sidewaysRange = { red: sideways("red"), green: sideways(COLOURS.green) };
   // the just-visible end of the trade's visibility band (0.1 mA): how far a pebble glows faintly
   const faintThreshold = 0.1e-3;
-  const faintRange = bisect((z) => ledCurrent("red", 0, z) >= faintThreshold, LID, 0.3);
+  const faintRange = axial("red", faintThreshold);
   const near = solveLink(system("red", 0, LID));
 
   nb.heading("2. How bright, how far");
@@ -236,7 +227,7 @@ export function run(options: ScenarioOptions = {}): { notebook: Notebook; result
     "coupling factor against height on the axis (left) and against sideways offset for a pebble lying on the lid (right): the sign change near the 50 mm winding radius is the dark ring",
   );
   nb.text(
-    `- On the axis a red pebble glows up to ${q(axialRange.red, "m")}, a green one up to ${q(axialRange.green, "m")}:`,
+    `- On the axis a red pebble glows up to ${q(axialRange.red, "m")}, a green one up to ${q(axialRange.green, "m")} (findRange, to 0.1 mm):`,
     "  the lower forward voltage of the red LED clamps its tank lower and starts conducting in a weaker field.",
     `  Just visible (${q(faintThreshold, "A")}), a red pebble still glows faintly at ${q(faintRange, "m")}.`,
     `- Lying on the lid, a red pebble stays lit out to ${q(sidewaysRange.red, "m")} from the centre (green ${q(sidewaysRange.green, "m")});`,
