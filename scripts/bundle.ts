@@ -10,7 +10,8 @@
 import { build } from "esbuild";
 
 await build({
-  entryPoints: ["lib/mod.ts", "lib/advanced.ts"],
+  // the analysis worker is its own entry (dist/analysis/worker.js): worker threads load it by URL
+  entryPoints: { mod: "lib/mod.ts", advanced: "lib/advanced.ts", "analysis/worker": "lib/analysis/worker.ts" },
   outdir: "dist",
   bundle: true,
   splitting: true,
@@ -20,6 +21,7 @@ await build({
   minify: true,
   keepNames: true,
   sourcemap: true,
-  external: ["zod"],
+  // tinypool finds its own worker entry next to its files, so it stays an outside package too
+  external: ["zod", "tinypool"],
   logLevel: "warning",
 });

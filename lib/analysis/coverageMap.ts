@@ -129,9 +129,7 @@ const MARGIN_FLOOR = 1e-6;
  * @param options see {@link CoverageOptions}.
  * @returns {@link CoverageMap}: typed grids with axes and units, lit fraction, weakest point,
  *   dead zones, supply current; SI units.
- * @example
- *   const map = await coverageMap(system, { x: { from: -0.09, to: 0.09, points: 121 }, y: 0, z: "10 mm" });
- *   map.litFraction // → e.g. 0.55; map.deadZones[0].kind === "interval"
+ * @example (await coverageMap(system, { x: { from: 0, to: "90 mm", step: "10 mm" }, y: 0, z: "5 mm" })).deadZones.length // → 2 (a dark ring at the 50 mm winding radius, and beyond 74 mm)
  */
 export async function coverageMap(system: LinkSystem, region: RegionInput, options: CoverageOptions = {}): Promise<CoverageMap> {
   const where = "coverageMap";

@@ -89,7 +89,7 @@ const Opts = z.object({
  * @param options orientation, lit threshold, max (0.3 m), step (max/150), resolution (0.1 mm).
  * @returns {@link RangeResult}: range (continuous from the start), furthest lit distance, the
  *   boundaries, the margin curve; m and A.
- * @example findRange(system, { from: [0, 0, "5 mm"], along: [0, 0, 1] }).range // → ≈ 0.06 m for the pebble drawer
+ * @example findRange(system, { from: [0, 0, "5 mm"], along: [0, 0, 1] }).range // → 0.051 (m above the lid, pebble drawer)
  */
 export function findRange(system: LinkSystem, direction: RayInput, options: RangeOptions = {}): RangeResult {
   const where = "findRange";

@@ -4,7 +4,7 @@
  * inputs, so any number of threads gives the same numbers as one.
  *
  * The same code runs from the TypeScript sources and from the built JavaScript:
- * - from dist/ the worker is ./worker.js, plain JavaScript;
+ * - from the bundled dist/ the worker is dist/analysis/worker.js, plain JavaScript;
  * - from the .ts sources under Node the worker imports ./worker.ts after registering tsx's
  *   loader in the thread (tsx, the project's TypeScript runner, must be installed);
  * - under Deno the worker module is TypeScript that Deno runs natively (node:worker_threads).
@@ -39,9 +39,11 @@ declare const Deno: unknown;
  * does not apply a parent's `--import` loader to a worker's own imports.
  */
 function workerModule(): string {
-  const ext = import.meta.url.endsWith(".ts") ? ".ts" : ".js";
-  const worker = new URL(`./worker${ext}`, import.meta.url).href;
-  if (ext === ".js" || typeof Deno !== "undefined") return worker;
+  // bundled dist/: this code sits in dist/mod.js or a shared chunk beside it, and the worker is
+  // the bundle's own entry dist/analysis/worker.js (scripts/bundle.ts)
+  if (!import.meta.url.endsWith(".ts")) return new URL("./analysis/worker.js", import.meta.url).href;
+  const worker = new URL("./worker.ts", import.meta.url).href;
+  if (typeof Deno !== "undefined") return worker;
   const tsxPackage = pathToFileURL(createRequire(import.meta.url).resolve("tsx/package.json"));
   const api = new URL("./dist/esm/api/index.mjs", tsxPackage).href;
   const code = `import { register } from ${JSON.stringify(api)};\nregister();\nconst m = await import(${JSON.stringify(worker)});\nexport default m.default;\n`;

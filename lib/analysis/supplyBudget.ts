@@ -121,7 +121,7 @@ export interface SupplyBudget extends SupplyVerdict {
  * @param supply see {@link supplyVerdict}.
  * @param options link options (lit threshold, …).
  * @throws TanklightInputError if the drive names no DC supply.
- * @example supplyBudget(oneTurnOnHalfBridge, "usb2").verdict // → "over" (10.5 A, 52.6 W)
+ * @example a 1-turn, 50 mm coil series-tuned on a 5 V half bridge: supplyBudget(system, "usb2").verdict is "over" (15.0 A, 75.2 W)
  */
 export function supplyBudget(system: LinkSystem, supply: SupplyInput, options: LinkOptions = {}): SupplyBudget {
   const drive = (system as { transmitter?: { drive?: unknown } }).transmitter?.drive as LinkSystemParsed["transmitter"]["drive"] | undefined;
