@@ -295,6 +295,15 @@ export {
 } from "./analysis/supplyBudget.ts";
 export type { Progress, ProgressCallback } from "./analysis/progress.ts";
 export { taskPool, type TaskPool, type ThreadsOption } from "./analysis/pool.ts";
+export {
+  toleranceYield,
+  type YieldOptions,
+  type YieldResult,
+  type Percentiles,
+  type SensitivityEntry,
+} from "./analysis/toleranceYield.ts";
+export { VariationsInput, LED_SPREAD_PRESETS } from "./analysis/yieldSpec.ts";
+export { wilsonInterval, type ProportionInterval } from "./analysis/confidence.ts";
 
 // ── lib/report ───────────────────────────────────────────────────────────────
 /** Chart builders returning vega-lite specs: `chart.coverage(…)`, `chart.ledCurrent(…)`, … (lib/report/chart.ts). */

@@ -4,28 +4,33 @@
  * probe (coupling evaluators, tabulated loads) is built once per worker and run.
  */
 import { makeProbe, type Probe, type ProbeSpec, type ProbeValues } from "./probe.ts";
+import { makeYieldModel, type YieldModel, type YieldSpec, type YieldValues } from "./yieldModel.ts";
 
-/** A task for a worker. */
-export type WorkerTask = { readonly kind: "probe"; readonly id: string; readonly spec: ProbeSpec; readonly positions: Float64Array };
+/** A task for a worker: token positions of a probe, or samples of a yield model. */
+export type WorkerTask =
+  | { readonly kind: "probe"; readonly id: string; readonly spec: ProbeSpec; readonly positions: Float64Array }
+  | { readonly kind: "yield"; readonly id: string; readonly spec: YieldSpec; readonly draws: Float64Array };
 
-// The worker's own cache of built probes (lives as long as the worker thread; at most a few).
-const probes = new Map<string, Probe>();
+// The worker's own cache of built models by spec id (lives as long as the worker thread; a few at most).
+const models = new Map<string, Probe | YieldModel>();
 const MAX_CACHED = 4;
 
-function probeFor(id: string, spec: ProbeSpec): Probe {
-  let p = probes.get(id);
-  if (!p) {
-    if (probes.size >= MAX_CACHED) probes.delete(probes.keys().next().value!);
-    p = makeProbe(spec);
-    probes.set(id, p);
+function cached<T extends Probe | YieldModel>(id: string, make: () => T): T {
+  let m = models.get(id);
+  if (!m) {
+    if (models.size >= MAX_CACHED) models.delete(models.keys().next().value!);
+    m = make();
+    models.set(id, m);
   }
-  return p;
+  return m as T;
 }
 
 /** Runs one task (called by tinypool in a worker thread). */
-export default function runTask(task: WorkerTask): ProbeValues {
+export default function runTask(task: WorkerTask): ProbeValues | YieldValues {
   switch (task.kind) {
     case "probe":
-      return probeFor(task.id, task.spec).evaluate(task.positions);
+      return cached(task.id, () => makeProbe(task.spec)).evaluate(task.positions);
+    case "yield":
+      return cached(task.id, () => makeYieldModel(task.spec)).evaluate(task.draws);
   }
 }
