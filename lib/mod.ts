@@ -304,6 +304,15 @@ export {
 } from "./analysis/toleranceYield.ts";
 export { VariationsInput, LED_SPREAD_PRESETS } from "./analysis/yieldSpec.ts";
 export { wilsonInterval, type ProportionInterval } from "./analysis/confidence.ts";
+export {
+  searchDesign,
+  RequirementsInput,
+  DesignSpaceInput,
+  type SearchOptions,
+  type DesignSearch,
+  type DesignResult,
+} from "./analysis/searchDesign.ts";
+export type { Candidate, DesignEvaluation } from "./analysis/designEval.ts";
 
 // ── lib/report ───────────────────────────────────────────────────────────────
 /** Chart builders returning vega-lite specs: `chart.coverage(…)`, `chart.ledCurrent(…)`, … (lib/report/chart.ts). */

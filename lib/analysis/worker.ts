@@ -5,11 +5,13 @@
  */
 import { makeProbe, type Probe, type ProbeSpec, type ProbeValues } from "./probe.ts";
 import { makeYieldModel, type YieldModel, type YieldSpec, type YieldValues } from "./yieldModel.ts";
+import type { Candidate, DesignEvaluation, DesignProblem } from "./designEval.ts";
 
 /** A task for a worker: token positions of a probe, or samples of a yield model. */
 export type WorkerTask =
   | { readonly kind: "probe"; readonly id: string; readonly spec: ProbeSpec; readonly positions: Float64Array }
-  | { readonly kind: "yield"; readonly id: string; readonly spec: YieldSpec; readonly draws: Float64Array };
+  | { readonly kind: "yield"; readonly id: string; readonly spec: YieldSpec; readonly draws: Float64Array }
+  | { readonly kind: "design"; readonly candidate: Candidate; readonly problem: DesignProblem };
 
 // The worker's own cache of built models by spec id (lives as long as the worker thread; a few at most).
 const models = new Map<string, Probe | YieldModel>();
@@ -26,8 +28,13 @@ function cached<T extends Probe | YieldModel>(id: string, make: () => T): T {
 }
 
 /** Runs one task (called by tinypool in a worker thread). */
-export default function runTask(task: WorkerTask): ProbeValues | YieldValues {
+export default async function runTask(task: WorkerTask): Promise<ProbeValues | YieldValues | DesignEvaluation> {
   switch (task.kind) {
+    case "design": {
+      // design candidates build coils from their numbers: the builders (schemas, units) load on first use
+      const { evaluateDesign } = await import("./designEval.ts");
+      return evaluateDesign(task.candidate, task.problem);
+    }
     case "probe":
       return cached(task.id, () => makeProbe(task.spec)).evaluate(task.positions);
     case "yield":
