@@ -78,6 +78,22 @@ export function checkThreads(threads: ThreadsOption, where: string): void {
   }
 }
 
+/**
+ * An id derived from a spec's content (FNV-1a over its JSON), so a worker keeps the model it
+ * built for one design across runs (repeated maps, a benchmark).
+ */
+export function contentId(spec: unknown): string {
+  const text = JSON.stringify(spec, (_k, v: unknown) => (ArrayBuffer.isView(v) ? Array.from(v as Float64Array) : v));
+  let h1 = 0x811c9dc5;
+  let h2 = 0x01000193;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    h1 = Math.imul(h1 ^ c, 0x01000193);
+    h2 = Math.imul(h2 ^ c, 0x5bd1e995);
+  }
+  return `${(h1 >>> 0).toString(16)}${(h2 >>> 0).toString(16)}-${text.length}`;
+}
+
 /** A unique id for a probe or run spec, so workers build each probe once. */
 export function specId(): string {
   return globalThis.crypto.randomUUID();
@@ -99,8 +115,8 @@ export async function pointEvaluator(spec: ProbeSpec, threads: ThreadsOption, lo
   }
   const owned = typeof threads !== "object";
   const pool = typeof threads === "object" ? threads : await taskPool(count);
-  const id = specId();
   const portable = portableSpec(spec);
+  const id = contentId(portable);
   return {
     threads: count,
     evaluate: (positions) => pool.run<ProbeValues>({ kind: "probe", id, spec: portable, positions }),

@@ -69,6 +69,26 @@ export function portableSpec(spec: ProbeSpec & { readonly models?: unknown }): P
   return rest;
 }
 
+/**
+ * Coupling evaluators memoised per pair of coil objects (like the link solver's own): a user's
+ * repeated maps and ranges of one design build each evaluator once. A WeakMap keyed by the coil
+ * objects, so nothing outlives the coils.
+ */
+const evaluators = new WeakMap<Coil, WeakMap<Coil, CouplingEvaluator>>();
+function evaluatorFor(a: Coil, b: Coil): CouplingEvaluator {
+  let inner = evaluators.get(a);
+  if (!inner) {
+    inner = new WeakMap();
+    evaluators.set(a, inner);
+  }
+  let e = inner.get(b);
+  if (!e) {
+    e = couplingEvaluator(a, b, { relTol: PROBE_MUTUAL_RTOL });
+    inner.set(b, e);
+  }
+  return e;
+}
+
 /** A ready probe: evaluates batches of token positions. */
 export interface Probe {
   readonly spec: ProbeSpec;
@@ -83,17 +103,9 @@ export interface Probe {
  * functions tabulated once (tokenLoadModel tabulate), then per pose M and a nonlinear solve.
  */
 export function makeProbe(spec: ProbeSpec & { readonly models?: readonly LinkLoadModel[] }): Probe {
-  const models: LinkLoadModel[] = spec.loads.map((l, i) => (l !== null ? tokenLoadModel(decodeLoad(l), { tabulate: true }) : spec.models![i]!));
-  const evs = new Map<string, CouplingEvaluator>();
-  const ev = (a: number, b: number): CouplingEvaluator => {
-    const key = `${a}|${b}`;
-    let e = evs.get(key);
-    if (!e) {
-      e = couplingEvaluator(spec.coils[a]!, spec.coils[b]!, { relTol: PROBE_MUTUAL_RTOL });
-      evs.set(key, e);
-    }
-    return e;
-  };
+  // in this thread the system's own tabulated loads; in a worker the same loads rebuilt from data
+  const models: LinkLoadModel[] = spec.loads.map((l, i) => spec.models?.[i] ?? tokenLoadModel(decodeLoad(l!), { tabulate: true }));
+  const ev = (a: number, b: number): CouplingEvaluator => evaluatorFor(spec.coils[a]!, spec.coils[b]!);
   const evTx = ev(spec.txCoil, spec.tokenCoil);
   const evOthers = spec.others.map((o) => ev(o.coil, spec.tokenCoil));
   const n = spec.receivers.length + 1;

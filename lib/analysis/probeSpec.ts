@@ -33,7 +33,7 @@ export interface ProbeOptions {
  * @param system a {@link LinkSystem}; the moving token's own pose is ignored.
  * @param options token index, others present, axes, lit threshold.
  */
-export function probeSpec(system: LinkSystem, options: ProbeOptions, where: string): ProbeSpec & { readonly models?: readonly LinkLoadModel[] } {
+export function probeSpec(system: LinkSystem, options: ProbeOptions, where: string): ProbeSpec & { readonly models: readonly LinkLoadModel[] } {
   const parsed = parseInput(LinkSystemInput, system, where);
   const k = options.token ?? 0;
   if (!(Number.isInteger(k) && k >= 0 && k < parsed.receivers.length)) {
@@ -80,7 +80,7 @@ export function probeSpec(system: LinkSystem, options: ProbeOptions, where: stri
     axes: options.axes ?? [[0, 0, 1]],
     litThreshold: options.litThreshold ?? DEFAULT_LIT_THRESHOLD,
     ...(supplyVoltage !== undefined ? { supplyVoltage } : {}),
-    ...(loads.some((l) => l === null) ? { models } : {}),
+    models,
   };
 }
 

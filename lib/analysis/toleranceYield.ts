@@ -20,7 +20,7 @@ import { wilsonInterval, type ProportionInterval } from "./confidence.ts";
 import { DRAWS, DRAW_NAMES, makeYieldModel, type YieldSpec, type YieldValues } from "./yieldModel.ts";
 import { nominalDraws, sampleDrawer, yieldSpec, type VariationsInput } from "./yieldSpec.ts";
 import { progressCounter, type ProgressCallback } from "./progress.ts";
-import { checkThreads, specId, taskPool, type TaskPool, type ThreadsOption } from "./pool.ts";
+import { checkThreads, contentId, taskPool, type TaskPool, type ThreadsOption } from "./pool.ts";
 
 /** Options of {@link toleranceYield}. */
 export interface YieldOptions {
@@ -113,7 +113,7 @@ export async function toleranceYield(system: LinkSystem, variations: VariationsI
   const threads = typeof options.threads === "object" ? options.threads.threads : (options.threads ?? 1);
   const pool: TaskPool | undefined = threads > 1 ? (typeof options.threads === "object" ? options.threads : await taskPool(threads)) : undefined;
   const owned = pool !== undefined && typeof options.threads !== "object";
-  const id = specId();
+  const id = contentId(spec);
   const run = (draws: Float64Array): Promise<YieldValues> =>
     pool ? pool.run<YieldValues>({ kind: "yield", id, spec, draws }) : Promise.resolve(model.evaluate(draws));
   const oat = options.sensitivity === "one-at-a-time";
