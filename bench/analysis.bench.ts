@@ -10,7 +10,7 @@
  * before timing (its start-up, about a second per worker, is not part of a map). findRange is a
  * synchronous harness workload.
  */
-import { formatResult, formatSeconds, type Workload } from "./harness.ts";
+import { formatResult, type Workload } from "./harness.ts";
 import { coverageMap, findRange, ledPreset, roundCoil, searchDesign, taskPool, toleranceYield, type LinkSystem } from "../lib/mod.ts";
 
 const tx = roundCoil({ meanRadius: 0.05, turns: 5, wire: { diameter: 0.8e-3, insulation: 0.03e-3 } });
@@ -22,7 +22,7 @@ const system: LinkSystem = {
 };
 const region = { x: { from: -0.09, to: 0.09, points: 121 }, y: { from: 0, to: 0.09, points: 61 }, z: 0.02 };
 
-async function time(runs: number, fn: () => Promise<unknown>, warm = true): Promise<{ min: number; median: number }> {
+async function time(runs: number, fn: () => Promise<unknown>, warm = true): Promise<{ min: number; median: number; rounds: number }> {
   if (warm) await fn();
   const t: number[] = [];
   for (let i = 0; i < runs; i++) {
@@ -31,11 +31,11 @@ async function time(runs: number, fn: () => Promise<unknown>, warm = true): Prom
     t.push((performance.now() - t0) / 1000);
   }
   t.sort((a, b) => a - b);
-  return { min: t[0]!, median: t[Math.floor(t.length / 2)]! };
+  return { min: t[0]!, median: t[Math.floor(t.length / 2)]!, rounds: t.length };
 }
 
-function line(name: string, size: string, r: { min: number; median: number }, target?: number): void {
-  console.log(`${formatResult({ name, size, median: r.median, target, samples: 0 })}  min ${formatSeconds(r.min)}`);
+function line(name: string, size: string, r: { min: number; median: number; rounds: number }, target?: number): void {
+  console.log(formatResult({ name, size, min: r.min, median: r.median, rounds: r.rounds, ...(target !== undefined ? { target } : {}) }));
 }
 
 const pool = await taskPool(2);
