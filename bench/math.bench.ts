@@ -8,7 +8,8 @@ import { ellipticKE, ellipticKEInto } from "../lib/math/elliptic.ts";
 import { integrateAdaptive, integrateGaussLegendre } from "../lib/math/quadrature.ts";
 import { lambertW } from "../lib/math/lambertW.ts";
 import { luFactor, luSolve } from "../lib/math/lu.ts";
-import { solveComplex, solveComplex2x2 } from "../lib/math/solveComplex.ts";
+import { solveComplex } from "../lib/math/solveComplex.ts";
+import { complexLuFactorCore, complexLuSolveCore } from "../lib/math/complexLu.ts";
 import { createRandom } from "../lib/math/random.ts";
 
 let i = 0;
@@ -27,9 +28,15 @@ const x12 = new Float64Array(N);
 
 const c12 = Array.from({ length: N }, () => Array.from({ length: N }, () => ({ re: rng.normal(), im: rng.normal() })));
 const cb12 = Array.from({ length: N }, () => ({ re: rng.normal(), im: rng.normal() }));
-const a2 = Float64Array.of(2, 1, 0, 1, 0, -1, 3, 0);
-const b2 = Float64Array.of(1, 0, 0, 1);
-const x2 = new Float64Array(4);
+// the link solver's size: 13×13 complex (1 transmitter + 12 tokens), factored and solved in place
+const M = 13;
+const cRe = Float64Array.from({ length: M * M }, () => rng.normal());
+const cIm = Float64Array.from({ length: M * M }, () => rng.normal());
+const wRe = new Float64Array(M * M);
+const wIm = new Float64Array(M * M);
+const cPiv = new Int32Array(M);
+const xRe = new Float64Array(M);
+const xIm = new Float64Array(M);
 
 const keOut = new Float64Array(2);
 /**
@@ -109,15 +116,20 @@ export const workloads: Workload[] = [
     },
   },
   {
-    name: "2×2 complex solve, closed form (solveComplex2x2)",
+    name: "13×13 complex LU factor + solve (complexLuFactorCore/SolveCore)",
     size: "1 system",
     fn: () => {
-      solveComplex2x2(a2, b2, x2);
-      return x2[0];
+      wRe.set(cRe);
+      wIm.set(cIm);
+      complexLuFactorCore(wRe, wIm, M, cPiv);
+      xRe.fill(1);
+      xIm.fill(0);
+      complexLuSolveCore(wRe, wIm, M, cPiv, xRe, xIm);
+      return xRe[0];
     },
   },
   {
-    name: "12×12 complex solve via mathjs (solveComplex)",
+    name: "12×12 complex solve, allocating (solveComplex)",
     size: "1 system",
     fn: () => solveComplex(c12, cb12),
   },

@@ -55,7 +55,8 @@ export {
   complexFromPolar,
   type Complex,
 } from "./math/complex.ts";
-export { solveComplex, solveComplex2x2 } from "./math/solveComplex.ts";
+export { solveComplex } from "./math/solveComplex.ts";
+export { complexLuFactor, complexLuSolve } from "./math/complexLu.ts";
 export { luFactor, luSolve, solveLinear, SingularMatrixError, LU_PIVOT_RTOL } from "./math/lu.ts";
 export { createRandom, createRandomFromState, type RandomSource } from "./math/random.ts";
 export { kelvin, kelvinScaled, ber, bei, berPrime, beiPrime, type KelvinValues } from "./math/kelvin.ts";
@@ -75,7 +76,6 @@ export { traceResistancePerLength, slabSkinFactor, type TraceResistance } from "
 export { medhurstCoefficient, MEDHURST_TABLE } from "./em/selfCapacitance.ts";
 
 // ── lib/circuit internals ────────────────────────────────────────────────────
-export { wOfLog } from "./circuit/loads/led.ts";
 export { fundamentalCurrentSlope, describingFunctionReference } from "./circuit/loads/describingFunction.ts";
 export { tokenLoadModel, type TokenLoadModelOptions } from "./circuit/link/tokenLoad.ts";
 export { fundamentalCheck, type FundamentalCheck } from "./circuit/harmonic/modelChoice.ts";

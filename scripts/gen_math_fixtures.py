@@ -185,8 +185,12 @@ def lambert():
         cases,
     )
     logs = []
-    for y in [-700.0, -50.0, -1.0, 0.0, 0.5, 1.0, 2.0, 10.0, 100.0, 700.0, 709.0, 710.0, 1000.0,
-              1e4, 1e6, 1e10, 1e15, 1e100, 1e300]:
+    for y in ([-700.0, -50.0, -1.0, 0.0, 0.5, 1.0, 2.0, 10.0, 100.0, 700.0, 709.0, 710.0, 1000.0,
+              1e4, 1e6, 1e10, 1e15, 1e100, 1e300]
+             # a dense grid over the diode range, and both sides of the hot-path core's
+             # switch points (y = −30, 1.5, 1e8), for lambertWOfLogCore
+             + [round(-60 + 860 * k / 211 + 0.0137 * k, 6) for k in range(212)]
+             + [-30.000001, -29.999999, 1.4999999, 1.5000001, 99999999.0, 100000001.0]):
         w = mp.lambertw(mp.exp(mpf(y)))
         logs.append({"y": y, "W": d(w.real)})
     write(

@@ -81,6 +81,23 @@ export function luFactor(a: Float64Array, n: number, pivots: Int32Array): void {
       );
     }
   }
+  const bad = luFactorCore(a, n, pivots);
+  if (bad >= 0) {
+    let big = 0; // the largest pivot candidate of the failed column (left unchanged by the core)
+    for (let i = bad; i < n; i++) big = Math.max(big, Math.abs(a[i * n + bad]!));
+    throw new SingularMatrixError(bad, big, "luFactor");
+  }
+}
+
+/**
+ * The unchecked core of {@link luFactor} for hot paths (the transient engine, the link
+ * solver's Newton step): the same elimination and singularity rule, no argument checks.
+ * Entries must be finite (a NaN entry leaves NaN factors rather than an error).
+ * @returns −1 on success, else the 0-based column whose pivot vanished (the factors are then
+ *   partial).
+ * @example luFactorCore(Float64Array.of(2, 1, 1, 3), 2, new Int32Array(2)) // → −1
+ */
+export function luFactorCore(a: Float64Array, n: number, pivots: Int32Array): number {
   for (let k = 0; k < n; k++) {
     // pivot search in column k, rows k..n-1
     let p = k;
@@ -95,9 +112,7 @@ export function luFactor(a: Float64Array, n: number, pivots: Int32Array): void {
     // column scale: U entries above (rows < k) and the pivot candidate
     let scale = big;
     for (let i = 0; i < k; i++) scale = Math.max(scale, Math.abs(a[i * n + k]!));
-    if (big === 0 || big <= LU_PIVOT_RTOL * n * scale) {
-      throw new SingularMatrixError(k, big, "luFactor");
-    }
+    if (big === 0 || big <= LU_PIVOT_RTOL * n * scale) return k;
     pivots[k] = p;
     if (p !== k) {
       const rk = k * n;
@@ -119,6 +134,7 @@ export function luFactor(a: Float64Array, n: number, pivots: Int32Array): void {
       }
     }
   }
+  return -1;
 }
 
 /**
@@ -138,6 +154,14 @@ export function luSolve(a: Float64Array, n: number, pivots: Int32Array, b: Float
   if (b.length < n) {
     throw new TanklightInputError([{ path: "b.length", message: `must be ≥ n = ${n}`, value: b.length }], "luSolve");
   }
+  luSolveCore(a, n, pivots, b);
+}
+
+/**
+ * The unchecked core of {@link luSolve}: forward and back substitution, no argument checks.
+ * @example see {@link luFactorCore}
+ */
+export function luSolveCore(a: Float64Array, n: number, pivots: Int32Array, b: Float64Array): void {
   for (let k = 0; k < n; k++) {
     const p = pivots[k]!;
     if (p !== k) {

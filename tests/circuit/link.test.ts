@@ -5,7 +5,6 @@ import { complex, lusolve, matrix, type Complex, type Matrix } from "mathjs";
 import { expectOutside } from "../helpers/validation.ts";
 import { expectRelClose } from "../helpers/expectRelClose.ts";
 import { LinkConvergenceError, solveLinkNetwork } from "../../lib/circuit/link/solveNetwork.ts";
-import { complexLuFactor, complexLuSolve } from "../../lib/circuit/link/complexLu.ts";
 import type { LinkNetwork, ReceiverNetwork } from "../../lib/circuit/link/network.ts";
 import type { LinkResult } from "../../lib/circuit/link/result.ts";
 import { currentDrive, sineDrive } from "../../lib/circuit/drive.ts";
@@ -385,45 +384,5 @@ describe("solveLinkNetwork: verdicts, warnings and cautions", () => {
   it("has typed signatures", () => {
     expectTypeOf(solveLinkNetwork).parameter(0).toEqualTypeOf<LinkNetwork>();
     expectTypeOf(solveLinkNetwork).returns.toEqualTypeOf<LinkResult>();
-  });
-});
-
-describe("complex LU (private)", () => {
-  it("solves a random complex system like mathjs's lusolve", () => {
-    // reference library: mathjs (lusolve on complex matrices)
-    let seed = 7;
-    const rnd = (): number => ((seed = (seed * 16807) % 2147483647) / 2147483647) * 2 - 1;
-    const n = 7;
-    const re = new Float64Array(n * n);
-    const im = new Float64Array(n * n);
-    const rows: Complex[][] = [];
-    for (let i = 0; i < n; i++) {
-      const row: Complex[] = [];
-      for (let j = 0; j < n; j++) {
-        re[i * n + j] = rnd();
-        im[i * n + j] = rnd();
-        row.push(complex(re[i * n + j]!, im[i * n + j]!));
-      }
-      rows.push(row);
-    }
-    const br = Float64Array.from({ length: n }, rnd);
-    const bi = Float64Array.from({ length: n }, rnd);
-    const ref = lusolve(matrix(rows), matrix(Array.from(br, (x, i) => [complex(x, bi[i]!)]))) as Matrix;
-    const piv = new Int32Array(n);
-    expect(complexLuFactor(re, im, n, piv)).toBe(-1);
-    complexLuSolve(re, im, n, piv, br, bi);
-    const arr = ref.toArray() as unknown as Complex[][];
-    for (let i = 0; i < n; i++) {
-      // rtol 1e-11: two pivoted eliminations of a well-conditioned random 7×7 system
-      expectOutside({ quantity: `random 7×7 complex solve, x[${i}].re`, source: "reference library: mathjs", ours: br[i]!, reference: arr[i]![0]!.re, rtol: 1e-11, atol: 1e-13 });
-      expectOutside({ quantity: `random 7×7 complex solve, x[${i}].im`, source: "reference library: mathjs", ours: bi[i]!, reference: arr[i]![0]!.im, rtol: 1e-11, atol: 1e-13 });
-    }
-  });
-
-  it("reports the column of a zero pivot", () => {
-    const n = 2;
-    const re = new Float64Array([1, 2, 2, 4]);
-    const im = new Float64Array(4);
-    expect(complexLuFactor(re, im, n, new Int32Array(n))).toBe(1);
   });
 });

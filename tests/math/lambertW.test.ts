@@ -1,6 +1,6 @@
 import { describe, expect, expectTypeOf, it } from "vitest";
 import fc from "fast-check";
-import { lambertW, lambertWOfLog } from "../../lib/math/lambertW.ts";
+import { lambertW, lambertWOfLog, lambertWOfLogCore } from "../../lib/math/lambertW.ts";
 import { TanklightInputError } from "../../lib/errors.ts";
 import { expectOutside } from "../helpers/validation.ts";
 import { expectRelClose } from "../helpers/expectRelClose.ts";
@@ -38,6 +38,19 @@ describe("lambertW(x) — principal branch W₀", () => {
     // reference library: mpmath lambertw(exp(y)) via the committed fixture
     for (const c of mpLog.cases) {
       expectOutside({ quantity: `W(exp(${c.y}))`, source: "reference library: mpmath 1.3 lambertw(exp(y)) (tests/fixtures/math/lambertw-of-log-mpmath.json)", ours: lambertWOfLog(c.y), reference: c.W, rtol: RTOL });
+    }
+  });
+
+  it("lambertWOfLogCore(y), the unchecked hot-path form, is the same function as lambertWOfLog(y)", () => {
+    for (const c of mpLog.cases) expect(lambertWOfLogCore(c.y)).toBe(lambertWOfLog(c.y));
+  });
+
+  it("lambertWOfLogCore(y) agrees with lambertW(e^y) over the diode range y ∈ [−60, 700] (independent paths)", () => {
+    // independent method: lambertW's own start and iteration on the formed argument e^y.
+    // e^y carries ≤ 1.1e-16 relative rounding and dW/W = (dx/x)/(1 + W), so the paths agree
+    // to a few ulps; 1e-15 (measured worst 4.2e-16)
+    for (let y = -60; y < 700; y += 0.0731) {
+      expectRelClose(lambertWOfLogCore(y), lambertW(Math.exp(y)), 1e-15, `y = ${y}`);
     }
   });
 

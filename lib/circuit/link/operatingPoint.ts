@@ -4,7 +4,8 @@
  * solve; the functions here read and write it and allocate nothing per iteration.
  */
 import { TanklightInputError } from "../../errors.ts";
-import { complexLuFactor, complexLuSolve } from "./complexLu.ts";
+import { luFactorCore, luSolveCore } from "../../math/lu.ts";
+import { complexLuFactorCore, complexLuSolveCore } from "../../math/complexLu.ts";
 import { LinkConvergenceError, OPEN_LOAD_CONDUCTANCE, loadAdmittance, solveLocal } from "./localSolve.ts";
 import type { LinkNetwork, ReceiverNetwork } from "./network.ts";
 import { externalImpedance, loadVoltageImpedance, type BaseMatrix, type ReceiverTanks } from "./tankImpedance.ts";
@@ -51,6 +52,7 @@ export interface LinkWorkspace {
   readonly nextB: Float64Array;
   /** Newton arrays: Jacobian (q × q), residual, ln x, step, Y' (2q), trial residual, |V| − x */
   readonly jac: Float64Array;
+  readonly jacPiv: Int32Array;
   readonly rhs: Float64Array;
   readonly sv: Float64Array;
   readonly ds: Float64Array;
@@ -79,7 +81,7 @@ export function createWorkspace(network: LinkNetwork, w: number, base: BaseMatri
     zRe: f(n * n), zIm: f(n * n), piv: new Int32Array(n), iRe: f(n), iIm: f(n),
     yG: f(m), yB: f(m), x: f(m), vRe: f(m), vIm: f(m), zkkRe: f(m), zkkIm: f(m),
     colRe: f(q * n), colIm: f(q * n), next: f(q), nextG: f(q), nextB: f(q),
-    jac: f(q * q), rhs: f(q), sv: f(q), ds: f(q), dy: f(2 * q), ftrial: f(q), resid: f(q),
+    jac: f(q * q), jacPiv: new Int32Array(q), rhs: f(q), sv: f(q), ds: f(q), dy: f(2 * q), ftrial: f(q), resid: f(q),
     tmp: f(4), tmp2: f(4), z2: f(2), z3: f(2),
     scalarIterations: 0,
   };
@@ -105,7 +107,7 @@ export function evaluate(ws: LinkWorkspace): void {
     zRe[d] = ws.zkkRe[k]!;
     zIm[d] = ws.zkkIm[k]!;
   }
-  const bad = complexLuFactor(zRe, zIm, n, ws.piv);
+  const bad = complexLuFactorCore(zRe, zIm, n, ws.piv);
   if (bad >= 0) {
     throw new TanklightInputError(
       [{ path: bad === 0 ? "transmitter" : `receivers[${bad - 1}]`, message: "the coupled-circuit matrix is singular (a lossless loop exactly at resonance with no load?)", value: bad }],
@@ -116,7 +118,7 @@ export function evaluate(ws: LinkWorkspace): void {
   iIm.fill(0);
   iRe[0] = base.vthRe;
   iIm[0] = base.vthIm;
-  complexLuSolve(zRe, zIm, n, ws.piv, iRe, iIm);
+  complexLuSolveCore(zRe, zIm, n, ws.piv, iRe, iIm);
   for (let k = 0; k < m; k++) {
     loadVoltageImpedance(ws.tanks, k, ws.yG[k]!, ws.yB[k]!, z2);
     const ir = iRe[k + 1]!;
@@ -136,7 +138,7 @@ export function computeColumns(ws: LinkWorkspace): void {
     oRe.fill(0);
     oIm.fill(0);
     oRe[k + 1] = 1;
-    complexLuSolve(ws.zRe, ws.zIm, n, ws.piv, oRe, oIm);
+    complexLuSolveCore(ws.zRe, ws.zIm, n, ws.piv, oRe, oIm);
   }
 }
 
@@ -273,7 +275,7 @@ function newtonStep(ws: LinkWorkspace, tol: number): void {
   const q = nl.length;
   const f0 = logResidual(ws, ws.rhs);
   newtonJacobian(ws);
-  const ok = solveRealInPlace(ws.jac, ws.rhs, q, ds);
+  const ok = solveNewtonSystem(ws);
   let accepted = false;
   if (ok) {
     let big = 0;
@@ -364,6 +366,16 @@ function newtonJacobian(ws: LinkWorkspace): void {
   }
 }
 
+/** Solves jac·ds = rhs (destroying jac) by the dense LU of lib/math; false when singular or not finite. */
+function solveNewtonSystem(ws: LinkWorkspace): boolean {
+  const q = ws.nl.length;
+  if (luFactorCore(ws.jac, q, ws.jacPiv) >= 0) return false;
+  ws.ds.set(ws.rhs);
+  luSolveCore(ws.jac, q, ws.jacPiv, ws.ds);
+  for (let c = 0; c < q; c++) if (!Number.isFinite(ws.ds[c]!)) return false;
+  return true;
+}
+
 /** max over the nonlinear receivers of |ln|Vₖ| − ln xₖ|; each signed value into `out`. */
 function logResidual(ws: LinkWorkspace, out: Float64Array): number {
   const { nl, x, vRe, vIm } = ws;
@@ -377,35 +389,4 @@ function logResidual(ws: LinkWorkspace, out: Float64Array): number {
     worst = Math.max(worst, Math.abs(r));
   }
   return worst;
-}
-
-/** Gaussian elimination with partial pivoting on a small dense real system (destroys a, b). */
-function solveRealInPlace(a: Float64Array, b: Float64Array, n: number, out: Float64Array): boolean {
-  for (let k = 0; k < n; k++) {
-    let p = k;
-    for (let i = k + 1; i < n; i++) if (Math.abs(a[i * n + k]!) > Math.abs(a[p * n + k]!)) p = i;
-    if (!(Math.abs(a[p * n + k]!) > 0)) return false;
-    if (p !== k) {
-      for (let j = 0; j < n; j++) {
-        const t = a[k * n + j]!;
-        a[k * n + j] = a[p * n + j]!;
-        a[p * n + j] = t;
-      }
-      const t = b[k]!;
-      b[k] = b[p]!;
-      b[p] = t;
-    }
-    for (let i = k + 1; i < n; i++) {
-      const l = a[i * n + k]! / a[k * n + k]!;
-      for (let j = k; j < n; j++) a[i * n + j] = a[i * n + j]! - l * a[k * n + j]!;
-      b[i] = b[i]! - l * b[k]!;
-    }
-  }
-  for (let i = n - 1; i >= 0; i--) {
-    let s = b[i]!;
-    for (let j = i + 1; j < n; j++) s -= a[i * n + j]! * out[j]!;
-    out[i] = s / a[i * n + i]!;
-  }
-  for (let i = 0; i < n; i++) if (!Number.isFinite(out[i]!)) return false;
-  return true;
 }

@@ -22,7 +22,7 @@
  * Gauss–Kronrod (tests/circuit/loads/describingFunction.test.ts).
  */
 import { gaussLegendre } from "../../math/quadrature.ts";
-import { wOfLog } from "./led.ts";
+import { lambertWOfLogCore } from "../../math/lambertW.ts";
 
 /** A conducting branch evaluated at a voltage: writes its current i⁺ and dI/du into `i`, `g`. */
 export interface Branch {
@@ -62,7 +62,7 @@ export class JunctionBranch implements Branch {
     this.invNvt = 1 / nvt;
   }
   evalAt(u: number): void {
-    const w = wOfLog(this.y0 + u * this.invNvt);
+    const w = lambertWOfLogCore(this.y0 + u * this.invNvt);
     this.i = (this.nvt / this.rs) * w;
     this.g = w / (this.rs * (1 + w));
   }
@@ -116,7 +116,7 @@ export class StringBranch implements Branch {
       this.g = 1 / (this.a1 / this.i1 + this.a2 / this.i2 + this.rs);
       return;
     }
-    const w = wOfLog(this.lnIeff + Math.log(this.rs / this.nvt) + (u + this.ieff * this.rs) / this.nvt);
+    const w = lambertWOfLogCore(this.lnIeff + Math.log(this.rs / this.nvt) + (u + this.ieff * this.rs) / this.nvt);
     let i = Math.max(0, (this.nvt / this.rs) * w - this.ieff);
     let dvdi = 1;
     for (let k = 0; k < 30; k++) {

@@ -17,6 +17,8 @@
 import type { DiodeModel } from "../types.ts";
 import { thermalVoltage } from "../../constants.ts";
 import { TanklightInputError, requireFinite } from "../../errors.ts";
+import { lambertWOfLogCore } from "../../math/lambertW.ts";
+import { luFactorCore, luSolveCore } from "../../math/lu.ts";
 
 /** A datasheet-style point of the forward characteristic: the voltage at a current. */
 export interface ForwardPoint {
@@ -113,55 +115,12 @@ const DEFAULT_TEMPCO = -0.002;
 const DEFAULT_LEAKAGE = 1e-12;
 
 /**
- * W₀(e^y), the principal Lambert W of e^y, from its logarithm y (any finite y): solves
- * w + ln w = y. Start: Winitzki's approximation W(x) ≈ L·(1 − ln(1+L)/(2+L)), L = ln(1+x)
- * (Winitzki 2003, "Uniform approximations for transcendental functions", LNCS 2667) for
- * y < 1.5, the asymptotic y − ln y + ln y / y above; then the third-order iteration of
- * Fritsch, Shafer & Crowley (CACM 16(2), 1973, Algorithm 443), two or three steps to full
- * precision. Written here (rather than lib/math lambertW) for speed on the loads' hot path;
- * the tests check it against lambertW/lambertWOfLog.
- * @param y ln of the argument, finite.
- * @example wOfLog(0) // → 0.5671432904097838 (the omega constant)
- */
-export function wOfLog(y: number): number {
-  if (y < -30) {
-    const x = Math.exp(y);
-    return x * (1 - x); // W(x) = x − x² + O(x³), relative error < 2e-26
-  }
-  if (y > 1e8) {
-    // w = y − ln w as a fixed point contracts by 1/w: three steps reach full precision
-    let w = y - Math.log(y);
-    w = y - Math.log(w);
-    return y - Math.log(w);
-  }
-  let w: number;
-  if (y < 1.5) {
-    const l = Math.log1p(Math.exp(y));
-    w = l * (1 - Math.log1p(l) / (2 + l));
-  } else {
-    const ly = Math.log(y);
-    w = y - ly + ly / y;
-  }
-  for (let k = 0; k < 8; k++) {
-    const z = y - w - Math.log(w);
-    const w1 = 1 + w;
-    const q = 2 * w1 * (w1 + (2 / 3) * z);
-    const eps = ((z / w1) * (q - z)) / (q - 2 * z);
-    w *= 1 + eps;
-    // the iteration is of high order: after a step of relative size < 1e-4 the error is
-    // below 4e-15 (checked over y ∈ [−30, 700] in the tests)
-    if (Math.abs(eps) < 1e-4) break;
-  }
-  return w;
-}
-
-/**
  * The Lambert W value of a junction with series resistance at voltage v, so that the
  * junction current is (n·V_T/r_s)·W − I_s (exported for the loads' hot loops).
  * @param v voltage, V; lnIs ln(I_s); is I_s, A; nvt n·V_T, V; rs Ω (> 0).
  */
 export function junctionW(v: number, lnIs: number, is: number, nvt: number, rs: number): number {
-  return wOfLog(lnIs + Math.log(rs / nvt) + (v + is * rs) / nvt);
+  return lambertWOfLogCore(lnIs + Math.log(rs / nvt) + (v + is * rs) / nvt);
 }
 
 function checkPositive(x: unknown, field: string, unit: string, where: string): number {
@@ -185,7 +144,7 @@ function checkPositive(x: unknown, field: string, unit: string, where: string): 
  * @param idealityFactor n for the two-point fit.
  * @returns Shockley parameters; throws TanklightInputError when the points imply r_s ≤ 0 or n ≤ 0.
  * @example fitShockley([{current:1e-3,voltage:1.75},{current:5e-3,voltage:1.85},{current:20e-3,voltage:2.0}], 298.15)
- *   // → { saturationCurrent: 2.2164765511026647e-19, idealityFactor: 1.8836756868950875, seriesResistance: 5.527214899673994 }
+ *   // → { saturationCurrent: 2.2164765511025703e-19, idealityFactor: 1.883675686895085, seriesResistance: 5.52721489967401 }
  */
 export function fitShockley(
   points: readonly ForwardPoint[],
@@ -219,7 +178,7 @@ export function fitShockley(
     // v = a·ln I + b + r·I with a = nV_T, b = −a ln I_s (valid for I ≫ I_s)
     const A = sorted.map((p) => [Math.log(p.current), 1, p.current]);
     const rhs = sorted.map((p) => p.voltage);
-    const s = solve3(A, rhs);
+    const s = solveSmall(A, rhs);
     const a = s[0]!;
     x = [-s[1]! / a, a / vt, s[2]!];
   } else {
@@ -242,7 +201,7 @@ export function fitShockley(
       J.push([dIs, vt * u, p.current]);
     }
     const Jr = J.map((row) => free.map((c) => row[c]!));
-    const step = free.length === 3 ? solve3(Jr, res) : solve2(Jr, res);
+    const step = solveSmall(Jr, res);
     let maxStep = 0;
     free.forEach((c, k) => {
       x[c] = x[c]! - step[k]!;
@@ -265,32 +224,15 @@ export function fitShockley(
   return { saturationCurrent: Math.exp(lnIs), idealityFactor: n, seriesResistance: r };
 }
 
-function solve3(A: number[][], b: number[]): number[] {
-  // Gaussian elimination with partial pivoting (3×3)
-  const M = A.map((row, i) => [...row, b[i]!]);
-  for (let c = 0; c < 3; c++) {
-    let p = c;
-    for (let r = c + 1; r < 3; r++) if (Math.abs(M[r]![c]!) > Math.abs(M[p]![c]!)) p = r;
-    [M[c], M[p]] = [M[p]!, M[c]!];
-    for (let r = c + 1; r < 3; r++) {
-      const f = M[r]![c]! / M[c]![c]!;
-      for (let k = c; k < 4; k++) M[r]![k] = M[r]![k]! - f * M[c]![k]!;
-    }
-  }
-  const xs = [0, 0, 0];
-  for (let r = 2; r >= 0; r--) {
-    let s = M[r]![3]!;
-    for (let k = r + 1; k < 3; k++) s -= M[r]![k]! * xs[k]!;
-    xs[r] = s / M[r]![r]!;
-  }
-  return xs;
-}
-
-function solve2(A: number[][], b: number[]): number[] {
-  const [a, c] = A[0] as [number, number];
-  const [d, e] = A[1] as [number, number];
-  const det = a * e - c * d;
-  return [(b[0]! * e - c * b[1]!) / det, (a * b[1]! - d * b[0]!) / det];
+/** Solves the small dense system A·x = b by the library's LU; NaNs when A is singular (the caller's checks then refuse the fit). */
+function solveSmall(A: readonly (readonly number[])[], b: readonly number[]): number[] {
+  const n = b.length;
+  const a = Float64Array.from(A.flat());
+  const x = Float64Array.from(b);
+  const piv = new Int32Array(n);
+  if (luFactorCore(a, n, piv) >= 0) return b.map(() => NaN);
+  luSolveCore(a, n, piv, x);
+  return Array.from(x);
 }
 
 /** Resolves a spec into parameters at the reference temperature, plus the fit points. */

@@ -1,7 +1,7 @@
 import { describe, expect, expectTypeOf, it } from "vitest";
 import fc from "fast-check";
 import { readFileSync } from "node:fs";
-import { led, diode, fitShockley, wOfLog, type Led, type Diode, type JunctionSpec } from "../../../lib/circuit/loads/led.ts";
+import { led, diode, fitShockley, type Led, type Diode, type JunctionSpec } from "../../../lib/circuit/loads/led.ts";
 import { ledPreset } from "../../../lib/circuit/loads/ledPresets.ts";
 import { lambertW, lambertWOfLog } from "../../../lib/math/lambertW.ts";
 import type { DiodeModel } from "../../../lib/circuit/types.ts";
@@ -25,17 +25,6 @@ function bisectCurrent(is: number, nvt: number, rs: number, v: number): number {
   }
   return is * Math.expm1(0.5 * (lo + hi) / nvt);
 }
-
-describe("wOfLog (fast Lambert W of e^y)", () => {
-  it("wOfLog(y) agrees with lib/math lambertW(e^y) / lambertWOfLog(y) over y ∈ [−60, 800]", () => {
-    // independent method: the math layer's Halley iteration; our FSC iteration stops at a
-    // step below 1e-4, leaving ≲ 4e-15 relative error — tolerance 1e-14
-    for (let y = -60; y < 800; y += 0.0731) {
-      const ref = y < 700 ? lambertW(Math.exp(y)) : lambertWOfLog(y);
-      expectRelClose(wOfLog(y), ref, 1e-14, `y = ${y}`);
-    }
-  });
-});
 
 describe("led(spec): Shockley junction with series resistance, exact by Lambert W", () => {
   it("current(v) matches the mpmath bisection fixture (leakage off)", () => {
