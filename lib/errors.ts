@@ -99,3 +99,21 @@ export function underName<T>(where: string, fn: () => T, pathPrefix = ""): T {
     throw new TanklightInputError(issues, where);
   }
 }
+
+/**
+ * Exhaustiveness guard for a `switch` over a union: `default: return assertNever(x, …)`
+ * compiles only when every variant has a case (x is then `never`), so a new variant fails to
+ * type-check at every place that must handle it. At run time (an object that escaped the
+ * types) it throws a TanklightInputError naming the field and the value (its `kind` when it
+ * has one).
+ * @param value the narrowed switch subject (type `never`).
+ * @param field the user's field, e.g. "load.kind".
+ * @param where the public function, e.g. "tokenResponse".
+ * @param message what was expected, in words (default "is not a known kind").
+ * @example assertNever({ kind: "zener" } as never, "load.kind", "tokenResponse") // → throws TanklightInputError "tokenResponse: load.kind: is not a known kind, got 'zener'"
+ */
+export function assertNever(value: never, field: string, where: string, message = "is not a known kind"): never {
+  const v = value as unknown;
+  const shown = v !== null && typeof v === "object" && "kind" in v ? (v as { kind: unknown }).kind : v;
+  throw new TanklightInputError([{ path: field, message, value: shown }], where);
+}

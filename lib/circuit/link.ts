@@ -9,7 +9,7 @@
  * then solves the coupled-circuit matrix with each load's describing function.
  */
 import { parseInput } from "../schema.ts";
-import { TanklightInputError } from "../errors.ts";
+import { TanklightInputError, assertNever } from "../errors.ts";
 import { couplingEvaluator, type CouplingEvaluator } from "../em/couplingEvaluator.ts";
 import { selfInductance } from "../em/selfInductance.ts";
 import { coilResistance } from "../em/losses/coilResistance.ts";
@@ -143,8 +143,11 @@ function driveOf(
       warnings.push(...design.warnings);
       return classEDrive(design, d.onResistance ?? 0);
     }
+    case "voltage":
+    case "current":
+      return d; // already an equivalent (sineDrive(), classEDrive(), …)
     default:
-      return d as DriveEquivalent;
+      return assertNever(d, "transmitter.drive.kind", "solveLink", "is not a known drive");
   }
 }
 

@@ -11,7 +11,7 @@
  */
 import { averageLoadCurrent, fundamentalConductance, fundamentalCurrentSlope } from "../loads/describingFunction.ts";
 import type { TokenLoad } from "../loads/types.ts";
-import { TanklightInputError } from "../../errors.ts";
+import { TanklightInputError, assertNever } from "../../errors.ts";
 import type { LinkLoadModel } from "./network.ts";
 
 /** Options of {@link tokenLoadModel}. */
@@ -147,6 +147,6 @@ function loadLabel(load: TokenLoad): string {
     case "halfWaveReservoir":
       return `half-wave reservoir + ${load.led.label ?? "LED"}`;
     default:
-      return "load";
+      return assertNever(load, "load.kind", "tokenLoadModel", "is not a known token load");
   }
 }

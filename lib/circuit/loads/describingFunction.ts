@@ -20,7 +20,7 @@ import type { Junction, Led } from "./led.ts";
 import type { LedCurrent, TokenLoad } from "./types.ts";
 import { JunctionBranch, halfWaveIntegrals, reverseHalfIntegrals, type StringBranch } from "./halfWave.ts";
 import { bridgeBranch, cachedBranch, reservoirSteadyState } from "./rectifier.ts";
-import { TanklightInputError } from "../../errors.ts";
+import { TanklightInputError, assertNever } from "../../errors.ts";
 import { integrateAdaptive } from "../../math/quadrature.ts";
 
 const fwd = new Float64Array(6);
@@ -102,7 +102,7 @@ function checkLoad(load: TokenLoad, where: string): void {
       }
       return;
     default:
-      return; // unknown kinds are reported by the dispatch
+      return assertNever(load, "load.kind", where, "is not a known token load");
   }
 }
 
@@ -170,10 +170,8 @@ function fundamentalInto(load: TokenLoad, A: number, where: string): void {
       resp.slope = st.slope;
       return;
     }
-    default: {
-      const kind = (load as { kind: unknown }).kind;
-      throw new TanklightInputError([{ path: "load.kind", message: "is not a known token load", value: kind }], where);
-    }
+    default:
+      return assertNever(load, "load.kind", where, "is not a known token load");
   }
 }
 
@@ -277,10 +275,8 @@ export function averageLoadCurrent(load: TokenLoad, amplitude: number): readonly
       const st = reservoirSteadyState(load.diode, load.led, A, load.seriesResistance ?? 0, undefined, undefined, reservoirBranch(load));
       return [ledEntry("led", load.led, st.ledCurrent, st.ledCurrent)];
     }
-    default: {
-      const kind = (load as { kind: unknown }).kind;
-      throw new TanklightInputError([{ path: "load.kind", message: "is not a known token load", value: kind }], where);
-    }
+    default:
+      return assertNever(load, "load.kind", where, "is not a known token load");
   }
 }
 

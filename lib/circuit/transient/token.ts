@@ -8,7 +8,7 @@
  * needs (otherwise it floats).
  */
 
-import { requirePositive, TanklightInputError } from "../../errors.ts";
+import { assertNever, requirePositive, TanklightInputError } from "../../errors.ts";
 import type { TokenLoad } from "../loads/types.ts";
 import { GROUND, type CircuitElement, type TransientCircuit } from "./circuit.ts";
 
@@ -148,7 +148,7 @@ export function addToken(base: TransientCircuit, spec: TokenSpec): TokenCircuit 
       els.push({ kind: "resistor", name: `${p}.R`, a: top, b: bottom, resistance: requirePositive(load.resistance, "load.resistance", "Ω", where) });
       break;
     default:
-      throw new TanklightInputError([{ path: "load.kind", message: "must be a TokenLoad kind (led, antiParallel, parallelSameDirection, bridge, halfWaveReservoir, resistor)", value: (load as { kind?: unknown } | undefined)?.kind }], where);
+      return assertNever(load, "load.kind", where, "must be a TokenLoad kind (led, antiParallel, parallelSameDirection, bridge, halfWaveReservoir, resistor)");
   }
   return { circuit: { elements: [...base.elements, ...els] }, top, coil: `${p}.L`, leds };
 }
