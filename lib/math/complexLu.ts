@@ -54,6 +54,7 @@ export function complexLuFactor(re: Float64Array, im: Float64Array, n: number, p
 /**
  * Solves A·x = b in place on (br, bi) with the factors from {@link complexLuFactor}.
  * @param br, bi right-hand side (length ≥ n), overwritten by x.
+ * @example see {@link complexLuFactor}: A = [[1, j], [j, 1]], b = [1, 0] → x = [0.5, −0.5j]
  */
 export function complexLuSolve(re: Float64Array, im: Float64Array, n: number, piv: Int32Array, br: Float64Array, bi: Float64Array): void {
   checkDims(re, im, n, "complexLuSolve");

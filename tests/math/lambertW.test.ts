@@ -41,16 +41,17 @@ describe("lambertW(x) — principal branch W₀", () => {
     }
   });
 
-  it("lambertWOfLogCore(y), the unchecked hot-path form, is the same function as lambertWOfLog(y)", () => {
-    for (const c of mpLog.cases) expect(lambertWOfLogCore(c.y)).toBe(lambertWOfLog(c.y));
+  it("lambertWOfLogCore(y), the unchecked hot-path form, is lambertWOfLog(y) from y = 1 on", () => {
+    for (const c of mpLog.cases) if (c.y >= 1) expect(lambertWOfLogCore(c.y)).toBe(lambertWOfLog(c.y));
   });
 
   it("lambertWOfLogCore(y) agrees with lambertW(e^y) over the diode range y ∈ [−60, 700] (independent paths)", () => {
     // independent method: lambertW's own start and iteration on the formed argument e^y.
     // e^y carries ≤ 1.1e-16 relative rounding and dW/W = (dx/x)/(1 + W), so the paths agree
-    // to a few ulps; 1e-15 (measured worst 4.2e-16)
+    // to a few ulps above y = 1 (1e-15); below, the core's log form cancels ln w against y and
+    // keeps ≲ 4e-15 (1e-14), which is why lambertWOfLog takes lambertW(e^y) there
     for (let y = -60; y < 700; y += 0.0731) {
-      expectRelClose(lambertWOfLogCore(y), lambertW(Math.exp(y)), 1e-15, `y = ${y}`);
+      expectRelClose(lambertWOfLogCore(y), lambertW(Math.exp(y)), y < 1 ? 1e-14 : 1e-15, `y = ${y}`);
     }
   });
 

@@ -18,7 +18,6 @@ import type { DiodeModel } from "../types.ts";
 import { thermalVoltage } from "../../constants.ts";
 import { TanklightInputError, requireFinite } from "../../errors.ts";
 import { lambertWOfLogCore } from "../../math/lambertW.ts";
-import { luFactorCore, luSolveCore } from "../../math/lu.ts";
 
 /** A datasheet-style point of the forward characteristic: the voltage at a current. */
 export interface ForwardPoint {
@@ -144,7 +143,7 @@ function checkPositive(x: unknown, field: string, unit: string, where: string): 
  * @param idealityFactor n for the two-point fit.
  * @returns Shockley parameters; throws TanklightInputError when the points imply r_s ≤ 0 or n ≤ 0.
  * @example fitShockley([{current:1e-3,voltage:1.75},{current:5e-3,voltage:1.85},{current:20e-3,voltage:2.0}], 298.15)
- *   // → { saturationCurrent: 2.2164765511025703e-19, idealityFactor: 1.883675686895085, seriesResistance: 5.52721489967401 }
+ *   // → { saturationCurrent: 2.2164765511026647e-19, idealityFactor: 1.8836756868950875, seriesResistance: 5.527214899673994 }
  */
 export function fitShockley(
   points: readonly ForwardPoint[],
@@ -178,7 +177,7 @@ export function fitShockley(
     // v = a·ln I + b + r·I with a = nV_T, b = −a ln I_s (valid for I ≫ I_s)
     const A = sorted.map((p) => [Math.log(p.current), 1, p.current]);
     const rhs = sorted.map((p) => p.voltage);
-    const s = solveSmall(A, rhs);
+    const s = solve3(A, rhs);
     const a = s[0]!;
     x = [-s[1]! / a, a / vt, s[2]!];
   } else {
@@ -201,7 +200,7 @@ export function fitShockley(
       J.push([dIs, vt * u, p.current]);
     }
     const Jr = J.map((row) => free.map((c) => row[c]!));
-    const step = solveSmall(Jr, res);
+    const step = free.length === 3 ? solve3(Jr, res) : solve2(Jr, res);
     let maxStep = 0;
     free.forEach((c, k) => {
       x[c] = x[c]! - step[k]!;
@@ -224,15 +223,32 @@ export function fitShockley(
   return { saturationCurrent: Math.exp(lnIs), idealityFactor: n, seriesResistance: r };
 }
 
-/** Solves the small dense system A·x = b by the library's LU; NaNs when A is singular (the caller's checks then refuse the fit). */
-function solveSmall(A: readonly (readonly number[])[], b: readonly number[]): number[] {
-  const n = b.length;
-  const a = Float64Array.from(A.flat());
-  const x = Float64Array.from(b);
-  const piv = new Int32Array(n);
-  if (luFactorCore(a, n, piv) >= 0) return b.map(() => NaN);
-  luSolveCore(a, n, piv, x);
-  return Array.from(x);
+function solve3(A: number[][], b: number[]): number[] {
+  // Gaussian elimination with partial pivoting (3×3)
+  const M = A.map((row, i) => [...row, b[i]!]);
+  for (let c = 0; c < 3; c++) {
+    let p = c;
+    for (let r = c + 1; r < 3; r++) if (Math.abs(M[r]![c]!) > Math.abs(M[p]![c]!)) p = r;
+    [M[c], M[p]] = [M[p]!, M[c]!];
+    for (let r = c + 1; r < 3; r++) {
+      const f = M[r]![c]! / M[c]![c]!;
+      for (let k = c; k < 4; k++) M[r]![k] = M[r]![k]! - f * M[c]![k]!;
+    }
+  }
+  const xs = [0, 0, 0];
+  for (let r = 2; r >= 0; r--) {
+    let s = M[r]![3]!;
+    for (let k = r + 1; k < 3; k++) s -= M[r]![k]! * xs[k]!;
+    xs[r] = s / M[r]![r]!;
+  }
+  return xs;
+}
+
+function solve2(A: number[][], b: number[]): number[] {
+  const [a, c] = A[0] as [number, number];
+  const [d, e] = A[1] as [number, number];
+  const det = a * e - c * d;
+  return [(b[0]! * e - c * b[1]!) / det, (a * b[1]! - d * b[0]!) / det];
 }
 
 /** Resolves a spec into parameters at the reference temperature, plus the fit points. */
