@@ -204,6 +204,7 @@ export {
 } from "./circuit/harmonic/modelChoice.ts";
 export type { ModelBand } from "./circuit/harmonic/modelBand.ts";
 export type { DriveWaveform } from "./circuit/drive.ts";
+export { periodicSteadyState, type ShootingOptions, type ShootingResult } from "./circuit/transient/shooting.ts";
 // end steady state
 // transient: time-domain engine
 export {

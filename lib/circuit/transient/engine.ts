@@ -114,6 +114,24 @@ export class Engine {
     out.set(this.hist.indI, this.hist.capV.length);
   }
 
+  /**
+   * Sets the state variables (capacitor voltages, then inductor currents, as {@link readState}
+   * gives them) at time t, s, with the switches as their gates say there; the next step is a
+   * short backward-Euler restart of `subStep` s (no trapezoidal history carried over).
+   */
+  writeState(state: Float64Array, t: number, subStep: number): void {
+    const nC = this.hist.capV.length;
+    this.hist.capV.set(state.subarray(0, nC));
+    this.hist.indI.set(state.subarray(nC, nC + this.hist.indI.length));
+    this.hist.capI.fill(0);
+    this.hist.indW.fill(0);
+    this.t = t;
+    this.cc.switches.forEach((s, i) => (this.switchState[i] = s.closed(t) ? 1 : 0));
+    this.switchVersion++;
+    this.afterDiscontinuity = true;
+    this.subStep = subStep;
+  }
+
   /** Saves the history and the solution (before a step that may be rejected). */
   saveHistory(): void {
     this.saved.capV.set(this.hist.capV);
