@@ -18,12 +18,12 @@ const tx = roundCoil({ meanRadius: 0.05, turns: 5, wire: { diameter: 0.8e-3, ins
 const token = roundCoil({ innerRadius: 0.0065, turns: 120, layers: 6, wire: { diameter: 0.1e-3, insulation: 0.01e-3 } });
 const red = { kind: "led" as const, led: ledPreset("red") };
 const f = 196.9e3;
-const sys = (n: number): LinkSystem => ({
+const sys = (n: number, columns = 4): LinkSystem => ({
   frequency: f,
   transmitter: { coil: tx, compensation: "parallel", capacitor: { capacitance: 106.8e-9 }, drive: { kind: "parallelTank", supply: 5, onResistance: 0.05 } },
   receivers: Array.from({ length: n }, (_, i) => ({
     coil: token,
-    pose: { position: [0.016 * (i % 4) - 0.024, 0.016 * Math.floor(i / 4) - 0.016, 0.01] as [number, number, number] },
+    pose: { position: [0.016 * (i % columns) - 0.024, 0.016 * Math.floor(i / columns) - 0.016, 0.01] as [number, number, number] },
     topology: "parallel" as const,
     capacitor: { capacitance: 2.2e-9 },
     load: red,
@@ -53,5 +53,6 @@ export const workloads: Workload[] = [
   { name: "link: 1 Tx + 1 red LED token, nonlinear solve", size: "1 pose (M given)", target: 20e-6, fn: () => solveLinkNetwork(nets[i++ & 1023]!) },
   { name: "link: 1 Tx + 12 LED tokens, all couplings", size: "13×13 coupled, 12 Newton unknowns", target: 5e-3, fn: () => solveLinkNetwork(twelve) },
   { name: "link: 1 Tx + 1 red LED token, exact describing function", size: "1 pose (M given)", fn: () => solveLinkNetwork({ ...nets[i & 1023]!, receivers: [{ ...nets[i++ & 1023]!.receivers[0]!, load: exactRed }] }) },
-  { name: "solveLink incl. EM: 1 Tx + 12 tokens (78 mutuals)", size: "system → result", minTime: 1, fn: () => solveLink(sys(12)) },
+  { name: "solveLink incl. EM: 1 Tx + 12 tokens (78 mutuals)", size: "system → result", minTime: 1, target: 0.05, fn: () => solveLink(sys(12)) },
+  { name: "solveLink incl. EM: 1 Tx + 100 tokens 16 mm apart (5050 mutuals)", size: "system → result", rounds: 3, warmup: 0, target: 0.5, fn: () => solveLink(sys(100, 10)) },
 ];

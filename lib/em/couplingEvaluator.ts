@@ -9,7 +9,7 @@ import { filamentMutual, lastFilamentDistance2 } from "./filamentMutual.ts";
 import { conductorRadius } from "./mutualInductance.ts";
 import { selfInductance } from "./selfInductance.ts";
 import { poseFrame, type Frame } from "./frames.ts";
-import { coaxialTurns, groupLevels, momentLumps, type Lumps } from "./turnLumps.ts";
+import { coaxialTurns, groupLevels, momentLumps, type Lumps, type Turn } from "./turnLumps.ts";
 import { polygonCoupling, type PolygonCouplingResult } from "./polygonCoupling.ts";
 import type { Coil, Filament, Pose } from "./types.ts";
 
@@ -56,11 +56,14 @@ export interface CouplingEvaluator {
   readonly stats: { lumped: number; exact: number };
 }
 
-// cos/sin tables of the trapezoidal nodes added at each doubling (N = 8·2^i)
-const tables = new Map<number, { c: Float64Array; s: Float64Array }>();
-function added(n: number): { c: Float64Array; s: Float64Array } {
-  let e = tables.get(n);
-  if (!e) {
+/** Most trapezoidal nodes per ring (8, 16, … this). */
+const MAX_NODES = 256;
+/**
+ * cos/sin of the trapezoidal nodes added at each doubling, by node count N = 8·2^i: all 8 nodes
+ * for N = 8, the N/2 odd ones after that. Computed once at load, never written again.
+ */
+const NODES: ReadonlyMap<number, { readonly c: Float64Array; readonly s: Float64Array }> = new Map(
+  [8, 16, 32, 64, 128, 256].map((n) => {
     const first = n === 8;
     const m = first ? 8 : n / 2;
     const c = new Float64Array(m), s = new Float64Array(m);
@@ -69,15 +72,29 @@ function added(n: number): { c: Float64Array; s: Float64Array } {
       c[j] = Math.cos(t);
       s[j] = Math.sin(t);
     }
-    e = { c, s };
-    tables.set(n, e);
-  }
-  return e;
+    return [n, { c, s }] as const;
+  }),
+);
+
+/** What one ring integral returns: the evaluator's explicit workspace (one per evaluator). */
+interface RingResult {
+  /** ∮A·dl over the ring from the lumps t1, and from t0 alongside */
+  v1: number;
+  v0: number;
+  /** the rule's own error estimate (∞ when it did not converge) */
+  err: number;
+  /** closest node-to-lump-wire distance², m² */
+  minA2: number;
 }
 
-const ring = { v1: 0, v0: 0, err: 0, minA2: Infinity };
 /** Safety factor on the order-1 lumping error estimates (checked against the exact sum in tests and bench). */
 const LUMP_SAFETY = 3;
+/** Level B keeps the transmitter lumped when its lumping error is below this share of the tolerance. */
+const TX_LUMP_SHARE = 0.25;
+/** Share of relTol given to each filament pair on the exact path (their errors add up). */
+const PAIR_SHARE = 0.3;
+/** Nodes per receiver turn when looking for overlapping conductors before the exact path. */
+const OVERLAP_NODES = 256;
 /** Lumps are trusted only while the nearest wire is farther than GUARD × the lumped coil's extent. */
 const GUARD = 2;
 
@@ -89,7 +106,7 @@ const GUARD = 2;
  */
 function ringIntegral(
   cx: number, cy: number, cz: number, nx: number, ny: number, nz: number, r: number,
-  t1: Lumps, t0: Lumps | undefined, qtol: number, floor: number,
+  t1: Lumps, t0: Lumps | undefined, qtol: number, floor: number, ring: RingResult,
 ): void {
   let ux: number, uy: number, uz: number;
   if (Math.abs(nx) < 0.9) { ux = 1 - nx * nx; uy = -nx * ny; uz = -nx * nz; } else { ux = -ny * nx; uy = 1 - ny * ny; uz = -ny * nz; }
@@ -102,7 +119,7 @@ function ringIntegral(
   let s1 = 0, s0 = 0, prev = 0, n = 8;
   const sq = Math.sqrt(qtol);
   for (;;) {
-    const { c, s } = added(n);
+    const { c, s } = NODES.get(n)!;
     let abs = 0;
     for (let j = 0; j < c.length; j++) {
       const co = c[j]!, si = s[j]!;
@@ -140,7 +157,7 @@ function ringIntegral(
       // (where the distance varies along the ring by more than 2×; per lump the variation is larger still)
       const resolved = maxA2 <= 4 * minA2 || n * n * minA2 >= 4 * Math.PI * Math.PI * r * r;
       const converged = n >= 16 && diff <= 0.1 * sq * scale && resolved;
-      if (converged || n >= 256) {
+      if (converged || n >= MAX_NODES) {
         ring.v1 = v;
         ring.v0 = ((2 * Math.PI) / n) * s0;
         ring.err = converged ? (diff * diff) / scale : Infinity;
@@ -222,10 +239,12 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
   const rx1 = fast ? momentLumps(rxTurns) : rx0;
   const tExact = txLevels[txLevels.length - 1]!;
   const rxTotal = fast ? Math.abs(rxLevels[0]!.w[0]!) : 1;
+  // this evaluator's workspace: the last ring integral's results
+  const ring: RingResult = { v1: 0, v0: 0, err: 0, minA2: Infinity };
 
   let absTol = options.absTol ?? 0;
   if (options.absTol === undefined && fast) {
-    ringIntegral(0, 0, t0.z[0]!, 0, 0, 1, rxLevels[0]!.r[0]!, t0, undefined, 1e-8, 0);
+    ringIntegral(0, 0, t0.z[0]!, 0, 0, 1, rxLevels[0]!.r[0]!, t0, undefined, 1e-8, 0, ring);
     absTol = 1e-2 * relTol * Math.abs(ring.v1 * rxLevels[0]!.w[0]!);
   }
   // ring quadrature target: a tenth of the overall tolerance (its own estimate joins the error sum)
@@ -244,7 +263,7 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
     const floor = absTol / rxTotal;
     for (let k = 0; k < rl.r.length; k++) {
       const h = rl.z[k]!;
-      ringIntegral(ox + h * nx, oy + h * ny, oz + h * nz, nx, ny, nz, rl.r[k]!, tl, tl0, qtol, floor);
+      ringIntegral(ox + h * nx, oy + h * ny, oz + h * nz, nx, ny, nz, rl.r[k]!, tl, tl0, qtol, floor, ring);
       m += rl.w[k]! * ring.v1;
       m0 += rl.w[k]! * ring.v0;
       err += Math.abs(rl.w[k]!) * ring.err;
@@ -270,7 +289,11 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
       const l = Math.hypot(q[0]!, q[1]!, q[2]!);
       return [q[0]! / l, q[1]! / l, q[2]! / l];
     };
+    // each pair to PAIR_SHARE·relTol of its own value: the pair errors add up to at most
+    // PAIR_SHARE·relTol·Σ|M_pair|, which is the error this path reports
+    const pairTol = PAIR_SHARE * relTol;
     let sum = 0;
+    let sumAbs = 0;
     let min2 = Infinity;
     for (const g of rx.filaments) {
       const gw: Filament = g.kind === "circle"
@@ -278,12 +301,14 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
         : { kind: "path", points: g.points.map(map), turns: g.turns };
       for (const f of tx.filaments) {
         const ft: Filament = f.kind === "circle" ? { ...f, axis: dir0(f.axis) } : f;
-        sum += f.turns * g.turns * filamentMutual(ft, gw, 0.1 * qtol);
+        const mp = f.turns * g.turns * filamentMutual(ft, gw, pairTol);
+        sum += mp;
+        sumAbs += Math.abs(mp);
         const d2 = lastFilamentDistance2();
         if (d2 < min2) min2 = d2;
       }
     }
-    finish(sum, Math.abs(sum) * 0.1 * qtol, "exact", min2);
+    finish(sum, pairTol * sumAbs, "exact", min2);
     return sum;
   };
 
@@ -291,7 +316,7 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
     lastError = err;
     lastMethod = method;
     lastWarnings = [];
-    if (method === "exact" && Math.sqrt(minA2) < clearance) {
+    if (Math.sqrt(minA2) < clearance) {
       lastWarnings.push(
         `the coils' conductors overlap at this pose (filaments ${(Math.sqrt(minA2) * 1e3).toPrecision(3)} mm apart, wire radii sum ${(clearance * 1e3).toPrecision(3)} mm): the filament value is not physical`,
       );
@@ -335,25 +360,39 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
       finish(mA, eRx + eTx + errA, "lumped", minA2);
       return mA;
     }
-    // level B: the transmitter exact (every turn), the receiver refined group by group
-    sumRings(rxLevels[0]!, tExact, undefined);
+    // level B: the receiver refined group by group, against the transmitter's order-1 lumps when
+    // their own error estimate is well inside the tolerance and they are far from every ring
+    // (a neighbouring token: only the receiver's lumping fails), else against every turn
+    const txLumped = D > GUARD * t0.extent && eTx <= TX_LUMP_SHARE * Math.max(relTol * Math.abs(mA), absTol);
+    const tB = txLumped ? t1 : tExact;
+    const eB = txLumped ? eTx : 0;
+    const far = (a2: number, extent: number): boolean => Math.sqrt(a2) > GUARD * (txLumped ? Math.max(extent, t0.extent) : extent);
+    sumRings(rxLevels[0]!, tB, undefined);
     let prev = sums.m;
     for (let l = 1; l < rxLevels.length; l++) {
       // a ring that the trapezoidal rule cannot resolve grazes a wire; finer levels put rings
       // closer to the real turns, so go straight to the per-pair adaptive sum
       if (!Number.isFinite(sums.err)) break;
       const rl = rxLevels[l]!;
-      sumRings(rl, tExact, undefined);
+      sumRings(rl, tB, undefined);
       const last = l === rxLevels.length - 1;
       // Richardson's |M_ℓ − M_{ℓ−1}|/3 with a safety factor 3: |M_ℓ − M_{ℓ−1}|
-      const e = last ? sums.err : Math.abs(sums.m - prev) + sums.err;
-      if (Math.sqrt(sums.minA2) > GUARD * rl.extent && accept(e, sums.m)) {
-        finish(sums.m, e, last ? "exact" : "lumped", sums.minA2);
+      const e = (last ? sums.err : Math.abs(sums.m - prev) + sums.err) + eB;
+      if (far(sums.minA2, rl.extent) && accept(e, sums.m)) {
+        finish(sums.m, e, last && !txLumped ? "exact" : "lumped", sums.minA2);
         return sums.m;
       }
       prev = sums.m;
     }
-    // ring quadrature did not converge (a receiver turn grazes a transmitter wire): per-pair adaptive
+    // ring quadrature did not converge (a receiver turn grazes a transmitter wire). Where the
+    // conductors overlap, no filament value is physical: the finest ring value computed, with
+    // its warning, instead of the costly per-pair sum. Otherwise: per-pair adaptive, to relTol.
+    const d2 = closestApproach2(txTurns!, rxTurns!, ox, oy, oz, nx, ny, nz);
+    if (Math.sqrt(d2) < clearance) {
+      const e = Math.abs(sums.m - prev) + Math.abs(sums.m - mA);
+      finish(sums.m, e, "lumped", d2);
+      return sums.m;
+    }
     return exact(fTx, fRx);
   };
 
@@ -368,6 +407,35 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
     selfRx,
     stats,
   };
+}
+
+/**
+ * Smallest squared distance, m², between the receiver's turns (sampled at OVERLAP_NODES points
+ * each; its frame: origin o, axis n in the transmitter's frame) and the transmitter's turns
+ * (coaxial circles r, z). Sampling can only over-estimate the distance, so a value below the
+ * conductors' clearance proves an overlap.
+ */
+function closestApproach2(tx: readonly Turn[], rx: readonly Turn[], ox: number, oy: number, oz: number, nx: number, ny: number, nz: number): number {
+  let ux: number, uy: number, uz: number;
+  if (Math.abs(nx) < 0.9) { ux = 1 - nx * nx; uy = -nx * ny; uz = -nx * nz; } else { ux = -ny * nx; uy = 1 - ny * ny; uz = -ny * nz; }
+  const un = 1 / Math.sqrt(ux * ux + uy * uy + uz * uz);
+  ux *= un; uy *= un; uz *= un;
+  const vx = ny * uz - nz * uy, vy = nz * ux - nx * uz, vz = nx * uy - ny * ux;
+  let min2 = Infinity;
+  for (const g of rx) {
+    const cx = ox + g.z * nx, cy = oy + g.z * ny, cz = oz + g.z * nz;
+    for (let j = 0; j < OVERLAP_NODES; j++) {
+      const t = (2 * Math.PI * j) / OVERLAP_NODES;
+      const co = g.r * Math.cos(t), si = g.r * Math.sin(t);
+      const px = cx + co * ux + si * vx, py = cy + co * uy + si * vy, pz = cz + co * uz + si * vz;
+      const rho = Math.sqrt(px * px + py * py);
+      for (const f of tx) {
+        const d2 = (rho - f.r) * (rho - f.r) + (pz - f.z) * (pz - f.z);
+        if (d2 < min2) min2 = d2;
+      }
+    }
+  }
+  return min2;
 }
 
 function dir0(a: readonly [number, number, number]): [number, number, number] {
