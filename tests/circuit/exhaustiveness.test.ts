@@ -32,7 +32,7 @@ describe("exhaustiveness: a new TokenLoad variant fails to compile where it is n
       const union = '  | { readonly kind: "resistor"; readonly resistance: number };';
       expect(types).toContain(union);
       writeFileSync(typesFile, types.replace(union, union.slice(0, -1) + '\n  | { readonly kind: "zener"; readonly voltage: number };'));
-      const tsc = spawnSync(process.execPath, [join(root, "node_modules/typescript/bin/tsc"), "-p", join(dir, "tsconfig.json"), "--noEmit"], { encoding: "utf8", timeout: 540_000 });
+      const tsc = spawnSync(process.execPath, [join(root, "node_modules/typescript/bin/tsc"), "-p", "tsconfig.json", "--noEmit"], { cwd: dir, encoding: "utf8", timeout: 540_000 });
       const errors = tsc.stdout.split("\n").filter((l) => /error TS/.test(l));
       const zener = errors.filter((l) => l.includes('"zener"') && l.includes("'never'"));
       const files = new Set(zener.map((l) => l.slice(0, l.indexOf("("))));

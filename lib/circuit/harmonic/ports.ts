@@ -28,7 +28,7 @@
  * A capacitor in series blocks DC; it is given its insulation resistance there
  * ({@link DC_INSULATION_RESISTANCE}) so that the DC equations stay regular.
  */
-import { complexLuFactor, complexLuSolve } from "../link/complexLu.ts";
+import { complexLuFactorCore as complexLuFactor, complexLuSolveCore as complexLuSolve } from "../../math/complexLu.ts";
 import type { LinkNetwork } from "../link/network.ts";
 import { TanklightInputError } from "../../errors.ts";
 
