@@ -36,9 +36,11 @@ describe("exhaustiveness: a new TokenLoad variant fails to compile where it is n
       const errors = tsc.stdout.split("\n").filter((l) => /error TS/.test(l));
       const zener = errors.filter((l) => l.includes('"zener"') && l.includes("'never'"));
       const files = new Set(zener.map((l) => l.slice(0, l.indexOf("("))));
-      console.log(`exhaustiveness: ${zener.length} places refuse the new variant:\n${zener.join("\n")}`);
-      expect(errors.length, errors.join("\n")).toBe(zener.length); // nothing else broke
-      expect([...files].sort()).toEqual([...MUST_HANDLE].sort());
+      console.log(`exhaustiveness: ${errors.length} places refuse the new variant:\n${errors.join("\n")}`);
+      // every error is an unhandled variant: an assertNever, or a switch without default that
+      // no longer returns on every path (TS2366) — layers above the circuit may add such places
+      for (const l of errors) expect(l.includes('"zener"') || l.includes("error TS2366"), l).toBe(true);
+      for (const f of MUST_HANDLE) expect(files.has(f), f).toBe(true);
       expect(zener.filter((l) => l.startsWith("lib/circuit/loads/describingFunction.ts")).length).toBe(3);
     } finally {
       rmSync(dir, { recursive: true, force: true });
