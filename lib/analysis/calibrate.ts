@@ -74,25 +74,19 @@ export type CalibrationUnknown = "coilCurrent" | "tokenQ" | "litThreshold" | "fr
 const UNKNOWNS: readonly CalibrationUnknown[] = ["coilCurrent", "tokenQ", "litThreshold", "frequencyOffset"];
 const UNITS: Record<CalibrationUnknown, string> = { coilCurrent: "A", tokenQ: "", litThreshold: "A", frequencyOffset: "Hz" };
 
+/** Some or all of the calibration parameters, with units (for `assume` and `initial`). */
+const ParameterValuesInput = z.strictObject({
+  coilCurrent: current({ positive: true }).optional(),
+  tokenQ: z.number().positive().finite().optional(),
+  litThreshold: current({ positive: true }).optional(),
+  frequencyOffset: frequency({ positive: false }).optional(),
+});
+
 const CalibrateOptionsInput = z.strictObject({
   /** values of the parameters that are not fitted (defaults: tokenQ 1, litThreshold 0.5 mA, frequencyOffset 0) */
-  assume: z
-    .strictObject({
-      coilCurrent: current({ positive: true }).optional(),
-      tokenQ: z.number().positive().finite().optional(),
-      litThreshold: current({ positive: true }).optional(),
-      frequencyOffset: frequency({ positive: false }).optional(),
-    })
-    .optional(),
+  assume: ParameterValuesInput.optional(),
   /** starting values for the fit (by default found from the data) */
-  initial: z
-    .strictObject({
-      coilCurrent: current({ positive: true }).optional(),
-      tokenQ: z.number().positive().finite().optional(),
-      litThreshold: current({ positive: true }).optional(),
-      frequencyOffset: frequency({ positive: false }).optional(),
-    })
-    .optional(),
+  initial: ParameterValuesInput.optional(),
   /** iteration cap of the least-squares loop (default 60) */
   maxIterations: z.number().int().min(1).max(1000).optional(),
 });
