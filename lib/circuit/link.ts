@@ -255,7 +255,7 @@ export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoad
  * solved by damped Newton on the tokens' tank amplitudes (./link/solveNetwork.ts) — or, where
  * the fundamental is not enough, by harmonic balance over the drive frequency and its harmonics
  * (./harmonic/, Kundert, White & Sangiovanni-Vincentelli 1990). `options.model` chooses:
- * "auto" (default) keeps the describing function where one harmonic-balance step from it
+ * "auto" keeps the describing function where one harmonic-balance step from it
  * changes no LED current and not the transmitter current by more than 0.5 %, and runs harmonic
  * balance elsewhere (rectifying or hard-clipping loads, the single-switch drive); "fundamental"
  * and "harmonic" force one. The result names its `model` and `errorBand`.
@@ -272,7 +272,7 @@ export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoad
  * @param options lit threshold (A; default 0.5 mA — trade practice: 0.1–1 mA visible indoors),
  *   brightness reference, caution voltage, iteration cap, what to do on non-convergence,
  *   `tabulateLoads` (default false) to tabulate the loads' describing functions for sweeps,
- *   `model` ("auto" default, "fundamental", "harmonic"), and harmonic balance's `order` (default 15)
+ *   `model` ("fundamental" default, "auto", "harmonic"), and harmonic balance's `order` (default 15)
  *   and `samples`.
  * @returns {@link LinkSolution} (SI; amplitudes peak, RMS named).
  * @throws TanklightInputError naming the field on bad input; LinkConvergenceError if the

@@ -31,7 +31,7 @@ export type LinkModel = "fundamental" | "harmonic" | "auto";
 
 /** Options of {@link solveLinkModel}: harmonic-balance options plus the model. */
 export interface ModelOptions extends HarmonicOptions {
-  /** "fundamental", "harmonic" or "auto" (default "auto") */
+  /** "fundamental", "harmonic" or "auto" (default "fundamental": the analysis functions solve with it, so solveLink agrees with their maps) */
   readonly model?: LinkModel;
 }
 
@@ -217,7 +217,7 @@ function gauss(a: Float64Array, b: Float64Array, n: number): void {
  *   error exceeds 0.5 % is named in a warning.
  * - "harmonic": harmonic balance (solveLinkHarmonic), band 1 % (validated) or from its
  *   truncation indicator.
- * - "auto" (default): the describing function where its estimated error is below 0.5 % (typically
+ * - "auto": the describing function where its estimated error is below 0.5 % (typically
  *   linear or symmetric loads, a sine-like drive, moderate clipping, or LEDs still dark), harmonic
  *   balance everywhere else; a load that can only be described by its describing function
  *   keeps the fundamental model, with a warning.
@@ -229,7 +229,7 @@ function gauss(a: Float64Array, b: Float64Array, n: number): void {
  *   "harmonic"; a resistor token: "fundamental" with errorBand.relative 0.001
  */
 export function solveLinkModel(network: LinkNetwork, options: ModelOptions = {}): ModelledLinkResult {
-  const model = options.model ?? "auto";
+  const model = options.model ?? "fundamental";
   if (model !== "fundamental" && model !== "harmonic" && model !== "auto") {
     throw new TanklightInputError([{ path: "model", message: "must be 'fundamental', 'harmonic' or 'auto'", value: model }], "solveLink");
   }

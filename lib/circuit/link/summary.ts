@@ -33,7 +33,7 @@ export interface LinkSummary {
  * @param result from solveLink or solveLinkNetwork.
  * @param digits significant figures (default 3).
  * @returns {@link LinkSummary}; `text` is a printable block.
- * @example summarizeLink(solveLink(system)).verdicts[0] // → "receiver 1 · red LED (preset): lit (1.27 mA ≥ 500 µA)" (system: solveLink's example)
+ * @example summarizeLink(solveLink(system)).verdicts[0] // → "receiver 1 · red LED (preset): lit (1.16 mA ≥ 500 µA)" (system: solveLink's example)
  */
 export function summarizeLink(result: LinkResult, digits = 3): LinkSummary {
   const rows: LinkSummaryRow[] = [];

@@ -18,14 +18,14 @@ const pair: TokenLoad = { kind: "antiParallel", a: red, b: ledPreset("green-inga
 
 describe("solveLinkModel: which model, and its error band", () => {
   it("a resistive token with a sine drive: auto keeps the describing function (exact there)", () => {
-    const r = solveLinkModel(networkOf("sine", 1, 0.05, { kind: "resistor", resistance: 1000 }));
+    const r = solveLinkModel(networkOf("sine", 1, 0.05, { kind: "resistor", resistance: 1000 }), { model: "auto" });
     expect(r.model).toBe("fundamental");
     expect(r.errorBand.relative).toBeLessThanOrEqual(1e-3);
   });
 
   it("a red + InGaN green pair at 2 V: auto runs harmonic balance; forced fundamental warns, naming the green LED", () => {
     const net = networkOf("sine", 2, 0.05, pair);
-    const auto = solveLinkModel(net);
+    const auto = solveLinkModel(net, { model: "auto" });
     expect(auto.model).toBe("harmonic");
     expect(auto.receivers[0]!.leds[1]!.averageCurrent).toBeGreaterThan(1e-3);
     const df = solveLinkModel(net, { model: "fundamental" });
@@ -36,13 +36,13 @@ describe("solveLinkModel: which model, and its error band", () => {
   });
 
   it("a token far out (LEDs dark) keeps the describing function under auto", () => {
-    const r = solveLinkModel(networkOf("sine", 0.05, 0.05, pair));
+    const r = solveLinkModel(networkOf("sine", 0.05, 0.05, pair), { model: "auto" });
     expect(r.model).toBe("fundamental");
     expect(r.receivers[0]!.leds.every((l) => !l.lit)).toBe(true);
   });
 
   it("the single-switch drive: auto runs harmonic balance (the switch waveform is solved, not assumed)", () => {
-    const r = solveLinkModel(networkOf("singleSwitch", 5, 0.05, { kind: "led", led: red }));
+    const r = solveLinkModel(networkOf("singleSwitch", 5, 0.05, { kind: "led", led: red }), { model: "auto" });
     expect(r.model).toBe("harmonic");
     expect(r.harmonic?.switchNode).toBeDefined();
     const f = solveLinkModel(networkOf("singleSwitch", 5, 0.05, { kind: "led", led: red }), { model: "fundamental" });
@@ -65,7 +65,7 @@ describe("solveLinkModel: which model, and its error band", () => {
           for (const k of [0.01, 0.05, 0.15]) {
             const net = networkOf(kind, level, k, load);
             const ref = solveLinkHarmonic(net, { order: 25 });
-            const r = solveLinkModel(net);
+            const r = solveLinkModel(net, { model: "auto" });
             if (r.model === "fundamental") fundamental++;
             else harmonic++;
             expect(Number.isFinite(r.errorBand.relative)).toBe(true);
@@ -106,7 +106,7 @@ describe("solveLink(system, { model })", () => {
     receivers: [{ coil: token, pose: { position: [0, 0, 0.03] as [number, number, number] }, topology: "parallel" as const, capacitor: { capacitance: 2.2e-9 }, load: pair }],
   };
   it("every result states its model and error band; the single switch under auto is harmonic balance", () => {
-    const auto = solveLink(system);
+    const auto = solveLink(system, { model: "auto" });
     expect(auto.model).toBe("harmonic");
     expect(auto.errorBand.relative).toBeGreaterThan(0);
     expect(auto.errorBand.basis).toMatch(/harmonic balance/);
