@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { coverageMap, solveLink, TanklightInputError } from "../../lib/mod.ts";
 import { expectOutside } from "../helpers/validation.ts";
+import { expectRelClose } from "../helpers/expectRelClose.ts";
 import { drawer, LID } from "./fixtures.ts";
 
 const ledAt = (sys: Parameters<typeof solveLink>[0]): number => solveLink(sys).receivers[0]!.leds[0]!.averageCurrent;
@@ -49,7 +50,7 @@ describe("coverageMap", () => {
     if (zone.kind !== "interval") throw new Error("expected an interval");
     expect(zone.length).toBeGreaterThan(0.5e-3);
     expect(zone.length).toBeLessThan(1.5e-3);
-    expect(fine.litFraction).toBeCloseTo(1 - zone.length / 0.09, 12); // dimensionless share
+    expectRelClose(fine.litFraction, 1 - zone.length / 0.09, 1e-12, "lit fraction along the line (dimensionless share)");
     // independent check at the zone's middle and at the grid nodes either side
     const mid = (zone.from[0] + zone.to[0]) / 2;
     expect(ledAt(drawer({ supply: 12, position: [mid, 0, LID] }))).toBeLessThan(fine.litThreshold);
@@ -76,7 +77,7 @@ describe("coverageMap", () => {
     expect(ring[0]!.area).toBeGreaterThan((Math.PI / 2) * 0.052 * 0.6e-3);
     expect(ring[0]!.area).toBeLessThan((Math.PI / 2) * 0.052 * 1.5e-3);
     const dead = polygons.reduce((a, d) => a + d.area, 0);
-    expect(map.litFraction).toBeCloseTo(1 - dead / (0.07 * 0.07), 12);
+    expectRelClose(map.litFraction, 1 - dead / (0.07 * 0.07), 1e-12, "lit fraction over the plane");
   });
 
   it("takes the worst of a set of tilts at every point", async () => {
