@@ -9,7 +9,7 @@
  *
  * Demo data: the radii and heights are our own example, not a product.
  */
-import { chart, coaxialLoopMutualInductance, formatQuantity, MU0, notebook, partsList, roundCoil, selfInductance, type Notebook } from "../lib/mod.ts";
+import { addSafetySections, chart, coaxialLoopMutualInductance, formatQuantity, MU0, notebook, partsList, roundCoil, safetyReport, selfInductance, type Notebook } from "../lib/mod.ts";
 
 export interface CoaxialLoopsRow {
   /** axial distance, m */
@@ -45,6 +45,7 @@ export function run(): { notebook: Notebook; results: CoaxialLoopsResult } {
   const Lb = selfInductance(roundCoil({ meanRadius: b, turns: 1, wire }));
   const worstSmall = Math.max(...rows.map((r) => Math.abs(r.smallToken / r.mutual - 1)));
   const last = rows[rows.length - 1]!;
+  const q = formatQuantity;
   const nb = notebook("How fast does coupling fall with height?", {
     note: "Demo data: the radii, wire and heights are our own example, not a product.",
   });
@@ -81,8 +82,29 @@ export function run(): { notebook: Notebook; results: CoaxialLoopsResult } {
     `The 1/d³ law is reached only slowly: it is still ${(100 * (last.dipole / last.mutual - 1)).toFixed(0)} % high at ${formatQuantity(last.height, "m")}`,
     "(three transmitter radii); from there on, doubling the height cuts the coupling about eightfold.",
   );
-  nb.heading("Supply, exposure and emission");
-  nb.text("This run is geometry only: no drive, so no supply current, field strength or emission to assess. The pebble-drawer scenario carries them for a driven design.");
+  // ── Supply and safety at a demo operating point ──────────────────────────────
+  // geometry has no current; to show what the safety sections say about such a loop, assess it
+  // as if series-tuned at 200 kHz and carrying 3 A peak (demo operating point, ours), under a 2 mm cover
+  const f = 200e3;
+  const current = 3;
+  const w = 2 * Math.PI * f;
+  const tuning = 1 / (w * w * La);
+  const loop = roundCoil({ meanRadius: a, turns: 1, wire });
+  const cover = 0.002;
+  nb.heading("Supply");
+  nb.text(
+    "This run is geometry only: no drive, so no supply current to budget (the pebble-drawer and token-batch scenarios carry",
+    `one). The sections below assess the 40 mm loop as if it were series-tuned (${q(tuning, "F")}) and driven at ${q(f, "Hz")} with`,
+    `${q(current, "A")} peak under a ${q(cover, "m")} cover — a demo operating point of our own, to show the margins such a loop has.`,
+  );
+  const safety = safetyReport({
+    frequency: f,
+    surfaceHeight: cover,
+    transmitters: [{ label: "40 mm loop", coil: loop, current, capacitor: { capacitance: tuning, voltage: current / (w * tuning), rating: 100 } }],
+    receivers: [{ label: "6 mm token loop", leds: [], size: 2 * b + 0.004 }],
+  });
+  const safetyCautions = addSafetySections(nb, safety, { coil: loop, current, surfaceHeight: cover, reach: 0.08 });
+  if (safety.attention.length > 0) nb.text("Needs attention at this operating point:", ...safety.attention.map((x) => `- ${x}`));
   nb.parts(
     partsList({
       coils: [
@@ -94,6 +116,6 @@ export function run(): { notebook: Notebook; results: CoaxialLoopsResult } {
       supply: { item: "supply", voltage: 0, current: 0 },
     }).filter((r) => r.item !== "supply"),
   );
-  nb.cautions(["Geometry only: before driving these loops, see the cautions of a driven design (tank voltages, fields near implanted medical devices, metal heating, radio emission)."]);
+  nb.cautions(["Geometry only: the safety numbers above are for a demo operating point; assess your own drive before building.", ...safetyCautions]);
   return { notebook: nb, results: { transmitterRadius: a, tokenRadius: b, rows } };
 }

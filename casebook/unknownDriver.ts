@@ -15,7 +15,10 @@
  * product or a real bench session.
  */
 import {
+  addSafetySections,
   calibrate,
+  designFromLink,
+  solveLink,
   chart,
   coilResistance,
   drivePlausibility,
@@ -28,6 +31,7 @@ import {
   safetyReport,
   selfInductance,
   type CalibrationDesign,
+  type LinkSystem,
   type Measurement,
   type Notebook,
 } from "../lib/mod.ts";
@@ -165,20 +169,27 @@ export function run(): { notebook: Notebook; results: UnknownDriverResults } {
       supply: { item: "existing pad's 5 V adapter (coil loss only; the driver's own loss is unknown)", voltage: 5, current: plaus.coilLoss / 5, rating: 1 },
     }),
   );
-  // ── 5. Exposure, emission and metal heating at the calibrated current ─────────
-  const safety = safetyReport({ frequency: f, surfaceHeight: LYING, transmitters: [{ coil: pad, current: cal.values.coilCurrent }] });
-  nb.heading("5. Exposure, emission and metal heating (estimates, not a compliance test)");
+  // ── 5. Exposure, emission, component stress and metal heating at the calibrated current ──
+  // the new red pebble lying on the pad, with the pad's coil held at the calibrated current
+  // (a current-regulated drive: the unmarked board's own circuit is unknown)
+  const onPad: LinkSystem = {
+    frequency: f,
+    transmitter: { label: "glow pad", coil: pad, compensation: "none", drive: { kind: "currentRegulated", amplitude: cal.values.coilCurrent } },
+    receivers: [{ label: "new red pebble", ...pebble(newPebble, "1.5 nF", "red"), capacitor: { capacitance: "1.5 nF", rating: 50 }, pose: { position: [0, 0, LYING] } }],
+  };
+  const lying = solveLink(onPad);
+  const safety = safetyReport(designFromLink(onPad, lying, { surfaceHeight: LYING - 0.002, tokenSize: 0.03 }));
+  nb.heading("5. Safety at the calibrated current (estimates, not a compliance test)");
   nb.text(
-    "With the coil current now known, the pad's field can be assessed where people reach (the",
-    "space above the surface) against the reference levels, and its emission against the rules:",
+    "With the coil current now known, the pad's field can be assessed where people reach (the space above",
+    `the pad's 3 mm top, demo), its emission against the rules, the new pebble's parts lying on the pad (LED ${q(lying.receivers[0]!.leds[0]!.averageCurrent, "A")},`,
+    `tank ${q(lying.receivers[0]!.capacitorVoltage, "V")} peak) and the metal a visitor might put down. The driver's own switch and capacitor are sealed: their stress is not assessed.`,
   );
-  nb.text(...safety.exposure.governs);
-  nb.text(...safety.emission.limits.filter((l) => l.verdict === "meets" || l.verdict === "exceeds").map((l) => l.text));
-  nb.text(...safety.metal.map((m) => m.text));
-  if (safety.attention.length > 0) nb.text("Needs attention:", ...safety.attention);
+  const safetyCautions = addSafetySections(nb, safety, { coil: pad, current: cal.values.coilCurrent, surfaceHeight: LYING - 0.002, reach: 0.1 });
+  if (safety.attention.length > 0) nb.text("Needs attention:", ...safety.attention.map((a) => `- ${a}`));
   nb.cautions([
     "A calibrated model is only as good as the bench numbers behind it: check a built pebble against the prediction before ordering a batch.",
-    ...safety.cautions.map((c) => c.text),
+    ...safetyCautions,
   ]);
 
   return {

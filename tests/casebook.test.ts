@@ -15,15 +15,21 @@ describe("casebook", () => {
       expect(md, name).toContain("## Parts list");
       expect(md, name).toContain("## Cautions");
       expect(md, name).toContain(DEFER_LINE);
-      // and a supply section (coaxial-loops says it has no drive); unknown-driver (the analysis
-      // scenario of issue 18) is checked by its own tests below
-      if (name === "unknown-driver") continue;
+      // issue 15: a supply section and the four safety sections, each with its margins
       expect(md, name).toMatch(/## (\d+\. )?Supply/);
-      if (name !== "coaxial-loops") {
-        expect(md, name).toContain("## Exposure (an estimate, not a compliance test)");
-        expect(md, name).toContain("## Radiated emission (an estimate, not a compliance test)");
-        expect(md, name).toContain("## Metal objects on the surface");
+      for (const heading of [
+        "## Exposure (an estimate, not a compliance test)",
+        "## Radiated emission (an estimate, not a compliance test)",
+        "## Component stress",
+        "## Metal objects on the surface",
+      ]) {
+        expect(md, `${name}: ${heading}`).toContain(heading);
+        const section = md.slice(md.indexOf(heading), md.indexOf("\n## ", md.indexOf(heading) + 3));
+        expect(section, `${name}: ${heading} states margins`).toMatch(/margin|EXCEEDS/);
       }
+      // the cautions name the hazards of docs/design.md §9
+      const cautions = md.slice(md.indexOf("## Cautions"));
+      for (const hazard of [/implant/i, /metal|coin|foil/i, /child|swallow|small/i, /radio|interfere/i]) expect(cautions, `${name}: ${hazard}`).toMatch(hazard);
     }
   });
 
