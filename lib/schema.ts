@@ -229,6 +229,68 @@ export function unitVector(): UnitVectorSchema {
     .readonly() as unknown as UnitVectorSchema;
 }
 
+/**
+ * Validate a positional argument list with one strict object schema whose keys are the
+ * arguments' names in order: `f(L, f, options)` checks `{ inductance: L, frequency: f,
+ * options }`, so every message names the user's argument ("inductance", "options.series").
+ * An argument left out (undefined) is absent from the object (optional fields apply).
+ * More arguments than the schema names are an error.
+ * @param schema a `z.strictObject` with one field per positional argument, in order.
+ * @param args the arguments as received (e.g. `[L, f, options]`).
+ * @param where the public function's name, prefixed to the message.
+ * @returns the parsed object (quantities in SI numbers).
+ * @example parseArgs(z.strictObject({ inductance: inductance(), frequency: frequency() }), ["100 uH", 2e5], "tune") // → { inductance: 0.0001, frequency: 200000 }
+ */
+export function parseArgs<S extends z.ZodRawShape>(schema: z.ZodObject<S>, args: readonly unknown[], where: string): z.output<z.ZodObject<S>> {
+  const names = Object.keys(schema.shape);
+  if (args.length > names.length) {
+    throw new TanklightInputError(
+      [{ path: `argument ${names.length + 1}`, message: `${where} takes at most ${names.length} arguments (${names.join(", ")})`, value: args[names.length] }],
+      where,
+    );
+  }
+  const input: Record<string, unknown> = {};
+  names.forEach((name, i) => {
+    if (args[i] !== undefined) input[name] = args[i];
+  });
+  return parseInput(schema, input, where) as z.output<z.ZodObject<S>>;
+}
+
+/**
+ * A zod schema for one word out of a fixed list (a series name, a colour, a kind): looked up
+ * in a Set, so prototype words ("toString", "__proto__") are refused like any other unknown
+ * word, with the nearest valid one suggested ("did you mean 'E12'?") or the list.
+ * @param values the accepted words.
+ * @example parseInput(oneOf(["E6", "E12"] as const), "E12x", "standardValues") // throws "standardValues: must be one of E6, E12; did you mean 'E12'?, got 'E12x'"
+ */
+export function oneOf<const T extends readonly string[]>(values: T): z.ZodType<T[number], unknown> {
+  const accepted = new Set<string>(values);
+  return z.custom<T[number]>(() => true).transform((v, ctx): T[number] => {
+    if (typeof v === "string" && accepted.has(v)) return v as T[number];
+    // suggest a word only when it is the one nearest ("E7" is as near to E3 as to E6: no guess)
+    const near = typeof v === "string" ? nearestKey(v, values) : undefined;
+    const tie = near !== undefined && values.filter((x) => editDistance(v as string, x) === editDistance(v as string, near)).length > 1;
+    ctx.issues.push({
+      code: "custom",
+      message: `must be one of ${values.join(", ")}${near !== undefined && !tie ? `; did you mean '${near}'?` : ""}`,
+      input: v,
+      params: { expected: values.join(" | ") },
+    });
+    return z.NEVER;
+  }) as unknown as z.ZodType<T[number], unknown>;
+}
+
+/**
+ * A zod schema for a whole number in [min, max]; a larger value's message states the limit
+ * and why it exists ("≤ 100000 (each point solves the whole link)").
+ * @example parseInput(wholeNumber(2, 100000, "each point solves the whole link"), 1e9, "frequencySweep") // throws "…must be a whole number ≥ 2 and ≤ 100000 (each point solves the whole link)…"
+ */
+export function wholeNumber(min: number, max?: number, why?: string): z.ZodNumber {
+  const message = max === undefined ? `must be a whole number ≥ ${min}` : `must be a whole number ≥ ${min} and ≤ ${max}${why ? ` (${why})` : ""}`;
+  const base = z.number({ error: message }).int({ error: message }).min(min, { error: message });
+  return max === undefined ? base : base.max(max, { error: message });
+}
+
 // ── running a schema ─────────────────────────────────────────────────────────
 
 /** A zod path as a dotted string: ["coils", 0, "radius"] → "coils[0].radius". */

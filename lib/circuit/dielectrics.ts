@@ -10,10 +10,18 @@
  * capacitance with DC bias, temperature and age and detune the tank, and polyester (PET)
  * film runs warm at tank currents.
  */
+import { z } from "zod";
+import { oneOf, parseInput } from "../schema.ts";
 import { TanklightInputError, requirePositive } from "../errors.ts";
 
+const DIELECTRIC_NAMES = ["C0G", "mica", "polypropylene", "PPS", "polyester", "X7R", "Y5V"] as const;
+
 /** Dielectric keys. */
-export type Dielectric = "C0G" | "mica" | "polypropylene" | "PPS" | "polyester" | "X7R" | "Y5V";
+export type Dielectric = (typeof DIELECTRIC_NAMES)[number];
+
+/** zod schema of a dielectric key (a Set lookup: prototype words are refused, a near miss suggested). */
+export const DielectricSchema = oneOf(DIELECTRIC_NAMES);
+const DielectricArg = z.strictObject({ dielectric: DielectricSchema });
 
 /** What we hold about one dielectric. */
 export interface DielectricData {
@@ -42,10 +50,7 @@ export const DIELECTRICS: Readonly<Record<Dielectric, DielectricData>> = {
 };
 
 function checkDielectric(d: unknown, where: string): Dielectric {
-  if (typeof d !== "string" || !(d in DIELECTRICS)) {
-    throw new TanklightInputError([{ path: "dielectric", message: `must be one of ${Object.keys(DIELECTRICS).join(", ")}`, value: d }], where);
-  }
-  return d as Dielectric;
+  return parseInput(DielectricArg, { dielectric: d }, where).dielectric;
 }
 
 /** The data of a dielectric. @example dielectric("C0G").dissipationFactor // → 0.0005 */

@@ -12,10 +12,19 @@
  * The rule itself (10^(i/N) rounded) and its listed E24 exceptions (2.7 3.0 3.3 3.6 3.9 4.3 4.7
  * 8.2) are checked against these tables in tests/circuit/eseries.test.ts.
  */
-import { TanklightInputError, requirePositive } from "../errors.ts";
+import { z } from "zod";
+import { requirePositive } from "../errors.ts";
+import { oneOf, parseInput } from "../schema.ts";
+
+/** The IEC 60063 series names, in order. */
+const SERIES_NAMES = ["E3", "E6", "E12", "E24", "E48", "E96", "E192"] as const;
 
 /** The IEC 60063 series names. */
-export type ESeries = "E3" | "E6" | "E12" | "E24" | "E48" | "E96" | "E192";
+export type ESeries = (typeof SERIES_NAMES)[number];
+
+/** zod schema of a series name (a Set lookup: "toString" is refused like any unknown word). */
+export const ESeriesSchema = oneOf(SERIES_NAMES);
+const SeriesArg = z.strictObject({ series: ESeriesSchema });
 
 const E24 = [1.0, 1.1, 1.2, 1.3, 1.5, 1.6, 1.8, 2.0, 2.2, 2.4, 2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7, 5.1, 5.6, 6.2, 6.8, 7.5, 8.2, 9.1] as const;
 const E12 = [1.0, 1.2, 1.5, 1.8, 2.2, 2.7, 3.3, 3.9, 4.7, 5.6, 6.8, 8.2] as const;
@@ -64,13 +73,7 @@ export const SERIES_TOLERANCE: Readonly<Record<ESeries, number>> = {
 };
 
 function checkSeries(series: unknown, where: string): ESeries {
-  if (typeof series !== "string" || !(series in TABLES)) {
-    throw new TanklightInputError(
-      [{ path: "series", message: `must be one of ${Object.keys(TABLES).join(", ")}`, value: series }],
-      where,
-    );
-  }
-  return series as ESeries;
+  return parseInput(SeriesArg, { series }, where).series;
 }
 
 /**

@@ -3,27 +3,31 @@
  * and a recommendation of dielectric and voltage rating — for a sinusoidal tank voltage or
  * current (I = ωC·V for a capacitor; RMS = peak/√2; P = I_rms²·ESR).
  */
-import { TanklightInputError, requirePositive } from "../errors.ts";
+import { z } from "zod";
+import { TanklightInputError } from "../errors.ts";
 import { HIGH_VOLTAGE } from "../hazards.ts";
-import { DIELECTRICS, esrFromDissipationFactor, recommendCapacitor, type CapacitorRecommendation, type Dielectric } from "./dielectrics.ts";
+import { capacitance, current, dimensionless, frequency, parseInput, voltage } from "../schema.ts";
+import { DIELECTRICS, DielectricSchema, esrFromDissipationFactor, recommendCapacitor, type CapacitorRecommendation } from "./dielectrics.ts";
 
-/** Inputs of {@link capacitorStress}: give the voltage amplitude or the current amplitude. */
-export interface CapacitorStressInput {
+/** Inputs of {@link capacitorStress}: give the voltage amplitude or the current amplitude (SI numbers or quantity strings). */
+export const CapacitorStressInput = z.strictObject({
   /** capacitance, F > 0 */
-  readonly capacitance: number;
+  capacitance: capacitance(),
   /** frequency, Hz > 0 */
-  readonly frequency: number;
+  frequency: frequency(),
   /** peak voltage across the capacitor, V ≥ 0 */
-  readonly voltageAmplitude?: number;
+  voltageAmplitude: voltage({ nonNegative: true }).optional(),
   /** peak current through the capacitor, A ≥ 0 */
-  readonly currentAmplitude?: number;
+  currentAmplitude: current({ nonNegative: true }).optional(),
   /** dielectric (for tan δ and the checks), default "C0G" */
-  readonly dielectric?: Dielectric;
-  /** tan δ override (a datasheet value), ≥ 0 */
-  readonly dissipationFactor?: number;
-  /** DC voltage rating of the chosen part, V (checked against derating × peak) */
-  readonly ratedVoltage?: number;
-}
+  dielectric: DielectricSchema.optional(),
+  /** tan δ override (a datasheet value), 0 ≤ tan δ ≤ 1 */
+  dissipationFactor: dimensionless({ nonNegative: true, max: 1 }).optional(),
+  /** DC voltage rating of the chosen part, V > 0 (checked against derating × peak) */
+  ratedVoltage: voltage({ positive: true }).optional(),
+});
+/** What {@link capacitorStress} accepts. */
+export type CapacitorStressInput = z.input<typeof CapacitorStressInput>;
 
 /** Stress on a tank capacitor. */
 export interface CapacitorStress {
@@ -49,26 +53,19 @@ export interface CapacitorStress {
  * @param input see {@link CapacitorStressInput} (exactly one of voltageAmplitude, currentAmplitude).
  * @example capacitorStress({ capacitance: 6.8e-9, frequency: 200e3, voltageAmplitude: 30 }).peakCurrent // → 0.2563539605329271 A
  */
-export function capacitorStress(input: CapacitorStressInput): CapacitorStress {
+export function capacitorStress(spec: CapacitorStressInput): CapacitorStress {
   const where = "capacitorStress";
-  requirePositive(input.capacitance, "capacitance", "F", where);
-  requirePositive(input.frequency, "frequency", "Hz", where);
+  const input = parseInput(CapacitorStressInput, spec, where);
   const hasV = input.voltageAmplitude !== undefined;
   const hasI = input.currentAmplitude !== undefined;
   if (hasV === hasI) {
     throw new TanklightInputError([{ path: "voltageAmplitude", message: "give exactly one of voltageAmplitude and currentAmplitude", value: { voltageAmplitude: input.voltageAmplitude, currentAmplitude: input.currentAmplitude } }], where);
   }
   const given = (hasV ? input.voltageAmplitude : input.currentAmplitude)!;
-  if (!(Number.isFinite(given) && given >= 0)) {
-    throw new TanklightInputError([{ path: hasV ? "voltageAmplitude" : "currentAmplitude", message: "must be a finite number ≥ 0", value: given }], where);
-  }
   const wc = 2 * Math.PI * input.frequency * input.capacitance;
   const vp = hasV ? given : given / wc;
   const ip = hasV ? given * wc : given;
   const diel = input.dielectric ?? "C0G";
-  if (!(diel in DIELECTRICS)) {
-    throw new TanklightInputError([{ path: "dielectric", message: `must be one of ${Object.keys(DIELECTRICS).join(", ")}`, value: diel }], where);
-  }
   const tanD = input.dissipationFactor ?? DIELECTRICS[diel].dissipationFactor;
   const esr = esrFromDissipationFactor(tanD, input.frequency, input.capacitance);
   const irms = ip / Math.SQRT2;
@@ -79,7 +76,6 @@ export function capacitorStress(input: CapacitorStressInput): CapacitorStress {
     warnings.push(`${DIELECTRICS[diel].name} is not a tank dielectric: ${DIELECTRICS[diel].note}`);
   }
   if (input.ratedVoltage !== undefined) {
-    requirePositive(input.ratedVoltage, "ratedVoltage", "V", where);
     if (input.ratedVoltage < vp) warnings.push(`peak voltage ${vp.toPrecision(3)} V exceeds the part's rating ${input.ratedVoltage} V`);
     else if (input.ratedVoltage < recommendation.derating * vp) warnings.push(`rating ${input.ratedVoltage} V is below ${recommendation.derating} × the peak voltage (trade-practice derating)`);
   }

@@ -8,34 +8,51 @@
  * |H|/|H₀| = 1/√(1 + Q²(f/f₀ − f₀/f)²) (Terman, "Radio Engineers' Handbook", 1943, §3 —
  * from memory (unverified); the same curve in any circuits text).
  */
+import { z } from "zod";
 import { TanklightInputError, requirePositive } from "../errors.ts";
+import { inductance, frequency, capacitance, oneOf, parseArgs, wholeNumber } from "../schema.ts";
+import { formatQuantity, type QuantityInput } from "../units.ts";
 import { bestCombination, type CombinationTopology } from "./combination.ts";
-import type { ESeries } from "./eseries.ts";
+import { ESeriesSchema } from "./eseries.ts";
+
+/**
+ * Capacitances sold as parts, F: 0.1 pF (the smallest ceramic chip values) to 10 mF (large
+ * electrolytics; tank capacitors stop far lower) — trade practice (no source). A tuning that
+ * needs a value outside it cannot be bought and is refused.
+ */
+export const PURCHASABLE_CAPACITANCE = { min: 0.1e-12, max: 10e-3 } as const;
+
+const LcArgs = z.strictObject({ inductance: inductance(), frequency: frequency() });
+const LcFromCArgs = z.strictObject({ inductance: inductance(), capacitance: capacitance() });
 
 /**
  * Capacitance that tunes an inductance to a frequency: C = 1/((2πf)²·L).
- * @param L inductance, H, > 0; f frequency, Hz, > 0.
+ * @param inductance H, > 0 (or "100 uH"); frequency Hz, > 0 (or "200 kHz").
  * @returns capacitance, F.
  * @example resonantCapacitance(100e-6, 200e3) // → 6.332573977646111e-9
+ * @example resonantCapacitance("100 uH", "200 kHz") // → 6.332573977646111e-9
  * Related: resonantFrequency, nearestStandardValue, bestCombination.
  */
-export function resonantCapacitance(L: number, f: number): number {
-  requirePositive(L, "L", "H", "resonantCapacitance");
-  requirePositive(f, "f", "Hz", "resonantCapacitance");
+export function resonantCapacitance(inductance: QuantityInput, frequency: QuantityInput): number {
+  const a = parseArgs(LcArgs, [inductance, frequency], "resonantCapacitance");
+  return capacitanceFor(a.inductance, a.frequency);
+}
+
+/** C = 1/((2πf)²L) for checked SI numbers. */
+function capacitanceFor(L: number, f: number): number {
   const w = 2 * Math.PI * f;
   return 1 / (w * w * L);
 }
 
 /**
  * Resonant frequency of an LC tank: f₀ = 1/(2π√(LC)).
- * @param L inductance, H, > 0; C capacitance, F, > 0.
+ * @param inductance H, > 0 (or "100 uH"); capacitance F, > 0 (or "6.8 nF").
  * @returns Hz.
  * @example resonantFrequency(100e-6, 6.8e-9) // → 193003.7180020742
  */
-export function resonantFrequency(L: number, C: number): number {
-  requirePositive(L, "L", "H", "resonantFrequency");
-  requirePositive(C, "C", "F", "resonantFrequency");
-  return 1 / (2 * Math.PI * Math.sqrt(L * C));
+export function resonantFrequency(inductance: QuantityInput, capacitance: QuantityInput): number {
+  const a = parseArgs(LcFromCArgs, [inductance, capacitance], "resonantFrequency");
+  return 1 / (2 * Math.PI * Math.sqrt(a.inductance * a.capacitance));
 }
 
 /** A tank's parts and losses, for {@link tankQuality}. */
@@ -195,27 +212,60 @@ export interface TuningChoice {
   readonly frequencyError: number;
 }
 
+/** Options of {@link tuneWithStandardParts}. */
+export const TuneOptions = z.strictObject({
+  /** IEC 60063 series of the capacitors, default "E12" */
+  series: ESeriesSchema.optional(),
+  /** most capacitors in a combination, 1–3, default 2 */
+  maxParts: wholeNumber(1, 3, "combinations of up to three parts are searched").optional(),
+  /** how many choices, default 5 */
+  count: wholeNumber(1, 100, "the ranked list is for reading, not for enumeration").optional(),
+  /** connections allowed: "series", "parallel" or "any" */
+  topology: oneOf(["series", "parallel", "any"] as const).optional(),
+});
+/** What {@link tuneWithStandardParts} accepts as options. */
+export type TuneOptions = z.input<typeof TuneOptions>;
+
+const TuneArgs = z.strictObject({ inductance: inductance(), frequency: frequency(), options: TuneOptions.optional() });
+
 /**
  * Tunes a coil to a frequency with standard capacitors: the ideal capacitance
  * 1/((2πf)²L), then the best one-, two- or three-part combinations of an E-series
  * (bestCombination), each with the frequency it actually gives (f ∝ 1/√C: a capacitance
- * error ε moves f by ≈ −ε/2).
- * @param L inductance, H > 0; f target frequency, Hz > 0;
+ * error ε moves f by ≈ −ε/2). A tuning that needs a capacitance outside the parts sold
+ * ({@link PURCHASABLE_CAPACITANCE}, 0.1 pF … 10 mF) is refused, naming both arguments.
+ * @param inductance H > 0 (or "100 uH"); frequency target, Hz > 0 (or "200 kHz");
  * @param options series (default "E12"), maxParts (default 2), count (default 5), topology.
  * @returns `{ capacitance, choices }`, choices ranked by |frequencyError| then part count.
  * @example tuneWithStandardParts(100e-6, 200e3).choices[0] // → 6.8 nF in series with 100 nF: 6.367 nF, 199457.9 Hz (−0.27 %)
  */
 export function tuneWithStandardParts(
-  L: number,
-  f: number,
-  options: { readonly series?: ESeries; readonly maxParts?: 1 | 2 | 3; readonly count?: number; readonly topology?: CombinationTopology } = {},
+  inductance: QuantityInput,
+  frequency: QuantityInput,
+  options: TuneOptions = {},
 ): { readonly capacitance: number; readonly choices: readonly TuningChoice[] } {
-  const c = resonantCapacitance(L, f);
-  const combos = bestCombination(c, options.series ?? "E12", {
-    maxParts: options.maxParts ?? 2,
-    count: options.count ?? 5,
+  const where = "tuneWithStandardParts";
+  const a = parseArgs(TuneArgs, [inductance, frequency, options], where);
+  const L = a.inductance;
+  const f = a.frequency;
+  const o = a.options ?? {};
+  const c = capacitanceFor(L, f);
+  if (!(c >= PURCHASABLE_CAPACITANCE.min && c <= PURCHASABLE_CAPACITANCE.max)) {
+    throw new TanklightInputError(
+      [{
+        path: "inductance",
+        message: `with frequency ${formatQuantity(f, "Hz")} needs C = ${c.toPrecision(3)} F, outside the capacitors sold (${formatQuantity(PURCHASABLE_CAPACITANCE.min, "F")} … ${formatQuantity(PURCHASABLE_CAPACITANCE.max, "F")}, trade practice); check the units of inductance and frequency`,
+        value: inductance,
+        expected: `inductance and frequency with 1/((2πf)²L) between ${PURCHASABLE_CAPACITANCE.min} F and ${PURCHASABLE_CAPACITANCE.max} F`,
+      }],
+      where,
+    );
+  }
+  const combos = bestCombination(c, o.series ?? "E12", {
+    maxParts: (o.maxParts ?? 2) as 1 | 2 | 3,
+    count: o.count ?? 5,
     kind: "capacitor",
-    ...(options.topology ? { topology: options.topology } : {}),
+    ...(o.topology ? { topology: o.topology as CombinationTopology } : {}),
   });
   const choices = combos.map((k) => {
     const fr = 1 / (2 * Math.PI * Math.sqrt(L * k.value));

@@ -10,27 +10,39 @@
  */
 import { mean, quantileSorted, sampleStandardDeviation } from "simple-statistics";
 import { createRandom } from "../math/random.ts";
-import { TanklightInputError, requirePositive } from "../errors.ts";
+import { z } from "zod";
+import { capacitance, inductance, oneOf, parseInput, quantity, wholeNumber } from "../schema.ts";
 
-/** Inputs of {@link resonantFrequencyWindow}. */
-export interface ToleranceInput {
+/** Relative part tolerance, e.g. 0.05 (or "5 %") for ±5 %, 0 ≤ t < 1. */
+const relativeTolerance = () =>
+  quantity("dimensionless", { nonNegative: true, example: "5 %" }).pipe(
+    z.number().lt(1, { error: "must be a relative tolerance in [0, 1), e.g. 0.05 for ±5 %" }),
+  );
+
+/** Monte Carlo draws: each is one resonant frequency, kept and sorted (memory and sort time). */
+export const MAX_TOLERANCE_SAMPLES = 10_000_000;
+
+/** Inputs of {@link resonantFrequencyWindow} (SI numbers or quantity strings). */
+export const ToleranceInput = z.strictObject({
   /** nominal inductance, H, > 0 */
-  readonly inductance: number;
+  inductance: inductance(),
   /** nominal capacitance, F, > 0 */
-  readonly capacitance: number;
+  capacitance: capacitance(),
   /** relative inductance tolerance, e.g. 0.05 for ±5 %, 0 ≤ t < 1 */
-  readonly inductanceTolerance: number;
+  inductanceTolerance: relativeTolerance(),
   /** relative capacitance tolerance, e.g. 0.05 for ±5 %, 0 ≤ t < 1 */
-  readonly capacitanceTolerance: number;
+  capacitanceTolerance: relativeTolerance(),
   /** how a ±t tolerance is distributed: "uniform" (default) or "normal" (t = 3σ) */
-  readonly distribution?: "uniform" | "normal";
-  /** Monte Carlo draws, default 20000 */
-  readonly samples?: number;
+  distribution: oneOf(["uniform", "normal"] as const).optional(),
+  /** Monte Carlo draws, default 20000, 100 … 1e7 */
+  samples: wholeNumber(100, MAX_TOLERANCE_SAMPLES, "each draw is kept and sorted: memory and time grow with it").optional(),
   /** seed of the generator (lib/math/random.ts createRandom), default 1 */
-  readonly seed?: number;
-  /** central fraction of the batch the statistical band covers, default 0.99 */
-  readonly coverage?: number;
-}
+  seed: wholeNumber(0, Number.MAX_SAFE_INTEGER, "the generator's seed range").optional(),
+  /** central fraction of the batch the statistical band covers, default 0.99, 0 < coverage < 1 */
+  coverage: z.number({ error: "must be a number between 0 and 1 (exclusive)" }).gt(0, { error: "must be between 0 and 1 (exclusive)" }).lt(1, { error: "must be between 0 and 1 (exclusive)" }).optional(),
+});
+/** What {@link resonantFrequencyWindow} accepts. */
+export type ToleranceInput = z.input<typeof ToleranceInput>;
 
 /** The band of resonant frequencies. */
 export interface FrequencyWindow {
@@ -58,29 +70,13 @@ export interface FrequencyWindow {
  * @returns {@link FrequencyWindow} (Hz).
  * @example resonantFrequencyWindow({ inductance: 100e-6, capacitance: 6.8e-9, inductanceTolerance: 0.05, capacitanceTolerance: 0.05 }).worstCase.min // → 183813.0647638802 (= f₀/1.05)
  */
-export function resonantFrequencyWindow(input: ToleranceInput): FrequencyWindow {
-  const where = "resonantFrequencyWindow";
-  requirePositive(input.inductance, "inductance", "H", where);
-  requirePositive(input.capacitance, "capacitance", "F", where);
+export function resonantFrequencyWindow(spec: ToleranceInput): FrequencyWindow {
+  const input = parseInput(ToleranceInput, spec, "resonantFrequencyWindow");
   const tl = input.inductanceTolerance;
   const tc = input.capacitanceTolerance;
-  for (const [v, name] of [[tl, "inductanceTolerance"], [tc, "capacitanceTolerance"]] as const) {
-    if (!(Number.isFinite(v) && v >= 0 && v < 1)) {
-      throw new TanklightInputError([{ path: name, message: "must be a relative tolerance in [0, 1), e.g. 0.05 for ±5 %", value: v }], where);
-    }
-  }
   const dist = input.distribution ?? "uniform";
-  if (dist !== "uniform" && dist !== "normal") {
-    throw new TanklightInputError([{ path: "distribution", message: "must be 'uniform' or 'normal'", value: dist }], where);
-  }
   const n = input.samples ?? 20000;
-  if (!(Number.isInteger(n) && n >= 100)) {
-    throw new TanklightInputError([{ path: "samples", message: "must be an integer ≥ 100", value: n }], where);
-  }
   const coverage = input.coverage ?? 0.99;
-  if (!(coverage > 0 && coverage < 1)) {
-    throw new TanklightInputError([{ path: "coverage", message: "must be between 0 and 1", value: coverage }], where);
-  }
   const seed = input.seed ?? 1;
   const L = input.inductance;
   const C = input.capacitance;

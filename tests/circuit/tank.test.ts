@@ -30,9 +30,9 @@ describe("resonantCapacitance / resonantFrequency", () => {
 
   it("bad input throws", () => {
     expect(() => resonantCapacitance(0, 1e5)).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: resonantCapacitance: L: must be a finite number > 0 H, got 0]`,
+      `[TanklightInputError: resonantCapacitance: inductance: must be > 0 H, got 0]`,
     );
-    expect(() => resonantFrequency(1e-6, Number.NaN)).toThrow(/C/);
+    expect(() => resonantFrequency(1e-6, Number.NaN)).toThrow(/capacitance/);
   });
 });
 
@@ -85,7 +85,7 @@ describe("tankQuality / bandwidth / detuningTolerance", () => {
   });
 
   it("types", () => {
-    expectTypeOf(resonantCapacitance).parameters.toEqualTypeOf<[number, number]>();
+    expectTypeOf(resonantCapacitance).parameters.toEqualTypeOf<[number | string, number | string]>(); // SI numbers or quantity strings
     expectTypeOf(resonantFrequency).returns.toEqualTypeOf<number>();
   });
 });

@@ -16,14 +16,19 @@
  * - Diodes: silicon small-signal and small Schottky curves from memory (unverified) of typical
  *   datasheet graphs.
  */
+import { z } from "zod";
 import { led, diode, type Diode, type ForwardPoint, type Led } from "./led.ts";
 import { TanklightInputError } from "../../errors.ts";
+import { oneOf, parseArgs, temperature } from "../../schema.ts";
+
+const LED_COLOURS = ["red", "orange", "yellow", "green-gap", "green-ingan", "blue", "white"] as const;
+const DIODE_KINDS = ["schottky", "silicon"] as const;
 
 /** The LED colours with presets. */
-export type LedColour = "red" | "orange" | "yellow" | "green-gap" | "green-ingan" | "blue" | "white";
+export type LedColour = (typeof LED_COLOURS)[number];
 
 /** The rectifier diode presets. */
-export type DiodeKind = "schottky" | "silicon";
+export type DiodeKind = (typeof DIODE_KINDS)[number];
 
 /** One preset's data: points, a typical peak wavelength and the provenance text. */
 export interface LedPresetData {
@@ -90,11 +95,20 @@ export const DIODE_PRESET_DATA: Readonly<Record<DiodeKind, { readonly points: re
 };
 
 /** Options for presets: the junction temperature and a label override. */
-export interface PresetOptions {
-  /** junction temperature, K; default 298.15 (the points hold at 25 °C) */
-  readonly temperature?: number;
-  readonly label?: string;
-}
+export const PresetOptions = z.strictObject({
+  /** junction temperature, K (or "60 degC"); default 298.15 (the points hold at 25 °C) */
+  temperature: temperature({ positive: true }).optional(),
+  /** label for reports */
+  label: z.string().optional(),
+});
+/** What {@link ledPreset} and {@link diodePreset} accept as options. */
+export type PresetOptions = z.input<typeof PresetOptions>;
+
+const LedPresetArgs = z.strictObject({
+  colour: oneOf(LED_COLOURS),
+  options: PresetOptions.optional(),
+});
+const DiodePresetArgs = z.strictObject({ kind: oneOf(DIODE_KINDS), options: PresetOptions.optional() });
 
 const ledCache = new Map<string, Led>();
 
@@ -108,13 +122,18 @@ const ledCache = new Map<string, Led>();
  * Related: led, LED_PRESET_DATA, diodePreset.
  */
 export function ledPreset(colour: LedColour, options: PresetOptions = {}): Led {
-  const data = (LED_PRESET_DATA as Record<string, LedPresetData | undefined>)[colour];
-  if (!data) {
-    const hint = (colour as string) === "green"
-      ? "ambiguous: use 'green-gap' (GaP yellow-green, ≈ 2 V, the trade's 'about 2 V' green) or 'green-ingan' (InGaN true green, ≈ 3.2 V)"
-      : `must be one of ${Object.keys(LED_PRESET_DATA).join(", ")}`;
+  if ((colour as string) === "green") {
+    const hint = "ambiguous: use 'green-gap' (GaP yellow-green, ≈ 2 V, the trade's 'about 2 V' green) or 'green-ingan' (InGaN true green, ≈ 3.2 V)";
     throw new TanklightInputError([{ path: "colour", message: hint, value: colour }], "ledPreset");
   }
+  const args = parseArgs(LedPresetArgs, [colour, options], "ledPreset");
+  const o = args.options ?? {};
+  const data = LED_PRESET_DATA[args.colour];
+  return cachedPreset(args.colour, data, o);
+}
+
+/** One preset LED per colour, temperature and label (built once: the fit is not free). */
+function cachedPreset(colour: LedColour, data: LedPresetData, options: { readonly temperature?: number | undefined; readonly label?: string | undefined }): Led {
   const key = `${colour}|${options.temperature ?? ""}|${options.label ?? ""}`;
   const hit = ledCache.get(key);
   if (hit) return hit;
@@ -134,14 +153,13 @@ export function ledPreset(colour: LedColour, options: PresetOptions = {}): Led {
  * @example diodePreset("schottky").voltage(10e-3) // → 0.36 (V)
  */
 export function diodePreset(kind: DiodeKind, options: PresetOptions = {}): Diode {
-  const data = (DIODE_PRESET_DATA as Record<string, { points: readonly ForwardPoint[]; source: string } | undefined>)[kind];
-  if (!data) {
-    throw new TanklightInputError([{ path: "kind", message: "must be 'schottky' or 'silicon'", value: kind }], "diodePreset");
-  }
+  const args = parseArgs(DiodePresetArgs, [kind, options], "diodePreset");
+  const o = args.options ?? {};
+  const data = DIODE_PRESET_DATA[args.kind];
   return diode({
     points: data.points,
-    label: options.label ?? `${kind} diode (preset)`,
+    label: o.label ?? `${args.kind} diode (preset)`,
     source: data.source,
-    ...(options.temperature !== undefined ? { temperature: options.temperature } : {}),
+    ...(o.temperature !== undefined ? { temperature: o.temperature } : {}),
   });
 }
