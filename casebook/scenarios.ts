@@ -2,6 +2,7 @@
 import type { Notebook } from "../lib/mod.ts";
 import * as coaxialLoops from "./coaxialLoops.ts";
 import * as pebbleDrawer from "./pebbleDrawer.ts";
+import * as resinPendant from "./resinPendant.ts";
 import * as throughTheBooks from "./throughTheBooks.ts";
 import * as unknownDriver from "./unknownDriver.ts";
 
@@ -21,5 +22,6 @@ export const scenarios: Record<string, Scenario> = {
   "pebble-drawer": { title: "Will every pebble glow, wherever a visitor puts it?", run: pebbleDrawer.run },
   "coaxial-loops": { title: "How fast does coupling fall with height?", run: coaxialLoops.run },
   "through-the-books": { title: "Will a bookmark glow on top of a stack of books?", run: throughTheBooks.run },
+  "resin-pendant": { title: "Which frequency, colour and tilt suit a pendant with a tiny coil?", run: resinPendant.run },
   "unknown-driver": { title: "How far will a new pebble reach on a pad whose driver nobody documented?", run: unknownDriver.run },
 };

@@ -67,6 +67,12 @@ describe("chart builders", () => {
     expect(p.data[1]![0]!.level).toBe(0.5);
   });
 
+  it("chart.ledCurrent plots a tilt in degrees when asked, without an SI prefix", () => {
+    const p = walkSpec(chart.ledCurrent({ curves: [{ colour: "blue", distance: [0, 30, 60], current: [2e-3, 1e-3, 2e-4] }], threshold: 5e-4, distanceName: "tilt", distanceUnit: "°" }));
+    expect(p.titles).toEqual(["tilt (°)", "LED average current (mA)"]);
+    expect(extent(p.data[0]!, "distance")).toEqual([0, 60]);
+  });
+
   it("chart.coupling: height (log |k|) and offset (signed k) panels in %", () => {
     const spec = chart.coupling({
       byHeight: [{ label: "axis", distance: [0.01, 0.05], k: [0.05, 0.004] }],

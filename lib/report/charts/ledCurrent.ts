@@ -24,6 +24,8 @@ export interface LedCurrentChartInput extends ChartTitle {
   readonly threshold: number;
   /** what the distance is (default "height above the transmitter") */
   readonly distanceName?: string;
+  /** the unit of `distance`: "m" (default, shown with a prefix such as mm) or "°" for a tilt angle in degrees */
+  readonly distanceUnit?: "m" | "°";
 }
 
 /**
@@ -35,10 +37,10 @@ export function ledCurrentChart(input: LedCurrentChartInput): ChartSpec {
   const where = "chart.ledCurrent";
   positive(input.threshold, "threshold", where, "A");
   input.curves.forEach((c, i) => {
-    finiteArray(c.distance, `curves[${i}].distance`, where, "m");
+    finiteArray(c.distance, `curves[${i}].distance`, where, input.distanceUnit ?? "m");
     finiteArray(c.current, `curves[${i}].current`, where, "A");
   });
-  const len = displayScale(maxAbs(input.curves.flatMap((c) => [...c.distance])), "m");
+  const len = displayScale(maxAbs(input.curves.flatMap((c) => [...c.distance])), input.distanceUnit ?? "m");
   const amps = displayScale(Math.max(input.threshold, maxAbs(input.curves.flatMap((c) => [...c.current]))), "A");
   const floor = (input.threshold / 100) * amps.factor;
   const labels = input.curves.map((c) => c.label ?? `${c.colour} LED`);
