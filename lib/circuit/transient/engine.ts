@@ -15,6 +15,13 @@ const VOLTAGE_ABSTOL = 1e-6; // V — Newton convergence floor on node voltages
 const CURRENT_ABSTOL = 1e-9; // A — Newton convergence floor on branch currents
 const NEWTON_RELTOL = 1e-7;
 
+/** How one step is integrated: backward Euler, the trapezoidal rule, or TR-BDF2. */
+export type StepMethod = "euler" | "trapezoidal" | "trbdf2";
+/** TR-BDF2's stage fraction γ = 2 − √2: the value at which both stages have the same α = 2/(γh) = 1/(βh), hence one matrix (Bank et al. 1985) */
+const TRBDF2_GAMMA = 2 - Math.SQRT2;
+const BDF2_A1 = 1 / (TRBDF2_GAMMA * (2 - TRBDF2_GAMMA));
+const BDF2_A0 = (1 - TRBDF2_GAMMA) ** 2 / (TRBDF2_GAMMA * (2 - TRBDF2_GAMMA));
+
 function history(cc: CompiledCircuit, initial: boolean): ReactiveHistory {
   return {
     capV: initial ? Float64Array.from(cc.capacitors, (c) => c.v0) : new Float64Array(cc.capacitors.length),
@@ -39,6 +46,9 @@ export class Engine {
   private readonly pivots: Int32Array;
   private readonly hist: ReactiveHistory;
   private readonly saved: ReactiveHistory;
+  /** capacitor voltages and inductor currents at the start of a TR-BDF2 step */
+  private readonly stageCapV: Float64Array;
+  private readonly stageIndI: Float64Array;
   /** 1 closed, 0 open, per switch */
   readonly switchState: Uint8Array;
   private readonly diodeV: Float64Array;
@@ -58,7 +68,9 @@ export class Engine {
   t = 0;
   /** the next step must be backward Euler (start, or just after a switching instant) */
   afterDiscontinuity = true;
-  /** present sub-step length, s (halved on Newton failure, doubled back on success) */
+  /** full-length steps still to be taken by TR-BDF2 after a restart (./stepControl.ts) */
+  stableSteps = 0;
+  /** present sub-step length, s (halved on Newton failure, grown back 1.5× a step on success) */
   subStep = 0;
   steps = 0;
   rejected = 0;
@@ -82,6 +94,8 @@ export class Engine {
     this.pivots = new Int32Array(n);
     this.hist = history(cc, true);
     this.saved = history(cc, false);
+    this.stageCapV = new Float64Array(cc.capacitors.length);
+    this.stageIndI = new Float64Array(cc.inductors.length);
     this.switchState = new Uint8Array(cc.switches.length);
     this.diodeV = new Float64Array(cc.diodes.length);
     this.diodeI = new Float64Array(cc.diodes.length);
@@ -96,7 +110,7 @@ export class Engine {
     this.subStep = h;
     this.saveHistory();
     const h0 = 1e-4 * h;
-    if (!this.tryStep(h0, h0, true)) {
+    if (!this.tryStep(h0, h0, "euler")) {
       throw new TransientConvergenceError(
         `simulate: Newton's method did not converge at t = 0 (diodes: ${this.cc.diodes.map((d) => d.name).join(", ")})`,
         0, h0, this.cc.diodes.map((d) => d.name),
@@ -117,9 +131,10 @@ export class Engine {
   /**
    * Sets the state variables (capacitor voltages, then inductor currents, as {@link readState}
    * gives them) at time t, s, with the switches as their gates say there; the next step is a
-   * short backward-Euler restart of `subStep` s (no trapezoidal history carried over).
+   * short backward-Euler restart of `subStep` s (no trapezoidal history carried over), then the
+   * restart ramp with `stableSteps` full TR-BDF2 steps (./stepControl.ts).
    */
-  writeState(state: Float64Array, t: number, subStep: number): void {
+  writeState(state: Float64Array, t: number, subStep: number, stableSteps: number): void {
     const nC = this.hist.capV.length;
     this.hist.capV.set(state.subarray(0, nC));
     this.hist.indI.set(state.subarray(nC, nC + this.hist.indI.length));
@@ -130,6 +145,7 @@ export class Engine {
     this.switchVersion++;
     this.afterDiscontinuity = true;
     this.subStep = subStep;
+    this.stableSteps = stableSteps;
   }
 
   /** Saves the history and the solution (before a step that may be rejected). */
@@ -186,10 +202,31 @@ export class Engine {
     );
   }
 
-  /** Attempts one step to tNew of length hs; on success x and the history hold the new state. */
-  tryStep(tNew: number, hs: number, backwardEuler: boolean): boolean {
-    const alpha = backwardEuler ? 1 / hs : 2 / hs;
-    const theta = backwardEuler ? 0 : 1;
+  /**
+   * Attempts one step to tNew of length hs by `method`; on success x and the history hold the
+   * new state. "trbdf2" is TR-BDF2 (Bank, Coughran, Fichtner, Grosse, Rose & Smith, IEEE Trans.
+   * CAD 4(4):436–451, 1985): a trapezoidal stage to t + γ·hs, γ = 2 − √2, then a BDF2 stage
+   * to tNew through the two points — second order and L-stable (a stiff mode is damped, not
+   * reflected as the trapezoidal rule reflects it).
+   */
+  tryStep(tNew: number, hs: number, method: StepMethod): boolean {
+    if (method === "trbdf2") {
+      const h = this.hist;
+      this.stageCapV.set(h.capV);
+      this.stageIndI.set(h.indI);
+      const alpha = 2 / (TRBDF2_GAMMA * hs); // = 1/(β·hs), β = (1 − γ)/(2 − γ) = γ/2
+      if (!this.solveStage(tNew - (1 - TRBDF2_GAMMA) * hs, alpha, 1)) return false;
+      // BDF2 through (t, t + γh, t + h): x₊ − a₁x_γ + a₀x = β·h·x′₊ is a backward-Euler
+      // step of length β·h from the point a₁x_γ − a₀x (a₁ − a₀ = 1)
+      for (let i = 0; i < h.capV.length; i++) h.capV[i] = BDF2_A1 * h.capV[i]! - BDF2_A0 * this.stageCapV[i]!;
+      for (let k = 0; k < h.indI.length; k++) h.indI[k] = BDF2_A1 * h.indI[k]! - BDF2_A0 * this.stageIndI[k]!;
+      return this.solveStage(tNew, alpha, 0);
+    }
+    return method === "euler" ? this.solveStage(tNew, 1 / hs, 0) : this.solveStage(tNew, 2 / hs, 1);
+  }
+
+  /** One implicit solve to tNew with integration coefficient alpha (1/s) and θ (1 trapezoidal, 0 backward Euler); updates the history. */
+  private solveStage(tNew: number, alpha: number, theta: number): boolean {
     if (alpha !== this.baseAlpha || this.baseSwitchVersion !== this.switchVersion) {
       stampLinear(this.cc, this.base, this.n, alpha, this.switchState);
       this.baseAlpha = alpha;

@@ -13,7 +13,7 @@ import type { TransientCircuit } from "./circuit.ts";
 import { compileCircuit } from "./compile.ts";
 import { Engine } from "./engine.ts";
 import { Recorder } from "./recorder.ts";
-import { advanceTo, RESTART_FRACTION } from "./stepControl.ts";
+import { advanceTo, RESTART_FRACTION, RESTART_FULL_STEPS } from "./stepControl.ts";
 import type { TransientResult } from "./simulate.ts";
 
 /** Options of {@link periodicSteadyState}. */
@@ -68,7 +68,7 @@ export function periodicSteadyState(circuit: TransientCircuit, opts: ShootingOpt
   const nS = nC + cc.inductors.length;
   let periods = warm;
   const period = (x0: Float64Array, out: Float64Array, recorder?: Recorder): void => {
-    engine.writeState(x0, t0, RESTART_FRACTION * h);
+    engine.writeState(x0, t0, RESTART_FRACTION * h, RESTART_FULL_STEPS);
     recorder?.record(t0, engine);
     for (let n = 1; n <= spc; n++) {
       advanceTo(engine, t0 + n * h, h);

@@ -2,8 +2,9 @@
  * The time-domain engine: modified nodal analysis (Ho, Ruehli & Brennan, IEEE Trans.
  * Circuits Syst. 22(6):504–509, 1975) — node voltages plus the branch currents of voltage
  * sources and inductors as unknowns — integrated with the trapezoidal rule, with a
- * backward-Euler step at the start and after every switching instant (the usual cure for the
- * trapezoidal rule's undamped ringing after a discontinuity). Mutual inductance enters as
+ * backward-Euler step at the start, and after every switching instant a short backward-Euler
+ * step and an L-stable TR-BDF2 ramp back to the full step (Bank et al. 1985; the cure for the
+ * trapezoidal rule's undamped ringing after a discontinuity, ./stepControl.ts). Mutual inductance enters as
  * the coupled branch equations v_k = R_k i_k + Σ_j L_kj di_j/dt. Diodes are linearised
  * (companion conductance and current) and solved by Newton's method; a step whose Newton
  * iteration fails is halved and retried. Steady state is detected by cycle-to-cycle
@@ -85,7 +86,7 @@ export interface TransientResult {
  * at their initial values, default 0) and returns its sampled waveforms.
  *
  * Method: MNA (Ho, Ruehli & Brennan 1975); trapezoidal rule (second order, A-stable, energy
- * conserving for lossless LC) with backward Euler at t = 0 and after each switching instant;
+ * conserving for lossless LC) with backward Euler at t = 0 and a TR-BDF2 restart after each switching instant;
  * Newton on diodes with step halving; steady state by cycle-to-cycle convergence.
  *
  * @param circuit the elements (see circuit.ts)

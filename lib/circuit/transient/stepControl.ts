@@ -50,16 +50,28 @@ function nextSwitchingEdge(engine: Engine, hs: number, h: number): number {
 }
 
 /**
- * First step after a switching instant, as a fraction of the output step: 2⁻¹⁰. Breakpoint
- * restart as circuit simulators do it (Nagel, SPICE2, UC Berkeley ERL-M520, 1975, from memory
- * (unverified): at a breakpoint the step is cut and integration restarts with a first-order
- * step): one backward-Euler step of h/1024, then trapezoidal steps doubling back to h. The
- * backward-Euler step's numerical damping, which a full-length step makes ≈ 4πQ/N² of a
- * switched tank's current (N steps a cycle), becomes negligible, and a switch closing on a
- * charged capacitor with R_on·C ≪ h decays while the steps are still short instead of ringing
- * under the trapezoidal rule (its amplification → −1 for h ≫ R_on·C).
+ * Breakpoint restart after a switching instant. The step is cut at the instant and integration
+ * restarts with one backward-Euler step of h/1024 (first order, needs no derivative from before
+ * the discontinuity — Nagel, SPICE2, UC Berkeley ERL-M520, 1975, from memory (unverified)),
+ * then steps growing 1.5× a step back to h and two steps of h, all TR-BDF2 (Bank et al., IEEE
+ * Trans. CAD 4(4):436–451, 1985: second order, L-stable), and from there the trapezoidal rule.
+ * - The short first-order step keeps backward Euler's damping of a switched tank — ≈ 4πQ/N²
+ *   of its current for a full-length step, N steps a cycle — negligible; TR-BDF2 damps a tank
+ *   by 4e-9 a step at 200 steps a cycle.
+ * - A switch closing on a charged capacitor starts a fast mode (τ = R_on·C, possibly ≪ h). The
+ *   trapezoidal rule reflects such a mode (amplification → −1 for h ≫ τ: false ringing);
+ *   TR-BDF2's amplification is small but also negative beyond h ≈ 2.4τ, so the ramp must be
+ *   gentle enough that the mode has decayed before the steps grow past it. Growth 1.5 and two
+ *   full TR-BDF2 steps leave at most 1.1e-4 of the jump as undershoot at the output samples,
+ *   over τ/h = 1e-6…10 (growth 2 and none: 8.5e-3) — worked out on the scalar mode
+ *   x′ = −x/τ with each method's amplification factor (docs/methods/transient.md).
+ * Steps shortened after a Newton failure are TR-BDF2 too until they are back at h.
  */
 export const RESTART_FRACTION = 1 / 1024;
+/** Growth of the restart steps, per step. */
+const RESTART_GROWTH = 1.5;
+/** Full-length TR-BDF2 steps after the restart ramp, before the trapezoidal rule takes over. */
+export const RESTART_FULL_STEPS = 2;
 
 /** Takes every switch's state at tEdge (s), counting the changes; the next step is a short backward-Euler step. */
 function applySwitching(engine: Engine, tEdge: number, h: number): void {
@@ -75,6 +87,7 @@ function applySwitching(engine: Engine, tEdge: number, h: number): void {
   engine.switchVersion++;
   engine.afterDiscontinuity = true;
   engine.subStep = Math.min(engine.subStep, RESTART_FRACTION * h);
+  engine.stableSteps = RESTART_FULL_STEPS;
 }
 
 /**
@@ -119,12 +132,15 @@ function stepWithHalving(engine: Engine, hs: number, h: number): void {
     const len = Math.min(remaining, engine.subStep);
     const tNew = engine.t + len;
     if (nonlinear) engine.saveHistory();
-    if (engine.tryStep(tNew, len, engine.afterDiscontinuity)) {
+    const full = engine.subStep >= h;
+    const method = engine.afterDiscontinuity ? "euler" : !full || engine.stableSteps > 0 ? "trbdf2" : "trapezoidal";
+    if (engine.tryStep(tNew, len, method)) {
       engine.t = tNew;
       remaining -= len;
       engine.steps++;
       engine.afterDiscontinuity = false;
-      engine.subStep = Math.min(h, engine.subStep * 2);
+      if (full && method === "trbdf2") engine.stableSteps--;
+      engine.subStep = Math.min(h, engine.subStep * RESTART_GROWTH);
       tries = 0;
       continue;
     }
