@@ -20,7 +20,15 @@
  * Sokal (IEEE JSSC SC-10(3), 1975) and Raab (IEEE TCAS 24(12), 1977), see {@link classEDesign}
  * and {@link classEDrive}; and the parallel-tank form, see {@link parallelTankDrive}.
  */
-import { TanklightInputError, requireFinite, requirePositive } from "../errors.ts";
+import { z } from "zod";
+import { TanklightInputError } from "../errors.ts";
+import { current, frequency, inductance, parseArgs, parseInput, power, resistance, voltage } from "../schema.ts";
+import type { QuantityInput } from "../units.ts";
+
+// Argument schemas: SI numbers or quantity strings ("12 V", "0.1 ohm"); messages name the argument.
+const SineArgs = z.strictObject({ amplitude: voltage({ nonNegative: true }), outputResistance: resistance().optional() });
+const SupplyArgs = z.strictObject({ supply: voltage({ positive: true }), onResistance: resistance().optional() });
+const CurrentArgs = z.strictObject({ amplitude: current({ nonNegative: true }) });
 
 /** Equivalent fundamental source of a drive, as the link solver sees it (SI, peak). */
 export type DriveEquivalent =
@@ -82,9 +90,10 @@ export const SWITCH_OFF_RESISTANCE = 1e6;
  * @returns the voltage-source equivalent (exact: the source is already sinusoidal).
  * @example sineDrive(10, 50).amplitude // → 10
  */
-export function sineDrive(amplitude: number, outputResistance = 0): DriveEquivalent {
-  nonNegative(amplitude, "amplitude", "V", "sineDrive");
-  nonNegative(outputResistance, "outputResistance", "Ω", "sineDrive");
+export function sineDrive(amplitudeInput: QuantityInput, outputResistanceInput: QuantityInput = 0): DriveEquivalent {
+  const a = parseArgs(SineArgs, [amplitudeInput, outputResistanceInput], "sineDrive");
+  const amplitude = a.amplitude;
+  const outputResistance = a.outputResistance ?? 0;
   return {
     kind: "voltage",
     amplitude,
@@ -103,9 +112,8 @@ export function sineDrive(amplitude: number, outputResistance = 0): DriveEquival
  * @param onResistance one switch's on-resistance, Ω, ≥ 0 (default 0).
  * @example halfBridgeDrive(12).amplitude // → 7.639437268410976 (= 24/π)
  */
-export function halfBridgeDrive(supply: number, onResistance = 0): DriveEquivalent {
-  requirePositive(supply, "supply", "V", "halfBridgeDrive");
-  nonNegative(onResistance, "onResistance", "Ω", "halfBridgeDrive");
+export function halfBridgeDrive(supplyInput: QuantityInput, onResistanceInput: QuantityInput = 0): DriveEquivalent {
+  const { supply, onResistance = 0 } = parseArgs(SupplyArgs, [supplyInput, onResistanceInput], "halfBridgeDrive");
   return {
     kind: "voltage",
     amplitude: (2 * supply) / Math.PI,
@@ -128,9 +136,8 @@ export function halfBridgeDrive(supply: number, onResistance = 0): DriveEquivale
  * @param onResistance one switch's on-resistance, Ω, ≥ 0 (default 0).
  * @example fullBridgeDrive(12).amplitude // → 15.278874536821952 (= 48/π)
  */
-export function fullBridgeDrive(supply: number, onResistance = 0): DriveEquivalent {
-  requirePositive(supply, "supply", "V", "fullBridgeDrive");
-  nonNegative(onResistance, "onResistance", "Ω", "fullBridgeDrive");
+export function fullBridgeDrive(supplyInput: QuantityInput, onResistanceInput: QuantityInput = 0): DriveEquivalent {
+  const { supply, onResistance = 0 } = parseArgs(SupplyArgs, [supplyInput, onResistanceInput], "fullBridgeDrive");
   return {
     kind: "voltage",
     amplitude: (4 * supply) / Math.PI,
@@ -151,8 +158,8 @@ export function fullBridgeDrive(supply: number, onResistance = 0): DriveEquivale
  * @param amplitude peak transmitter coil current, A, ≥ 0.
  * @example currentDrive(1.5).kind // → "current"
  */
-export function currentDrive(amplitude: number): DriveEquivalent {
-  nonNegative(amplitude, "amplitude", "A", "currentDrive");
+export function currentDrive(amplitudeInput: QuantityInput): DriveEquivalent {
+  const { amplitude } = parseArgs(CurrentArgs, [amplitudeInput], "currentDrive");
   return {
     kind: "current",
     amplitude,
@@ -222,6 +229,34 @@ export interface ClassEDesign {
   readonly warnings: readonly string[];
 }
 
+/** What {@link classEDesign} takes: supply, frequency, and power or resistance (SI numbers or quantity strings). */
+export const ClassEDesignSpec = z.strictObject({
+  /** V_DD, V, > 0 */
+  supply: voltage({ positive: true }),
+  /** switching frequency, Hz, > 0 */
+  frequency: frequency(),
+  /** output power at optimum, W, > 0 (or give resistance) */
+  power: power({ positive: true }).optional(),
+  /** the load network's total series resistance, Ω, > 0 (or give power) */
+  resistance: resistance({ positive: true }).optional(),
+  /** series-network inductance (the transmitter coil), H, > 0 */
+  inductance: inductance().optional(),
+});
+/** What {@link classEDesign} accepts. */
+export type ClassEDesignSpec = z.input<typeof ClassEDesignSpec>;
+
+/** The fields of a {@link ClassEDesign} that {@link classEDrive} reads (any object from classEDesign has them). */
+const ClassEDriveArgs = z.strictObject({
+  design: z.looseObject({
+    supply: voltage({ positive: true }),
+    frequency: frequency(),
+    power: power({ positive: true }),
+    resistance: resistance({ positive: true }),
+    excessReactance: z.number().refine(Number.isFinite, { error: "must be a finite number of Ω" }),
+  }),
+  onResistance: resistance().optional(),
+});
+
 /**
  * Sizes an optimum class-E single-switch drive (50 % duty, shunt capacitor, high loaded Q).
  *
@@ -237,35 +272,27 @@ export interface ClassEDesign {
  * @returns the design, SI; `warnings` for a loaded Q below the minimum.
  * @example classEDesign({ supply: 5, frequency: 200e3, power: 2 }).resistance // → 7.2102 Ω
  */
-export function classEDesign(spec: {
-  readonly supply: number;
-  readonly frequency: number;
-  readonly power?: number;
-  readonly resistance?: number;
-  readonly inductance?: number;
-}): ClassEDesign {
+export function classEDesign(spec: ClassEDesignSpec): ClassEDesign {
   const where = "classEDesign";
-  const v = requirePositive(spec.supply, "supply", "V", where);
-  const f = requirePositive(spec.frequency, "frequency", "Hz", where);
-  if ((spec.power === undefined) === (spec.resistance === undefined)) {
+  const d = parseInput(ClassEDesignSpec, spec, where);
+  const v = d.supply;
+  const f = d.frequency;
+  if ((d.power === undefined) === (d.resistance === undefined)) {
     throw new TanklightInputError(
       [{ path: "power", message: "give exactly one of power (W) and resistance (Ω)", value: spec.power }],
       where,
     );
   }
   const w = 2 * Math.PI * f;
-  const r =
-    spec.resistance !== undefined
-      ? requirePositive(spec.resistance, "resistance", "Ω", where)
-      : (CLASS_E.resistanceFactor * v * v) / requirePositive(spec.power!, "power", "W", where);
+  const r = d.resistance !== undefined ? d.resistance : (CLASS_E.resistanceFactor * v * v) / d.power!;
   const p = (CLASS_E.resistanceFactor * v * v) / r;
   const x = CLASS_E.excessReactanceFactor * r;
   const idc = p / v;
   const warnings: string[] = [];
   let loadedQ: number | undefined;
   let seriesCapacitance: number | undefined;
-  if (spec.inductance !== undefined) {
-    const l = requirePositive(spec.inductance, "inductance", "H", where);
+  if (d.inductance !== undefined) {
+    const l = d.inductance;
     loadedQ = (w * l) / r;
     if (loadedQ < CLASS_E.minimumLoadedQ) {
       warnings.push(
@@ -321,8 +348,8 @@ export function classEDesign(spec: {
  * @param onResistance switch on-resistance, Ω, ≥ 0 (default 0).
  * @example classEDrive(classEDesign({ supply: 5, frequency: 200e3, power: 2 })).amplitude // → 8.195 V
  */
-export function classEDrive(design: ClassEDesign, onResistance = 0): DriveEquivalent {
-  nonNegative(onResistance, "onResistance", "Ω", "classEDrive");
+export function classEDrive(designInput: ClassEDesign, onResistanceInput: QuantityInput = 0): DriveEquivalent {
+  const { design, onResistance = 0 } = parseArgs(ClassEDriveArgs, [designInput, onResistanceInput], "classEDrive");
   const k = CLASS_E.fundamentalFactor * Math.hypot(1, CLASS_E.excessReactanceFactor);
   return {
     kind: "voltage",
@@ -357,9 +384,8 @@ export const CLASS_E_ON_RESISTANCE_FACTOR = 1.365;
  * @param onResistance switch on-resistance, Ω, ≥ 0 (default 0).
  * @example parallelTankDrive(5).amplitude // → 7.853981633974483 (= 5π/2)
  */
-export function parallelTankDrive(supply: number, onResistance = 0): DriveEquivalent {
-  requirePositive(supply, "supply", "V", "parallelTankDrive");
-  nonNegative(onResistance, "onResistance", "Ω", "parallelTankDrive");
+export function parallelTankDrive(supplyInput: QuantityInput, onResistanceInput: QuantityInput = 0): DriveEquivalent {
+  const { supply, onResistance = 0 } = parseArgs(SupplyArgs, [supplyInput, onResistanceInput], "parallelTankDrive");
   return {
     kind: "voltage",
     amplitude: (Math.PI * supply) / 2,
@@ -379,13 +405,6 @@ export function parallelTankDrive(supply: number, onResistance = 0): DriveEquiva
       duty: 0.5,
     },
   };
-}
-
-function nonNegative(x: number, field: string, unit: string, where: string): void {
-  requireFinite(x, field, unit, where);
-  if (x < 0) {
-    throw new TanklightInputError([{ path: field, message: `must be ≥ 0 ${unit}`, value: x, expected: `≥ 0 ${unit}` }], where);
-  }
 }
 
 function fmt(x: number): string {

@@ -4,15 +4,52 @@
  * show frequency splitting: two identical tanks tuned to f₀ with coupling k resonate at
  * f₀/√(1 ± k) (textbook coupled resonators; checked in tests/circuit/frequencySweep.test.ts).
  */
-import { TanklightInputError, requirePositive } from "../errors.ts";
+import { z } from "zod";
+import { TanklightInputError, underName } from "../errors.ts";
+import { frequency, oneOf, parseArgs, wholeNumber } from "../schema.ts";
 import type { LinkNetwork, LinkOptions } from "./link/network.ts";
 import { solveLinkNetwork } from "./link/solveNetwork.ts";
 import type { LinkResult } from "./link/result.ts";
 
-/** The sweep's frequencies: an explicit list, or a range. */
-export type SweepFrequencies =
-  | readonly number[]
-  | { readonly start: number; readonly stop: number; readonly points: number; readonly spacing?: "linear" | "log" };
+/**
+ * Most frequencies in one sweep: each point solves the whole link (and each peak a few dozen
+ * more), and every quantity keeps one number per point.
+ */
+export const MAX_SWEEP_POINTS = 100_000;
+const WHY_POINTS = "each point solves the whole link";
+
+/** The sweep's frequencies: an explicit list, or a range (SI numbers or quantity strings). */
+export const SweepFrequencies = z.union([
+  z.array(frequency()).max(MAX_SWEEP_POINTS, { error: `must hold at most ${MAX_SWEEP_POINTS} frequencies (${WHY_POINTS})` }).readonly(),
+  z.strictObject({
+    start: frequency(),
+    stop: frequency(),
+    points: wholeNumber(2, MAX_SWEEP_POINTS, WHY_POINTS),
+    spacing: oneOf(["linear", "log"] as const).optional(),
+  }),
+]);
+/** What {@link frequencySweep} accepts as frequencies. */
+export type SweepFrequencies = z.input<typeof SweepFrequencies>;
+
+/** The options of {@link frequencySweep}: the link options (checked by the solver) plus `refine`. */
+const SweepOptions = z.strictObject({
+  litThreshold: z.unknown(),
+  brightnessReference: z.unknown(),
+  cautionVoltage: z.unknown(),
+  maxIterations: z.unknown(),
+  tolerance: z.unknown(),
+  onNonConvergence: z.unknown(),
+  refine: z.boolean({ error: "must be true or false" }).optional(),
+});
+
+const SweepArgs = z.strictObject({
+  network: z.custom<LinkNetwork | ((frequency: number) => LinkNetwork)>(
+    (n) => typeof n === "function" || (typeof n === "object" && n !== null && !Array.isArray(n)),
+    { error: "must be a LinkNetwork or a function of frequency giving one" },
+  ),
+  frequencies: SweepFrequencies,
+  options: SweepOptions.partial().optional(),
+});
 
 /** Quantities a peak search can follow. */
 export type SweepQuantity = "transmitterCurrent" | "inputPower" | "delivered" | "efficiency";
@@ -52,9 +89,12 @@ export function frequencySweep(
   frequencies: SweepFrequencies,
   options: LinkOptions & { readonly refine?: boolean } = {},
 ): FrequencySweep {
-  const fs = sweepFrequencies(frequencies);
+  const where = "frequencySweep";
+  const args = parseArgs(SweepArgs, [network, frequencies, options], where);
+  const fs = sweepFrequencies(args.frequencies);
   const at = typeof network === "function" ? network : (f: number): LinkNetwork => ({ ...network, frequency: f });
-  const solve = (f: number): LinkResult => solveLinkNetwork(at(f), options);
+  // the solver checks the network and the link options; its messages carry this function's name
+  const solve = (f: number): LinkResult => underName(where, () => solveLinkNetwork(at(f), options));
   const n = fs.length;
   const out = {
     transmitterCurrent: new Float64Array(n),
@@ -95,20 +135,15 @@ export function frequencySweep(
   return { frequency: fs, ...out, loadVoltage, peaks, warnings: [...warnings] };
 }
 
-function sweepFrequencies(spec: SweepFrequencies): Float64Array {
-  const where = "frequencySweep";
-  if (Array.isArray(spec)) {
-    const list = spec as readonly number[];
-    list.forEach((f, i) => requirePositive(f, `frequencies[${i}]`, "Hz", where));
-    return Float64Array.from(list);
-  }
-  const r = spec as Exclude<SweepFrequencies, readonly number[]>;
-  const a = requirePositive(r.start, "frequencies.start", "Hz", where);
-  const b = requirePositive(r.stop, "frequencies.stop", "Hz", where);
-  if (!(Number.isInteger(r.points) && r.points >= 2) || !(b > a)) {
+function sweepFrequencies(spec: z.output<typeof SweepFrequencies>): Float64Array {
+  if (Array.isArray(spec)) return Float64Array.from(spec as readonly number[]);
+  const r = spec as Exclude<z.output<typeof SweepFrequencies>, readonly number[]>;
+  const a = r.start;
+  const b = r.stop;
+  if (!(b > a)) {
     throw new TanklightInputError(
-      [{ path: "frequencies", message: "need stop > start and an integer number of points ≥ 2", value: r }],
-      where,
+      [{ path: "frequencies", message: "need stop > start and an integer number of points ≥ 2", value: spec }],
+      "frequencySweep",
     );
   }
   const out = new Float64Array(r.points);

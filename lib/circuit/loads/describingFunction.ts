@@ -76,8 +76,8 @@ function isJunction(j: unknown): boolean {
   return !!x && typeof x.is === "number" && x.is > 0 && typeof x.rs === "number" && x.rs > 0 && typeof x.n === "number" && x.n > 0 && typeof x.thermalVoltage === "number";
 }
 
-/** Cheap structural checks of plain-data loads (a few typeof tests: fine on the hot path). */
-function checkLoad(load: TokenLoad, where: string): void {
+/** Cheap structural checks of plain-data loads (a few typeof tests: fine on the hot path); `where` names the public function. */
+export function checkLoad(load: TokenLoad, where: string): void {
   if (load === null || typeof load !== "object" || typeof (load as { kind?: unknown }).kind !== "string") {
     badLoad("load", "must be a TokenLoad object with a kind", load, where);
   }

@@ -16,16 +16,20 @@
  */
 import type { DiodeModel } from "../types.ts";
 import { thermalVoltage } from "../../constants.ts";
+import { z } from "zod";
 import { TanklightInputError, requireFinite } from "../../errors.ts";
+import { conductance, current, dimensionless, parseArgs, parseInput, resistance, temperature, voltage } from "../../schema.ts";
 import { lambertWOfLogCore } from "../../math/lambertW.ts";
 
 /** A datasheet-style point of the forward characteristic: the voltage at a current. */
-export interface ForwardPoint {
+export const ForwardPoint = z.strictObject({
   /** forward current, A, > 0 */
-  readonly current: number;
+  current: current({ positive: true }),
   /** forward voltage at that current, V, > 0 */
-  readonly voltage: number;
-}
+  voltage: voltage({ positive: true }),
+});
+/** A forward point in SI numbers (as results carry it; specs also accept quantity strings). */
+export type ForwardPoint = z.output<typeof ForwardPoint>;
 
 /** Shockley parameters at one temperature. */
 export interface ShockleyParameters {
@@ -37,36 +41,88 @@ export interface ShockleyParameters {
   readonly seriesResistance: number;
 }
 
+const positiveNumber = () => dimensionless({ positive: true });
+
 /** Options shared by {@link led} and {@link diode}. */
-export interface JunctionOptions {
+const junctionOptions = {
   /** junction temperature the model is evaluated at, K; default = referenceTemperature */
-  readonly temperature?: number;
+  temperature: temperature({ positive: true }).optional(),
   /** temperature at which the points or parameters hold, K; default 298.15 (25 °C, datasheet convention) */
-  readonly referenceTemperature?: number;
+  referenceTemperature: temperature({ positive: true }).optional(),
   /**
    * forward-voltage temperature coefficient at the reference current, V/K; default −0.002
    * (about −2 mV/K: from memory (unverified), docs/references.md "LED forward voltage")
    */
-  readonly temperatureCoefficient?: number;
+  temperatureCoefficient: z.number({ error: "must be a finite number of V/K" }).refine(Number.isFinite, { error: "must be a finite number of V/K" }).optional(),
   /** current at which the temperature coefficient holds, A; default: the largest fit point or 20 mA */
-  readonly referenceCurrent?: number;
+  referenceCurrent: current({ positive: true }).optional(),
   /** parallel leakage conductance, S, ≥ 0; default 1e-12 (numerical floor, see module comment) */
-  readonly leakage?: number;
+  leakage: conductance().optional(),
   /** short label for reports */
-  readonly label?: string;
+  label: z.string().optional(),
   /** where the numbers come from (datasheet, preset table, fit …) */
-  readonly source?: string;
-}
+  source: z.string().optional(),
+};
+const pointsList = z
+  .array(ForwardPoint, { error: "must be a list of two or three (current, voltage) points" })
+  .min(2, { error: "must hold two or three (current, voltage) points" })
+  .max(3, { error: "must hold two or three (current, voltage) points" })
+  .readonly();
+/** The extra fields of an LED spec. */
+const ledFields = {
+  /** colour name, e.g. "red" (free text) */
+  colour: z.string().optional(),
+  /** current at which relative brightness is 1, A; default 20 mA */
+  ratedCurrent: current({ positive: true }).optional(),
+};
 
-/** How a junction is specified: datasheet-style points, or Shockley parameters directly. */
-export type JunctionSpec =
-  | (JunctionOptions & {
+/** The two forms of a junction spec: forward points, or Shockley parameters. */
+function junctionForms<E extends z.ZodRawShape>(extra: E) {
+  return {
+    points: z.strictObject({
+      ...junctionOptions,
+      ...extra,
       /** two or three (current, voltage) points, distinct currents */
-      readonly points: readonly ForwardPoint[];
+      points: pointsList,
       /** ideality factor to hold fixed when only two points are given; default 2 */
-      readonly idealityFactor?: number;
-    })
-  | (JunctionOptions & ShockleyParameters);
+      idealityFactor: positiveNumber().optional(),
+    }),
+    parameters: z.strictObject({
+      ...junctionOptions,
+      ...extra,
+      saturationCurrent: current({ positive: true }),
+      idealityFactor: positiveNumber(),
+      seriesResistance: resistance({ positive: true }),
+    }),
+  };
+}
+const DIODE_FORMS = junctionForms({});
+const LED_FORMS = junctionForms(ledFields);
+
+/** How a junction is specified: datasheet-style points, or Shockley parameters directly (SI numbers or quantity strings). */
+export const JunctionSpec = z.union([DIODE_FORMS.points, DIODE_FORMS.parameters]);
+/** What {@link diode} accepts. */
+export type JunctionSpec = z.input<typeof JunctionSpec>;
+/** What {@link led} accepts: a junction spec plus colour and rated current. */
+export const LedSpec = z.union([LED_FORMS.points, LED_FORMS.parameters]);
+/** What {@link led} accepts. */
+export type LedSpec = z.input<typeof LedSpec>;
+type ParsedSpec = z.output<typeof LedSpec>;
+
+/** Options shared by {@link led} and {@link diode} (the fields besides points or parameters). */
+export type JunctionOptions = z.input<z.ZodObject<typeof junctionOptions>>;
+
+/**
+ * Parses a spec with the form its keys choose (`points` present: the points form), so the
+ * messages name the user's fields of that form, not a list of forms.
+ */
+function parseSpec(spec: unknown, forms: { points: z.ZodType; parameters: z.ZodType }, where: string): ParsedSpec {
+  if (spec === null || typeof spec !== "object" || Array.isArray(spec)) {
+    throw new TanklightInputError([{ path: "spec", message: "must be an object { points } or { saturationCurrent, idealityFactor, seriesResistance }", value: spec }], where);
+  }
+  const form = Object.hasOwn(spec, "points") ? forms.points : forms.parameters;
+  return parseInput(form, spec, where) as ParsedSpec;
+}
 
 /** A Shockley junction with series resistance, ready to evaluate (satisfies DiodeModel). */
 export interface Junction extends DiodeModel {
@@ -122,16 +178,6 @@ export function junctionW(v: number, lnIs: number, is: number, nvt: number, rs: 
   return lambertWOfLogCore(lnIs + Math.log(rs / nvt) + (v + is * rs) / nvt);
 }
 
-function checkPositive(x: unknown, field: string, unit: string, where: string): number {
-  if (typeof x !== "number" || !Number.isFinite(x) || x <= 0) {
-    throw new TanklightInputError(
-      [{ path: field, message: `must be a finite number > 0 ${unit}`, value: x, expected: `> 0 ${unit}` }],
-      where,
-    );
-  }
-  return x;
-}
-
 /**
  * Fits Shockley parameters (I_s, n, r_s) to two or three datasheet-style points.
  *
@@ -146,21 +192,22 @@ function checkPositive(x: unknown, field: string, unit: string, where: string): 
  *   // → { saturationCurrent: 2.2164765511026647e-19, idealityFactor: 1.8836756868950875, seriesResistance: 5.527214899673994 }
  */
 export function fitShockley(
-  points: readonly ForwardPoint[],
-  temperature: number = DEFAULT_T,
-  idealityFactor = 2,
-  where = "fitShockley",
+  points: readonly z.input<typeof ForwardPoint>[],
+  temperature: number | string = DEFAULT_T,
+  idealityFactor: number | string = 2,
 ): ShockleyParameters {
-  if (!Array.isArray(points) || points.length < 2 || points.length > 3) {
-    throw new TanklightInputError(
-      [{ path: "points", message: "must hold two or three (current, voltage) points", value: points, expected: "2 or 3 points" }],
-      where,
-    );
-  }
-  points.forEach((p, k) => {
-    checkPositive(p?.current, `points[${k}].current`, "A", where);
-    checkPositive(p?.voltage, `points[${k}].voltage`, "V", where);
-  });
+  const a = parseArgs(FitArgs, [points, temperature, idealityFactor], "fitShockley");
+  return fitShockleyCore(a.points, a.temperature ?? DEFAULT_T, a.idealityFactor ?? 2, "fitShockley");
+}
+
+const FitArgs = z.strictObject({
+  points: pointsList,
+  temperature: temperature({ positive: true }).optional(),
+  idealityFactor: positiveNumber().optional(),
+});
+
+/** fitShockley on checked points (SI); `where` names the public function in its errors. */
+function fitShockleyCore(points: readonly ForwardPoint[], temperature: number, idealityFactor: number, where: string): ShockleyParameters {
   const sorted = [...points].sort((a, b) => a.current - b.current);
   for (let k = 1; k < sorted.length; k++) {
     if (!(sorted[k]!.current > sorted[k - 1]!.current) || !(sorted[k]!.voltage > sorted[k - 1]!.voltage)) {
@@ -251,22 +298,13 @@ function solve2(A: number[][], b: number[]): number[] {
   return [(b[0]! * e - c * b[1]!) / det, (a * b[1]! - d * b[0]!) / det];
 }
 
-/** Resolves a spec into parameters at the reference temperature, plus the fit points. */
-function resolveSpec(spec: JunctionSpec, where: string): { p: ShockleyParameters; points?: readonly ForwardPoint[] } {
-  if (spec === null || typeof spec !== "object") {
-    throw new TanklightInputError([{ path: "spec", message: "must be an object", value: spec }], where);
-  }
+/** Resolves a parsed spec into parameters at the reference temperature, plus the fit points. */
+function resolveSpec(spec: ParsedSpec, where: string): { p: ShockleyParameters; points?: readonly ForwardPoint[] } {
   const tRef = spec.referenceTemperature ?? DEFAULT_T;
-  checkPositive(tRef, "referenceTemperature", "K", where);
-  if ("points" in spec && spec.points !== undefined) {
-    if (spec.idealityFactor !== undefined) checkPositive(spec.idealityFactor, "idealityFactor", "", where);
-    return { p: fitShockley(spec.points, tRef, spec.idealityFactor ?? 2, where), points: spec.points };
+  if ("points" in spec) {
+    return { p: fitShockleyCore(spec.points, tRef, spec.idealityFactor ?? 2, where), points: spec.points };
   }
-  const s = spec as ShockleyParameters;
-  checkPositive(s.saturationCurrent, "saturationCurrent", "A", where);
-  checkPositive(s.idealityFactor, "idealityFactor", "", where);
-  checkPositive(s.seriesResistance, "seriesResistance", "Ω", where);
-  return { p: { saturationCurrent: s.saturationCurrent, idealityFactor: s.idealityFactor, seriesResistance: s.seriesResistance } };
+  return { p: { saturationCurrent: spec.saturationCurrent, idealityFactor: spec.idealityFactor, seriesResistance: spec.seriesResistance } };
 }
 
 /**
@@ -274,24 +312,18 @@ function resolveSpec(spec: JunctionSpec, where: string): { p: ShockleyParameters
  * evaluation temperature by holding the forward voltage's temperature coefficient at the
  * reference current: V_F(T) = V_F(T_ref) + tc·(T − T_ref) at i_ref, I_s(T) re-solved from it.
  */
-function makeJunction(spec: JunctionSpec, where: string, defaultLabel: string, defaultSource: string) {
+function makeJunction(spec: ParsedSpec, where: string, defaultLabel: string, defaultSource: string) {
   const { p, points } = resolveSpec(spec, where);
   const tRef = spec.referenceTemperature ?? DEFAULT_T;
   const temperature = spec.temperature ?? tRef;
-  checkPositive(temperature, "temperature", "K", where);
   const tc = spec.temperatureCoefficient ?? DEFAULT_TEMPCO;
-  requireFinite(tc, "temperatureCoefficient", "V/K", where);
   const leakage = spec.leakage ?? DEFAULT_LEAKAGE;
-  if (!(Number.isFinite(leakage) && leakage >= 0)) {
-    throw new TanklightInputError([{ path: "leakage", message: "must be a finite number ≥ 0 S", value: leakage }], where);
-  }
   const n = p.idealityFactor;
   const rs = p.seriesResistance;
   let is = p.saturationCurrent;
   const vtRef = thermalVoltage(tRef);
   const vt = thermalVoltage(temperature);
   const iRef = spec.referenceCurrent ?? (points ? Math.max(...points.map((q) => q.current)) : 20e-3);
-  checkPositive(iRef, "referenceCurrent", "A", where);
   if (temperature !== tRef) {
     const vfRef = n * vtRef * Math.log1p(iRef / is) + iRef * rs;
     const vf = vfRef + tc * (temperature - tRef);
@@ -361,10 +393,10 @@ function makeJunction(spec: JunctionSpec, where: string, defaultLabel: string, d
  * @example led({ points: [{ current: 1e-3, voltage: 1.75 }, { current: 20e-3, voltage: 2.0 }] }).voltage(20e-3) // → 1.99999999998475 (the 20 mA point; the 1e-12 S leakage floor shifts it by 1.5e-11 V)
  * Related: ledPreset, diode, fitShockley.
  */
-export function led(spec: JunctionSpec & { readonly colour?: string; readonly ratedCurrent?: number }): Led {
-  const j = makeJunction(spec, "led", spec?.colour ? `${spec.colour} LED` : "LED", "Shockley parameters given by the caller");
+export function led(input: LedSpec): Led {
+  const spec = parseSpec(input, LED_FORMS, "led");
+  const j = makeJunction(spec, "led", spec.colour ? `${spec.colour} LED` : "LED", "Shockley parameters given by the caller");
   const ratedCurrent = spec.ratedCurrent ?? 20e-3;
-  checkPositive(ratedCurrent, "ratedCurrent", "A", "led");
   return { kind: "led", ...j, ...(spec.colour ? { colour: spec.colour } : {}), ratedCurrent };
 }
 
@@ -375,7 +407,8 @@ export function led(spec: JunctionSpec & { readonly colour?: string; readonly ra
  * @example diode({ saturationCurrent: 1e-9, idealityFactor: 1.9, seriesResistance: 0.1 }).current(0.5) // → 2.807040878375539e-5 A
  * Related: diodePreset.
  */
-export function diode(spec: JunctionSpec): Diode {
+export function diode(input: JunctionSpec): Diode {
+  const spec = parseSpec(input, DIODE_FORMS, "diode");
   const j = makeJunction(spec, "diode", "diode", "Shockley parameters given by the caller");
   return { kind: "diode", ...j };
 }

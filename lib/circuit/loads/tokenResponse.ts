@@ -13,27 +13,33 @@
  * Physics-notes.md, "The token": the same as the Norton form I_N = e/Z_L into Y_tank + G.
  */
 import type { TokenLoad, LedCurrent } from "./types.ts";
-import { averageLoadCurrent, fundamentalConductance } from "./describingFunction.ts";
-import { TanklightInputError, requirePositive } from "../../errors.ts";
+import { averageLoadCurrent, checkLoad, fundamentalConductance } from "./describingFunction.ts";
+import { z } from "zod";
+import { TanklightInputError } from "../../errors.ts";
+import { capacitance, frequency, inductance, parseInput, resistance, voltage } from "../../schema.ts";
 import { HIGH_VOLTAGE } from "../../hazards.ts";
 
-/** Inputs of {@link tokenResponse}. */
-export interface TokenResponseInput {
+/** Inputs of {@link tokenResponse}: SI numbers or quantity strings ("0.2 V", "200 kHz", "100 uH"). */
+export const TokenResponseInput = z.strictObject({
   /** induced EMF amplitude in the token coil, V (peak), ≥ 0 */
-  readonly emf: number;
+  emf: voltage({ nonNegative: true }),
   /** frequency, Hz > 0 */
-  readonly frequency: number;
+  frequency: frequency(),
   /** token coil inductance, H > 0 */
-  readonly inductance: number;
+  inductance: inductance(),
   /** token coil series resistance at the frequency, Ω > 0 */
-  readonly coilResistance: number;
+  coilResistance: resistance({ positive: true }),
   /** tank capacitance, F > 0 */
-  readonly capacitance: number;
+  capacitance: capacitance(),
   /** capacitor ESR, Ω ≥ 0 (default 0) */
-  readonly capacitorEsr?: number;
-  /** the load across the capacitor */
-  readonly load: TokenLoad;
-}
+  capacitorEsr: resistance().optional(),
+  /** the load across the capacitor (checked by the describing function) */
+  load: z.custom<TokenLoad>((l) => typeof l === "object" && l !== null && !Array.isArray(l), {
+    error: "must be a TokenLoad ({ kind: 'led', led }, …; see tokenCircuits.ts)",
+  }),
+});
+/** What {@link tokenResponse} accepts. */
+export type TokenResponseInput = z.input<typeof TokenResponseInput>;
 
 /** The token's operating point. */
 export interface TokenResponse {
@@ -57,19 +63,11 @@ export interface TokenResponse {
  * @example tokenResponse({ emf: 0.2, frequency: 200e3, inductance: 100e-6, coilResistance: 5,
  *   capacitance: 6.332573977646111e-9, load: { kind: "led", led: ledPreset("red") } }).amplitude // → 1.7905628126747266 V
  */
-export function tokenResponse(input: TokenResponseInput): TokenResponse {
+export function tokenResponse(spec: TokenResponseInput): TokenResponse {
   const where = "tokenResponse";
-  if (!(Number.isFinite(input.emf) && input.emf >= 0)) {
-    throw new TanklightInputError([{ path: "emf", message: "must be a finite number ≥ 0 V (peak)", value: input.emf }], where);
-  }
-  requirePositive(input.frequency, "frequency", "Hz", where);
-  requirePositive(input.inductance, "inductance", "H", where);
-  requirePositive(input.coilResistance, "coilResistance", "Ω", where);
-  requirePositive(input.capacitance, "capacitance", "F", where);
+  const input = parseInput(TokenResponseInput, spec, where);
+  checkLoad(input.load, where);
   const esr = input.capacitorEsr ?? 0;
-  if (!(Number.isFinite(esr) && esr >= 0)) {
-    throw new TanklightInputError([{ path: "capacitorEsr", message: "must be a finite number ≥ 0 Ω", value: esr }], where);
-  }
   const w = 2 * Math.PI * input.frequency;
   const zr = input.coilResistance;
   const zi = w * input.inductance;

@@ -9,7 +9,9 @@
  * 1977) and pass its values here; this file only builds circuits.
  */
 
-import { requirePositive, TanklightInputError } from "../../errors.ts";
+import { z } from "zod";
+import { assertNever, TanklightInputError } from "../../errors.ts";
+import { capacitance, dimensionless, frequency, inductance, oneOf, parseInput, resistance, voltage } from "../../schema.ts";
 import { GROUND, type CircuitElement, type TransientCircuit } from "./circuit.ts";
 import { periodicGate, stepWaveform } from "./waveforms.ts";
 
@@ -28,39 +30,52 @@ export interface DriveCircuit {
 /** Default switch on-resistance, Ω (a small logic-level MOSFET, trade practice (no source)). */
 export const DEFAULT_ON_RESISTANCE = 0.05;
 
-/** Options of the single-switch drive. SI units. */
-export interface SingleSwitchDriveSpec {
+/** A duty cycle: the fraction of the period a switch is closed, 0 < duty < 1 (or "40 %"). */
+const duty = () =>
+  dimensionless({ example: "50 %" }).pipe(z.number().gt(0, { error: "must be between 0 and 1 (exclusive)" }).lt(1, { error: "must be between 0 and 1 (exclusive)" }));
+
+/** Options of the single-switch drive: SI numbers or quantity strings ("5 V", "200 kHz", "10 uH"). */
+export const SingleSwitchDriveSpec = z.strictObject({
   /** supply voltage V_DD, V, > 0 */
-  readonly supply: number;
+  supply: voltage({ positive: true }),
   /** switching frequency, Hz, > 0 */
-  readonly frequency: number;
+  frequency: frequency(),
   /** fraction of the period the switch is closed, 0 < duty < 1; default 0.5 */
-  readonly duty?: number;
+  duty: duty().optional(),
   /** transmitter coil inductance, H, > 0 */
-  readonly coilInductance: number;
+  coilInductance: inductance(),
   /** transmitter coil series resistance, Ω, ≥ 0; default 0 */
-  readonly coilResistance?: number;
+  coilResistance: resistance().optional(),
   /**
    * the transmitter tank capacitor, F, > 0: across the coil ("parallel-tank") or in series
    * with it ("class-e")
    */
-  readonly tankCapacitance: number;
+  tankCapacitance: capacitance(),
   /**
    * "parallel-tank" (default): supply → coil ∥ capacitor → switch node → switch → ground.
    * "class-e": supply → feed choke → switch node; shunt capacitor and switch to ground; series
    * capacitor + coil (+ load resistance) from the switch node to ground (Sokal & Sokal 1975).
    */
-  readonly arrangement?: "parallel-tank" | "class-e";
+  arrangement: oneOf(["parallel-tank", "class-e"] as const).optional(),
   /** capacitance from the switch node to ground (switch output capacitance; class E: C₁), F ≥ 0 */
-  readonly shuntCapacitance?: number;
+  shuntCapacitance: capacitance({ nonNegative: true }).optional(),
   /** class-e feed choke, H; default 50 × coilInductance (large enough to carry near-DC current) */
-  readonly chokeInductance?: number;
+  chokeInductance: inductance().optional(),
   /** extra series resistance in the coil branch (e.g. the reflected load), Ω ≥ 0; default 0 */
-  readonly loadResistance?: number;
+  loadResistance: resistance().optional(),
   /** switch on-resistance, Ω > 0; default 0.05 */
-  readonly onResistance?: number;
-  /** switch off-resistance, Ω; default 1 MΩ */
-  readonly offResistance?: number;
+  onResistance: resistance({ positive: true }).optional(),
+  /** switch off-resistance, Ω > onResistance; default 1 MΩ */
+  offResistance: resistance({ positive: true }).optional(),
+});
+/** What {@link singleSwitchDrive} accepts. */
+export type SingleSwitchDriveSpec = z.input<typeof SingleSwitchDriveSpec>;
+
+/** The switch's off-resistance must exceed its on-resistance (else the switch never opens). */
+function checkOffResistance(ron: number, roff: number | undefined, where: string): void {
+  if (roff !== undefined && !(roff > ron)) {
+    throw new TanklightInputError([{ path: "offResistance", message: `must exceed onResistance (${ron} Ω)`, value: roff, expected: `> ${ron} Ω` }], where);
+  }
 }
 
 /**
@@ -69,20 +84,21 @@ export interface SingleSwitchDriveSpec {
  * (between series capacitor and coil); the coil is the inductor "Ltx".
  * @example singleSwitchDrive({ supply: 5, frequency: 200e3, coilInductance: 10e-6, tankCapacitance: 63e-9 }).coil // → "Ltx"
  */
-export function singleSwitchDrive(spec: SingleSwitchDriveSpec): DriveCircuit {
+export function singleSwitchDrive(input: SingleSwitchDriveSpec): DriveCircuit {
   const where = "singleSwitchDrive";
-  const supply = requirePositive(spec.supply, "supply", "V", where);
-  const f = requirePositive(spec.frequency, "frequency", "Hz", where);
-  const duty = spec.duty ?? 0.5;
-  const L = requirePositive(spec.coilInductance, "coilInductance", "H", where);
-  const C = requirePositive(spec.tankCapacitance, "tankCapacitance", "F", where);
-  const R = nonNegative(spec.coilResistance ?? 0, "coilResistance", "Ω", where);
-  const rLoad = nonNegative(spec.loadResistance ?? 0, "loadResistance", "Ω", where);
-  const cShunt = nonNegative(spec.shuntCapacitance ?? 0, "shuntCapacitance", "F", where);
-  const ron = requirePositive(spec.onResistance ?? DEFAULT_ON_RESISTANCE, "onResistance", "Ω", where);
+  const spec = parseInput(SingleSwitchDriveSpec, input, where);
+  const supply = spec.supply;
+  const f = spec.frequency;
+  const L = spec.coilInductance;
+  const C = spec.tankCapacitance;
+  const R = spec.coilResistance ?? 0;
+  const rLoad = spec.loadResistance ?? 0;
+  const cShunt = spec.shuntCapacitance ?? 0;
+  const ron = spec.onResistance ?? DEFAULT_ON_RESISTANCE;
+  checkOffResistance(ron, spec.offResistance, where);
   const arrangement = spec.arrangement ?? "parallel-tank";
   const warnings: string[] = [];
-  const gate = periodicGate({ frequency: f, duty });
+  const gate = periodicGate({ frequency: f, duty: spec.duty ?? 0.5 });
   const sw: CircuitElement = {
     kind: "switch", name: "S1", a: "switch", b: GROUND, closed: gate, onResistance: ron,
     ...(spec.offResistance !== undefined ? { offResistance: spec.offResistance } : {}),
@@ -100,7 +116,7 @@ export function singleSwitchDrive(spec: SingleSwitchDriveSpec): DriveCircuit {
     nodes.coilTop = "supply";
     nodes.coilBottom = "switch";
   } else if (arrangement === "class-e") {
-    const choke = requirePositive(spec.chokeInductance ?? 50 * L, "chokeInductance", "H", where);
+    const choke = spec.chokeInductance ?? 50 * L;
     elements.push(
       { kind: "inductor", name: "Lchoke", a: "supply", b: "switch", inductance: choke },
       sw,
@@ -118,26 +134,35 @@ export function singleSwitchDrive(spec: SingleSwitchDriveSpec): DriveCircuit {
     if (R + rLoad === 0) warnings.push("singleSwitchDrive: the class-E coil branch has no resistance; the drive will not settle");
     nodes.coilTop = "coilTop";
   } else {
-    throw new TanklightInputError([{ path: "arrangement", message: "must be 'parallel-tank' or 'class-e'", value: arrangement }], where);
+    return assertNever(arrangement, "arrangement", where, "must be 'parallel-tank' or 'class-e'");
   }
   if (cShunt > 0) elements.push({ kind: "capacitor", name: "Cshunt", a: "switch", b: GROUND, capacitance: cShunt });
   return { circuit: { elements }, frequency: f, coil: "Ltx", nodes, warnings };
 }
 
-/** Options of the bridge drive. SI units. */
-export interface BridgeDriveSpec {
-  readonly supply: number;
-  readonly frequency: number;
+/** Options of the bridge drive: SI numbers or quantity strings. */
+export const BridgeDriveSpec = z.strictObject({
+  /** supply voltage V_DD, V, > 0 */
+  supply: voltage({ positive: true }),
+  /** switching frequency, Hz, > 0 */
+  frequency: frequency(),
   /** "half": one leg, tank from its midpoint to ground; "full": two legs in antiphase, tank between them */
-  readonly bridge: "half" | "full";
-  readonly coilInductance: number;
-  readonly coilResistance?: number;
+  bridge: oneOf(["half", "full"] as const),
+  /** transmitter coil inductance, H, > 0 */
+  coilInductance: inductance(),
+  /** transmitter coil series resistance, Ω, ≥ 0; default 0 */
+  coilResistance: resistance().optional(),
   /** series tank capacitor, F > 0 (also blocks the half bridge's DC) */
-  readonly tankCapacitance: number;
-  readonly loadResistance?: number;
-  readonly onResistance?: number;
-  readonly offResistance?: number;
-}
+  tankCapacitance: capacitance(),
+  /** extra series resistance in the coil branch, Ω ≥ 0; default 0 */
+  loadResistance: resistance().optional(),
+  /** switch on-resistance, Ω > 0; default 0.05 */
+  onResistance: resistance({ positive: true }).optional(),
+  /** switch off-resistance, Ω > onResistance; default 1 MΩ */
+  offResistance: resistance({ positive: true }).optional(),
+});
+/** What {@link bridgeDrive} accepts. */
+export type BridgeDriveSpec = z.input<typeof BridgeDriveSpec>;
 
 /**
  * A half or full bridge (square wave, 50 % duty, complementary switches with no dead time)
@@ -147,18 +172,17 @@ export interface BridgeDriveSpec {
  * across the tank) — Fourier series of a square wave.
  * @example bridgeDrive({ supply: 12, frequency: 200e3, bridge: "full", coilInductance: 10e-6, tankCapacitance: 63.3e-9 }).nodes.midB // → "midB"
  */
-export function bridgeDrive(spec: BridgeDriveSpec): DriveCircuit {
+export function bridgeDrive(input: BridgeDriveSpec): DriveCircuit {
   const where = "bridgeDrive";
-  const supply = requirePositive(spec.supply, "supply", "V", where);
-  const f = requirePositive(spec.frequency, "frequency", "Hz", where);
-  const L = requirePositive(spec.coilInductance, "coilInductance", "H", where);
-  const C = requirePositive(spec.tankCapacitance, "tankCapacitance", "F", where);
-  const R = nonNegative(spec.coilResistance ?? 0, "coilResistance", "Ω", where);
-  const rLoad = nonNegative(spec.loadResistance ?? 0, "loadResistance", "Ω", where);
-  const ron = requirePositive(spec.onResistance ?? DEFAULT_ON_RESISTANCE, "onResistance", "Ω", where);
-  if (spec.bridge !== "half" && spec.bridge !== "full") {
-    throw new TanklightInputError([{ path: "bridge", message: "must be 'half' or 'full'", value: spec.bridge }], where);
-  }
+  const spec = parseInput(BridgeDriveSpec, input, where);
+  const supply = spec.supply;
+  const f = spec.frequency;
+  const L = spec.coilInductance;
+  const C = spec.tankCapacitance;
+  const R = spec.coilResistance ?? 0;
+  const rLoad = spec.loadResistance ?? 0;
+  const ron = spec.onResistance ?? DEFAULT_ON_RESISTANCE;
+  checkOffResistance(ron, spec.offResistance, where);
   const off = spec.offResistance !== undefined ? { offResistance: spec.offResistance } : {};
   const high = periodicGate({ frequency: f, duty: 0.5 });
   const low = periodicGate({ frequency: f, duty: 0.5, invert: true });
@@ -187,11 +211,4 @@ export function bridgeDrive(spec: BridgeDriveSpec): DriveCircuit {
     elements.push({ kind: "inductor", name: "Ltx", a: "coilTop", b: end, inductance: L, resistance: R });
   }
   return { circuit: { elements }, frequency: f, coil: "Ltx", nodes, warnings: [] };
-}
-
-function nonNegative(x: number, field: string, unit: string, where: string): number {
-  if (!(typeof x === "number" && Number.isFinite(x) && x >= 0)) {
-    throw new TanklightInputError([{ path: field, message: `must be a finite number ≥ 0 ${unit}`, value: x, expected: `≥ 0 ${unit}` }], where);
-  }
-  return x;
 }

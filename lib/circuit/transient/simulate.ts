@@ -23,35 +23,12 @@ import { GROUND, type TransientCircuit } from "./circuit.ts";
 import { compileCircuit } from "./compile.ts";
 import { Engine } from "./engine.ts";
 import { Recorder } from "./recorder.ts";
-import { resolveOptions } from "./simulateOptions.ts";
+import { resolveOptions, type SimulateOptions } from "./simulateOptions.ts";
 import { SteadyStateTracker, type SteadyState } from "./steadyState.ts";
 import { advanceTo } from "./stepControl.ts";
 
 export type { SteadyState } from "./steadyState.ts";
-
-/** How to run a simulation. Times in s, frequencies in Hz. */
-export interface SimulateOptions {
-  /** end time, s, > 0 (the longest run when `untilSteady` is set) */
-  readonly stop: number;
-  /** output and integration step, s; or give `stepsPerCycle` with `frequency` */
-  readonly step?: number;
-  /** steps per period of `frequency`, integer ≥ 8 */
-  readonly stepsPerCycle?: number;
-  /** the drive frequency, Hz: defines the cycle for `stepsPerCycle`, `untilSteady` and `keepCycles` */
-  readonly frequency?: number;
-  /**
-   * stop at steady state: when the estimated remaining relative change of the state
-   * (δₙ/(1 − r), δₙ the cycle-to-cycle change, r its decay ratio) is below `tolerance`
-   * (default 1e-4), after at least `minCycles` cycles (default 5). Needs `frequency`.
-   */
-  readonly untilSteady?: boolean | { readonly tolerance?: number; readonly minCycles?: number };
-  /** keep only the last N cycles of output (needs `frequency`); default all, or 4 with `untilSteady` */
-  readonly keepCycles?: number;
-  /** called about every 1 % of the run with (fraction done 0…1, simulated time s) */
-  readonly progress?: (fraction: number, time: number) => void;
-  /** Newton iterations per step before the step is halved; default 50 */
-  readonly maxNewtonIterations?: number;
-}
+export { SimulateOptions } from "./simulateOptions.ts";
 
 /** Sampled waveforms of a run (uniform step; time[0] may be > 0 when `keepCycles` is set). */
 export interface TransientResult {

@@ -5,11 +5,52 @@
  * and the steady-state settings. Bad or inconsistent options throw TanklightInputError naming
  * the field.
  */
-import { requirePositive, TanklightInputError } from "../../errors.ts";
-import type { SimulateOptions } from "./simulate.ts";
+import { z } from "zod";
+import { TanklightInputError } from "../../errors.ts";
+import { dimensionless, frequency, parseInput, time, wholeNumber } from "../../schema.ts";
 
 /** Output steps a run may ask for: 5e7 samples of one waveform are 400 MB. */
 export const MAX_OUTPUT_STEPS = 5e7;
+
+/** Newton iterations per step before it is halved: beyond a few hundred a step is not converging. */
+const MAX_NEWTON = 10_000;
+
+/** How to run a simulation: SI numbers or quantity strings ("10 ns", "200 kHz"). */
+export const SimulateOptions = z.strictObject({
+  /** end time, s, > 0 (the longest run when `untilSteady` is set) */
+  stop: time(),
+  /** output and integration step, s; or give `stepsPerCycle` with `frequency` */
+  step: time().optional(),
+  /** steps per period of `frequency`, integer ≥ 8 */
+  stepsPerCycle: wholeNumber(8, MAX_OUTPUT_STEPS, "one run holds at most 5e7 output steps").optional(),
+  /** the drive frequency, Hz: defines the cycle for `stepsPerCycle`, `untilSteady` and `keepCycles` */
+  frequency: frequency().optional(),
+  /**
+   * stop at steady state: when the estimated remaining relative change of the state
+   * (δₙ/(1 − r), δₙ the cycle-to-cycle change, r its decay ratio) is below `tolerance`
+   * (default 1e-4), after at least `minCycles` cycles (default 5). Needs `frequency`.
+   */
+  untilSteady: z
+    .union([
+      z.boolean(),
+      z.strictObject({
+        tolerance: dimensionless({ positive: true }).optional(),
+        minCycles: wholeNumber(3).optional(),
+      }),
+    ])
+    .optional(),
+  /** keep only the last N cycles of output (needs `frequency`); default all, or 4 with `untilSteady` */
+  keepCycles: wholeNumber(1).optional(),
+  /** called about every 1 % of the run with (fraction done 0…1, simulated time s) */
+  progress: z
+    .custom<(fraction: number, time: number) => void>((f) => typeof f === "function", { error: "must be a function (fraction, time) => void" })
+    .optional(),
+  /** Newton iterations per step before the step is halved; default 50 */
+  maxNewtonIterations: wholeNumber(2, MAX_NEWTON, "a step that needs more is not converging; it is halved").optional(),
+});
+/** What {@link simulate} accepts as options. */
+export type SimulateOptions = z.input<typeof SimulateOptions>;
+type ParsedOptions = z.output<typeof SimulateOptions>;
 
 /** What a run will do, in SI numbers. */
 export interface RunPlan {
@@ -35,16 +76,14 @@ function bad(path: string, message: string, value: unknown, expected?: string): 
 }
 
 /** The step h (s) and steps per cycle from `step` or `stepsPerCycle` (with `frequency`). */
-function resolveStep(opts: SimulateOptions, frequency: number | undefined, warnings: string[]): { h: number; spc: number | undefined } {
-  const where = "simulate";
+function resolveStep(opts: ParsedOptions, frequency: number | undefined, warnings: string[]): { h: number; spc: number | undefined } {
   if (opts.stepsPerCycle !== undefined) {
     if (frequency === undefined) bad("frequency", "is needed with stepsPerCycle", undefined, "Hz > 0");
     const n = opts.stepsPerCycle;
-    if (!(Number.isInteger(n) && n >= 8)) bad("stepsPerCycle", "must be an integer ≥ 8", n, "integer ≥ 8");
     return { h: 1 / (frequency * n), spc: n };
   }
   if (opts.step === undefined) bad("step", "give step, or stepsPerCycle with frequency", undefined, "s > 0");
-  const h = requirePositive(opts.step, "step", "s", where);
+  const h = opts.step;
   if (frequency === undefined) return { h, spc: undefined };
   const spc = Math.max(1, Math.round(1 / (frequency * h)));
   const hc = 1 / (frequency * spc);
@@ -55,26 +94,22 @@ function resolveStep(opts: SimulateOptions, frequency: number | undefined, warni
 }
 
 /** The steady-state settings of `untilSteady` (needs a frequency), or undefined. */
-function resolveSteady(opts: SimulateOptions, spc: number | undefined): RunPlan["steady"] {
+function resolveSteady(opts: ParsedOptions, spc: number | undefined): RunPlan["steady"] {
   if (opts.untilSteady === undefined || opts.untilSteady === false) return undefined;
   if (spc === undefined) bad("frequency", "is needed with untilSteady", undefined, "Hz > 0");
   const u = typeof opts.untilSteady === "object" ? opts.untilSteady : {};
-  const tolerance = u.tolerance ?? 1e-4;
-  const minCycles = u.minCycles ?? 5;
-  if (!(tolerance > 0 && Number.isFinite(tolerance))) bad("untilSteady.tolerance", "must be > 0", tolerance);
-  if (!(Number.isInteger(minCycles) && minCycles >= 3)) bad("untilSteady.minCycles", "must be an integer ≥ 3", minCycles);
-  return { tolerance, minCycles };
+  return { tolerance: u.tolerance ?? 1e-4, minCycles: u.minCycles ?? 5 };
 }
 
 /**
  * Checks the options and works out the run.
  * @example resolveOptions({ stop: 1e-3, stepsPerCycle: 100, frequency: 1e5 }).nGrid // → 10000
  */
-export function resolveOptions(opts: SimulateOptions): RunPlan {
-  const where = "simulate";
+export function resolveOptions(options: SimulateOptions): RunPlan {
+  const opts = parseInput(SimulateOptions, options, "simulate");
   const warnings: string[] = [];
-  const stop = requirePositive(opts?.stop, "stop", "s", where);
-  const frequency = opts.frequency === undefined ? undefined : requirePositive(opts.frequency, "frequency", "Hz", where);
+  const stop = opts.stop;
+  const frequency = opts.frequency;
   const { h, spc } = resolveStep(opts, frequency, warnings);
   if (h > stop) bad("step", `must not exceed stop (${stop} s)`, h, `≤ ${stop} s`);
   const nGrid = Math.max(1, Math.round(stop / h - 1e-9 * (stop / h)));
@@ -84,10 +119,8 @@ export function resolveOptions(opts: SimulateOptions): RunPlan {
   const keepCycles = opts.keepCycles ?? (steady ? 4 : undefined);
   if (keepCycles !== undefined) {
     if (spc === undefined) bad("frequency", "is needed with keepCycles", undefined, "Hz > 0");
-    if (!(Number.isInteger(keepCycles) && keepCycles >= 1)) bad("keepCycles", "must be an integer ≥ 1", keepCycles);
     keep = Math.min(keep, keepCycles * spc + 1);
   }
   const maxNewton = opts.maxNewtonIterations ?? 50;
-  if (!(Number.isInteger(maxNewton) && maxNewton >= 2)) bad("maxNewtonIterations", "must be an integer ≥ 2", maxNewton);
   return { stop, h, stepsPerCycle: spc, nGrid, keep, keepCycles, steady, maxNewton, progress: opts.progress, warnings };
 }

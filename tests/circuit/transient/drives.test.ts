@@ -172,7 +172,7 @@ describe("bridge drives: square wave into a series-tuned transmitter", () => {
     expectTypeOf(singleSwitchDrive).returns.toEqualTypeOf<DriveCircuit>();
   });
   it("bad input is refused with the field named", () => {
-    expect(() => bridgeDrive({ supply: V, frequency: f, bridge: "quarter" as "half", coilInductance: L, tankCapacitance: C })).toThrow(/bridge: must be 'half' or 'full'/);
+    expect(() => bridgeDrive({ supply: V, frequency: f, bridge: "quarter" as "half", coilInductance: L, tankCapacitance: C })).toThrow(/bridge: must be one of half, full/);
     expect(() => singleSwitchDrive({ supply: -1, frequency: f, coilInductance: L, tankCapacitance: C })).toThrow(/supply/);
   });
 });
