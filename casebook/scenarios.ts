@@ -4,6 +4,7 @@ import * as coaxialLoops from "./coaxialLoops.ts";
 import * as pebbleDrawer from "./pebbleDrawer.ts";
 import * as resinPendant from "./resinPendant.ts";
 import * as throughTheBooks from "./throughTheBooks.ts";
+import * as tokenBatch from "./tokenBatch.ts";
 import * as unknownDriver from "./unknownDriver.ts";
 
 /** What every scenario's run() accepts. */
@@ -23,5 +24,6 @@ export const scenarios: Record<string, Scenario> = {
   "coaxial-loops": { title: "How fast does coupling fall with height?", run: coaxialLoops.run },
   "through-the-books": { title: "Will a bookmark glow on top of a stack of books?", run: throughTheBooks.run },
   "resin-pendant": { title: "Which frequency, colour and tilt suit a pendant with a tiny coil?", run: resinPendant.run },
+  "token-batch": { title: "Will two hundred hand-wound tokens all light, and what does 99 % take?", run: tokenBatch.run },
   "unknown-driver": { title: "How far will a new pebble reach on a pad whose driver nobody documented?", run: unknownDriver.run },
 };
