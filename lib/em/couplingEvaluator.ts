@@ -10,6 +10,7 @@ import { conductorRadius } from "./mutualInductance.ts";
 import { selfInductance } from "./selfInductance.ts";
 import { poseFrame, type Frame } from "./frames.ts";
 import { coaxialTurns, groupLevels, momentLumps, type Lumps, type Turn } from "./turnLumps.ts";
+import { gaussLumps, gaussLumpSource, type GaussLumpSource } from "./gaussLumps.ts";
 import { polygonCoupling, type PolygonCouplingResult } from "./polygonCoupling.ts";
 import type { Coil, Filament, Pose } from "./types.ts";
 
@@ -59,22 +60,26 @@ export interface CouplingEvaluator {
 /** Most trapezoidal nodes per ring (8, 16, … this). */
 const MAX_NODES = 256;
 /**
- * cos/sin of the trapezoidal nodes added at each doubling, by node count N = 8·2^i: all 8 nodes
- * for N = 8, the N/2 odd ones after that. Computed once at load, never written again.
+ * The trapezoidal nodes added at each doubling, by node count N = 8·2^i: all 8 nodes for N = 8,
+ * the N/2 odd ones after that; cos, sin and weight (1 each). The `half` tables serve a ring
+ * whose integrand is mirror-symmetric, f(−θ) = f(θ): only the nodes with 0 ≤ θ ≤ π, the ones
+ * strictly inside weighted 2. Computed once at load, never written again.
  */
-const NODES: ReadonlyMap<number, { readonly c: Float64Array; readonly s: Float64Array }> = new Map(
-  [8, 16, 32, 64, 128, 256].map((n) => {
-    const first = n === 8;
-    const m = first ? 8 : n / 2;
-    const c = new Float64Array(m), s = new Float64Array(m);
-    for (let j = 0; j < m; j++) {
-      const t = first ? (2 * Math.PI * j) / 8 : ((2 * j + 1) * Math.PI) / m;
-      c[j] = Math.cos(t);
-      s[j] = Math.sin(t);
-    }
-    return [n, { c, s }] as const;
-  }),
-);
+interface NodeTable { readonly c: Float64Array; readonly s: Float64Array; readonly w: Float64Array }
+const nodeTable = (n: number, half: boolean): NodeTable => {
+  const first = n === 8;
+  const m = first ? 8 : n / 2;
+  const t: number[] = [];
+  for (let j = 0; j < m; j++) t.push(first ? (2 * Math.PI * j) / 8 : ((2 * j + 1) * Math.PI) / m);
+  const keep = half ? t.filter((x) => x <= Math.PI + 1e-12) : t;
+  return {
+    c: Float64Array.from(keep, Math.cos),
+    s: Float64Array.from(keep, Math.sin),
+    w: Float64Array.from(keep, (x) => (!half || x === 0 || Math.abs(x - Math.PI) < 1e-12 ? 1 : 2)),
+  };
+};
+const NODES: ReadonlyMap<number, NodeTable> = new Map([8, 16, 32, 64, 128, 256].map((n) => [n, nodeTable(n, false)] as const));
+const HALF_NODES: ReadonlyMap<number, NodeTable> = new Map([8, 16, 32, 64, 128, 256].map((n) => [n, nodeTable(n, true)] as const));
 
 /** What one ring integral returns: the evaluator's explicit workspace (one per evaluator). */
 interface RingResult {
@@ -93,6 +98,10 @@ const LUMP_SAFETY = 3;
 const TX_LUMP_SHARE = 0.25;
 /** Share of relTol given to each filament pair on the exact path (their errors add up). */
 const PAIR_SHARE = 0.3;
+/** Level G is tried only where its predicted convergence rate per order is at most this. */
+const G_MAX_RATE = 0.5;
+/** Level G's largest number of transmitter × receiver lumps (beyond it, level B is cheaper). */
+const G_BUDGET = 400;
 /** Nodes per receiver turn when looking for overlapping conductors before the exact path. */
 const OVERLAP_NODES = 256;
 /** Lumps are trusted only while the nearest wire is farther than GUARD × the lumped coil's extent. */
@@ -102,14 +111,21 @@ const GUARD = 2;
  * ∮ A_tx · dl over one receiver loop (tx frame: centre c, unit normal n, radius r), with A_tx
  * the sum over the transmitter's lumps `t1` (and separately over `t0`), by the nested periodic
  * trapezoidal rule (8, 16, … 256 nodes; stop when |T_2N − T_N| ≤ 0.1·√qtol·scale, see loopMutual.ts).
+ * The ring's θ = 0 lies along the horizontal unit vector (px, py, 0) projected onto its plane
+ * (or ẑ projected, when n is nearly along (px, py)); when `mirror` is true the loop is symmetric about the vertical plane through
+ * (px, py, 0) and the transmitter's axis (n and c in that plane), f(−θ) = f(θ), and only the
+ * nodes 0 ≤ θ ≤ π are evaluated — the same sums at half the cost.
  * Results in `ring`: v1 (over t1), v0 (over t0), err, minA2 (closest node-to-lump-wire distance²).
  */
 function ringIntegral(
-  cx: number, cy: number, cz: number, nx: number, ny: number, nz: number, r: number,
+  cx: number, cy: number, cz: number, nx: number, ny: number, nz: number, r: number, px: number, py: number, mirror: boolean,
   t1: Lumps, t0: Lumps | undefined, qtol: number, floor: number, ring: RingResult,
 ): void {
+  // θ = 0 along (px, py, 0) projected onto the ring's plane, or along ẑ projected when n is
+  // nearly horizontal along (px, py): both lie in the mirror plane
+  const pn = px * nx + py * ny;
   let ux: number, uy: number, uz: number;
-  if (Math.abs(nx) < 0.9) { ux = 1 - nx * nx; uy = -nx * ny; uz = -nx * nz; } else { ux = -ny * nx; uy = 1 - ny * ny; uz = -ny * nz; }
+  if (Math.abs(pn) < 0.9) { ux = px - pn * nx; uy = py - pn * ny; uz = -pn * nz; } else { ux = -nz * nx; uy = -nz * ny; uz = 1 - nz * nz; }
   const un = r / Math.sqrt(ux * ux + uy * uy + uz * uz);
   ux *= un; uy *= un; uz *= un; // r·u
   const vx = ny * uz - nz * uy, vy = nz * ux - nx * uz, vz = nx * uy - ny * ux; // r·v
@@ -119,10 +135,10 @@ function ringIntegral(
   let s1 = 0, s0 = 0, prev = 0, n = 8;
   const sq = Math.sqrt(qtol);
   for (;;) {
-    const { c, s } = NODES.get(n)!;
+    const { c, s, w } = (mirror ? HALF_NODES : NODES).get(n)!;
     let abs = 0;
     for (let j = 0; j < c.length; j++) {
-      const co = c[j]!, si = s[j]!;
+      const co = c[j]!, si = s[j]!, wj = w[j]!;
       const wx = cx + co * ux + si * vx, wy = cy + co * uy + si * vy, wz = cz + co * uz + si * vz;
       const tx = -si * ux + co * vx, ty = -si * uy + co * vy;
       const rho = Math.sqrt(wx * wx + wy * wy);
@@ -138,14 +154,14 @@ function ringIntegral(
         if (al2 === 0) { ring.minA2 = 0; ring.v1 = ring.v0 = 0; ring.err = Infinity; return; }
         a1 += t1.w[k]! * aOverRhoKernel(t1.r[k]!, rho, z2, al2);
       }
-      const f1 = a1 * geo;
+      const f1 = wj * a1 * geo;
       s1 += f1;
       abs += Math.abs(f1);
       if (t0) {
         const dz = wz - t0.z[0]!;
         const dm = t0.r[0]! - rho;
         const al2 = dm * dm + dz * dz;
-        if (al2 > 0) s0 += t0.w[0]! * aOverRhoKernel(t0.r[0]!, rho, dz * dz, al2) * geo;
+        if (al2 > 0) s0 += wj * t0.w[0]! * aOverRhoKernel(t0.r[0]!, rho, dz * dz, al2) * geo;
       }
     }
     const v = ((2 * Math.PI) / n) * s1;
@@ -220,9 +236,17 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
   if (options.absTol !== undefined && !(Number.isFinite(options.absTol) && options.absTol >= 0)) {
     throw new TanklightInputError([{ path: "options.absTol", message: "must be a finite inductance ≥ 0 H", value: options.absTol }], "couplingEvaluator");
   }
-  const selfTx = selfInductance(tx, options.frequency === undefined ? {} : { frequency: options.frequency });
-  const selfRx = selfInductance(rx, options.frequency === undefined ? {} : { frequency: options.frequency });
-  const norm = 1 / Math.sqrt(selfTx * selfRx);
+  // the self-inductances only when coupling() or selfTx/selfRx is first asked for (a 120-turn
+  // token's costs more than a thousand poses; mutual-only users such as solveLink never need them)
+  const fOpt = options.frequency === undefined ? {} : { frequency: options.frequency };
+  let selves: { tx: number; rx: number; norm: number } | undefined;
+  const self = (): { tx: number; rx: number; norm: number } => {
+    if (selves === undefined) {
+      const a = selfInductance(tx, fOpt), b = selfInductance(rx, fOpt);
+      selves = { tx: a, rx: b, norm: 1 / Math.sqrt(a * b) };
+    }
+    return selves;
+  };
   const txTurns = coaxialTurns(tx.filaments);
   const rxTurns = coaxialTurns(rx.filaments);
   const clearance = conductorRadius(tx.conductor) + conductorRadius(rx.conductor);
@@ -239,12 +263,30 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
   const rx1 = fast ? momentLumps(rxTurns) : rx0;
   const tExact = txLevels[txLevels.length - 1]!;
   const rxTotal = fast ? Math.abs(rxLevels[0]!.w[0]!) : 1;
+  // Gauss lumps of both coils by order (level G), built on first use
+  const txG: GaussLumpSource | undefined = fast ? gaussLumpSource(txTurns, t0.extent) : undefined;
+  const rxG: GaussLumpSource | undefined = fast ? gaussLumpSource(rxTurns, rx0.extent) : undefined;
+  // level A's order-1 lumps keep the moments of a product distribution only (layers with the
+  // same turn heights): a partly filled last layer goes to level G, which keeps each layer
+  const lumpable = (txG?.product ?? false) && (rxG?.product ?? false);
+  // Gauss lumps by order (pr, pz), built on first use and shared by every later pose
+  const gaussCache = new Map<string, { tx: Lumps; rx: Lumps }>();
+  const gaussPair = (pr: number, pz: number): { tx: Lumps; rx: Lumps } => {
+    const key = `${pr},${pz}`;
+    let g = gaussCache.get(key);
+    if (g === undefined) {
+      g = { tx: gaussLumps(txG!, pr, pz), rx: gaussLumps(rxG!, pr, pz) };
+      gaussCache.set(key, g);
+    }
+    return g;
+  };
+
   // this evaluator's workspace: the last ring integral's results
   const ring: RingResult = { v1: 0, v0: 0, err: 0, minA2: Infinity };
 
   let absTol = options.absTol ?? 0;
   if (options.absTol === undefined && fast) {
-    ringIntegral(0, 0, t0.z[0]!, 0, 0, 1, rxLevels[0]!.r[0]!, t0, undefined, 1e-8, 0, ring);
+    ringIntegral(0, 0, t0.z[0]!, 0, 0, 1, rxLevels[0]!.r[0]!, 1, 0, true, t0, undefined, 1e-8, 0, ring);
     absTol = 1e-2 * relTol * Math.abs(ring.v1 * rxLevels[0]!.w[0]!);
   }
   // ring quadrature target: a tenth of the overall tolerance (its own estimate joins the error sum)
@@ -256,6 +298,8 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
 
   // receiver origin and axis in the transmitter's frame (set per pose)
   let ox = 0, oy = 0, oz = 0, nx = 0, ny = 0, nz = 1;
+  // the rings' θ = 0 direction (horizontal unit vector) and whether the pose is mirror-symmetric
+  let px = 1, py = 0, mirror = false;
   const sums = { m: 0, m0: 0, err: 0, minA2: Infinity };
   /** Σ over the receiver lumps `rl` of w·∮A·dl, transmitter lumps `tl` (and `tl0` alongside). */
   const sumRings = (rl: Lumps, tl: Lumps, tl0: Lumps | undefined): void => {
@@ -263,7 +307,7 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
     const floor = absTol / rxTotal;
     for (let k = 0; k < rl.r.length; k++) {
       const h = rl.z[k]!;
-      ringIntegral(ox + h * nx, oy + h * ny, oz + h * nz, nx, ny, nz, rl.r[k]!, tl, tl0, qtol, floor, ring);
+      ringIntegral(ox + h * nx, oy + h * ny, oz + h * nz, nx, ny, nz, rl.r[k]!, px, py, mirror, tl, tl0, qtol, floor, ring);
       m += rl.w[k]! * ring.v1;
       m0 += rl.w[k]! * ring.v0;
       err += Math.abs(rl.w[k]!) * ring.err;
@@ -344,6 +388,12 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
     ox = Rt[0]! * dx + Rt[3]! * dy + Rt[6]! * dz;
     oy = Rt[1]! * dx + Rt[4]! * dy + Rt[7]! * dz;
     oz = Rt[2]! * dx + Rt[5]! * dy + Rt[8]! * dz;
+    // the vertical plane through the transmitter's axis and the receiver's centre is a mirror
+    // plane of the pose when the receiver's axis lies in it too (any flat token, any tilt
+    // towards or away from the axis): rings start in that plane and use half the nodes
+    const rho0 = Math.sqrt(ox * ox + oy * oy), nh = Math.sqrt(nx * nx + ny * ny);
+    if (rho0 > 0) { px = ox / rho0; py = oy / rho0; } else if (nh > 0) { px = nx / nh; py = ny / nh; } else { px = 1; py = 0; }
+    mirror = px * ny - py * nx === 0;
     const accept = (e: number, m: number) => e <= Math.max(relTol * Math.abs(m), absTol);
 
     // level A: both coils in order-1 moment lumps, with the order-0 lumps alongside for the error
@@ -356,9 +406,56 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
     // order-1 lumping error ≈ (extent/D)²·(order-0 error) for each coil, with a safety factor
     const eRx = Math.abs(mA - sums.m) * Math.min(1, (LUMP_SAFETY * rx0.extent * rx0.extent) / (D * D));
     const eTx = Math.abs(mA - mA0) * Math.min(1, (LUMP_SAFETY * t0.extent * t0.extent) / (D * D));
-    if (D > GUARD * Math.max(rx0.extent, t0.extent) && accept(eRx + eTx + errA, mA)) {
+    if (lumpable && D > GUARD * Math.max(rx0.extent, t0.extent) && accept(eRx + eTx + errA, mA)) {
       finish(mA, eRx + eTx + errA, "lumped", minA2);
       return mA;
+    }
+    // level G: both coils as Gauss rules of their turn distributions (gaussLumps.ts), refined
+    // one side at a time (radial or axial order + 1, whichever side's error estimate is larger).
+    // A p-point Gauss rule of a function analytic within distance d of its interval (half-length
+    // h) converges like q^p with q = ρ⁻², ρ = d/h + √(1 + (d/h)²) (the Bernstein ellipse of
+    // semi-minor axis d/h; Trefethen 2008, SIAM Rev. 50(1), Thm. 4.5), so a side's remaining
+    // error after a refinement that changed M by δ (the one before by δ′) is at most
+    // max(δ, q·δ′)/(1 − q): the measured change, or what the rate allows when it fell suspiciously
+    // fast. d is the closest approach of the ring nodes to the lump wires, h the larger coil's
+    // half-span on that side; level G is skipped where the rate is too slow to pay (q > G_MAX_RATE).
+    const hR = Math.max(txG?.halfSpanR ?? 0, rxG?.halfSpanR ?? 0), hZ = Math.max(txG?.halfSpanZ ?? 0, rxG?.halfSpanZ ?? 0);
+    const rate = (h: number): number => {
+      if (h === 0) return 0;
+      const x = D / h, rho = x + Math.sqrt(1 + x * x);
+      return 1 / (rho * rho);
+    };
+    const qR = rate(hR), qZ = rate(hZ);
+    if (txG && rxG && qR <= G_MAX_RATE && qZ <= G_MAX_RATE) {
+      const capR = Math.max(txG.capR, rxG.capR), capZ = Math.max(txG.capZ, rxG.capZ);
+      let pr = 1, pz = 1;
+      const g1 = gaussPair(pr, pz);
+      sumRings(g1.rx, g1.tx, undefined);
+      let m = sums.m;
+      const side = { r: { last: Infinity, prev: Infinity, n: 0, q: qR }, z: { last: Infinity, prev: Infinity, n: 0, q: qZ } };
+      const estimate = (t: { last: number; prev: number; n: number; q: number }): number =>
+        t.n < 2 || t.last > t.prev ? Infinity : Math.max(t.last, t.q * t.prev) / (1 - t.q);
+      while (Number.isFinite(sums.err)) {
+        const doneR = pr >= capR, doneZ = pz >= capZ;
+        const eR = doneR ? 0 : estimate(side.r), eZ = doneZ ? 0 : estimate(side.z);
+        const e = eR + eZ + sums.err;
+        if (accept(e, m)) {
+          finish(m, e, doneR && doneZ ? "exact" : "lumped", sums.minA2);
+          return m;
+        }
+        if (doneR && doneZ) break;
+        // refine the side with the larger estimate (an unrefined side counts as infinite; ties: z)
+        const refineZ = doneR || (!doneZ && (side.z.n <= side.r.n ? eZ >= eR : eZ > eR));
+        if (refineZ) pz++; else pr++;
+        const g = gaussPair(pr, pz);
+        if (g.tx.r.length * g.rx.r.length > G_BUDGET) break;
+        sumRings(g.rx, g.tx, undefined);
+        const t = refineZ ? side.z : side.r;
+        t.prev = t.last;
+        t.last = Math.abs(sums.m - m);
+        t.n++;
+        m = sums.m;
+      }
     }
     // level B: the receiver refined group by group, against the transmitter's order-1 lumps when
     // their own error estimate is well inside the tolerance and they are far from every ring
@@ -398,13 +495,18 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
 
   return {
     mutual,
-    coupling: (a, b) => mutual(a, b) * norm,
+    coupling: (a, b) => mutual(a, b) * self().norm,
     evaluate: (a, b) => {
       const m = mutual(a, b);
-      return { mutual: m, coupling: m * norm, error: lastError, method: lastMethod, warnings: lastWarnings };
+      // k on first read: the self-inductances are computed only when someone asks for k
+      return { mutual: m, get coupling() { return m * self().norm; }, error: lastError, method: lastMethod, warnings: lastWarnings };
     },
-    selfTx,
-    selfRx,
+    get selfTx() {
+      return self().tx;
+    },
+    get selfRx() {
+      return self().rx;
+    },
     stats,
   };
 }

@@ -31,6 +31,27 @@ describe("couplingEvaluator", () => {
     expect(ev.stats.lumped).toBeGreaterThan(ev.stats.exact);
   });
 
+  it("neighbouring tokens (side by side, a few tenths of a millimetre to a few millimetres apart, flat and tilted) agree with the filament-by-filament sum within relTol and within the reported error", () => {
+    const pebble = handRoundCoil(0.0065, 12, 4, 1.1e-4); // 48 turns in 4 layers
+    const partial = handRoundCoil(0.005, 8, 4, 2e-4, 27); // last layer partly filled: not a product of layers and heights
+    const cases: [Coil, Coil, Pose][] = [
+      [pebble, pebble, { position: [0.0143, 0, 0] }],
+      [pebble, pebble, { position: [0.016, 0, 0] }],
+      [pebble, pebble, { position: [0.0112, 0.0112, 0.001] }],
+      [pebble, pebble, { position: [0.015, 0.002, -0.0015], axis: [0.2, -0.1, 1] }],
+      [pebble, partial, { position: [0.0135, 0, 0.0005] }],
+      [partial, partial, { position: [-0.006, -0.0115, -0.0008], axis: [0.13, -0.16, 0.98] }],
+      [partial, pebble, { position: [0.0006, 0.0175, 0.0057], axis: [-0.0055, 0.0038, 1] }],
+    ];
+    for (const [a, b, p] of cases) {
+      const r = couplingEvaluator(a, b).evaluate(P0, p);
+      const ref = mutualInductanceChecked(a, P0, b, p).value;
+      const label = `pose ${JSON.stringify(p)} (${r.method})`;
+      expectRelClose(r.mutual, ref, 1e-3, label);
+      expect(Math.abs(r.mutual - ref), label).toBeLessThanOrEqual(Math.max(r.error, 1e-9 * Math.abs(ref)));
+    }
+  });
+
   it("coupling() is mutual()/√(L₁L₂) and a moved transmitter pose gives the same as the relative pose", () => {
     const ev = couplingEvaluator(tx, token);
     const pr: Pose = { position: [0.01, 0, 0.012], axis: [0.2, 0, 1] };
