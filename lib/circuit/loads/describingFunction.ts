@@ -231,18 +231,33 @@ export function loadResponse(load: TokenLoad, amplitude: number): FundamentalRes
   return { current: resp.current, slope: resp.slope };
 }
 
+/**
+ * Floor of a reported LED current, relative to the LED's saturation current I_s: an average or
+ * peak current below AVERAGE_CURRENT_FLOOR·I_s is reported as 0. The true average at a tiny
+ * amplitude A is ≈ I_s·(A/(n·V_T))²/4, formed as a difference of terms of size I_s, so its
+ * round-off and quadrature error lie near 1e-15·I_s and can be negative (−5e-31 A for a red
+ * LED at 1 pV); 1e-9·I_s (about 1e-25 A for the presets, reached below a few µV of tank
+ * amplitude) is far above that noise and far below any current that lights an LED.
+ */
+export const AVERAGE_CURRENT_FLOOR = 1e-9;
+
 function ledEntry(role: LedCurrent["role"], l: Led, avg: number, peak: number): LedCurrent {
-  return { role, label: l.label, current: avg, peakCurrent: peak, relativeBrightness: avg / l.ratedCurrent };
+  const floor = AVERAGE_CURRENT_FLOOR * l.is;
+  const current = avg < floor ? 0 : avg;
+  return { role, label: l.label, current, peakCurrent: peak < floor ? 0 : peak, relativeBrightness: current / l.ratedCurrent };
 }
 
 /**
  * Average (DC) current of every LED in a token load at tank amplitude A, with its peak current
  * and relative brightness (average current / rated current). Brightness follows the average
- * current, not the fundamental (docs/physics-notes.md, "The token").
+ * current, not the fundamental (docs/physics-notes.md, "The token"). Currents below
+ * 1e-9·I_s of the LED ({@link AVERAGE_CURRENT_FLOOR}; round-off lies near 1e-15·I_s) are
+ * reported as 0, so an average current is never negative.
  * @param load token load; amplitude V (peak) ≥ 0.
  * @returns one entry per LED (none for a resistor): `{ role, label, current, peakCurrent, relativeBrightness }`.
  * @example averageLoadCurrent({ kind: "led", led: ledPreset("red") }, 2.2)[0].current // → 0.008489958975518656 A
  * @example averageLoadCurrent({ kind: "resistor", resistance: 100 }, 2) // → [] (edge: no LED)
+ * @example averageLoadCurrent({ kind: "led", led: ledPreset("red") }, 1e-12)[0].current // → 0 (edge: below the floor, not −5e-31)
  */
 export function averageLoadCurrent(load: TokenLoad, amplitude: number): readonly LedCurrent[] {
   const where = "averageLoadCurrent";
