@@ -173,7 +173,7 @@ export {
   type DriveEquivalent,
   type ClassEDesign,
 } from "./circuit/drive.ts";
-export { solveLink, linkNetwork, type LinkSystem, type LinkSolution, type LinkNetworkBuild } from "./circuit/link.ts";
+export { solveLink, linkNetwork, type LinkSystem, type LinkSolution, type LinkNetworkBuild, type SolveLinkOptions } from "./circuit/link.ts";
 export { solveLinkNetwork, LinkConvergenceError } from "./circuit/link/solveNetwork.ts";
 export { summarizeLink, type LinkSummary, type LinkSummaryRow } from "./circuit/link/summary.ts";
 export {
@@ -183,8 +183,9 @@ export {
   type LinkLoadModel,
   type TransmitterNetwork,
   type ReceiverNetwork,
+  type SharedDriveNetwork,
 } from "./circuit/link/network.ts";
-export type { LinkResult, TransmitterState, ReceiverState, LedState, LinkPower, Phasor } from "./circuit/link/result.ts";
+export type { LinkResult, TransmitterState, ReceiverState, LedState, LinkPower, Phasor, DriveState } from "./circuit/link/result.ts";
 export { maxLinkEfficiency, optimalLoad } from "./circuit/linkLimits.ts";
 export { frequencySweep, type FrequencySweep, type SweepFrequencies } from "./circuit/frequencySweep.ts";
 // steady state beyond the fundamental: harmonic balance, model choice (issue 14)

@@ -5,7 +5,7 @@
  */
 import type { Coil, Pose, Vec3 } from "../em/types.ts";
 import { linkNetwork, type LinkSystem } from "../circuit/link.ts";
-import { LinkSystemInput } from "../circuit/link/schema.ts";
+import { LinkSystemInput, soleTransmitter } from "../circuit/link/schema.ts";
 import type { LinkLoadModel } from "../circuit/link/network.ts";
 import { DEFAULT_LIT_THRESHOLD } from "../circuit/link/network.ts";
 import { parseInput } from "../schema.ts";
@@ -35,6 +35,7 @@ export interface ProbeOptions {
  */
 export function probeSpec(system: LinkSystem, options: ProbeOptions, where: string): ProbeSpec & { readonly models: readonly LinkLoadModel[] } {
   const parsed = parseInput(LinkSystemInput, system, where);
+  const tx = soleTransmitter(parsed, where);
   const k = options.token ?? 0;
   if (!(Number.isInteger(k) && k >= 0 && k < parsed.receivers.length)) {
     throw new TanklightInputError(
@@ -53,7 +54,7 @@ export function probeSpec(system: LinkSystem, options: ProbeOptions, where: stri
     coils.push(c);
     return coils.length - 1;
   };
-  const txCoil = coilIndex(parsed.transmitter.coil);
+  const txCoil = coilIndex(tx.coil);
   const receivers = keep.map((i) => parsed.receivers[i]!);
   const token = keep.indexOf(k);
   const tokenCoil = coilIndex(receivers[token]!.coil);
@@ -64,7 +65,7 @@ export function probeSpec(system: LinkSystem, options: ProbeOptions, where: stri
   if (!token0.load.ledCurrents || token0.load.ledCurrents(1).length === 0) {
     throw new TanklightInputError([{ path: `receivers[${k}].load`, message: "the moving token needs at least one LED (lit/unlit is an LED's verdict)", value: token0.load.label }], where);
   }
-  const supplyVoltage = supplyVoltageOf(parsed.transmitter.drive);
+  const supplyVoltage = supplyVoltageOf(tx.drive);
   return {
     frequency: net.frequency,
     inductance: net.inductance,
@@ -73,7 +74,7 @@ export function probeSpec(system: LinkSystem, options: ProbeOptions, where: stri
     loads,
     coils,
     txCoil,
-    txPose: (parsed.transmitter.pose as Pose | undefined) ?? ORIGIN,
+    txPose: (tx.pose as Pose | undefined) ?? ORIGIN,
     token,
     tokenCoil,
     others,

@@ -13,7 +13,7 @@
 import { z } from "zod";
 import { TanklightInputError } from "../errors.ts";
 import { current as currentQ, parseInput, voltage as voltageQ } from "../schema.ts";
-import type { LinkSystemParsed } from "../circuit/link/schema.ts";
+import { LinkSystemInput, systemTransmitters, type DriveParsed } from "../circuit/link/schema.ts";
 import { solveLink, type LinkSystem, type LinkSolution } from "../circuit/link.ts";
 import type { LinkOptions } from "../circuit/link/network.ts";
 
@@ -103,9 +103,9 @@ export function supplyVerdict(draw: { readonly voltage: number; readonly current
   return { supply: s.label, voltage: s.voltage, rating: s.current, ratingSource: s.source, current: draw.current, power, utilisation, verdict, message };
 }
 
-/** The DC supply voltage of a parsed drive spec, V (undefined for sine, current-regulated and ready equivalents). */
-export function supplyVoltageOf(drive: LinkSystemParsed["transmitter"]["drive"]): number | undefined {
-  if ("supply" in drive && typeof drive.supply === "number") return drive.supply;
+/** The DC supply voltage of a parsed drive spec, V (undefined for sine, current-regulated and ready equivalents, and for a shared drive's name). */
+export function supplyVoltageOf(drive: DriveParsed | string): number | undefined {
+  if (typeof drive === "object" && "supply" in drive && typeof drive.supply === "number") return drive.supply;
   return undefined;
 }
 
@@ -124,14 +124,32 @@ export interface SupplyBudget extends SupplyVerdict {
  * @example a 1-turn, 50 mm coil series-tuned on a 5 V half bridge: supplyBudget(system, "usb2").verdict is "over" (15.0 A, 75.2 W)
  */
 export function supplyBudget(system: LinkSystem, supply: SupplyInput, options: LinkOptions = {}): SupplyBudget {
-  const drive = (system as { transmitter?: { drive?: unknown } }).transmitter?.drive as LinkSystemParsed["transmitter"]["drive"] | undefined;
-  const v = drive && typeof drive === "object" && "supply" in drive ? parseInput(voltageQ({ positive: true }), (drive as { supply: number | string }).supply, "supplyBudget") : undefined;
-  if (v === undefined) {
-    throw new TanklightInputError(
-      [{ path: "transmitter.drive", message: "names no DC supply voltage (sine and current-regulated drives have no supply budget here)", value: drive, expected: "a halfBridge, fullBridge, parallelTank or classE drive with its supply" }],
-      "supplyBudget",
-    );
+  const parsed = parseInput(LinkSystemInput, system, "supplyBudget");
+  const txs = systemTransmitters(parsed);
+  const at = (i: number): string => (parsed.transmitters === undefined ? "transmitter" : `transmitters[${i}]`);
+  // every drive in the solution's order (own drives, then the shared drives that feed a coil), with its field
+  const drives = [
+    ...txs.flatMap((t, i) => (typeof t.drive === "string" ? [] : [{ drive: t.drive, path: `${at(i)}.drive` }])),
+    ...(parsed.sharedDrives ?? []).flatMap((d, g) => (txs.some((t) => t.drive === d.name) ? [{ drive: d.drive, path: `sharedDrives[${g}].drive` }] : [])),
+  ];
+  let v: number | undefined;
+  for (const d of drives) {
+    const dv = supplyVoltageOf(d.drive);
+    if (dv === undefined) {
+      throw new TanklightInputError(
+        [{ path: d.path, message: "names no DC supply voltage (sine and current-regulated drives have no supply budget here)", value: d.drive, expected: "a halfBridge, fullBridge, parallelTank or classE drive with its supply" }],
+        "supplyBudget",
+      );
+    }
+    if (v !== undefined && dv !== v) {
+      throw new TanklightInputError([{ path: d.path, message: `runs from ${dv} V while another drive runs from ${v} V: one supply budget needs one supply voltage`, value: dv }], "supplyBudget");
+    }
+    v = dv;
   }
+  if (v === undefined) throw new TanklightInputError([{ path: "transmitters", message: "no drive", value: undefined }], "supplyBudget");
   const solution = solveLink(system, options);
-  return { ...supplyVerdict({ voltage: v, current: Math.max(0, solution.power.input) / v }, supply), solution };
+  // I = Σ P_in/V_DD over the drives (a drive that returns power draws nothing)
+  let current = 0;
+  for (const d of solution.drives) current += Math.max(0, d.inputPower) / v;
+  return { ...supplyVerdict({ voltage: v, current }, supply), solution };
 }

@@ -12,7 +12,7 @@ import { couplingEvaluator } from "../em/couplingEvaluator.ts";
 import { selfInductance } from "../em/selfInductance.ts";
 import { coilResistance } from "../em/losses/coilResistance.ts";
 import { linkNetwork, type LinkSystem } from "../circuit/link.ts";
-import { LinkSystemInput } from "../circuit/link/schema.ts";
+import { LinkSystemInput, soleTransmitter } from "../circuit/link/schema.ts";
 import { DEFAULT_LIT_THRESHOLD } from "../circuit/link/network.ts";
 import { encodeLoad, isTokenLoad, type LoadData } from "./loadCodec.ts";
 import { supplyVoltageOf } from "./supplyBudget.ts";
@@ -98,6 +98,7 @@ export interface YieldSpecOptions {
 export function yieldSpec(system: LinkSystem, variations: VariationsInput, options: YieldSpecOptions, where: string): { spec: YieldSpec; parsed: ParsedVariations; active: string[] } {
   const v = parseInput(VariationsInput, variations, where);
   const sys = parseInput(LinkSystemInput, system, where);
+  const tx = soleTransmitter(sys, where);
   const k = options.token ?? 0;
   const rx = sys.receivers[k];
   if (rx === undefined) {
@@ -151,9 +152,9 @@ export function yieldSpec(system: LinkSystem, variations: VariationsInput, optio
     }
     return out;
   };
-  const txLevels = levels(sys.transmitter.coil, net.inductance[0]![0]!, net.transmitter.resistance, v.transmitterTurns, "transmitterTurns");
+  const txLevels = levels(tx.coil, net.inductance[0]![0]!, net.transmitter.resistance, v.transmitterTurns, "transmitterTurns");
   const tokLevels = levels(rx.coil, net.inductance[1]![1]!, net.receivers[0]!.resistance, v.tokenTurns, "tokenTurns");
-  const txPose = (sys.transmitter.pose as Pose | undefined) ?? { position: [0, 0, 0] };
+  const txPose = (tx.pose as Pose | undefined) ?? { position: [0, 0, 0] };
   const tokenPose = { position: rx.pose.position as Vec3, axis: ((rx.pose as Pose).axis ?? [0, 0, 1]) as Vec3 };
   const posed = [spreads.placementX, spreads.height, spreads.tilt].some((s) => s !== undefined && s.tolerance > 0);
   const mutualTable: number[] = [];
@@ -164,10 +165,10 @@ export function yieldSpec(system: LinkSystem, variations: VariationsInput, optio
     }),
   );
   const { load: _l, ...receiver } = net.receivers[0]!;
-  const supplyVoltage = supplyVoltageOf(sys.transmitter.drive);
+  const supplyVoltage = supplyVoltageOf(tx.drive);
   const dissipation = (c: { esr?: number | undefined; dissipationFactor?: number | undefined } | undefined): number | undefined =>
     c && c.esr === undefined && c.dissipationFactor !== undefined ? c.dissipationFactor : undefined;
-  const txD = dissipation(sys.transmitter.capacitor);
+  const txD = dissipation(tx.capacitor);
   const rxD = dissipation(rx.capacitor);
   void w;
   const spec: YieldSpec = {

@@ -8,7 +8,8 @@
  * (couplingEvaluator, exact where its estimate is not good enough) — come from lib/em; the numeric core (./link/solveNetwork.ts)
  * then solves the coupled-circuit matrix with each load's describing function.
  */
-import { parseInput } from "../schema.ts";
+import { z } from "zod";
+import { current, nearestKey, parseInput, voltage } from "../schema.ts";
 import { TanklightInputError, assertNever } from "../errors.ts";
 import { couplingEvaluator, type CouplingEvaluator } from "../em/couplingEvaluator.ts";
 import { selfInductance } from "../em/selfInductance.ts";
@@ -26,9 +27,10 @@ import {
   type DriveEquivalent,
 } from "./drive.ts";
 import type { TokenLoad } from "./loads/types.ts";
-import { LinkSystemInput, type LinkSystem, type LinkSystemParsed } from "./link/schema.ts";
-import type { LinkLoadModel, LinkNetwork, LinkOptions } from "./link/network.ts";
-import type { LinkResult } from "./link/result.ts";
+import { LinkSystemInput, systemTransmitters, type DriveParsed, type LinkSystem } from "./link/schema.ts";
+import { networkTransmitters, type LinkLoadModel, type LinkNetwork, type SharedDriveNetwork, type TransmitterNetwork } from "./link/network.ts";
+import type { DriveState, LinkResult, TransmitterState } from "./link/result.ts";
+import { solveLinkNetwork } from "./link/solveNetwork.ts";
 import { solveLinkModel, type ModelOptions } from "./harmonic/modelChoice.ts";
 import type { HarmonicDetail } from "./harmonic/result.ts";
 import type { ModelBand } from "./harmonic/modelBand.ts";
@@ -55,10 +57,14 @@ export interface LinkSolution extends LinkResult {
   readonly errorBand: ModelBand;
   /** every harmonic, waveform peaks and the truncation indicator (harmonic balance only) */
   readonly harmonic?: HarmonicDetail;
-  /** coupling factors kᵢⱼ, index 0 = transmitter, 1… the receivers */
+  /** coupling factors kᵢⱼ: the transmitters first (index 0 with one), then the receivers */
   readonly coupling: readonly (readonly number[])[];
   /** the numeric network that was solved (inductance matrix, resistances, parts) */
   readonly network: LinkNetwork;
+  /** every transmitter's state, in the system's order (one: the same as `transmitter`) */
+  readonly transmitters: readonly TransmitterState[];
+  /** every drive: each transmitter's own drive, then the shared ones */
+  readonly drives: readonly DriveState[];
 }
 
 interface CoilNumbers {
@@ -114,18 +120,12 @@ function coilNumbers(coil: Coil, f: number, temperature: number | undefined, war
   return made;
 }
 
-function driveOf(
-  d: LinkSystemParsed["transmitter"]["drive"],
-  f: number,
-  l1: number,
-  compensation: string,
-  warnings: string[],
-): DriveEquivalent {
+function driveOf(d: DriveParsed, f: number, l1: number, compensation: string, warnings: string[], label: string, at: string): DriveEquivalent {
   if (d.kind === "parallelTank" && compensation !== "parallel") {
-    warnings.push(`transmitter: the parallel-tank drive assumes a parallel-compensated transmitter (got '${compensation}')`);
+    warnings.push(`${label}: the parallel-tank drive assumes a parallel-compensated transmitter (got '${compensation}')`);
   }
   if (d.kind === "classE" && compensation !== "series") {
-    warnings.push(`transmitter: the class-E equivalent assumes a series load network (got '${compensation}' compensation)`);
+    warnings.push(`${label}: the class-E equivalent assumes a series load network (got '${compensation}' compensation)`);
   }
   switch (d.kind) {
     case "sine":
@@ -147,14 +147,48 @@ function driveOf(
     case "current":
       return d; // already an equivalent (sineDrive(), classEDrive(), …)
     default:
-      return assertNever(d, "transmitter.drive.kind", "solveLink", "is not a known drive");
+      return assertNever(d, `${at}.kind`, "solveLink", "is not a known drive");
   }
 }
 
-function loadModelOf(load: TokenLoad | LinkLoadModel, tabulate: boolean): LinkLoadModel {
-  return typeof (load as LinkLoadModel).conductance === "function"
-    ? (load as LinkLoadModel)
-    : tokenLoadModel(load as TokenLoad, { tabulate });
+/**
+ * A shared drive's equivalent: the sources that do not depend on one coil (sine, bridges,
+ * current-regulated, ready equivalents). The class-E and single-switch parallel-tank drives are
+ * designed around one transmitter tank and are refused.
+ */
+function sharedDriveOf(d: DriveParsed, f: number, at: string, warnings: string[]): DriveEquivalent {
+  if (d.kind === "classE" || d.kind === "parallelTank") {
+    throw new TanklightInputError(
+      [{ path: `${at}.kind`, message: `a ${d.kind} drive is designed around one transmitter tank and cannot be shared; give each coil its own, or share a sine, bridge or current-regulated drive`, value: d.kind }],
+      "solveLink",
+    );
+  }
+  return driveOf(d, f, 0, "series", warnings, at, at);
+}
+
+/** Connection of a coil on a shared drive from its phase: 0 → +1, 180° → −1 (anything else is refused). */
+function polarityOf(phase: number | undefined, at: string): 1 | -1 {
+  if (phase === undefined) return 1;
+  const r = ((phase % (2 * Math.PI)) + 2 * Math.PI) % (2 * Math.PI);
+  if (Math.min(r, 2 * Math.PI - r) < 1e-9) return 1;
+  if (Math.abs(r - Math.PI) < 1e-9) return -1;
+  throw new TanklightInputError(
+    [{ path: `${at}.phase`, message: "a coil on a shared drive carries the drive's own phase: give 0 or 180° (the way round it is connected), or give the coil its own drive", value: phase, expected: "0 or '180 deg'" }],
+    "solveLink",
+  );
+}
+
+function loadModelOf(load: TokenLoad | LinkLoadModel, tabulate: boolean, path: string): LinkLoadModel {
+  if (typeof (load as LinkLoadModel).conductance === "function") return load as LinkLoadModel;
+  try {
+    return tokenLoadModel(load as TokenLoad, { tabulate });
+  } catch (e) {
+    if (e instanceof TanklightInputError) {
+      // the load's own checks name "load.…": name the receiver's field instead
+      throw new TanklightInputError(e.issues.map((i) => ({ ...i, path: i.path.startsWith("load") ? path + i.path.slice(4) : `${path}.${i.path}` })), "solveLink");
+    }
+    throw e;
+  }
 }
 
 function esrOf(c: { capacitance: number; esr?: number | undefined; dissipationFactor?: number | undefined }, w: number): number {
@@ -180,44 +214,59 @@ export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoad
   const f = s.frequency;
   const w = 2 * Math.PI * f;
   const warnings: string[] = [];
-  const tx = s.transmitter;
-  const txLabel = tx.label ?? "transmitter";
-  const txNum = coilNumbers(tx.coil, f, s.temperature, warnings, txLabel);
-  const coils: { coil: Coil; pose: Pose; label: string; L: number }[] = [
-    { coil: tx.coil, pose: (tx.pose as Pose | undefined) ?? ORIGIN, label: txLabel, L: txNum.inductance },
-  ];
+  const txs = systemTransmitters(s);
+  const several = s.transmitters !== undefined;
+  const at = (i: number): string => (several ? `transmitters[${i}]` : "transmitter");
+  const txLabels = txs.map((tx, i) => tx.label ?? (txs.length === 1 ? "transmitter" : `transmitter ${i + 1}`));
+  const txNums = txs.map((tx, i) => coilNumbers(tx.coil, f, s.temperature, warnings, txLabels[i]!));
+  const coils: { coil: Coil; pose: Pose; label: string; path: string; L: number }[] = txs.map((tx, i) => ({
+    coil: tx.coil,
+    pose: (tx.pose as Pose | undefined) ?? ORIGIN,
+    label: txLabels[i]!,
+    path: at(i),
+    L: txNums[i]!.inductance,
+  }));
   const rxNums = s.receivers.map((r, k) => {
     const label = r.label ?? `receiver ${k + 1}`;
     const num = coilNumbers(r.coil, f, s.temperature, warnings, label);
-    coils.push({ coil: r.coil, pose: r.pose as Pose, label, L: num.inductance });
+    coils.push({ coil: r.coil, pose: r.pose as Pose, label, path: `receivers[${k}]`, L: num.inductance });
     return num;
   });
-  const n = coils.length;
-  const L = Array.from({ length: n }, (_, i) => Array.from({ length: n }, (_, j) => (i === j ? coils[i]!.L : 0)));
-  for (let i = 0; i < n; i++) {
-    for (let j = i + 1; j < n; j++) {
-      const a = coils[i]!;
-      const b = coils[j]!;
-      const m = evaluatorFor(a.coil, b.coil).evaluate(a.pose, b.pose);
-      for (const wtext of m.warnings) warnings.push(`${a.label} – ${b.label}: ${wtext}`);
-      L[i]![j] = m.mutual;
-      L[j]![i] = m.mutual;
-    }
-  }
+  const L = mutualMatrix(coils, warnings);
   const coupling = L.map((row, i) => row.map((m, j) => (i === j ? 1 : m / Math.sqrt(L[i]![i]! * L[j]![j]!))));
-  const cap0 = tx.capacitor;
-  if (tx.compensation !== "none" && cap0 === undefined) {
-    throw new TanklightInputError(
-      [{ path: "transmitter.capacitor", message: `a ${tx.compensation}-compensated transmitter needs its capacitor`, value: undefined, expected: "{ capacitance: '100 nF', … }" }],
-      "solveLink",
-    );
-  }
-  const network: LinkNetwork = {
-    frequency: f,
-    inductance: L,
-    transmitter: {
-      label: txLabel,
-      resistance: tx.resistance ?? txNum.resistance,
+  const sharedSpecs = s.sharedDrives ?? [];
+  const names = sharedSpecs.map((d) => d.name);
+  const sharedDrives: SharedDriveNetwork[] = sharedSpecs.map((d, g) => ({
+    label: d.name,
+    drive: sharedDriveOf(d.drive, f, `sharedDrives[${g}].drive`, warnings),
+    wiring: d.wiring,
+    ...(d.phase !== undefined ? { phase: d.phase } : {}),
+  }));
+  const transmitters: TransmitterNetwork[] = txs.map((tx, i) => {
+    const cap0 = tx.capacitor;
+    if (tx.compensation !== "none" && cap0 === undefined) {
+      throw new TanklightInputError(
+        [{ path: `${at(i)}.capacitor`, message: `a ${tx.compensation}-compensated transmitter needs its capacitor`, value: undefined, expected: "{ capacitance: '100 nF', … }" }],
+        "solveLink",
+      );
+    }
+    let drive: DriveEquivalent;
+    let feed: TransmitterNetwork["feed"];
+    if (typeof tx.drive === "string") {
+      const g = names.indexOf(tx.drive);
+      if (g < 0) {
+        const near = nearestKey(tx.drive, names);
+        const hint = near !== undefined ? `; did you mean '${near}'?` : names.length > 0 ? ` (shared drives: ${names.join(", ")})` : " (the system has no sharedDrives)";
+        throw new TanklightInputError([{ path: `${at(i)}.drive`, message: `names no shared drive${hint}`, value: tx.drive }], "solveLink");
+      }
+      drive = sharedDrives[g]!.drive;
+      feed = { drive: g, polarity: polarityOf(tx.phase, at(i)) };
+    } else {
+      drive = driveOf(tx.drive, f, txNums[i]!.inductance, tx.compensation, warnings, txLabels[i]!, `${at(i)}.drive`);
+    }
+    return {
+      label: txLabels[i]!,
+      resistance: tx.resistance ?? txNums[i]!.resistance,
       compensation: tx.compensation,
       ...(cap0 !== undefined
         ? {
@@ -226,9 +275,20 @@ export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoad
             ...(cap0.rating !== undefined ? { capacitorRating: cap0.rating } : {}),
           }
         : {}),
-      ...(txNum.selfResonance !== undefined ? { selfResonance: txNum.selfResonance } : {}),
-      drive: driveOf(tx.drive, f, txNum.inductance, tx.compensation, warnings),
-    },
+      ...(txNums[i]!.selfResonance !== undefined ? { selfResonance: txNums[i]!.selfResonance } : {}),
+      drive,
+      ...(feed !== undefined ? { feed } : tx.phase !== undefined && tx.phase !== 0 ? { phase: tx.phase } : {}),
+    };
+  });
+  sharedSpecs.forEach((d, g) => {
+    if (!transmitters.some((t) => t.feed?.drive === g)) warnings.push(`sharedDrives[${g}] '${d.name}' feeds no transmitter`);
+  });
+  const network: LinkNetwork = {
+    frequency: f,
+    inductance: L,
+    transmitter: transmitters[0]!,
+    ...(several ? { transmitters } : {}),
+    ...(sharedDrives.length > 0 ? { sharedDrives } : {}),
     receivers: s.receivers.map((r, k) => ({
       label: r.label ?? `receiver ${k + 1}`,
       resistance: r.resistance ?? rxNums[k]!.resistance,
@@ -237,11 +297,68 @@ export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoad
       capacitorEsr: esrOf(r.capacitor, w),
       ...(r.capacitor.rating !== undefined ? { capacitorRating: r.capacitor.rating } : {}),
       ...(rxNums[k]!.selfResonance !== undefined ? { selfResonance: rxNums[k]!.selfResonance } : {}),
-      load: loadModelOf(r.load, options.tabulateLoads ?? false),
+      load: loadModelOf(r.load, options.tabulateLoads ?? false, `receivers[${k}].load`),
     })),
   };
   return { network, coupling, warnings };
 }
+
+/**
+ * The inductance matrix of a set of posed coils: self inductances on the diagonal, every
+ * mutual inductance off it (one couplingEvaluator per pair of coil objects). Two coils whose
+ * windings intersect (two tokens at one pose) are an input error naming both.
+ */
+function mutualMatrix(coils: readonly { coil: Coil; pose: Pose; label: string; path: string; L: number }[], warnings: string[]): number[][] {
+  const n = coils.length;
+  const L = Array.from({ length: n }, (_, i) => Array.from({ length: n }, (_, j) => (i === j ? coils[i]!.L : 0)));
+  for (let i = 0; i < n; i++) {
+    for (let j = i + 1; j < n; j++) {
+      const a = coils[i]!;
+      const b = coils[j]!;
+      let m: { mutual: number; warnings: readonly string[] };
+      try {
+        m = evaluatorFor(a.coil, b.coil).evaluate(a.pose, b.pose);
+      } catch (e) {
+        if (!(e instanceof TanklightInputError)) throw e;
+        throw new TanklightInputError(
+          [{ path: `${a.path}.pose`, message: `${a.label} and ${b.label} (${b.path}) overlap: their windings intersect, so no mutual inductance exists (${e.message}); move one of them`, value: a.pose.position, expected: `a pose apart from ${b.path}.pose` }],
+          "solveLink",
+        );
+      }
+      if (!(Math.abs(m.mutual) < Math.sqrt(a.L * b.L))) {
+        throw new TanklightInputError(
+          [{ path: `${a.path}.pose`, message: `${a.label} and ${b.label} (${b.path}) overlap: their coupling factor comes out at ${(m.mutual / Math.sqrt(a.L * b.L)).toPrecision(4)} (a real pair is below 1); move one of them`, value: a.pose.position, expected: `a pose apart from ${b.path}.pose` }],
+          "solveLink",
+        );
+      }
+      for (const wtext of m.warnings) warnings.push(`${a.label} – ${b.label}: ${wtext}`);
+      L[i]![j] = m.mutual;
+      L[j]![i] = m.mutual;
+    }
+  }
+  return L;
+}
+
+/** Options of {@link solveLink}: verdicts, iteration, model choice and load tabulation. */
+export type SolveLinkOptions = ModelOptions & { readonly tabulateLoads?: boolean };
+
+/**
+ * The options of solveLink as a strict schema: a mistyped key is an error naming the nearest
+ * valid one; quantities accept units ("1 mA", "30 V").
+ */
+export const SolveLinkOptionsInput = z.strictObject({
+  litThreshold: current({ positive: true }).optional(),
+  brightnessReference: current({ positive: true }).optional(),
+  cautionVoltage: voltage({ positive: true }).optional(),
+  maxIterations: z.number().int().min(1).max(10_000).optional(),
+  tolerance: z.number().positive().max(0.01).optional(),
+  onNonConvergence: z.enum(["throw", "warn"]).optional(),
+  tabulateLoads: z.boolean().optional(),
+  model: z.enum(["fundamental", "harmonic", "auto"]).optional(),
+  order: z.number().int().min(1).max(200).optional(),
+  /** samples per period of harmonic balance: at most 65 536 (memory and time grow with samples × order) */
+  samples: z.number().int().min(4).max(65_536).optional(),
+});
 
 /**
  * Steady state of a driven transmitter and any number of tokens at the drive frequency: every
@@ -263,9 +380,15 @@ export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoad
  * @param system.frequency drive frequency, Hz or "200 kHz".
  * @param system.transmitter `{ coil, pose? (default origin, +z), compensation: "series" |
  *   "parallel" | "none", capacitor?: { capacitance, esr? | dissipationFactor?, rating? }, drive,
- *   resistance? (override, Ω) }`; drive as a spec (`{ kind: "halfBridge", supply: "12 V" }`,
- *   `"fullBridge"`, `"sine"`, `"currentRegulated"`, `"parallelTank"`, `"classE"`) or an equivalent
- *   from sineDrive(), classEDrive(), ….
+ *   phase? (default 0), resistance? (override, Ω) }`; drive as a spec (`{ kind: "halfBridge",
+ *   supply: "12 V" }`, `"fullBridge"`, `"sine"`, `"currentRegulated"`, `"parallelTank"`,
+ *   `"classE"`), an equivalent from sineDrive(), classEDrive(), …, or the name of a shared drive.
+ * @param system.transmitters several transmitters, each as `transmitter` (give one of the two;
+ *   `transmitter: x` is the same as `transmitters: [x]`). Every transmitter–transmitter and
+ *   transmitter–token mutual inductance is in the network.
+ * @param system.sharedDrives drives that several transmitters share: `{ name, drive, wiring:
+ *   "series" | "parallel", phase? }`; a transmitter with `drive: name` hangs on it (its `phase`
+ *   then 0 or 180°: the way round it is connected).
  * @param system.receivers each `{ label?, coil, pose, topology: "series" | "parallel",
  *   capacitor, load: TokenLoad | LinkLoadModel, resistance? }`.
  * @param system.temperature conductor temperature for the coil resistances, K (default 20 °C).
@@ -274,7 +397,8 @@ export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoad
  *   `tabulateLoads` (default false) to tabulate the loads' describing functions for sweeps,
  *   `model` ("fundamental" default, "auto", "harmonic"), and harmonic balance's `order` (default 15)
  *   and `samples`.
- * @returns {@link LinkSolution} (SI; amplitudes peak, RMS named).
+ * @returns {@link LinkSolution} (SI; amplitudes peak, RMS named): `transmitters` and `drives` list
+ *   each coil's and each drive's state; `transmitter` is the first transmitter.
  * @throws TanklightInputError naming the field on bad input; LinkConvergenceError if the
  *   operating point is not found (unless options.onNonConvergence is "warn").
  * @example
@@ -285,8 +409,51 @@ export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoad
  *     capacitor: { capacitance: "2.2 nF" }, load: { kind: "led", led: ledPreset("red") } }] })
  *     .receivers[0].leds[0].lit // → true
  */
-export function solveLink(system: LinkSystem, options: ModelOptions & { readonly tabulateLoads?: boolean } = {}): LinkSolution {
-  const built = linkNetwork(system, { tabulateLoads: options.tabulateLoads ?? false });
-  const r = solveLinkModel(built.network, options);
-  return { ...r, warnings: [...built.warnings, ...r.warnings], coupling: built.coupling, network: built.network };
+export function solveLink(system: LinkSystem, options: SolveLinkOptions = {}): LinkSolution {
+  const opts = parseInput(SolveLinkOptionsInput, options, "solveLink") as SolveLinkOptions;
+  const built = linkNetwork(system, { tabulateLoads: opts.tabulateLoads ?? false });
+  const net = built.network;
+  const txs = networkTransmitters(net);
+  if (txs.length === 1 && txs[0]!.feed === undefined) {
+    const r = solveLinkModel(net, opts);
+    return { ...r, transmitters: r.transmitters ?? [r.transmitter], drives: r.drives ?? [ownDrive(r.transmitter, net, r.power.input)], warnings: [...built.warnings, ...r.warnings], coupling: built.coupling, network: net };
+  }
+  if (opts.model === "harmonic") {
+    throw new TanklightInputError(
+      [{ path: "model", message: "harmonic balance solves one transmitter on its own drive; solve several (or a shared drive) with 'fundamental' or 'auto' (which then keeps the describing function)", value: opts.model }],
+      "solveLink",
+    );
+  }
+  const r = solveLinkNetwork(net, opts);
+  const errorBand: ModelBand = {
+    relative: Infinity,
+    basis: "describing function (fundamental only); its error is not estimated for several transmitters or a shared drive (the one-step harmonic-balance check handles one transmitter on its own drive)",
+  };
+  return {
+    ...r,
+    transmitters: r.transmitters!,
+    drives: r.drives!,
+    model: "fundamental",
+    errorBand,
+    warnings: [...built.warnings, ...r.warnings, `describing function used with its error not estimated (${txs.length} transmitters${net.sharedDrives ? ", shared drive" : ""}); typical LED tokens under a sine-like tank current are within a few per cent of the time-domain steady state, a rectifying or hard-clipping load can be further off`],
+    coupling: built.coupling,
+    network: net,
+  };
+}
+
+/** The drive record of a one-transmitter result (the harmonic-balance result has none of its own). */
+function ownDrive(t: TransmitterState, net: LinkNetwork, input: number): DriveState {
+  return {
+    label: t.label,
+    description: net.transmitter.drive.label,
+    wiring: "own",
+    transmitters: [t.label],
+    sourceCurrent: t.sourceCurrent,
+    sourceCurrentRms: t.sourceCurrentRms,
+    sourceVoltage: t.sourceVoltage,
+    sourceVoltageRms: t.sourceVoltageRms,
+    inputImpedance: t.inputImpedance,
+    inputPower: input,
+    driverLoss: t.driverLoss,
+  };
 }

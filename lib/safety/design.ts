@@ -7,7 +7,7 @@
  */
 import { z } from "zod";
 import { parseInput, angle, capacitance, current, frequency, length, power, voltage } from "../schema.ts";
-import { PoseInput, TransmitterInput, LinkSystemInput, type LinkSystem } from "../circuit/link/schema.ts";
+import { PoseInput, TransmitterInput, LinkSystemInput, systemTransmitters, type DriveParsed, type LinkSystem } from "../circuit/link/schema.ts";
 import type { LinkSolution } from "../circuit/link.ts";
 import type { TransmitterState, ReceiverState } from "../circuit/link/result.ts";
 import { CLASS_E } from "../circuit/drive.ts";
@@ -98,7 +98,7 @@ export interface DesignFromLinkOptions {
 type SystemTransmitter = z.output<typeof TransmitterInput>;
 
 /** Peak switch voltage of a drive spec, V, or undefined where the drive has no switch we know of. */
-function switchPeak(drive: SystemTransmitter["drive"]): number | undefined {
+function switchPeak(drive: DriveParsed): number | undefined {
   if (!("kind" in drive)) return undefined;
   switch (drive.kind) {
     case "halfBridge":
@@ -113,8 +113,8 @@ function switchPeak(drive: SystemTransmitter["drive"]): number | undefined {
   }
 }
 
-function transmitterOf(tx: SystemTransmitter, state: TransmitterState, opts: DesignFromLinkOptions): z.input<typeof SafetyTransmitterInput> {
-  const sw = switchPeak(tx.drive);
+function transmitterOf(tx: SystemTransmitter, drive: DriveParsed | undefined, state: TransmitterState, opts: DesignFromLinkOptions): z.input<typeof SafetyTransmitterInput> {
+  const sw = drive !== undefined ? switchPeak(drive) : undefined;
   return {
     label: state.label,
     coil: tx.coil as Coil,
@@ -152,15 +152,18 @@ function transmitterOf(tx: SystemTransmitter, state: TransmitterState, opts: Des
  */
 export function designFromLink(system: LinkSystem, solution: LinkSolution, opts: DesignFromLinkOptions): SafetyDesign {
   const where = "designFromLink";
-  const s = parseInput(LinkSystemInput, system, where) as z.output<typeof LinkSystemInput> & { transmitters?: SystemTransmitter[] };
-  const states = (solution as LinkSolution & { transmitters?: readonly TransmitterState[] }).transmitters ?? [solution.transmitter];
-  const txs: SystemTransmitter[] = s.transmitters ?? [s.transmitter];
+  const s = parseInput(LinkSystemInput, system, where);
+  const states = solution.transmitters;
+  const txs = systemTransmitters(s);
+  // a coil on a shared drive sees that drive's switch
+  const driveOf = (tx: SystemTransmitter): DriveParsed | undefined =>
+    typeof tx.drive === "string" ? s.sharedDrives?.find((d) => d.name === tx.drive)?.drive : tx.drive;
   const base = (txs[0]!.pose?.position[2] as number | undefined) ?? 0;
   const sizes = opts.tokenSize;
   return {
     frequency: solution.frequency,
     surfaceHeight: base + opts.surfaceHeight,
-    transmitters: txs.map((tx, i) => transmitterOf(tx, states[i] ?? states[0]!, opts)),
+    transmitters: txs.map((tx, i) => transmitterOf(tx, driveOf(tx), states[i] ?? states[0]!, opts)),
     receivers: solution.receivers.map((r: ReceiverState, k) => {
       const cap = s.receivers[k]?.capacitor;
       const size = typeof sizes === "number" ? sizes : sizes?.[k];

@@ -17,7 +17,7 @@ const f = 200e3;
 const w = 2 * Math.PI * f;
 const red: TokenLoad = { kind: "led", led: ledPreset("red") };
 
-function system(receivers: LinkSystem["receivers"], drive: LinkSystem["transmitter"]["drive"] = { kind: "parallelTank", supply: "5 V" }): LinkSystem {
+function system(receivers: LinkSystem["receivers"], drive: NonNullable<LinkSystem["transmitter"]>["drive"] = { kind: "parallelTank", supply: "5 V" }): LinkSystem {
   return {
     frequency: "200 kHz",
     transmitter: { coil: tx, compensation: "parallel", capacitor: { capacitance: 1 / (w * w * selfInductance(tx, { frequency: f })), dissipationFactor: 1e-3 }, drive },
@@ -88,7 +88,7 @@ describe("solveLink(system)", () => {
     expect(() => solveLink(bad)).toThrow(TanklightInputError);
     expect(() => solveLink(bad)).toThrow(/receivers\[0\]\.capacitor\.capacitance/);
     const noCap = { ...system([tokenAt(0, "40 mm")]) };
-    const t = { ...noCap.transmitter };
+    const t = { ...noCap.transmitter! };
     delete (t as { capacitor?: unknown }).capacitor;
     expect(() => solveLink({ ...noCap, transmitter: t })).toThrow(/transmitter\.capacitor/);
     expect(() => solveLink({ ...noCap, frequency: "-3 kHz" })).toThrow(/frequency/);
@@ -97,10 +97,10 @@ describe("solveLink(system)", () => {
   it("accepts drive specs with units and ready equivalents", () => {
     const a = solveLink(system([tokenAt(0, "40 mm")], { kind: "currentRegulated", amplitude: "1.5 A" }));
     expectRelClose(a.transmitter.coilCurrent, 1.5, 1e-14, "current-regulated coil current");
-    const b = solveLink({ ...system([tokenAt(0, "40 mm")], { kind: "halfBridge", supply: "12 V" }), transmitter: { ...system([]).transmitter, compensation: "series", drive: { kind: "halfBridge", supply: "12 V" } } });
+    const b = solveLink({ ...system([tokenAt(0, "40 mm")], { kind: "halfBridge", supply: "12 V" }), transmitter: { ...system([]).transmitter!, compensation: "series", drive: { kind: "halfBridge", supply: "12 V" } } });
     expect(b.drive.label).toMatch(/half bridge/);
     // a drive used outside its assumptions is flagged
-    const c = solveLink({ ...system([tokenAt(0, "40 mm")]), transmitter: { ...system([]).transmitter, compensation: "series", drive: { kind: "parallelTank", supply: "5 V" } } });
+    const c = solveLink({ ...system([tokenAt(0, "40 mm")]), transmitter: { ...system([]).transmitter!, compensation: "series", drive: { kind: "parallelTank", supply: "5 V" } } });
     expect(c.warnings.join(" ")).toMatch(/parallel-tank drive assumes a parallel-compensated transmitter/);
     expectTypeOf(solveLink).returns.toEqualTypeOf<LinkSolution>();
   });

@@ -9,8 +9,9 @@ import {
   DEFAULT_LIT_THRESHOLD,
   type LinkOptions,
 } from "./network.ts";
+import { networkTransmitters } from "./network.ts";
 import { receiverLabel, type LinkWorkspace } from "./operatingPoint.ts";
-import type { LedState, LinkResult, Phasor, ReceiverState, TransmitterState } from "./result.ts";
+import type { DriveState, LedState, LinkResult, Phasor, ReceiverState, TransmitterState } from "./result.ts";
 
 const LITTHRESHOLD_SOURCE =
   "trade practice (no source): indicator LEDs are visible indoors from about 0.1–1 mA average current";
@@ -48,13 +49,28 @@ export function assembleResult(solved: SolvedLink, options: LinkOptions): LinkRe
     warnings: solved.warnings,
     cautions: [],
   };
-  const { state: transmitter, input } = transmitterState(ws, v);
+  const coil = coilCurrents(ws);
+  const txs = networkTransmitters(ws.network);
+  const tanks = txs.map((_, i) => transmitterTank(ws, i, coil, v));
+  const { transmitters, drives } = driveStates(ws, tanks);
+  let input = 0;
+  let driver = 0;
+  for (const d of drives) {
+    input += d.inputPower;
+    driver += d.driverLoss;
+  }
+  let txCoil = 0;
+  let txCap = 0;
+  for (const t of transmitters) {
+    txCoil += t.coilLoss;
+    txCap += t.capacitorLoss;
+  }
   const receivers: ReceiverState[] = [];
   let delivered = 0;
   let rxCoil = 0;
   let rxCap = 0;
   for (let k = 0; k < ws.m; k++) {
-    const r = receiverState(ws, k, v);
+    const r = receiverState(ws, k, coil, v);
     delivered += r.loadPower;
     rxCoil += r.coilLoss;
     rxCap += r.capacitorLoss;
@@ -66,81 +82,239 @@ export function assembleResult(solved: SolvedLink, options: LinkOptions): LinkRe
     converged: solved.converged,
     iterations: solved.iterations,
     scalarIterations: ws.scalarIterations,
-    transmitter,
+    transmitter: transmitters[0]!,
+    transmitters,
+    drives,
     receivers,
     power: {
       input,
       delivered,
-      driver: transmitter.driverLoss,
-      transmitterCoil: transmitter.coilLoss,
-      transmitterCapacitor: transmitter.capacitorLoss,
+      driver,
+      transmitterCoil: txCoil,
+      transmitterCapacitor: txCap,
       receiverCoils: rxCoil,
       receiverCapacitors: rxCap,
       efficiency: input > 0 ? delivered / input : 0,
     },
     litThreshold: v.threshold,
     litThresholdSource: options.litThreshold === undefined ? LITTHRESHOLD_SOURCE : "set by the user",
-    drive: { label: drive.label, assumptions: drive.assumptions },
+    drive: txs.length === 1 ? { label: drive.label, assumptions: drive.assumptions } : severalDrives(ws),
     warnings: v.warnings,
     cautions: v.cautions,
   };
 }
 
-/**
- * The transmitter: coil voltage R₀I₀ + jωL₀I₀ + Σ jωM₀ⱼIⱼ, its capacitor (series: same current;
- * parallel: same voltage), the source current and terminal voltage, input and reflected
- * impedance, and the power the ideal source delivers (½Re(V·I*)).
- */
-function transmitterState(ws: LinkWorkspace, v: Verdicts): { state: TransmitterState; input: number } {
-  const { n, w, iRe, iIm } = ws;
-  const L = ws.network.inductance;
-  const tx = ws.network.transmitter;
-  const i0Re = iRe[0]!;
-  const i0Im = iIm[0]!;
-  let mRe = 0; // Σ jωM₀ⱼIⱼ
-  let mIm = 0;
-  for (let j = 1; j < n; j++) {
-    const x = w * L[0]![j]!;
-    mRe += -x * iIm[j]!;
-    mIm += x * iRe[j]!;
+/** The `drive` record of a link with several transmitters: every drive's label and assumptions. */
+function severalDrives(ws: LinkWorkspace): { label: string; assumptions: readonly string[] } {
+  const txs = networkTransmitters(ws.network);
+  const shared = ws.network.sharedDrives ?? [];
+  const parts: string[] = [];
+  const assumptions = new Set<string>();
+  txs.forEach((tx, i) => {
+    if (tx.feed !== undefined) return;
+    parts.push(`${transmitterLabel(ws, i)}: ${tx.drive.label}`);
+    for (const a of tx.drive.assumptions) assumptions.add(a);
+  });
+  shared.forEach((sd) => {
+    parts.push(`${sd.label} (${sd.wiring}): ${sd.drive.label}`);
+    for (const a of sd.drive.assumptions) assumptions.add(a);
+  });
+  return { label: parts.join("; "), assumptions: [...assumptions] };
+}
+
+/** Every coil's current phasor, A peak: the transmitters' (sign · their unknown), then the receivers'. */
+function coilCurrents(ws: LinkWorkspace): { re: Float64Array; im: Float64Array } {
+  const { t, m, p, base, iRe, iIm } = ws;
+  const re = new Float64Array(t + m);
+  const im = new Float64Array(t + m);
+  for (let i = 0; i < t; i++) {
+    const u = base.coilUnknown[i]!;
+    const s = base.coilSign[i]!;
+    re[i] = s * iRe[u]!;
+    im[i] = s * iIm[u]!;
   }
-  const l0 = L[0]![0]!;
+  for (let k = 0; k < m; k++) {
+    re[t + k] = iRe[p + k]!;
+    im[t + k] = iIm[p + k]!;
+  }
+  return { re, im };
+}
+
+/** A transmitter's label for results: its own, "transmitter" alone, "transmitter i+1" among several. */
+function transmitterLabel(ws: LinkWorkspace, i: number): string {
+  return networkTransmitters(ws.network)[i]!.label ?? (ws.t === 1 ? "transmitter" : `transmitter ${i + 1}`);
+}
+
+/** One transmitter's tank as phasors (coil frame): coil current and voltage, capacitor, terminals. */
+interface TransmitterTank extends TransmitterTerminals {
+  readonly label: string;
+  readonly iRe: number;
+  readonly iIm: number;
+  readonly coilVRe: number;
+  readonly coilVIm: number;
+  readonly refl: Phasor;
+}
+
+/**
+ * Transmitter i: coil voltage RᵢIᵢ + jωLᵢIᵢ + Σ jωMᵢⱼIⱼ (every other coil), its capacitor (series:
+ * same current; parallel: same voltage), its terminals, the reflected impedance Σ jωMᵢⱼIⱼ/Iᵢ,
+ * and its part warnings and cautions.
+ */
+function transmitterTank(ws: LinkWorkspace, i: number, coil: { re: Float64Array; im: Float64Array }, v: Verdicts): TransmitterTank {
+  const { w, t, m } = ws;
+  const L = ws.network.inductance;
+  const tx = networkTransmitters(ws.network)[i]!;
+  const i0Re = coil.re[i]!;
+  const i0Im = coil.im[i]!;
+  let mRe = 0; // Σ jωMᵢⱼIⱼ
+  let mIm = 0;
+  for (let j = 0; j < t + m; j++) {
+    if (j === i) continue;
+    const x = w * L[i]![j]!;
+    mRe += -x * coil.im[j]!;
+    mIm += x * coil.re[j]!;
+  }
+  const l0 = L[i]![i]!;
   const coilVRe = tx.resistance * i0Re - w * l0 * i0Im + mRe;
   const coilVIm = tx.resistance * i0Im + w * l0 * i0Re + mIm;
   const i0a2 = i0Re * i0Re + i0Im * i0Im;
   const refl: Phasor = i0a2 > 0 ? { re: (mRe * i0Re + mIm * i0Im) / i0a2, im: (mIm * i0Re - mRe * i0Im) / i0a2 } : { re: 0, im: 0 };
-  const { capVRe, capVIm, capIRe, capIIm, srcIRe, srcIIm, termVRe, termVIm } = compensation(
-    tx.compensation, ws.base.zc0Re, ws.base.zc0Im, i0Re, i0Im, coilVRe, coilVIm,
-  );
-  const srcIa2 = srcIRe * srcIRe + srcIIm * srcIIm;
-  const drive = tx.drive;
-  // ½Re(V·I*) of the ideal source (V real), or of the terminals for a current drive
-  const input = drive.kind === "voltage" ? 0.5 * drive.amplitude * srcIRe : 0.5 * (termVRe * srcIRe + termVIm * srcIIm);
-  const driverLoss = drive.kind === "voltage" ? 0.5 * srcIa2 * drive.resistance : 0;
-  const inZ =
-    srcIa2 > 0
-      ? { re: (termVRe * srcIRe + termVIm * srcIIm) / srcIa2, im: (termVIm * srcIRe - termVRe * srcIIm) / srcIa2 }
-      : { re: Infinity, im: 0 };
-  if (!Number.isFinite(inZ.re)) inZ.re = 0;
+  const terminals = compensation(tx.compensation, ws.base.zcRe[i]!, ws.base.zcIm[i]!, i0Re, i0Im, coilVRe, coilVIm);
+  const label = transmitterLabel(ws, i);
   const coilV = Math.hypot(coilVRe, coilVIm);
-  const capV = Math.hypot(capVRe, capVIm);
-  const capI = Math.hypot(capIRe, capIIm);
-  const label = tx.label ?? "transmitter";
+  const capV = Math.hypot(terminals.capVRe, terminals.capVIm);
   checkPartVoltage(label + " capacitor", capV, tx.capacitorRating, v.warnings);
   checkSelfResonance(label + " coil", w / (2 * Math.PI), tx.selfResonance, v.warnings);
   caution(label + " coil", coilV, v.cautionV, v.cautions);
   if (tx.compensation !== "none") caution(label + " capacitor", capV, v.cautionV, v.cautions);
+  return { ...terminals, label, iRe: i0Re, iIm: i0Im, coilVRe, coilVIm, refl };
+}
+
+/**
+ * The transmitters' states and the drives': an own drive's source power (½Re(V·I*) of the ideal
+ * source; of the terminals for a held current), driver loss and input impedance go with its
+ * transmitter; a shared drive's source current (string current, or the sum of its branches'),
+ * terminal voltage and power are the drive's, each coil on it reporting its own tank's terminals.
+ */
+function driveStates(ws: LinkWorkspace, tanks: readonly TransmitterTank[]): { transmitters: TransmitterState[]; drives: DriveState[] } {
+  const txs = networkTransmitters(ws.network);
+  const transmitters: TransmitterState[] = [];
+  const drives: DriveState[] = [];
+  tanks.forEach((k, i) => {
+    const tx = txs[i]!;
+    if (tx.feed !== undefined) {
+      const termP = 0.5 * (k.termVRe * k.srcIRe + k.termVIm * k.srcIIm);
+      transmitters.push(transmitterState(ws, i, k, terminalImpedance(k.termVRe, k.termVIm, k.srcIRe, k.srcIIm), 0, termP));
+      return;
+    }
+    const drive = tx.drive;
+    const srcIa2 = k.srcIRe * k.srcIRe + k.srcIIm * k.srcIIm;
+    // ½Re(V·I*) of the ideal source (V = amplitude·e^{jφ}), or of the terminals for a current drive
+    const phase = tx.phase ?? 0;
+    const input =
+      drive.kind === "voltage"
+        ? phase === 0
+          ? 0.5 * drive.amplitude * k.srcIRe
+          : 0.5 * drive.amplitude * (Math.cos(phase) * k.srcIRe + Math.sin(phase) * k.srcIIm)
+        : 0.5 * (k.termVRe * k.srcIRe + k.termVIm * k.srcIIm);
+    const driverLoss = drive.kind === "voltage" ? 0.5 * srcIa2 * drive.resistance : 0;
+    const inZ = terminalImpedance(k.termVRe, k.termVIm, k.srcIRe, k.srcIIm);
+    const state = transmitterState(ws, i, k, inZ, driverLoss, input - driverLoss);
+    transmitters.push(state);
+    drives.push({
+      label: state.label,
+      description: drive.label,
+      wiring: "own",
+      transmitters: [state.label],
+      sourceCurrent: state.sourceCurrent,
+      sourceCurrentRms: state.sourceCurrentRms,
+      sourceVoltage: state.sourceVoltage,
+      sourceVoltageRms: state.sourceVoltageRms,
+      inputImpedance: inZ,
+      inputPower: input,
+      driverLoss,
+    });
+  });
+  (ws.network.sharedDrives ?? []).forEach((sd, g) => {
+    const members = txs.flatMap((tx, i) => (tx.feed?.drive === g ? [i] : []));
+    if (members.length === 0) return;
+    let iRe = 0;
+    let iIm = 0;
+    let vRe = 0;
+    let vIm = 0;
+    if (sd.wiring === "series") {
+      const u = ws.base.stringUnknown[g]!;
+      iRe = ws.iRe[u]!;
+      iIm = ws.iIm[u]!;
+      for (const i of members) {
+        const s = txs[i]!.feed!.polarity;
+        vRe += s * tanks[i]!.termVRe;
+        vIm += s * tanks[i]!.termVIm;
+      }
+    } else {
+      for (const i of members) {
+        const s = txs[i]!.feed!.polarity;
+        iRe += s * tanks[i]!.srcIRe;
+        iIm += s * tanks[i]!.srcIIm;
+      }
+      const first = members[0]!;
+      const s0 = txs[first]!.feed!.polarity;
+      vRe = s0 * tanks[first]!.termVRe;
+      vIm = s0 * tanks[first]!.termVIm;
+    }
+    const drive = sd.drive;
+    const phase = sd.phase ?? 0;
+    const ia2 = iRe * iRe + iIm * iIm;
+    const input =
+      drive.kind === "voltage"
+        ? 0.5 * drive.amplitude * (Math.cos(phase) * iRe + Math.sin(phase) * iIm)
+        : 0.5 * (vRe * iRe + vIm * iIm);
+    const driverLoss = drive.kind === "voltage" ? 0.5 * ia2 * drive.resistance : 0;
+    const srcI = Math.sqrt(ia2);
+    const termV = Math.hypot(vRe, vIm);
+    drives.push({
+      label: sd.label,
+      description: drive.label,
+      wiring: sd.wiring,
+      transmitters: members.map((i) => transmitters[i]!.label),
+      sourceCurrent: srcI,
+      sourceCurrentRms: srcI * SQRT1_2,
+      sourceVoltage: termV,
+      sourceVoltageRms: termV * SQRT1_2,
+      inputImpedance: terminalImpedance(vRe, vIm, iRe, iIm),
+      inputPower: input,
+      driverLoss,
+    });
+  });
+  return { transmitters, drives };
+}
+
+/** V/I at a pair of terminals, Ω (0 + 0j when no current flows). */
+function terminalImpedance(vRe: number, vIm: number, iRe: number, iIm: number): Phasor {
+  const ia2 = iRe * iRe + iIm * iIm;
+  const inZ = ia2 > 0 ? { re: (vRe * iRe + vIm * iIm) / ia2, im: (vIm * iRe - vRe * iIm) / ia2 } : { re: Infinity, im: 0 };
+  if (!Number.isFinite(inZ.re)) inZ.re = 0;
+  return inZ;
+}
+
+/** The {@link TransmitterState} of transmitter i from its tank phasors. */
+function transmitterState(ws: LinkWorkspace, i: number, k: TransmitterTank, inZ: Phasor, driverLoss: number, terminalPower: number): TransmitterState {
+  const tx = networkTransmitters(ws.network)[i]!;
+  const i0a2 = k.iRe * k.iRe + k.iIm * k.iIm;
+  const coilV = Math.hypot(k.coilVRe, k.coilVIm);
+  const capV = Math.hypot(k.capVRe, k.capVIm);
+  const capI = Math.hypot(k.capIRe, k.capIIm);
   const coilLoss = 0.5 * i0a2 * tx.resistance;
-  const capLoss = 0.5 * (capIRe * capIRe + capIIm * capIIm) * (tx.capacitorEsr ?? 0);
-  const srcI = Math.sqrt(srcIa2);
-  const termV = Math.hypot(termVRe, termVIm);
+  const capLoss = 0.5 * (k.capIRe * k.capIRe + k.capIIm * k.capIIm) * (tx.capacitorEsr ?? 0);
+  const srcI = Math.hypot(k.srcIRe, k.srcIIm);
+  const termV = Math.hypot(k.termVRe, k.termVIm);
   const i0 = Math.sqrt(i0a2);
   // written out field by field: an object spread here made the whole solve 2–5× slower (V8)
-  const state: TransmitterState = {
-    label,
+  return {
+    label: k.label,
     coilCurrent: i0,
     coilCurrentRms: i0 * SQRT1_2,
-    coilCurrentPhasor: { re: i0Re, im: i0Im },
+    coilCurrentPhasor: { re: k.iRe, im: k.iIm },
     coilVoltage: coilV,
     coilVoltageRms: coilV * SQRT1_2,
     capacitorVoltage: capV,
@@ -154,10 +328,10 @@ function transmitterState(ws: LinkWorkspace, v: Verdicts): { state: TransmitterS
     sourceVoltage: termV,
     sourceVoltageRms: termV * SQRT1_2,
     inputImpedance: inZ,
-    reflectedImpedance: refl,
+    reflectedImpedance: k.refl,
     driverLoss,
+    terminalPower,
   };
-  return { state, input };
 }
 
 /** Phasors of the transmitter's capacitor, source current and terminal voltage (V, A peak). */
@@ -204,21 +378,22 @@ function compensation(
  * Receiver k: its EMF −Σ jωMₖⱼIⱼ, coil terminal voltage, capacitor (series: loop current;
  * parallel: load voltage), load power ½G|V|², and each LED's average current and verdict.
  */
-function receiverState(ws: LinkWorkspace, k: number, v: Verdicts): ReceiverState {
-  const { n, w, iRe, iIm, tanks } = ws;
+function receiverState(ws: LinkWorkspace, k: number, coil: { re: Float64Array; im: Float64Array }, v: Verdicts): ReceiverState {
+  const { w, t, m, tanks } = ws;
   const L = ws.network.inductance;
   const r = ws.network.receivers[k]!;
-  const ir = iRe[k + 1]!;
-  const ii = iIm[k + 1]!;
+  const c = t + k;
+  const ir = coil.re[c]!;
+  const ii = coil.im[c]!;
   let eRe = 0; // EMF = −Σ jωM_kj I_j
   let eIm = 0;
-  for (let j = 0; j < n; j++) {
-    if (j === k + 1) continue;
-    const x = w * L[k + 1]![j]!;
-    eRe += x * iIm[j]!;
-    eIm += -x * iRe[j]!;
+  for (let j = 0; j < t + m; j++) {
+    if (j === c) continue;
+    const x = w * L[c]![j]!;
+    eRe += x * coil.im[j]!;
+    eIm += -x * coil.re[j]!;
   }
-  const lk = L[k + 1]![k + 1]!;
+  const lk = L[c]![c]!;
   const cvRe = r.resistance * ir - w * lk * ii - eRe; // coil terminal voltage (drop along the loop)
   const cvIm = r.resistance * ii + w * lk * ir - eIm;
   const vl = Math.hypot(ws.vRe[k]!, ws.vIm[k]!);

@@ -39,6 +39,17 @@ export type Compensation = "series" | "parallel" | "none";
 /** The transmitter as numbers (SI). */
 export interface TransmitterNetwork {
   readonly label?: string;
+  /**
+   * phase of its own drive's EMF (or held current), rad (default 0): the drive phasor is
+   * amplitude·e^{jφ}. Not used on a shared drive (see `feed`).
+   */
+  readonly phase?: number;
+  /**
+   * a coil on a shared drive: `drive` indexes `LinkNetwork.sharedDrives`, `polarity` −1 for a
+   * coil connected the other way round (its current and field reversed). Absent: the
+   * transmitter has its own drive (`drive`, `phase`).
+   */
+  readonly feed?: { readonly drive: number; readonly polarity: 1 | -1 };
   /** coil AC series resistance at the drive frequency, Ω, ≥ 0 */
   readonly resistance: number;
   readonly compensation: Compensation;
@@ -71,14 +82,43 @@ export interface ReceiverNetwork {
   readonly load: LinkLoadModel;
 }
 
-/** The whole link as numbers. Index 0 of `inductance` is the transmitter, 1… the receivers. */
+/**
+ * A drive shared by several transmitter coils: its equivalent, and how the coils hang on it —
+ * "series" (one string: the same current through every coil's tank) or "parallel" (every tank
+ * across the drive's terminals, behind its source impedance).
+ */
+export interface SharedDriveNetwork {
+  readonly label: string;
+  readonly drive: DriveEquivalent;
+  readonly wiring: "series" | "parallel";
+  /** phase of the drive's EMF (or held current), rad (default 0) */
+  readonly phase?: number;
+}
+
+/**
+ * The whole link as numbers. The inductance matrix's first rows and columns are the
+ * transmitters (index 0 with one transmitter), then the receivers.
+ */
 export interface LinkNetwork {
   /** drive frequency, Hz, > 0 */
   readonly frequency: number;
-  /** (n+1)×(n+1) symmetric matrix: L on the diagonal, M off it, H */
+  /** (t+m)×(t+m) symmetric matrix (t transmitters, m receivers): L on the diagonal, M off it, H */
   readonly inductance: readonly (readonly number[])[];
+  /** the transmitter of a one-transmitter link; with `transmitters` given, the first of them */
   readonly transmitter: TransmitterNetwork;
+  /** several transmitters (absent: the one `transmitter`) */
+  readonly transmitters?: readonly TransmitterNetwork[];
+  /** drives shared by several transmitters, referenced by `TransmitterNetwork.feed` */
+  readonly sharedDrives?: readonly SharedDriveNetwork[];
   readonly receivers: readonly ReceiverNetwork[];
+}
+
+/**
+ * The transmitters of a network: `transmitters`, or the one `transmitter`.
+ * @example networkTransmitters({ frequency: 2e5, inductance: [[1e-5]], transmitter: tx, receivers: [] }).length // → 1
+ */
+export function networkTransmitters(network: Pick<LinkNetwork, "transmitter" | "transmitters">): readonly TransmitterNetwork[] {
+  return network.transmitters ?? [network.transmitter];
 }
 
 /** Options of the operating-point solve and the result's verdicts. */

@@ -7,7 +7,7 @@ import { TanklightInputError } from "../../errors.ts";
 import { luFactorCore, luSolveCore } from "../../math/lu.ts";
 import { complexLuFactorCore, complexLuSolveCore } from "../../math/complexLu.ts";
 import { LinkConvergenceError, OPEN_LOAD_CONDUCTANCE, loadAdmittance, solveLocal } from "./localSolve.ts";
-import type { LinkNetwork, ReceiverNetwork } from "./network.ts";
+import { networkTransmitters, type LinkNetwork, type ReceiverNetwork } from "./network.ts";
 import { externalImpedance, loadVoltageImpedance, type BaseMatrix, type ReceiverTanks } from "./tankImpedance.ts";
 
 /** Amplitudes below this are taken as zero in the convergence test, V. */
@@ -21,6 +21,10 @@ export interface LinkWorkspace {
   readonly w: number;
   readonly n: number;
   readonly m: number;
+  /** number of transmitter-side unknowns: receiver k is unknown p + k */
+  readonly p: number;
+  /** number of transmitters: receiver k is row t + k of the inductance matrix */
+  readonly t: number;
   readonly base: BaseMatrix;
   readonly tanks: ReceiverTanks;
   /** indices of the nonlinear receivers; q = nl.length */
@@ -29,7 +33,7 @@ export interface LinkWorkspace {
   readonly zRe: Float64Array;
   readonly zIm: Float64Array;
   readonly piv: Int32Array;
-  /** loop currents, A peak (index 0 the transmitter) */
+  /** loop currents, A peak (the p transmitter-side unknowns, then the receivers) */
   readonly iRe: Float64Array;
   readonly iIm: Float64Array;
   /** load admittance in use per receiver, S */
@@ -71,13 +75,15 @@ export interface LinkWorkspace {
 /** Allocates the workspace of one solve. */
 export function createWorkspace(network: LinkNetwork, w: number, base: BaseMatrix, tanks: ReceiverTanks, where: string): LinkWorkspace {
   const m = network.receivers.length;
-  const n = m + 1;
+  const p = base.p;
+  const t = networkTransmitters(network).length;
+  const n = p + m;
   const nl: number[] = [];
   for (let k = 0; k < m; k++) if (!network.receivers[k]!.load.linear) nl.push(k);
   const q = nl.length;
   const f = (len: number): Float64Array => new Float64Array(len);
   return {
-    network, where, w, n, m, base, tanks, nl,
+    network, where, w, n, m, p, t, base, tanks, nl,
     zRe: f(n * n), zIm: f(n * n), piv: new Int32Array(n), iRe: f(n), iIm: f(n),
     yG: f(m), yB: f(m), x: f(m), vRe: f(m), vIm: f(m), zkkRe: f(m), zkkIm: f(m),
     colRe: f(q * n), colIm: f(q * n), next: f(q), nextG: f(q), nextB: f(q),
@@ -96,11 +102,11 @@ export function setAdmittance(ws: LinkWorkspace, k: number, amplitude: number): 
 
 /** Builds Z with the admittances in use, factors it and solves for the loop currents and load voltages. */
 export function evaluate(ws: LinkWorkspace): void {
-  const { n, m, base, zRe, zIm, iRe, iIm, z2 } = ws;
+  const { n, m, p, base, zRe, zIm, iRe, iIm, z2 } = ws;
   zRe.set(base.re);
   zIm.set(base.im);
   for (let k = 0; k < m; k++) {
-    const d = (k + 1) * n + k + 1;
+    const d = (k + p) * n + k + p;
     externalImpedance(ws.tanks, k, ws.yG[k]!, ws.yB[k]!, z2);
     ws.zkkRe[k] = base.re[d]! + z2[0]!;
     ws.zkkIm[k] = base.im[d]! + z2[1]!;
@@ -110,19 +116,21 @@ export function evaluate(ws: LinkWorkspace): void {
   const bad = complexLuFactorCore(zRe, zIm, n, ws.piv);
   if (bad >= 0) {
     throw new TanklightInputError(
-      [{ path: bad === 0 ? "transmitter" : `receivers[${bad - 1}]`, message: "the coupled-circuit matrix is singular (a lossless loop exactly at resonance with no load?)", value: bad }],
+      [{ path: bad < ws.p ? (ws.t === 1 ? "transmitter" : "transmitters") : `receivers[${bad - ws.p}]`, message: "the coupled-circuit matrix is singular (a lossless loop exactly at resonance with no load?)", value: bad }],
       ws.where,
     );
   }
   iRe.fill(0);
   iIm.fill(0);
-  iRe[0] = base.vthRe;
-  iIm[0] = base.vthIm;
+  for (let u = 0; u < base.p; u++) {
+    iRe[u] = base.eRe[u]!;
+    iIm[u] = base.eIm[u]!;
+  }
   complexLuSolveCore(zRe, zIm, n, ws.piv, iRe, iIm);
   for (let k = 0; k < m; k++) {
     loadVoltageImpedance(ws.tanks, k, ws.yG[k]!, ws.yB[k]!, z2);
-    const ir = iRe[k + 1]!;
-    const ii = iIm[k + 1]!;
+    const ir = iRe[k + p]!;
+    const ii = iIm[k + p]!;
     ws.vRe[k] = ir * z2[0]! - ii * z2[1]!;
     ws.vIm[k] = ir * z2[1]! + ii * z2[0]!;
   }
@@ -130,14 +138,14 @@ export function evaluate(ws: LinkWorkspace): void {
 
 /** Columns of W = Z⁻¹ at the nonlinear receivers, from the factors left by {@link evaluate}. */
 export function computeColumns(ws: LinkWorkspace): void {
-  const { n, nl } = ws;
+  const { n, nl, p } = ws;
   for (let c = 0; c < nl.length; c++) {
     const k = nl[c]!;
     const oRe = ws.colRe.subarray(c * n, (c + 1) * n);
     const oIm = ws.colIm.subarray(c * n, (c + 1) * n);
     oRe.fill(0);
     oIm.fill(0);
-    oRe[k + 1] = 1;
+    oRe[k + p] = 1;
     complexLuSolveCore(ws.zRe, ws.zIm, n, ws.piv, oRe, oIm);
   }
 }
@@ -147,20 +155,20 @@ export function computeColumns(ws: LinkWorkspace): void {
  * (Sherman–Morrison on its diagonal; needs {@link evaluate} and {@link computeColumns}).
  */
 export function localStep(ws: LinkWorkspace): void {
-  const { n, nl, tanks, base } = ws;
+  const { n, nl, p, tanks, base } = ws;
   for (let c = 0; c < nl.length; c++) {
     const k = nl[c]!;
-    const wRe = ws.colRe[c * n + k + 1]!;
-    const wIm = ws.colIm[c * n + k + 1]!;
+    const wRe = ws.colRe[c * n + k + p]!;
+    const wIm = ws.colIm[c * n + k + p]!;
     const wd = wRe * wRe + wIm * wIm;
     const invRe = wRe / wd;
     const invIm = -wIm / wd;
-    const ir = ws.iRe[k + 1]!;
-    const ii = ws.iIm[k + 1]!;
+    const ir = ws.iRe[k + p]!;
+    const ii = ws.iIm[k + p]!;
     const eRe = ir * invRe - ii * invIm;
     const eIm = ir * invIm + ii * invRe;
     // Z_loop = Z_s + R + jωL = 1/W − Z_kk⁰ + (R + jωL)
-    const d = (k + 1) * n + k + 1;
+    const d = (k + p) * n + k + p;
     const zlRe = invRe - ws.zkkRe[k]! + base.re[d]!;
     const zlIm = invIm - ws.zkkIm[k]! + base.im[d]!;
     let aRe = 0;
@@ -220,7 +228,7 @@ export function residualMax(ws: LinkWorkspace, tol: number): number {
 function probeThenLocalStep(ws: LinkWorkspace): void {
   const L = ws.network.inductance;
   for (const k of ws.nl) {
-    ws.yG[k] = 1 / (ws.w * L[k + 1]![k + 1]!);
+    ws.yG[k] = 1 / (ws.w * L[ws.t + k]![ws.t + k]!);
     ws.yB[k] = 0;
   }
   evaluate(ws);
@@ -312,7 +320,7 @@ function newtonStep(ws: LinkWorkspace, tol: number): void {
  * ∂Z_jj/∂Y = −Z_v,j², Y' by a forward difference.
  */
 function newtonJacobian(ws: LinkWorkspace): void {
-  const { nl, n, x, yG, yB, dy, iRe, iIm, vRe, vIm, colRe, colIm, jac, rhs, z2, z3 } = ws;
+  const { nl, n, p, x, yG, yB, dy, iRe, iIm, vRe, vIm, colRe, colIm, jac, rhs, z2, z3 } = ws;
   const q = nl.length;
   for (let c = 0; c < q; c++) {
     const k = nl[c]!;
@@ -344,10 +352,10 @@ function newtonJacobian(ws: LinkWorkspace): void {
       const dzRe = -(sqRe * dy[2 * e]! - sqIm * dy[2 * e + 1]!);
       const dzIm = -(sqRe * dy[2 * e + 1]! + sqIm * dy[2 * e]!);
       // dI_k/dx_j = −W[k, j]·dZ_jj·I_j
-      const wRe = colRe[e * n + k + 1]!;
-      const wIm = colIm[e * n + k + 1]!;
-      const ijRe = iRe[j + 1]!;
-      const ijIm = iIm[j + 1]!;
+      const wRe = colRe[e * n + k + p]!;
+      const wIm = colIm[e * n + k + p]!;
+      const ijRe = iRe[j + p]!;
+      const ijIm = iIm[j + p]!;
       const pRe = dzRe * ijRe - dzIm * ijIm;
       const pIm = dzRe * ijIm + dzIm * ijRe;
       const diRe = -(wRe * pRe - wIm * pIm);
@@ -356,8 +364,8 @@ function newtonJacobian(ws: LinkWorkspace): void {
       let dvIm = diRe * zvIm + diIm * zvRe;
       if (j === k) {
         // + I_k·dZv/dY·Y' with dZv/dY = −Zv² (the same product as dZ_jj above)
-        dvRe += iRe[k + 1]! * dzRe - iIm[k + 1]! * dzIm;
-        dvIm += iRe[k + 1]! * dzIm + iIm[k + 1]! * dzRe;
+        dvRe += iRe[k + p]! * dzRe - iIm[k + p]! * dzIm;
+        dvIm += iRe[k + p]! * dzIm + iIm[k + p]! * dzRe;
       }
       const xj = Math.max(x[j]!, AMPLITUDE_FLOOR);
       jac[c * q + e] = ((vRe[k]! * dvRe + vIm[k]! * dvIm) * xj) / va2 - (c === e ? 1 : 0);

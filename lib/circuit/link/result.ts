@@ -48,6 +48,40 @@ export interface TransmitterState extends TankState {
   readonly inputImpedance: Phasor;
   /** impedance the receivers add in series with the transmitter coil, Σ jωM₀ⱼIⱼ / I₀, Ω */
   readonly reflectedImpedance: Phasor;
+  /** loss in the drive's source resistance, W (0 for a coil on a shared drive: see `drives`) */
+  readonly driverLoss: number;
+  /**
+   * power into the transmitter's terminals ½Re(V·I*), W: its coil and capacitor losses plus
+   * what it passes on to the other coils (set by the describing-function solver)
+   */
+  readonly terminalPower?: number;
+}
+
+/**
+ * One drive: a transmitter's own, or one shared by several coils. For a shared drive the
+ * source current and terminal voltage are the drive's (the string current of a series
+ * wiring, the sum of the branch currents of a parallel one); each fed transmitter's
+ * `sourceCurrent`/`sourceVoltage` are then its own tank's terminals.
+ */
+export interface DriveState {
+  /** the transmitter's label (own drive) or the shared drive's name */
+  readonly label: string;
+  /** what the drive's equivalent is, e.g. "full bridge from 12 V (fundamental 4V/π), …" */
+  readonly description: string;
+  /** "own" (one transmitter) or the shared drive's wiring */
+  readonly wiring: "own" | "series" | "parallel";
+  /** labels of the transmitters it feeds */
+  readonly transmitters: readonly string[];
+  /** current out of the drive's equivalent source, A peak */
+  readonly sourceCurrent: number;
+  readonly sourceCurrentRms: number;
+  /** voltage at the drive's terminals (after its source impedance), V peak */
+  readonly sourceVoltage: number;
+  readonly sourceVoltageRms: number;
+  /** impedance the drive's terminals see, Ω */
+  readonly inputImpedance: Phasor;
+  /** power the drive's ideal source delivers (for a held current: at its terminals), W */
+  readonly inputPower: number;
   /** loss in the drive's source resistance, W */
   readonly driverLoss: number;
 }
@@ -105,8 +139,14 @@ export interface LinkResult {
   readonly iterations: number;
   /** scalar iterations of the per-receiver amplitude solves, total */
   readonly scalarIterations: number;
+  /** the transmitter (with several: the first of `transmitters`) */
   readonly transmitter: TransmitterState;
+  /** every transmitter, in the system's order (set by the describing-function solver; solveLink always sets it) */
+  readonly transmitters?: readonly TransmitterState[];
+  /** every drive: each transmitter's own, then the shared ones (set as `transmitters` is) */
+  readonly drives?: readonly DriveState[];
   readonly receivers: readonly ReceiverState[];
+  /** the power flow, summed over every transmitter and drive */
   readonly power: LinkPower;
   /** the lit threshold used, A, and where the default comes from */
   readonly litThreshold: number;

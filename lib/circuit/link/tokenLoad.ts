@@ -9,7 +9,7 @@
  * call instead of a cycle integral; the relative error is checked in tests/circuit/linkLoads.test.ts.
  * Amplitudes outside the table fall back to the exact functions.
  */
-import { averageLoadCurrent, fundamentalConductance, fundamentalCurrentSlope } from "../loads/describingFunction.ts";
+import { averageLoadCurrent, checkLoad, fundamentalConductance, fundamentalCurrentSlope } from "../loads/describingFunction.ts";
 import type { TokenLoad } from "../loads/types.ts";
 import { TanklightInputError, assertNever } from "../../errors.ts";
 import type { LinkLoadModel } from "./network.ts";
@@ -68,6 +68,7 @@ function buildTable(load: TokenLoad, maxA: number, h: number): Table {
  * @example tokenLoadModel({ kind: "resistor", resistance: 1000 }).conductance(3) // → 0.001
  */
 export function tokenLoadModel(load: TokenLoad, options: TokenLoadModelOptions = {}): LinkLoadModel {
+  checkLoad(load, "tokenLoadModel");
   const label = loadLabel(load);
   const exact: LinkLoadModel = {
     label,
