@@ -24,12 +24,12 @@ export interface DisplayScale {
 
 /**
  * The display scale for SI values of `unit` whose largest magnitude is `maxAbs`.
- * Units without prefixes ("", "%", "dB…", "°") keep factor 1.
+ * Units without prefixes ("", "%", "dB…", "°", "×", "K") keep factor 1.
  * @example displayScale(0.12, "m") // → { factor: 1000, unit: "mm" }
  * @example displayScale(0, "A") // → { factor: 1, unit: "A" }
  */
 export function displayScale(maxAbs: number, unit: string): DisplayScale {
-  if (unit === "" || unit === "%" || unit.startsWith("dB") || unit === "°" || unit === "K" || !(maxAbs > 0) || !Number.isFinite(maxAbs)) {
+  if (unit === "" || unit === "%" || unit.startsWith("dB") || unit === "°" || unit === "×" || unit === "K" || !(maxAbs > 0) || !Number.isFinite(maxAbs)) {
     return { factor: 1, unit };
   }
   const e = Math.floor(Math.log10(maxAbs) / 3 + 1e-9) * 3;

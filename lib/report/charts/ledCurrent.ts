@@ -24,8 +24,8 @@ export interface LedCurrentChartInput extends ChartTitle {
   readonly threshold: number;
   /** what the distance is (default "height above the transmitter") */
   readonly distanceName?: string;
-  /** the unit of `distance`: "m" (default, shown with a prefix such as mm) or "°" for a tilt angle in degrees */
-  readonly distanceUnit?: "m" | "°";
+  /** the unit of `distance`: "m" (default, shown with a prefix such as mm), "°" for a tilt angle in degrees, "×" for a ratio */
+  readonly distanceUnit?: "m" | "°" | "×";
 }
 
 /**
