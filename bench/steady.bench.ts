@@ -3,7 +3,10 @@
  * LED token (target: HB with 9 harmonics ≤ 20× the describing function's time, same run), and a
  * 121 × 61 map with model "auto" over a bi-colour token (red + InGaN green back to back; target
  * ≤ 1 s; M per pose computed once in the set-up, as a map would reuse it). Loads tabulated for
- * the describing function (tokenLoadModel tabulate), as sweeps use them.
+ * the describing function (tokenLoadModel tabulate), as sweeps use them. And the pebble drawer's
+ * switch + parallel tank + red LED token (token Q 50) to a steady state of tolerance 1e-9:
+ * plain time stepping (untilSteady, 30 cycles) against shooting (periodicSteadyState), target
+ * shooting ≥ 5× faster, both at 200 steps a cycle.
  */
 import type { Workload } from "./harness.ts";
 import { solveLinkNetwork } from "../lib/circuit/link/solveNetwork.ts";
@@ -17,6 +20,10 @@ import { roundCoil } from "../lib/em/builders/roundCoil.ts";
 import { selfInductance } from "../lib/em/selfInductance.ts";
 import { coilResistance } from "../lib/em/losses/coilResistance.ts";
 import { couplingEvaluator } from "../lib/em/couplingEvaluator.ts";
+import { singleSwitchDrive } from "../lib/circuit/transient/drives.ts";
+import { addToken } from "../lib/circuit/transient/token.ts";
+import { simulate } from "../lib/circuit/transient/simulate.ts";
+import { periodicSteadyState } from "../lib/circuit/transient/shooting.ts";
 
 const f = 200e3;
 const w = 2 * Math.PI * f;
@@ -54,6 +61,11 @@ for (let iz = 0; iz < 61; iz++) {
   }
 }
 
+// the pebble drawer's drive: single switch, 1.6 µH parallel tank tuned 1.3× the drive, red LED token
+const L1d = 1.6e-6;
+const drawerDrive = singleSwitchDrive({ supply: 5, frequency: f, coilInductance: L1d, coilResistance: 0.05, tankCapacitance: 1 / ((1.3 * w) ** 2 * L1d), onResistance: 0.05 });
+const drawer = addToken(drawerDrive.circuit, { coupledTo: "Ltx", k: 0.05, inductance: L2, resistance: (w * L2) / 50, capacitance: 1 / (w * w * L2), load: red }).circuit;
+
 export const workloads: Workload[] = [
   { name: "steady: describing function, 1 red LED token", size: "1 pose (M given)", fn: () => solveLinkNetwork(one) },
   { name: "steady: harmonic balance, 1 red LED token, 9 harmonics", size: "1 pose, 72 samples", fn: () => solveLinkHarmonic(one, { order: 9 }) },
@@ -67,5 +79,17 @@ export const workloads: Workload[] = [
       for (const n of mapNets) if (solveLinkModel(n, { model: "auto" }).receivers[0]!.leds[1]!.lit) lit++;
       return lit;
     },
+  },
+  {
+    name: "steady: drawer switch + tank + LED token, plain stepping to 1e-9",
+    size: "200 steps a cycle, 30 cycles",
+    fn: () => simulate(drawer, { stop: 1000 / f, stepsPerCycle: 200, frequency: f, untilSteady: { tolerance: 1e-9 }, keepCycles: 1 }).steady!.cycles,
+  },
+  {
+    name: "steady: drawer switch + tank + LED token, shooting to 1e-9",
+    size: "200 steps a cycle, 6 periods",
+    against: "steady: drawer switch + tank + LED token, plain stepping to 1e-9",
+    targetRatio: 5,
+    fn: () => periodicSteadyState(drawer, { frequency: f, stepsPerCycle: 200, tolerance: 1e-9 }).shooting.periods,
   },
 ];

@@ -9,7 +9,7 @@ import { TanklightInputError } from "../../errors.ts";
 import { luFactor, luSolve, SingularMatrixError } from "../../math/lu.ts";
 import type { CompiledCircuit } from "./compile.ts";
 import { TransientConvergenceError } from "./errors.ts";
-import { stampDiodes, stampLinear, stampRhs, updateHistory, type ReactiveHistory } from "./stamps.ts";
+import { stampDiodes, stampHistory, stampLinear, stampRhs, updateHistory, type ReactiveHistory } from "./stamps.ts";
 
 const VOLTAGE_ABSTOL = 1e-6; // V — Newton convergence floor on node voltages
 const CURRENT_ABSTOL = 1e-9; // A — Newton convergence floor on branch currents
@@ -31,6 +31,20 @@ function history(cc: CompiledCircuit, initial: boolean): ReactiveHistory {
   };
 }
 
+/** Copies one history into another of the same circuit. */
+function copyHistory(from: ReactiveHistory, to: ReactiveHistory): void {
+  to.capV.set(from.capV);
+  to.capI.set(from.capI);
+  to.indI.set(from.indI);
+  to.indW.set(from.indW);
+}
+
+/** Replaces the state of `h` (at t + γh) by TR-BDF2's BDF2 starting point a₁·x_γ − a₀·x, x the state at t. */
+function bdf2Point(h: ReactiveHistory, capV0: Float64Array, indI0: Float64Array): void {
+  for (let i = 0; i < h.capV.length; i++) h.capV[i] = BDF2_A1 * h.capV[i]! - BDF2_A0 * capV0[i]!;
+  for (let k = 0; k < h.indI.length; k++) h.indI[k] = BDF2_A1 * h.indI[k]! - BDF2_A0 * indI0[k]!;
+}
+
 /** The integrator state and its preallocated workspace. */
 export class Engine {
   readonly cc: CompiledCircuit;
@@ -46,6 +60,14 @@ export class Engine {
   private readonly pivots: Int32Array;
   private readonly hist: ReactiveHistory;
   private readonly saved: ReactiveHistory;
+  /**
+   * Sensitivities of the state to the state written by {@link writeState} (one history per
+   * state variable: column j is ∂(history)/∂state₀[j]), present once {@link trackSensitivities}
+   * was called, propagated only while `sensitivities` is true.
+   */
+  private sens: { hist: ReactiveHistory[]; saved: ReactiveHistory[]; stageCapV: Float64Array[]; stageIndI: Float64Array[]; dx: Float64Array } | undefined;
+  /** propagate the sensitivities in each step (set by {@link trackSensitivities}) */
+  private sensitivities = false;
   /** capacitor voltages and inductor currents at the start of a TR-BDF2 step */
   private readonly stageCapV: Float64Array;
   private readonly stageIndI: Float64Array;
@@ -146,6 +168,51 @@ export class Engine {
     this.afterDiscontinuity = true;
     this.subStep = subStep;
     this.stableSteps = stableSteps;
+    if (this.sens) {
+      this.sens.hist.forEach((sh, j) => {
+        sh.capV.fill(0);
+        sh.indI.fill(0);
+        sh.capI.fill(0);
+        sh.indW.fill(0);
+        if (j < nC) sh.capV[j] = 1;
+        else sh.indI[j - nC] = 1;
+      });
+    }
+  }
+
+  /**
+   * Turns on (or off) the propagation of the state's sensitivities to the state written by the
+   * next {@link writeState}: each step then also solves, with the step's own factors, for how
+   * its result moves with the history (the exact derivative of the discrete step, Newton's
+   * last linearisation standing in for the converged one). Costs one triangular solve per
+   * state variable a stage.
+   */
+  trackSensitivities(on: boolean): void {
+    this.sensitivities = on;
+    if (!on || this.sens) return;
+    const nS = this.cc.capacitors.length + this.cc.inductors.length;
+    this.sens = {
+      hist: Array.from({ length: nS }, () => history(this.cc, false)),
+      saved: Array.from({ length: nS }, () => history(this.cc, false)),
+      stageCapV: Array.from({ length: nS }, () => new Float64Array(this.cc.capacitors.length)),
+      stageIndI: Array.from({ length: nS }, () => new Float64Array(this.cc.inductors.length)),
+      dx: new Float64Array(this.n),
+    };
+  }
+
+  /**
+   * Writes ∂state/∂state₀ (row-major nS×nS: row k the state variable in {@link readState}'s
+   * order, column j the start value it is differentiated by) into `out`.
+   */
+  readSensitivities(out: Float64Array): void {
+    const sens = this.sens;
+    if (!sens) throw new Error("Engine.readSensitivities: trackSensitivities was not called");
+    const nC = this.hist.capV.length;
+    const nS = sens.hist.length;
+    for (let j = 0; j < nS; j++) {
+      const sh = sens.hist[j]!;
+      for (let k = 0; k < nS; k++) out[k * nS + j] = k < nC ? sh.capV[k]! : sh.indI[k - nC]!;
+    }
   }
 
   /** Saves the history and the solution (before a step that may be rejected). */
@@ -155,6 +222,7 @@ export class Engine {
     this.saved.indI.set(this.hist.indI);
     this.saved.indW.set(this.hist.indW);
     this.xSaved.set(this.x);
+    if (this.sensitivities) this.sens!.hist.forEach((sh, j) => copyHistory(sh, this.sens!.saved[j]!));
   }
 
   /** Restores the history saved by {@link saveHistory} (not the solution). */
@@ -163,6 +231,7 @@ export class Engine {
     this.hist.capI.set(this.saved.capI);
     this.hist.indI.set(this.saved.indI);
     this.hist.indW.set(this.saved.indW);
+    if (this.sensitivities) this.sens!.saved.forEach((sv, j) => copyHistory(sv, this.sens!.hist[j]!));
   }
 
   /** Restores the solution saved by {@link saveHistory}. */
@@ -211,15 +280,19 @@ export class Engine {
    */
   tryStep(tNew: number, hs: number, method: StepMethod): boolean {
     if (method === "trbdf2") {
-      const h = this.hist;
-      this.stageCapV.set(h.capV);
-      this.stageIndI.set(h.indI);
+      const sens = this.sensitivities ? this.sens! : undefined;
+      this.stageCapV.set(this.hist.capV);
+      this.stageIndI.set(this.hist.indI);
+      sens?.hist.forEach((sh, j) => {
+        sens.stageCapV[j]!.set(sh.capV);
+        sens.stageIndI[j]!.set(sh.indI);
+      });
       const alpha = 2 / (TRBDF2_GAMMA * hs); // = 1/(β·hs), β = (1 − γ)/(2 − γ) = γ/2
       if (!this.solveStage(tNew - (1 - TRBDF2_GAMMA) * hs, alpha, 1)) return false;
       // BDF2 through (t, t + γh, t + h): x₊ − a₁x_γ + a₀x = β·h·x′₊ is a backward-Euler
       // step of length β·h from the point a₁x_γ − a₀x (a₁ − a₀ = 1)
-      for (let i = 0; i < h.capV.length; i++) h.capV[i] = BDF2_A1 * h.capV[i]! - BDF2_A0 * this.stageCapV[i]!;
-      for (let k = 0; k < h.indI.length; k++) h.indI[k] = BDF2_A1 * h.indI[k]! - BDF2_A0 * this.stageIndI[k]!;
+      bdf2Point(this.hist, this.stageCapV, this.stageIndI);
+      sens?.hist.forEach((sh, j) => bdf2Point(sh, sens.stageCapV[j]!, sens.stageIndI[j]!));
       return this.solveStage(tNew, alpha, 0);
     }
     return method === "euler" ? this.solveStage(tNew, 1 / hs, 0) : this.solveStage(tNew, 2 / hs, 1);
@@ -236,6 +309,17 @@ export class Engine {
     const ok = this.cc.diodes.length === 0 ? this.solveLinear(alpha) : this.solveNewton();
     if (!ok) return false;
     updateHistory(this.cc, this.x, alpha, theta, this.hist);
+    if (this.sensitivities) {
+      // the step's result depends on the history through the right-hand side only: the same
+      // factors (this.work) carry each sensitivity column through the step
+      const { hist, dx } = this.sens!;
+      for (const sh of hist) {
+        dx.fill(0);
+        stampHistory(this.cc, dx, alpha, theta, sh);
+        luSolve(this.work, this.n, this.pivots, dx);
+        updateHistory(this.cc, dx, alpha, theta, sh);
+      }
+    }
     return true;
   }
 

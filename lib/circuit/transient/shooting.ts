@@ -3,16 +3,20 @@
  * nonlinear circuits with periodic inputs", Proc. IEEE 60(1):108–114, 1972): Newton's method on
  * the state at the start of a period, x₀, so that one period of time stepping maps it onto
  * itself, Φ_T(x₀) = x₀. The Jacobian of the period map (the sensitivity, or monodromy, matrix)
- * is formed by finite differences — one extra period per state variable — which for the small
- * circuits here (a drive tank, a token tank: four to six states) costs far less than the ≈ Q
- * periods that plain stepping needs to settle a high-Q tank.
+ * is integrated along with the period, as Aprille & Trick do: each step also carries the
+ * state's derivative with respect to x₀ through the step's own factors (Engine.
+ * trackSensitivities; one triangular solve per state variable a stage, ≈ 1.4× the cost of a
+ * plain period for a switch + tank + LED token). Newton therefore costs one period an
+ * iteration instead of one per state variable with finite differences; once a step has cut
+ * the mismatch a hundredfold the last matrix is kept (chord steps, no sensitivities). The
+ * period that meets the tolerance is the one returned.
  */
 import { solveLinear } from "../../math/lu.ts";
 import { requirePositive, TanklightInputError } from "../../errors.ts";
 import type { TransientCircuit } from "./circuit.ts";
 import { compileCircuit } from "./compile.ts";
 import { Engine } from "./engine.ts";
-import { Recorder } from "./recorder.ts";
+import { Recorder, type Recording } from "./recorder.ts";
 import { advanceTo, RESTART_FRACTION, RESTART_FULL_STEPS } from "./stepControl.ts";
 import type { TransientResult } from "./simulate.ts";
 
@@ -26,7 +30,7 @@ export interface ShootingOptions {
   readonly tolerance?: number;
   /** Newton iterations, default 20 */
   readonly maxIterations?: number;
-  /** plain periods integrated before Newton starts (from rest), default 2 */
+  /** plain periods integrated before Newton starts (from rest), default 1 */
   readonly warmupCycles?: number;
 }
 
@@ -35,7 +39,7 @@ export interface ShootingResult extends TransientResult {
   readonly shooting: {
     readonly converged: boolean;
     readonly iterations: number;
-    /** whole periods integrated, warm-up, Newton and finite differences included */
+    /** whole periods integrated, warm-up included (a period with sensitivities counts as one) */
     readonly periods: number;
     /** the final relative mismatch |Φ_T(x₀) − x₀| */
     readonly residual: number;
@@ -56,7 +60,7 @@ export function periodicSteadyState(circuit: TransientCircuit, opts: ShootingOpt
   if (!(Number.isInteger(spc) && spc >= 8)) throw new TanklightInputError([{ path: "stepsPerCycle", message: "must be an integer ≥ 8", value: spc }], where);
   const tol = opts.tolerance ?? 1e-9;
   const maxIter = opts.maxIterations ?? 20;
-  const warm = opts.warmupCycles ?? 2;
+  const warm = opts.warmupCycles ?? 1;
   const h = 1 / (f * spc);
   const T = spc * h;
   const cc = compileCircuit(circuit);
@@ -67,21 +71,24 @@ export function periodicSteadyState(circuit: TransientCircuit, opts: ShootingOpt
   const nC = cc.capacitors.length;
   const nS = nC + cc.inductors.length;
   let periods = warm;
-  const period = (x0: Float64Array, out: Float64Array, recorder?: Recorder): void => {
+  const recorder = new Recorder(cc, spc);
+  const nS2 = nS * nS;
+  const monodromy = new Float64Array(nS2);
+  // one period from x0 (samples t0 + h … t0 + T recorded: the last period is the result), with the sensitivities if asked
+  const period = (x0: Float64Array, out: Float64Array, sensitivities: boolean): void => {
+    engine.trackSensitivities(sensitivities);
     engine.writeState(x0, t0, RESTART_FRACTION * h, RESTART_FULL_STEPS);
-    recorder?.record(t0, engine);
     for (let n = 1; n <= spc; n++) {
       advanceTo(engine, t0 + n * h, h);
-      recorder?.record(t0 + n * h, engine);
+      recorder.record(t0 + n * h, engine);
     }
     engine.readState(out);
+    if (sensitivities) engine.readSensitivities(monodromy);
     periods++;
   };
   const x0 = new Float64Array(nS);
   engine.readState(x0);
   const x1 = new Float64Array(nS);
-  const xp = new Float64Array(nS);
-  const y = new Float64Array(nS);
   const scales = (x: Float64Array): [number, number] => {
     let v = 1e-12;
     let i = 1e-15;
@@ -97,7 +104,11 @@ export function periodicSteadyState(circuit: TransientCircuit, opts: ShootingOpt
   let converged = false;
   let iterations = 0;
   for (; iterations < maxIter; iterations++) {
-    period(x0, x1);
+    // the monodromy matrix ∂Φ/∂x₀ comes with the period (Engine.trackSensitivities); once a
+    // Newton step has cut the mismatch a hundredfold the last one is kept (chord steps)
+    const fresh = jac === undefined || !(residual <= 0.01 * lastResidual && lastResidual < Infinity);
+    lastResidual = residual;
+    period(x0, x1, fresh);
     const [sv, si] = scales(x1);
     residual = 0;
     for (let k = 0; k < nS; k++) residual = Math.max(residual, Math.abs(x1[k]! - x0[k]!) / (k < nC ? sv : si));
@@ -105,29 +116,18 @@ export function periodicSteadyState(circuit: TransientCircuit, opts: ShootingOpt
       converged = true;
       break;
     }
-    // J = ∂Φ/∂x₀ by forward differences, formed once and kept while each step cuts the
-    // mismatch at least tenfold (a chord Newton: the period map of these circuits is nearly
-    // linear, so one Jacobian usually serves to the end); solve (J − I)·Δ = x₀ − Φ(x₀)
-    if (jac === undefined || residual > 0.1 * lastResidual) {
-      jac = new Float64Array(nS * nS);
-      for (let j = 0; j < nS; j++) {
-        const d = 1e-7 * (j < nC ? sv : si);
-        xp.set(x0);
-        xp[j] = xp[j]! + d;
-        period(xp, y);
-        for (let k = 0; k < nS; k++) jac[k * nS + j] = (y[k]! - x1[k]!) / d - (k === j ? 1 : 0);
-      }
+    if (fresh) {
+      jac = new Float64Array(nS2);
+      for (let k = 0; k < nS2; k++) jac[k] = monodromy[k]! - (k % (nS + 1) === 0 ? 1 : 0);
     }
-    lastResidual = residual;
+    // Newton: (∂Φ/∂x₀ − I)·Δ = x₀ − Φ(x₀)
     const b = new Float64Array(nS);
     for (let k = 0; k < nS; k++) b[k] = x0[k]! - x1[k]!;
-    const dx = solveLinear(jac.slice(), b);
+    const dx = solveLinear(jac!.slice(), b);
     for (let k = 0; k < nS; k++) x0[k] = x0[k]! + dx[k]!;
   }
-  const recorder = new Recorder(cc, spc + 1);
-  period(x0, x1, recorder);
   return {
-    ...recorder.finish(),
+    ...periodicRecording(recorder.finish(), t0),
     step: h,
     stats: {
       steps: engine.steps,
@@ -139,4 +139,22 @@ export function periodicSteadyState(circuit: TransientCircuit, opts: ShootingOpt
     warnings: converged ? [...engine.warnings] : [...engine.warnings, `${where}: shooting did not converge in ${maxIter} Newton iterations (relative mismatch ${residual.toExponential(2)}, tolerance ${tol})`],
     shooting: { converged, iterations, periods, residual },
   };
+}
+
+/**
+ * One period's samples t0 + h … t0 + T with the sample at t0 put in front: the state there is
+ * the state at t0 + T (periodic to the tolerance), and like plain stepping's sample at a
+ * switching instant it is taken before the switches act.
+ */
+function periodicRecording(r: Recording, t0: number): Recording {
+  const wrap = (a: Float64Array): Float64Array => {
+    const out = new Float64Array(a.length + 1);
+    out[0] = a[a.length - 1]!;
+    out.set(a, 1);
+    return out;
+  };
+  const time = wrap(r.time);
+  time[0] = t0;
+  const map = (o: Record<string, Float64Array>) => Object.fromEntries(Object.entries(o).map(([k, v]) => [k, wrap(v)]));
+  return { time, nodeVoltages: map(r.nodeVoltages), currents: map(r.currents) };
 }

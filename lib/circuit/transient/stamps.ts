@@ -72,6 +72,15 @@ export function stampRhs(cc: CompiledCircuit, b: Float64Array, tNew: number, alp
     if (s.to >= 0) b[s.to] = b[s.to]! + j;
     if (s.from >= 0) b[s.from] = b[s.from]! - j;
   }
+  stampHistory(cc, b, alpha, theta, hist);
+}
+
+/**
+ * Adds the companion currents and voltages of the capacitors and inductors from their history
+ * to b (the part of the right-hand side that is linear in the history; the sensitivities of
+ * the shooting method propagate through it alone).
+ */
+export function stampHistory(cc: CompiledCircuit, b: Float64Array, alpha: number, theta: number, hist: ReactiveHistory): void {
   const capList = cc.capacitors;
   for (let i = 0; i < capList.length; i++) {
     const c = capList[i]!;
