@@ -177,6 +177,16 @@ export { solveLink, linkNetwork, type LinkSystem, type LinkSolution, type LinkNe
 export { solveLinkNetwork, LinkConvergenceError } from "./circuit/link/solveNetwork.ts";
 export { summarizeLink, type LinkSummary, type LinkSummaryRow } from "./circuit/link/summary.ts";
 export {
+  solveLinkSequence,
+  FLICKER_FUSION_RATE,
+  type LinkSequence,
+  type LinkSequenceResult,
+  type SequenceStep,
+  type SequenceReceiver,
+  type SequenceTransmitter,
+  type SequenceLed,
+} from "./circuit/link/sequence.ts";
+export {
   DEFAULT_LIT_THRESHOLD,
   type LinkNetwork,
   type LinkOptions,
