@@ -20,6 +20,7 @@ import { z } from "zod";
 import { TanklightInputError, requireFinite } from "../../errors.ts";
 import { conductance, current, dimensionless, parseArgs, parseInput, resistance, temperature, voltage } from "../../schema.ts";
 import { lambertWOfLogCore } from "../../math/lambertW.ts";
+import { luFactorCore, luSolveCore } from "../../math/lu.ts";
 
 /** A datasheet-style point of the forward characteristic: the voltage at a current. */
 export const ForwardPoint = z.strictObject({
@@ -182,14 +183,17 @@ export function junctionW(v: number, lnIs: number, is: number, nvt: number, rs: 
  * Fits Shockley parameters (I_s, n, r_s) to two or three datasheet-style points.
  *
  * Three points: v_k = n·V_T·ln(1 + I_k/I_s) + I_k·r_s solved exactly for all three unknowns
- * (linear solve in (n·V_T, −n·V_T·ln I_s, r_s) with ln I_k, then Newton on the exact equations).
+ * (linear solve in (n·V_T, −n·V_T·ln I_s, r_s) with ln I_k, then Newton on the exact equations;
+ * both linear solves by lib/math's dense LU).
  * Two points: n is held at `idealityFactor` (default 2) and I_s, r_s are solved.
  * @param points forward points (current A > 0, voltage V > 0), distinct currents.
  * @param temperature K, > 0, at which the points hold.
  * @param idealityFactor n for the two-point fit.
  * @returns Shockley parameters; throws TanklightInputError when the points imply r_s ≤ 0 or n ≤ 0.
+ * The points fix I_s only to about 1e-14 relative in double precision (a voltage's round-off,
+ * 4e-16 V, is 1e-14 of n·V_T), so the digits below show 12 figures.
  * @example fitShockley([{current:1e-3,voltage:1.75},{current:5e-3,voltage:1.85},{current:20e-3,voltage:2.0}], 298.15)
- *   // → { saturationCurrent: 2.2164765511026647e-19, idealityFactor: 1.8836756868950875, seriesResistance: 5.527214899673994 }
+ *   // → { saturationCurrent: 2.21647655110e-19, idealityFactor: 1.88367568690, seriesResistance: 5.52721489967 }
  */
 export function fitShockley(
   points: readonly z.input<typeof ForwardPoint>[],
@@ -222,9 +226,8 @@ function fitShockleyCore(points: readonly ForwardPoint[], temperature: number, i
   let x: number[];
   if (sorted.length === 3) {
     // v = a·ln I + b + r·I with a = nV_T, b = −a ln I_s (valid for I ≫ I_s)
-    const A = sorted.map((p) => [Math.log(p.current), 1, p.current]);
-    const rhs = sorted.map((p) => p.voltage);
-    const s = solve3(A, rhs);
+    const A = Float64Array.from(sorted.flatMap((p) => [Math.log(p.current), 1, p.current]));
+    const s = solveSmall(A, Float64Array.from(sorted, (p) => p.voltage), 3);
     const a = s[0]!;
     x = [-s[1]! / a, a / vt, s[2]!];
   } else {
@@ -246,8 +249,8 @@ function fitShockleyCore(points: readonly ForwardPoint[], temperature: number, i
       const dIs = (n * vt * (-p.current / is)) / (1 + p.current / is); // d/d lnIs
       J.push([dIs, vt * u, p.current]);
     }
-    const Jr = J.map((row) => free.map((c) => row[c]!));
-    const step = free.length === 3 ? solve3(Jr, res) : solve2(Jr, res);
+    const Jr = Float64Array.from(J.flatMap((row) => free.map((c) => row[c]!)));
+    const step = solveSmall(Jr, Float64Array.from(res), free.length);
     let maxStep = 0;
     free.forEach((c, k) => {
       x[c] = x[c]! - step[k]!;
@@ -270,32 +273,16 @@ function fitShockleyCore(points: readonly ForwardPoint[], temperature: number, i
   return { saturationCurrent: Math.exp(lnIs), idealityFactor: n, seriesResistance: r };
 }
 
-function solve3(A: number[][], b: number[]): number[] {
-  // Gaussian elimination with partial pivoting (3×3)
-  const M = A.map((row, i) => [...row, b[i]!]);
-  for (let c = 0; c < 3; c++) {
-    let p = c;
-    for (let r = c + 1; r < 3; r++) if (Math.abs(M[r]![c]!) > Math.abs(M[p]![c]!)) p = r;
-    [M[c], M[p]] = [M[p]!, M[c]!];
-    for (let r = c + 1; r < 3; r++) {
-      const f = M[r]![c]! / M[c]![c]!;
-      for (let k = c; k < 4; k++) M[r]![k] = M[r]![k]! - f * M[c]![k]!;
-    }
-  }
-  const xs = [0, 0, 0];
-  for (let r = 2; r >= 0; r--) {
-    let s = M[r]![3]!;
-    for (let k = r + 1; k < 3; k++) s -= M[r]![k]! * xs[k]!;
-    xs[r] = s / M[r]![r]!;
-  }
-  return xs;
-}
-
-function solve2(A: number[][], b: number[]): number[] {
-  const [a, c] = A[0] as [number, number];
-  const [d, e] = A[1] as [number, number];
-  const det = a * e - c * d;
-  return [(b[0]! * e - c * b[1]!) / det, (a * b[1]! - d * b[0]!) / det];
+/**
+ * Solves the fit's small dense system in place with lib/math's LU (unchecked core: the
+ * matrices are built here from finite, checked points); a singular system (coincident
+ * points) leaves NaN, which the fit's final check reports as points that imply no junction.
+ */
+function solveSmall(a: Float64Array, b: Float64Array, n: number): Float64Array {
+  const piv = new Int32Array(n);
+  if (luFactorCore(a, n, piv) >= 0) return b.fill(NaN);
+  luSolveCore(a, n, piv, b);
+  return b;
 }
 
 /** Resolves a parsed spec into parameters at the reference temperature, plus the fit points. */

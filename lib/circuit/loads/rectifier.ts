@@ -105,7 +105,7 @@ export function reservoirSteadyState(
     const dh = -scratch[4]! / (2 * Math.PI) - gl - led.conductance(V);
     let next = V - hv / dh;
     if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
-    if (Math.abs(next - V) <= 1e-13 * A || hi - lo <= 1e-14 * A) {
+    if (Math.abs(next - V) <= 4 * Number.EPSILON * A || hi - lo <= 4 * Number.EPSILON * A) {
       V = next;
       hv = h(V);
       break;
