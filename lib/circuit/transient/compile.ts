@@ -7,7 +7,7 @@
  * Each error names the elements involved.
  */
 
-import { TanklightInputError, type InputIssue } from "../../errors.ts";
+import { TanklightInputError, assertNever, type InputIssue } from "../../errors.ts";
 import type { DiodeModel } from "../types.ts";
 import { elementNodes, GROUND, type CircuitElement, type TransientCircuit, type Waveform } from "./circuit.ts";
 
@@ -104,12 +104,26 @@ function pathThrough(edges: readonly { name: string; a: string; b: string }[], f
   return out.reverse();
 }
 
-/** Validates and compiles a circuit; throws TanklightInputError naming the elements at fault. */
-export function compileCircuit(circuit: TransientCircuit): CompiledCircuit {
-  const issues: InputIssue[] = [];
+/** Inductors as collected: the compiled fields plus the self-inductance L, before the matrix is built. */
+type RawInductor = { name: string; a: number; b: number; row: number; r: number; i0: number; l: Float64Array; L: number };
+/** A coupling as collected: the two inductor names and k or M. */
+type RawCoupling = { name: string; path: string; pair: readonly [string, string]; k?: number; m?: number };
+
+/** Node numbering: names in order of first appearance, ground = −1, and the elements at each node. */
+interface NodeTable {
+  readonly nodeIndex: Map<string, number>;
+  readonly nodeNames: string[];
+  readonly attached: string[][];
+}
+
+const ELEMENT_KINDS = ["resistor", "capacitor", "inductor", "coupling", "voltageSource", "currentSource", "switch", "diode"];
+
+/** Every element has a unique non-empty name, a known kind and non-empty terminal names. */
+function checkElements(circuit: TransientCircuit): readonly CircuitElement[] {
   if (!circuit || !Array.isArray(circuit.elements) || circuit.elements.length === 0) {
     fail([{ path: "circuit.elements", message: "must be a non-empty array of elements", value: circuit?.elements }]);
   }
+  const issues: InputIssue[] = [];
   const elements = circuit.elements as readonly CircuitElement[];
   const names = new Set<string>();
   elements.forEach((e, i) => {
@@ -119,9 +133,8 @@ export function compileCircuit(circuit: TransientCircuit): CompiledCircuit {
     } else if (names.has(e.name)) {
       issues.push({ path: `${path}.name`, message: "duplicates another element's name", value: e.name });
     } else names.add(e.name);
-    const kinds = ["resistor", "capacitor", "inductor", "coupling", "voltageSource", "currentSource", "switch", "diode"];
-    if (!kinds.includes(e?.kind)) {
-      issues.push({ path: `${path}.kind`, message: `must be one of ${kinds.join(", ")}`, value: e?.kind });
+    if (!ELEMENT_KINDS.includes(e?.kind)) {
+      issues.push({ path: `${path}.kind`, message: `must be one of ${ELEMENT_KINDS.join(", ")}`, value: e?.kind });
       return;
     }
     for (const n of elementNodes(e)) {
@@ -129,26 +142,31 @@ export function compileCircuit(circuit: TransientCircuit): CompiledCircuit {
     }
   });
   if (issues.length) fail(issues);
+  return elements;
+}
 
-  // node numbering, in order of first appearance
+/** Numbers the nodes in order of first appearance and lists the elements attached to each. */
+function numberNodes(elements: readonly CircuitElement[]): NodeTable {
   const nodeIndex = new Map<string, number>([[GROUND, -1]]);
   const nodeNames: string[] = [];
-  const attachedLists: string[][] = [];
+  const attached: string[][] = [];
   for (const e of elements) {
     for (const n of elementNodes(e)) {
       if (!nodeIndex.has(n)) {
         nodeIndex.set(n, nodeNames.length);
         nodeNames.push(n);
-        attachedLists.push([]);
+        attached.push([]);
       }
       const k = nodeIndex.get(n)!;
-      if (k >= 0 && !attachedLists[k]!.includes(e.name)) attachedLists[k]!.push(e.name);
+      if (k >= 0 && !attached[k]!.includes(e.name)) attached[k]!.push(e.name);
     }
   }
   if (nodeNames.length === 0) fail([{ path: "circuit.elements", message: `no node other than "${GROUND}"`, value: elements.map((e) => e.name) }]);
-  const idx = (n: string) => nodeIndex.get(n)!;
+  return { nodeIndex, nodeNames, attached };
+}
 
-  // topology: floating nodes (components without ground, ignoring current sources)
+/** Fails on a node with no path to ground except through current sources (named, with its elements). */
+function checkFloating(elements: readonly CircuitElement[], nodes: NodeTable): void {
   const comp = new Components();
   for (const e of elements) {
     if (e.kind === "coupling" || e.kind === "currentSource") continue;
@@ -156,22 +174,23 @@ export function compileCircuit(circuit: TransientCircuit): CompiledCircuit {
     comp.union(a, b);
   }
   const groundRoot = comp.find(GROUND);
-  const floating = nodeNames.filter((n) => comp.find(n) !== groundRoot);
-  if (floating.length) {
-    const attachedTo = [...new Set(floating.flatMap((n) => attachedLists[idx(n)]!))];
-    fail([
-      {
-        path: "circuit",
-        message:
-          `floating node${floating.length > 1 ? "s" : ""} ${floating.map((n) => `"${n}"`).join(", ")}: no path to "${GROUND}" ` +
-          `except through current sources; elements attached: ${attachedTo.join(", ")}`,
-        value: floating,
-        expected: `every node connected to "${GROUND}" through resistors, capacitors, inductors, switches, diodes or voltage sources`,
-      },
-    ]);
-  }
+  const floating = nodes.nodeNames.filter((n) => comp.find(n) !== groundRoot);
+  if (floating.length === 0) return;
+  const attachedTo = [...new Set(floating.flatMap((n) => nodes.attached[nodes.nodeIndex.get(n)!]!))];
+  fail([
+    {
+      path: "circuit",
+      message:
+        `floating node${floating.length > 1 ? "s" : ""} ${floating.map((n) => `"${n}"`).join(", ")}: no path to "${GROUND}" ` +
+        `except through current sources; elements attached: ${attachedTo.join(", ")}`,
+      value: floating,
+      expected: `every node connected to "${GROUND}" through resistors, capacitors, inductors, switches, diodes or voltage sources`,
+    },
+  ]);
+}
 
-  // topology: loops of voltage sources
+/** Fails on a loop of voltage sources, naming the sources in it. */
+function checkSourceLoops(elements: readonly CircuitElement[]): void {
   const vsComp = new Components();
   const vsEdges: { name: string; a: string; b: string }[] = [];
   for (const e of elements) {
@@ -188,27 +207,38 @@ export function compileCircuit(circuit: TransientCircuit): CompiledCircuit {
     }
     vsEdges.push({ name: e.name, a: e.plus, b: e.minus });
   }
+}
 
-  // element data
-  const nNodes = nodeNames.length;
-  let row = nNodes;
-  const unknownNames: string[] = [...nodeNames];
-  const resistors: CompiledCircuit["resistors"] = [];
-  const capacitors: CompiledCircuit["capacitors"] = [];
-  const inductors: { name: string; a: number; b: number; row: number; r: number; i0: number; l: Float64Array; L: number }[] = [];
-  const voltageSources: CompiledCircuit["voltageSources"] = [];
-  const currentSources: CompiledCircuit["currentSources"] = [];
-  const switches: CompiledCircuit["switches"] = [];
-  const diodes: CompiledCircuit["diodes"] = [];
-  const couplings: { name: string; path: string; pair: readonly [string, string]; k?: number; m?: number }[] = [];
+/** The element lists of a compiled circuit before the inductance matrix, plus the couplings. */
+interface Collected {
+  size: number;
+  readonly unknownNames: string[];
+  readonly resistors: CompiledCircuit["resistors"];
+  readonly capacitors: CompiledCircuit["capacitors"];
+  readonly inductors: RawInductor[];
+  readonly voltageSources: CompiledCircuit["voltageSources"];
+  readonly currentSources: CompiledCircuit["currentSources"];
+  readonly switches: CompiledCircuit["switches"];
+  readonly diodes: CompiledCircuit["diodes"];
+  readonly couplings: RawCoupling[];
+}
+
+/** Checks each element's values and collects it by kind; branch unknowns are numbered after the nodes. */
+function collectElements(elements: readonly CircuitElement[], nodes: NodeTable): Collected {
+  const issues: InputIssue[] = [];
+  const idx = (n: string) => nodes.nodeIndex.get(n)!;
+  const c: Collected = {
+    size: nodes.nodeNames.length, unknownNames: [...nodes.nodeNames],
+    resistors: [], capacitors: [], inductors: [], voltageSources: [], currentSources: [], switches: [], diodes: [], couplings: [],
+  };
   elements.forEach((e, i) => {
     const path = `circuit.elements[${i}] (${e.name})`;
     switch (e.kind) {
       case "resistor":
-        resistors.push({ name: e.name, a: idx(e.a), b: idx(e.b), g: 1 / positive(e.resistance, `${path}.resistance`, "Ω", issues) });
+        c.resistors.push({ name: e.name, a: idx(e.a), b: idx(e.b), g: 1 / positive(e.resistance, `${path}.resistance`, "Ω", issues) });
         break;
       case "capacitor":
-        capacitors.push({
+        c.capacitors.push({
           name: e.name, a: idx(e.a), b: idx(e.b),
           c: positive(e.capacitance, `${path}.capacitance`, "F", issues),
           v0: finiteOr(e.initialVoltage, 0, `${path}.initialVoltage`, "V", issues),
@@ -217,59 +247,73 @@ export function compileCircuit(circuit: TransientCircuit): CompiledCircuit {
       case "inductor": {
         const r = finiteOr(e.resistance, 0, `${path}.resistance`, "Ω", issues);
         if (r < 0) issues.push({ path: `${path}.resistance`, message: "must be ≥ 0 Ω", value: r, expected: "≥ 0 Ω" });
-        inductors.push({
-          name: e.name, a: idx(e.a), b: idx(e.b), row: row++, r,
+        c.inductors.push({
+          name: e.name, a: idx(e.a), b: idx(e.b), row: c.size++, r,
           i0: finiteOr(e.initialCurrent, 0, `${path}.initialCurrent`, "A", issues),
           L: positive(e.inductance, `${path}.inductance`, "H", issues),
           l: new Float64Array(0),
         });
-        unknownNames.push(`current of ${e.name}`);
+        c.unknownNames.push(`current of ${e.name}`);
         break;
       }
-      case "coupling": {
-        const pair = e.inductors;
-        if (!Array.isArray(pair) || pair.length !== 2) {
-          issues.push({ path: `${path}.inductors`, message: "must name exactly two inductors", value: pair });
-          break;
-        }
-        const hasK = e.k !== undefined;
-        const hasM = e.mutualInductance !== undefined;
-        if (hasK === hasM) {
-          issues.push({ path, message: "give exactly one of k and mutualInductance", value: { k: e.k, mutualInductance: e.mutualInductance } });
-          break;
-        }
-        if (hasK) couplings.push({ name: e.name, path, pair, k: finiteOr(e.k, 0, `${path}.k`, "", issues) });
-        else couplings.push({ name: e.name, path, pair, m: finiteOr(e.mutualInductance, 0, `${path}.mutualInductance`, "H", issues) });
+      case "coupling":
+        collectCoupling(e, path, c.couplings, issues);
         break;
-      }
       case "voltageSource":
         if (typeof e.waveform !== "function") issues.push({ path: `${path}.waveform`, message: "must be a function of time", value: e.waveform });
-        voltageSources.push({ name: e.name, a: idx(e.plus), b: idx(e.minus), row: row++, waveform: e.waveform });
-        unknownNames.push(`current of ${e.name}`);
+        c.voltageSources.push({ name: e.name, a: idx(e.plus), b: idx(e.minus), row: c.size++, waveform: e.waveform });
+        c.unknownNames.push(`current of ${e.name}`);
         break;
       case "currentSource":
         if (typeof e.waveform !== "function") issues.push({ path: `${path}.waveform`, message: "must be a function of time", value: e.waveform });
-        currentSources.push({ name: e.name, from: idx(e.from), to: idx(e.to), waveform: e.waveform });
+        c.currentSources.push({ name: e.name, from: idx(e.from), to: idx(e.to), waveform: e.waveform });
         break;
       case "switch": {
         if (typeof e.closed !== "function") issues.push({ path: `${path}.closed`, message: "must be a function of time returning a boolean", value: e.closed });
         const ron = positive(e.onResistance, `${path}.onResistance`, "Ω", issues);
         const roff = positive(e.offResistance ?? DEFAULT_SWITCH_OFF_RESISTANCE, `${path}.offResistance`, "Ω", issues);
         if (roff <= ron) issues.push({ path: `${path}.offResistance`, message: "must exceed onResistance", value: roff, expected: `> ${ron} Ω` });
-        switches.push({ name: e.name, a: idx(e.a), b: idx(e.b), gOn: 1 / ron, gOff: 1 / roff, closed: e.closed });
+        c.switches.push({ name: e.name, a: idx(e.a), b: idx(e.b), gOn: 1 / ron, gOff: 1 / roff, closed: e.closed });
         break;
       }
       case "diode":
         if (!e.model || typeof e.model.current !== "function" || typeof e.model.conductance !== "function") {
           issues.push({ path: `${path}.model`, message: "must be a DiodeModel with current(v) and conductance(v)", value: e.model });
         }
-        diodes.push({ name: e.name, a: idx(e.anode), b: idx(e.cathode), model: e.model });
+        c.diodes.push({ name: e.name, a: idx(e.anode), b: idx(e.cathode), model: e.model });
         break;
+      default:
+        return assertNever(e, `circuit.elements[${i}].kind`, WHERE);
     }
   });
   if (issues.length) fail(issues);
+  return c;
+}
 
-  // inductance matrix with mutual terms
+/** A coupling element's pair and its k or M (exactly one). */
+function collectCoupling(e: Extract<CircuitElement, { kind: "coupling" }>, path: string, out: RawCoupling[], issues: InputIssue[]): void {
+  const pair = e.inductors;
+  if (!Array.isArray(pair) || pair.length !== 2) {
+    issues.push({ path: `${path}.inductors`, message: "must name exactly two inductors", value: pair });
+    return;
+  }
+  const hasK = e.k !== undefined;
+  const hasM = e.mutualInductance !== undefined;
+  if (hasK === hasM) {
+    issues.push({ path, message: "give exactly one of k and mutualInductance", value: { k: e.k, mutualInductance: e.mutualInductance } });
+    return;
+  }
+  if (hasK) out.push({ name: e.name, path, pair, k: finiteOr(e.k, 0, `${path}.k`, "", issues) });
+  else out.push({ name: e.name, path, pair, m: finiteOr(e.mutualInductance, 0, `${path}.mutualInductance`, "H", issues) });
+}
+
+/**
+ * The inductance matrix (row-major, nL × nL) with its mutual terms; fails on a coupling that
+ * names no inductor pair, couples a pair twice, has |k| ≥ 1, or on a matrix that is not
+ * positive definite.
+ */
+function inductanceMatrix(inductors: readonly RawInductor[], couplings: readonly RawCoupling[]): Float64Array {
+  const issues: InputIssue[] = [];
   const nL = inductors.length;
   const lm = new Float64Array(nL * nL);
   inductors.forEach((ind, j) => (lm[j * nL + j] = ind.L));
@@ -314,24 +358,35 @@ export function compileCircuit(circuit: TransientCircuit): CompiledCircuit {
       },
     ]);
   }
-  const inductorsOut = inductors.map((ind, j) => ({
+  return lm;
+}
+
+/** Validates and compiles a circuit; throws TanklightInputError naming the elements at fault. */
+export function compileCircuit(circuit: TransientCircuit): CompiledCircuit {
+  const elements = checkElements(circuit);
+  const nodes = numberNodes(elements);
+  checkFloating(elements, nodes);
+  checkSourceLoops(elements);
+  const c = collectElements(elements, nodes);
+  const lm = inductanceMatrix(c.inductors, c.couplings);
+  const nL = c.inductors.length;
+  const inductorsOut = c.inductors.map((ind, j) => ({
     name: ind.name, a: ind.a, b: ind.b, row: ind.row, r: ind.r, i0: ind.i0,
     l: lm.slice(j * nL, j * nL + nL),
   }));
-
   return {
-    nodeNames,
-    nodeIndex,
-    size: row,
-    resistors,
-    capacitors,
+    nodeNames: nodes.nodeNames,
+    nodeIndex: nodes.nodeIndex,
+    size: c.size,
+    resistors: c.resistors,
+    capacitors: c.capacitors,
     inductors: inductorsOut,
-    voltageSources,
-    currentSources,
-    switches,
-    diodes,
-    attached: attachedLists,
-    unknownNames,
+    voltageSources: c.voltageSources,
+    currentSources: c.currentSources,
+    switches: c.switches,
+    diodes: c.diodes,
+    attached: nodes.attached,
+    unknownNames: c.unknownNames,
   };
 }
 

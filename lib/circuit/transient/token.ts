@@ -66,69 +66,58 @@ export function addToken(base: TransientCircuit, spec: TokenSpec): TokenCircuit 
     throw new TanklightInputError([{ path: "coupledTo", message: "must name an inductor of the circuit", value: spec.coupledTo }], where);
   }
   const top = `${p}.top`;
-  const bottom = GROUND;
   const coupling: CircuitElement =
     spec.k !== undefined
       ? { kind: "coupling", name: `${p}.M`, inductors: [spec.coupledTo, `${p}.L`], k: spec.k }
       : { kind: "coupling", name: `${p}.M`, inductors: [spec.coupledTo, `${p}.L`], mutualInductance: spec.mutualInductance! };
-  const els: CircuitElement[] = [
-    { kind: "inductor", name: `${p}.L`, a: top, b: bottom, inductance: L, resistance: R },
-    { kind: "capacitor", name: `${p}.C`, a: top, b: bottom, capacitance: C },
+  const tank: CircuitElement[] = [
+    { kind: "inductor", name: `${p}.L`, a: top, b: GROUND, inductance: L, resistance: R },
+    { kind: "capacitor", name: `${p}.C`, a: top, b: GROUND, capacitance: C },
     coupling,
   ];
+  const load = loadElements(spec.load, p, top);
+  return { circuit: { elements: [...base.elements, ...tank, ...load.elements] }, top, coil: `${p}.L`, leds: load.leds };
+}
+
+/** A series resistance of a load, Ω ≥ 0 (absent: 0). */
+function seriesResistanceOf(x: number | undefined, path: string): number {
+  const v = x ?? 0;
+  if (!(Number.isFinite(v) && v >= 0)) throw new TanklightInputError([{ path, message: "must be a finite number ≥ 0 Ω", value: v }], "addToken");
+  return v;
+}
+
+/**
+ * The elements of a token load between the tank's top node and ground, named `<p>.…`, and
+ * the names of its LEDs by role.
+ */
+function loadElements(load: TokenLoad, p: string, top: string): { elements: CircuitElement[]; leds: Partial<Record<"led" | "a" | "b", string>> } {
+  const bottom = GROUND;
+  const els: CircuitElement[] = [];
   const leds: Partial<Record<"led" | "a" | "b", string>> = {};
-  const load = spec.load;
-  const rs = (x: number | undefined, path: string): number => {
-    const v = x ?? 0;
-    if (!(Number.isFinite(v) && v >= 0)) throw new TanklightInputError([{ path, message: "must be a finite number ≥ 0 Ω", value: v }], where);
-    return v;
-  };
   switch (load?.kind) {
     case "led":
       els.push({ kind: "diode", name: `${p}.led`, anode: top, cathode: bottom, model: load.led });
       leds.led = `${p}.led`;
       break;
     case "antiParallel":
+    case "parallelSameDirection": {
+      const reversed = load.kind === "antiParallel";
       els.push(
         { kind: "diode", name: `${p}.a`, anode: top, cathode: bottom, model: load.a },
-        { kind: "diode", name: `${p}.b`, anode: bottom, cathode: top, model: load.b },
+        { kind: "diode", name: `${p}.b`, anode: reversed ? bottom : top, cathode: reversed ? top : bottom, model: load.b },
       );
       leds.a = `${p}.a`;
       leds.b = `${p}.b`;
-      break;
-    case "parallelSameDirection":
-      els.push(
-        { kind: "diode", name: `${p}.a`, anode: top, cathode: bottom, model: load.a },
-        { kind: "diode", name: `${p}.b`, anode: top, cathode: bottom, model: load.b },
-      );
-      leds.a = `${p}.a`;
-      leds.b = `${p}.b`;
-      break;
-    case "bridge": {
-      const pos = `${p}.dc+`;
-      const neg = `${p}.dc-`;
-      els.push(
-        { kind: "diode", name: `${p}.d1`, anode: top, cathode: pos, model: load.diode },
-        { kind: "diode", name: `${p}.d2`, anode: bottom, cathode: pos, model: load.diode },
-        { kind: "diode", name: `${p}.d3`, anode: neg, cathode: top, model: load.diode },
-        { kind: "diode", name: `${p}.d4`, anode: neg, cathode: bottom, model: load.diode },
-      );
-      const r = rs(load.seriesResistance, "load.seriesResistance");
-      if (r > 0) {
-        els.push(
-          { kind: "resistor", name: `${p}.Rs`, a: pos, b: `${p}.mid`, resistance: r },
-          { kind: "diode", name: `${p}.led`, anode: `${p}.mid`, cathode: neg, model: load.led },
-        );
-      } else {
-        els.push({ kind: "diode", name: `${p}.led`, anode: pos, cathode: neg, model: load.led });
-      }
-      leds.led = `${p}.led`;
       break;
     }
+    case "bridge":
+      els.push(...bridgeElements(load, p, top));
+      leds.led = `${p}.led`;
+      break;
     case "halfWaveReservoir": {
       const pos = `${p}.dc+`;
-      const r = rs(load.seriesResistance, "load.seriesResistance");
-      const cres = requirePositive(load.capacitance, "load.capacitance", "F", where);
+      const r = seriesResistanceOf(load.seriesResistance, "load.seriesResistance");
+      const cres = requirePositive(load.capacitance, "load.capacitance", "F", "addToken");
       if (r > 0) {
         els.push(
           { kind: "resistor", name: `${p}.Rs`, a: top, b: `${p}.mid`, resistance: r },
@@ -145,10 +134,33 @@ export function addToken(base: TransientCircuit, spec: TokenSpec): TokenCircuit 
       break;
     }
     case "resistor":
-      els.push({ kind: "resistor", name: `${p}.R`, a: top, b: bottom, resistance: requirePositive(load.resistance, "load.resistance", "Ω", where) });
+      els.push({ kind: "resistor", name: `${p}.R`, a: top, b: bottom, resistance: requirePositive(load.resistance, "load.resistance", "Ω", "addToken") });
       break;
     default:
-      return assertNever(load, "load.kind", where, "must be a TokenLoad kind (led, antiParallel, parallelSameDirection, bridge, halfWaveReservoir, resistor)");
+      return assertNever(load, "load.kind", "addToken", "must be a TokenLoad kind (led, antiParallel, parallelSameDirection, bridge, halfWaveReservoir, resistor)");
   }
-  return { circuit: { elements: [...base.elements, ...els] }, top, coil: `${p}.L`, leds };
+  return { elements: els, leds };
+}
+
+/** A full-wave bridge of four diodes feeding the LED (through `<p>.Rs` when it has a series resistance). */
+function bridgeElements(load: Extract<TokenLoad, { kind: "bridge" }>, p: string, top: string): CircuitElement[] {
+  const bottom = GROUND;
+  const pos = `${p}.dc+`;
+  const neg = `${p}.dc-`;
+  const els: CircuitElement[] = [
+    { kind: "diode", name: `${p}.d1`, anode: top, cathode: pos, model: load.diode },
+    { kind: "diode", name: `${p}.d2`, anode: bottom, cathode: pos, model: load.diode },
+    { kind: "diode", name: `${p}.d3`, anode: neg, cathode: top, model: load.diode },
+    { kind: "diode", name: `${p}.d4`, anode: neg, cathode: bottom, model: load.diode },
+  ];
+  const r = seriesResistanceOf(load.seriesResistance, "load.seriesResistance");
+  if (r > 0) {
+    els.push(
+      { kind: "resistor", name: `${p}.Rs`, a: pos, b: `${p}.mid`, resistance: r },
+      { kind: "diode", name: `${p}.led`, anode: `${p}.mid`, cathode: neg, model: load.led },
+    );
+  } else {
+    els.push({ kind: "diode", name: `${p}.led`, anode: pos, cathode: neg, model: load.led });
+  }
+  return els;
 }
