@@ -71,11 +71,20 @@ export const SingleSwitchDriveSpec = z.strictObject({
 /** What {@link singleSwitchDrive} accepts. */
 export type SingleSwitchDriveSpec = z.input<typeof SingleSwitchDriveSpec>;
 
-/** The switch's off-resistance must exceed its on-resistance (else the switch never opens). */
-function checkOffResistance(ron: number, roff: number | undefined, where: string): void {
+/** The fields every drive circuit shares, parsed (SI), with the defaults applied. */
+type TransmitterFields = Pick<z.output<typeof SingleSwitchDriveSpec>, "supply" | "frequency" | "coilInductance" | "tankCapacitance" | "coilResistance" | "loadResistance" | "onResistance" | "offResistance">;
+
+/** The shared values with their defaults; the switch's off-resistance must exceed its on-resistance (else it never opens). */
+function transmitterValues(spec: TransmitterFields, where: string) {
+  const ron = spec.onResistance ?? DEFAULT_ON_RESISTANCE;
+  const roff = spec.offResistance;
   if (roff !== undefined && !(roff > ron)) {
     throw new TanklightInputError([{ path: "offResistance", message: `must exceed onResistance (${ron} Ω)`, value: roff, expected: `> ${ron} Ω` }], where);
   }
+  return {
+    supply: spec.supply, f: spec.frequency, L: spec.coilInductance, C: spec.tankCapacitance,
+    R: spec.coilResistance ?? 0, rLoad: spec.loadResistance ?? 0, ron,
+  };
 }
 
 /**
@@ -87,15 +96,8 @@ function checkOffResistance(ron: number, roff: number | undefined, where: string
 export function singleSwitchDrive(input: SingleSwitchDriveSpec): DriveCircuit {
   const where = "singleSwitchDrive";
   const spec = parseInput(SingleSwitchDriveSpec, input, where);
-  const supply = spec.supply;
-  const f = spec.frequency;
-  const L = spec.coilInductance;
-  const C = spec.tankCapacitance;
-  const R = spec.coilResistance ?? 0;
-  const rLoad = spec.loadResistance ?? 0;
+  const { supply, f, L, C, R, rLoad, ron } = transmitterValues(spec, where);
   const cShunt = spec.shuntCapacitance ?? 0;
-  const ron = spec.onResistance ?? DEFAULT_ON_RESISTANCE;
-  checkOffResistance(ron, spec.offResistance, where);
   const arrangement = spec.arrangement ?? "parallel-tank";
   const warnings: string[] = [];
   const gate = periodicGate({ frequency: f, duty: spec.duty ?? 0.5 });
@@ -175,14 +177,7 @@ export type BridgeDriveSpec = z.input<typeof BridgeDriveSpec>;
 export function bridgeDrive(input: BridgeDriveSpec): DriveCircuit {
   const where = "bridgeDrive";
   const spec = parseInput(BridgeDriveSpec, input, where);
-  const supply = spec.supply;
-  const f = spec.frequency;
-  const L = spec.coilInductance;
-  const C = spec.tankCapacitance;
-  const R = spec.coilResistance ?? 0;
-  const rLoad = spec.loadResistance ?? 0;
-  const ron = spec.onResistance ?? DEFAULT_ON_RESISTANCE;
-  checkOffResistance(ron, spec.offResistance, where);
+  const { supply, f, L, C, R, rLoad, ron } = transmitterValues(spec, where);
   const off = spec.offResistance !== undefined ? { offResistance: spec.offResistance } : {};
   const high = periodicGate({ frequency: f, duty: 0.5 });
   const low = periodicGate({ frequency: f, duty: 0.5, invert: true });

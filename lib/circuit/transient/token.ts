@@ -118,14 +118,7 @@ function loadElements(load: TokenLoad, p: string, top: string): { elements: Circ
       const pos = `${p}.dc+`;
       const r = seriesResistanceOf(load.seriesResistance, "load.seriesResistance");
       const cres = requirePositive(load.capacitance, "load.capacitance", "F", "addToken");
-      if (r > 0) {
-        els.push(
-          { kind: "resistor", name: `${p}.Rs`, a: top, b: `${p}.mid`, resistance: r },
-          { kind: "diode", name: `${p}.diode`, anode: `${p}.mid`, cathode: pos, model: load.diode },
-        );
-      } else {
-        els.push({ kind: "diode", name: `${p}.diode`, anode: top, cathode: pos, model: load.diode });
-      }
+      els.push(...throughResistor(p, r, top, { kind: "diode", name: `${p}.diode`, anode: top, cathode: pos, model: load.diode }));
       els.push(
         { kind: "capacitor", name: `${p}.Cres`, a: pos, b: bottom, capacitance: cres },
         { kind: "diode", name: `${p}.led`, anode: pos, cathode: bottom, model: load.led },
@@ -154,13 +147,12 @@ function bridgeElements(load: Extract<TokenLoad, { kind: "bridge" }>, p: string,
     { kind: "diode", name: `${p}.d4`, anode: neg, cathode: bottom, model: load.diode },
   ];
   const r = seriesResistanceOf(load.seriesResistance, "load.seriesResistance");
-  if (r > 0) {
-    els.push(
-      { kind: "resistor", name: `${p}.Rs`, a: pos, b: `${p}.mid`, resistance: r },
-      { kind: "diode", name: `${p}.led`, anode: `${p}.mid`, cathode: neg, model: load.led },
-    );
-  } else {
-    els.push({ kind: "diode", name: `${p}.led`, anode: pos, cathode: neg, model: load.led });
-  }
+  els.push(...throughResistor(p, r, pos, { kind: "diode", name: `${p}.led`, anode: pos, cathode: neg, model: load.led }));
   return els;
+}
+
+/** A diode from `from`, through the series resistor `<p>.Rs` and node `<p>.mid` when r > 0. */
+function throughResistor(p: string, r: number, from: string, diode: Extract<CircuitElement, { kind: "diode" }>): CircuitElement[] {
+  if (!(r > 0)) return [diode];
+  return [{ kind: "resistor", name: `${p}.Rs`, a: from, b: `${p}.mid`, resistance: r }, { ...diode, anode: `${p}.mid` }];
 }
