@@ -2,6 +2,7 @@
 import type { Notebook } from "../lib/mod.ts";
 import * as coaxialLoops from "./coaxialLoops.ts";
 import * as driveWaveforms from "./driveWaveforms.ts";
+import * as gameBoard from "./gameBoard.ts";
 import * as pebbleDrawer from "./pebbleDrawer.ts";
 import * as resinPendant from "./resinPendant.ts";
 import * as throughTheBooks from "./throughTheBooks.ts";
@@ -27,5 +28,6 @@ export const scenarios: Record<string, Scenario> = {
   "resin-pendant": { title: "Which frequency, colour and tilt suit a pendant with a tiny coil?", run: resinPendant.run },
   "token-batch": { title: "Will two hundred hand-wound tokens all light, and what does 99 % take?", run: tokenBatch.run },
   "drive-waveforms": { title: "What does the single switch from 5 V really do to the coil, and how far does the fast model hold?", run: driveWaveforms.run },
+  "game-board": { title: "How do four tiles light 24 pieces anywhere on a 40 cm board?", run: gameBoard.run },
   "unknown-driver": { title: "How far will a new pebble reach on a pad whose driver nobody documented?", run: unknownDriver.run },
 };

@@ -22,6 +22,7 @@ export const MAIN_FIGURE: Readonly<Record<string, string>> = {
   "resin-pendant": "tilt",
   "token-batch": "batch-histogram",
   "drive-waveforms": "fast-model-trust",
+  "game-board": "board-coverage",
 };
 
 /** The scenario whose report.html the screenshot shows. */
