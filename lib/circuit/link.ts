@@ -97,6 +97,53 @@ function evaluatorFor(a: Coil, b: Coil): CouplingEvaluator {
   return ev;
 }
 
+/**
+ * Mutual inductances of coil pairs in the same orientation (flat tokens on a board, tiles of an
+ * array) depend only on their offset: one evaluation serves every pair of the same two coil
+ * objects at that offset (a board's squares repeat offsets — 24 pieces on an 8 × 8 board have
+ * at most 225 token–token offsets against 276 pairs, and any later arrangement reuses them).
+ * Keyed per evaluator by the orientation and the offset rounded to {@link OFFSET_QUANTUM}; the
+ * value is the evaluator's at the first pose pair met (a neighbouring offset within the quantum
+ * changes M by about quantum/distance, 1e-8 relative at 1 cm — far inside MUTUAL_RTOL). Two
+ * copies of one coil give M(Δ) = M(−Δ) (reciprocity), so the offset's sign is folded. At most
+ * OFFSET_CACHE_SIZE offsets per pair (oldest dropped first).
+ */
+const OFFSET_QUANTUM = 1e-10;
+const OFFSET_CACHE_SIZE = 4096;
+interface PairMutual {
+  readonly mutual: number;
+  readonly warnings: readonly string[];
+}
+const offsetCache = new WeakMap<CouplingEvaluator, Map<string, PairMutual>>();
+function pairMutual(a: Coil, pa: Pose, b: Coil, pb: Pose): PairMutual {
+  const ev = evaluatorFor(a, b);
+  const axA = pa.axis ?? Z_AXIS;
+  const axB = pb.axis ?? Z_AXIS;
+  if (axA[0] !== axB[0] || axA[1] !== axB[1] || axA[2] !== axB[2] || (pa.spin ?? 0) !== (pb.spin ?? 0)) {
+    return ev.evaluate(pa, pb);
+  }
+  let q = [pb.position[0] - pa.position[0], pb.position[1] - pa.position[1], pb.position[2] - pa.position[2]].map((d) => Math.round(d / OFFSET_QUANTUM));
+  if (a === b) {
+    // fold the sign: M(Δ) = M(−Δ) for two copies of one coil
+    const first = q.find((v) => v !== 0) ?? 0;
+    if (first < 0) q = q.map((v) => -v);
+  }
+  const key = `${axA[0]},${axA[1]},${axA[2]},${pa.spin ?? 0}|${q[0]},${q[1]},${q[2]}`;
+  let cache = offsetCache.get(ev);
+  if (cache === undefined) {
+    cache = new Map();
+    offsetCache.set(ev, cache);
+  }
+  const hit = cache.get(key);
+  if (hit !== undefined) return hit;
+  const r = ev.evaluate(pa, pb);
+  const made: PairMutual = { mutual: r.mutual, warnings: r.warnings };
+  if (cache.size >= OFFSET_CACHE_SIZE) cache.delete(cache.keys().next().value!);
+  cache.set(key, made);
+  return made;
+}
+const Z_AXIS = [0, 0, 1] as const;
+
 /** L, R and the self-resonance of a coil at a frequency and temperature, memoised per coil object. */
 function coilNumbers(coil: Coil, f: number, temperature: number | undefined, warnings: string[], label: string): CoilNumbers {
   const key = `${f}|${temperature ?? ""}`;
@@ -315,9 +362,9 @@ function mutualMatrix(coils: readonly { coil: Coil; pose: Pose; label: string; p
     for (let j = i + 1; j < n; j++) {
       const a = coils[i]!;
       const b = coils[j]!;
-      let m: { mutual: number; warnings: readonly string[] };
+      let m: PairMutual;
       try {
-        m = evaluatorFor(a.coil, b.coil).evaluate(a.pose, b.pose);
+        m = pairMutual(a.coil, a.pose, b.coil, b.pose);
       } catch (e) {
         if (!(e instanceof TanklightInputError)) throw e;
         throw new TanklightInputError(

@@ -30,8 +30,17 @@ describe("tokenLoadModel", () => {
         }),
         { numRuns: 200 },
       );
-      // outside the table: the exact function
-      expect(tab.conductance(15)).toBe(fundamentalConductance(load, 15));
+      // the geometric tail above the grid (12 V … 12.3 kV): Hermite on ln G against ln A, 32 nodes
+      // per doubling; independent method: the cycle integral again
+      fc.assert(
+        fc.property(fc.double({ min: 12, max: 12000, noNaN: true }), (a) => {
+          expectRelClose(tab.conductance(a), fundamentalConductance(load, a), 1e-7, `G(${a}) in the tail`);
+        }),
+        { numRuns: 200 },
+      );
+      // outside both: the exact function
+      expect(tab.conductance(2e4)).toBe(fundamentalConductance(load, 2e4));
+      expect(tab.conductance(0.001)).toBe(fundamentalConductance(load, 0.001));
     }
   });
 

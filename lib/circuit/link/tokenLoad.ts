@@ -7,7 +7,10 @@
  * the describing function G(A) = I₁/A on a uniform amplitude grid and interpolates ln G by cubic
  * Hermite with the exact slopes from dI₁/dA (fundamentalCurrentSlope) — a few tens of nanoseconds per
  * call instead of a cycle integral; the relative error is checked in tests/circuit/linkLoads.test.ts.
- * Amplitudes outside the table fall back to the exact functions.
+ * Above the uniform grid a geometric tail (32 nodes per doubling, ten doublings: up to 1024 times
+ * the grid's top) interpolates ln G against ln A the same way — the first amplitudes a nonlinear
+ * solve tries are those of an unclamped tank, often tens to hundreds of volts. Amplitudes outside
+ * both fall back to the exact functions.
  */
 import { averageLoadCurrent, checkLoad, fundamentalConductance, fundamentalCurrentSlope } from "../loads/describingFunction.ts";
 import type { TokenLoad } from "../loads/types.ts";
@@ -35,7 +38,13 @@ interface Table {
   readonly avg: Float64Array[];
   readonly labels: string[];
   readonly brightness: Float64Array[];
+  /** the geometric tail: node i at top·e^{i·du}; ln G, d ln G/d ln A, LED currents and brightness there */
+  readonly tail: { readonly du: number; readonly n: number; readonly y: Float64Array; readonly d: Float64Array; readonly avg: Float64Array[]; readonly brightness: Float64Array[] };
 }
+
+/** Tail nodes per doubling of the amplitude, and doublings. */
+const TAIL_PER_DOUBLING = 32;
+const TAIL_DOUBLINGS = 10;
 
 const tables = new WeakMap<TokenLoad, Map<string, Table>>();
 
@@ -57,13 +66,58 @@ function buildTable(load: TokenLoad, maxA: number, h: number): Table {
       brightness[k]![j] = e.relativeBrightness;
     });
   }
-  return { h, n, y, d, avg, labels: first.map((e) => e.label), brightness };
+  const top = n * h;
+  const du = Math.LN2 / TAIL_PER_DOUBLING;
+  const nt = TAIL_PER_DOUBLING * TAIL_DOUBLINGS + 1;
+  const ty = new Float64Array(nt);
+  const td = new Float64Array(nt);
+  const tavg = first.map(() => new Float64Array(nt));
+  const tbr = first.map(() => new Float64Array(nt));
+  for (let i = 0; i < nt; i++) {
+    const a = top * Math.exp(i * du);
+    const i1 = fundamentalConductance(load, a) * a;
+    ty[i] = Math.log(i1 / a);
+    td[i] = (a * fundamentalCurrentSlope(load, a)) / i1 - 1; // d ln G / d ln A
+    averageLoadCurrent(load, a).forEach((e, k) => {
+      tavg[k]![i] = e.current;
+      tbr[k]![i] = e.relativeBrightness;
+    });
+  }
+  return { h, n, y, d, avg, labels: first.map((e) => e.label), brightness, tail: { du, n: nt, y: ty, d: td, avg: tavg, brightness: tbr } };
+}
+
+/** Node j and the fraction s along [j, j+1] of an amplitude in the tail (u = ln(a/top)/du). */
+function tailPosition(tab: Table, top: number, a: number): { j: number; s: number } {
+  const u = Math.log(a / top) / tab.tail.du;
+  const j = Math.min(Math.floor(u), tab.tail.n - 2);
+  return { j, s: u - j };
+}
+
+/** Cubic Hermite on [j, j+1] from values y and slopes d (per unit of the grid variable × step). */
+function hermite(y: Float64Array, d: Float64Array, j: number, s: number, step: number): number {
+  const s2 = s * s;
+  const s3 = s2 * s;
+  return (2 * s3 - 3 * s2 + 1) * y[j]! + (s3 - 2 * s2 + s) * step * d[j]! + (-2 * s3 + 3 * s2) * y[j + 1]! + (s3 - s2) * step * d[j + 1]!;
+}
+
+/** LED currents interpolated between nodes j and j+1: log-linear where both are positive, else linear. */
+function ledsAt(labels: readonly string[], avg: readonly Float64Array[], bright: readonly Float64Array[], j: number, s: number): { label: string; current: number; relativeBrightness: number }[] {
+  return labels.map((lab, k) => {
+    const p = avg[k]!;
+    const b = bright[k]!;
+    const c0 = p[j]!;
+    const c1 = p[j + 1]!;
+    const cur = c0 > 0 && c1 > 0 ? Math.exp((1 - s) * Math.log(c0) + s * Math.log(c1)) : (1 - s) * c0 + s * c1;
+    const scale = c0 !== 0 ? b[j]! / c0 : 0;
+    return { label: lab, current: cur, relativeBrightness: scale !== 0 ? cur * scale : (1 - s) * b[j]! + s * b[j + 1]! };
+  });
 }
 
 /**
  * The link solver's view of a token load.
  * @param load a {@link TokenLoad} (LED, anti-parallel pair, bridge, reservoir, resistor).
- * @param options `tabulate` (default false), `maxAmplitude` (V, default 12), `step` (V, default 5 mV).
+ * @param options `tabulate` (default false), `maxAmplitude` (V, default 12: top of the uniform
+ *   grid; the geometric tail reaches 1024 times it), `step` (V, default 5 mV).
  * @returns a {@link LinkLoadModel}; a resistor is marked linear (no Newton unknown).
  * @example tokenLoadModel({ kind: "resistor", resistance: 1000 }).conductance(3) // → 0.001
  */
@@ -97,10 +151,15 @@ export function tokenLoadModel(load: TokenLoad, options: TokenLoadModelOptions =
   }
   const tab = t;
   const top = tab.n * h;
+  const tailTop = top * Math.exp((tab.tail.n - 1) * tab.tail.du);
   return {
     label,
     token: load,
     conductance(a: number): number {
+      if (a >= top && a < tailTop) {
+        const { j, s } = tailPosition(tab, top, a);
+        return Math.exp(hermite(tab.tail.y, tab.tail.d, j, s, tab.tail.du));
+      }
       if (!(a >= h && a < top)) return fundamentalConductance(load, a);
       // cubic Hermite on ln G between nodes j and j+1 (node j at (j+1)·h)
       const u = a / h - 1;
@@ -115,6 +174,10 @@ export function tokenLoadModel(load: TokenLoad, options: TokenLoadModelOptions =
       return Math.exp(lnG);
     },
     ledCurrents(a: number) {
+      if (a >= top && a < tailTop) {
+        const { j, s } = tailPosition(tab, top, a);
+        return ledsAt(tab.labels, tab.tail.avg, tab.tail.brightness, j, s);
+      }
       if (!(a >= h && a < top)) return exact.ledCurrents!(a);
       const u = a / h - 1;
       const j = Math.min(Math.floor(u), tab.n - 2);
