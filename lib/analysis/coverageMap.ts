@@ -57,6 +57,11 @@ export interface CoverageOptions {
   readonly onProgress?: ProgressCallback;
   /** a supply to judge the highest supply current of the map against */
   readonly supply?: SupplyInput;
+  /**
+   * steady-state model, as solveLink's `model`: "fundamental" (default, the describing function),
+   * "auto" or "harmonic" (harmonic balance: far slower per point; docs/methods/harmonic-balance.md)
+   */
+  readonly model?: "fundamental" | "harmonic" | "auto";
 }
 
 /** A dead zone: a polygon in a plane, or an interval on a line. */
@@ -113,6 +118,7 @@ export interface CoverageMap {
 const OptionsSchema = z.object({
   resolution: length().optional(),
   litThreshold: z.number().positive().finite().optional(),
+  model: z.enum(["fundamental", "harmonic", "auto"]).optional(),
 });
 
 /** Floor of the margin ln(I/I_lit) (I → 0): −ln 10⁶. */
@@ -133,11 +139,11 @@ const MARGIN_FLOOR = 1e-6;
  */
 export async function coverageMap(system: LinkSystem, region: RegionInput, options: CoverageOptions = {}): Promise<CoverageMap> {
   const where = "coverageMap";
-  const opts = parseInput(OptionsSchema, { resolution: options.resolution, litThreshold: options.litThreshold }, where);
+  const opts = parseInput(OptionsSchema, { resolution: options.resolution, litThreshold: options.litThreshold, model: options.model }, where);
   checkThreads(options.threads, where);
   const grid = parseRegion(region, where);
   const axesList = tokenAxes(options.orientation, where);
-  const spec = probeSpec(system, { token: options.token ?? 0, others: options.others ?? false, axes: axesList, ...(opts.litThreshold !== undefined ? { litThreshold: opts.litThreshold } : {}) }, where);
+  const spec = probeSpec(system, { token: options.token ?? 0, others: options.others ?? false, axes: axesList, ...(opts.litThreshold !== undefined ? { litThreshold: opts.litThreshold } : {}), ...(opts.model !== undefined ? { model: opts.model } : {}) }, where);
   const evaluator = await pointEvaluator(spec, options.threads, () => makeProbe(spec));
   try {
     return await runMap(grid.axes, grid.fixed, spec.litThreshold, axesList, spec.supplyVoltage, evaluator, options, opts.resolution, where);

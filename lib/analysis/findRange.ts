@@ -38,6 +38,8 @@ export interface RangeOptions {
   readonly orientation?: OrientationInput;
   /** lit threshold, A (default 0.5 mA, trade practice) */
   readonly litThreshold?: number;
+  /** steady-state model, as solveLink's `model` (default "fundamental"; "auto" and "harmonic" run harmonic balance where needed) */
+  readonly model?: "fundamental" | "harmonic" | "auto";
   /** how far to look, m or "300 mm" (default 0.3 m) */
   readonly max?: number | string;
   /** scan step, m (default max/150) */
@@ -79,6 +81,7 @@ const Opts = z.object({
   max: length().optional(),
   step: length().optional(),
   resolution: length().optional(),
+  model: z.enum(["fundamental", "harmonic", "auto"]).optional(),
 });
 
 /**
@@ -94,7 +97,7 @@ const Opts = z.object({
 export function findRange(system: LinkSystem, direction: RayInput, options: RangeOptions = {}): RangeResult {
   const where = "findRange";
   const ray = parseInput(RayInput, direction, where);
-  const o = parseInput(Opts, { max: options.max, step: options.step, resolution: options.resolution }, where);
+  const o = parseInput(Opts, { max: options.max, step: options.step, resolution: options.resolution, model: options.model }, where);
   const max = o.max ?? 0.3;
   const step = o.step ?? max / 150;
   const resolution = o.resolution ?? 1e-4;
@@ -102,7 +105,7 @@ export function findRange(system: LinkSystem, direction: RayInput, options: Rang
     throw new TanklightInputError([{ path: "step", message: "need resolution ≤ step ≤ max", value: { max, step, resolution }, expected: "e.g. max 0.3 m, step 2 mm, resolution 0.1 mm" }], where);
   }
   const axes = tokenAxes(options.orientation, where);
-  const spec = probeSpec(system, { token: options.token ?? 0, others: options.others ?? false, axes, ...(options.litThreshold !== undefined ? { litThreshold: options.litThreshold } : {}) }, where);
+  const spec = probeSpec(system, { token: options.token ?? 0, others: options.others ?? false, axes, ...(options.litThreshold !== undefined ? { litThreshold: options.litThreshold } : {}), ...(o.model !== undefined ? { model: o.model } : {}) }, where);
   return rangeWith(makeProbe(spec), (ray.from as Vec3 | undefined) ?? [0, 0, 0], ray.along as Vec3, max, step, resolution);
 }
 

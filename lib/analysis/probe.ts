@@ -14,6 +14,7 @@ import { couplingEvaluator, type CouplingEvaluator } from "../em/couplingEvaluat
 import type { Coil, Pose, Vec3 } from "../em/types.ts";
 import type { LinkLoadModel, LinkNetwork, ReceiverNetwork } from "../circuit/link/network.ts";
 import { solveLinkNetwork } from "../circuit/link/solveNetwork.ts";
+import { solveLinkModel } from "../circuit/harmonic/modelChoice.ts";
 import { tokenLoadModel } from "../circuit/link/tokenLoad.ts";
 import { decodeLoad, type LoadData } from "./loadCodec.ts";
 
@@ -44,7 +45,12 @@ export interface ProbeSpec {
   readonly litThreshold: number;
   /** the drive's DC supply voltage, V (undefined for sine and current-regulated drives) */
   readonly supplyVoltage?: number;
+  /** the steady-state model, as solveLink's `model` (default "fundamental": the describing function) */
+  readonly model?: LinkModelName;
 }
+
+/** solveLink's model names (docs/methods/harmonic-balance.md). */
+export type LinkModelName = "fundamental" | "harmonic" | "auto";
 
 /** What the probe returns for a batch of positions (one entry per position; mutual per position × axis). */
 export interface ProbeValues {
@@ -124,7 +130,9 @@ export function makeProbe(spec: ProbeSpec & { readonly models?: readonly LinkLoa
       L[t]![o.receiver + 1] = m;
     });
     void n;
-    const r = solveLinkNetwork({ frequency: spec.frequency, inductance: L, transmitter: spec.transmitter, receivers }, options);
+    const net = { frequency: spec.frequency, inductance: L, transmitter: spec.transmitter, receivers };
+    // the same solver solveLink uses for that model, so a map agrees with solveLink point by point
+    const r = spec.model === undefined || spec.model === "fundamental" ? solveLinkNetwork(net, options) : solveLinkModel(net, { ...options, model: spec.model });
     let current = Infinity;
     for (const led of r.receivers[spec.token]!.leds) current = Math.min(current, led.averageCurrent);
     const supply = spec.supplyVoltage !== undefined ? Math.max(0, r.power.input) / spec.supplyVoltage : 0;

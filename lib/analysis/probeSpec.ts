@@ -12,7 +12,7 @@ import { parseInput } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import { encodeLoad, isTokenLoad } from "./loadCodec.ts";
 import { supplyVoltageOf } from "./supplyBudget.ts";
-import type { ProbeSpec } from "./probe.ts";
+import type { LinkModelName, ProbeSpec } from "./probe.ts";
 
 const ORIGIN: Pose = { position: [0, 0, 0] };
 
@@ -26,6 +26,8 @@ export interface ProbeOptions {
   readonly axes?: readonly Vec3[];
   /** lit threshold, A (default DEFAULT_LIT_THRESHOLD, 0.5 mA) */
   readonly litThreshold?: number;
+  /** steady-state model as solveLink's `model` (default "fundamental") */
+  readonly model?: LinkModelName;
 }
 
 /**
@@ -81,6 +83,7 @@ export function probeSpec(system: LinkSystem, options: ProbeOptions, where: stri
     axes: options.axes ?? [[0, 0, 1]],
     litThreshold: options.litThreshold ?? DEFAULT_LIT_THRESHOLD,
     ...(supplyVoltage !== undefined ? { supplyVoltage } : {}),
+    ...(options.model !== undefined && options.model !== "fundamental" ? { model: options.model } : {}),
     models,
   };
 }

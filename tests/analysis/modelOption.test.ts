@@ -1,0 +1,52 @@
+/**
+ * The analysis layer honours solveLink's `model`: coverageMap and findRange with model "auto"
+ * agree point by point with solveLink(system, { model: "auto" }) (independent method: the full
+ * link build at that pose), and differ from the describing function where it is outside its
+ * validity — a red + InGaN green pair back to back (demo token, tests/analysis/fixtures.ts coils),
+ * whose green LED the describing function leaves dark (docs/validation-transient.md).
+ */
+import { describe, expect, it } from "vitest";
+import { coverageMap, findRange, ledPreset, solveLink, type LinkSystem } from "../../lib/mod.ts";
+import { expectOutside } from "../helpers/validation.ts";
+import { drawer, LID } from "./fixtures.ts";
+
+/** The drawer with a bi-colour token (red + InGaN green back to back) at a position; supply in V. */
+function bicolour(position: readonly [number, number, number] = [0, 0, LID], supply = 5): LinkSystem {
+  const sys = drawer({ position, supply }) as { receivers: readonly Record<string, unknown>[] } & LinkSystem;
+  return { ...sys, receivers: [{ ...sys.receivers[0]!, load: { kind: "antiParallel", a: ledPreset("red"), b: ledPreset("green-ingan") } }] } as LinkSystem;
+}
+const dimmest = (sys: LinkSystem, model: "fundamental" | "auto"): number => Math.max(0, Math.min(...solveLink(sys, { model }).receivers[0]!.leds.map((l) => l.averageCurrent)));
+
+describe("analysis with a steady-state model", () => {
+  it("coverageMap with model 'auto' agrees with solveLink({ model: 'auto' }) point by point", async () => {
+    const xs = [0, 0.03, 0.06];
+    const map = await coverageMap(bicolour(), { x: { from: 0, to: 0.06, points: 3 }, y: 0, z: LID }, { refine: false, model: "auto" });
+    const fundamental = await coverageMap(bicolour(), { x: { from: 0, to: 0.06, points: 3 }, y: 0, z: LID }, { refine: false });
+    let differs = false;
+    xs.forEach((x, i) => {
+      const direct = dimmest(bicolour([x, 0, LID]), "auto");
+      // the same M and the same solver: measured 3e-15
+      expectOutside({ quantity: `coverageMap (model auto) dimmest-LED current at x = ${x} m`, source: "independent method: solveLink(system, { model: 'auto' }) at that pose", ours: map.ledCurrent[i]!, reference: direct, rtol: 1e-9, atol: 1e-12, unit: "A" });
+      if (Math.abs(fundamental.ledCurrent[i]! - map.ledCurrent[i]!) > 0.1 * map.ledCurrent[i]!) differs = true;
+    });
+    // the fundamental map is a different model: it misses the green LED somewhere on this line
+    expect(differs).toBe(true);
+  });
+
+  it("findRange with model 'auto' brackets the edge that solveLink({ model: 'auto' }) sees; the describing function finds none", () => {
+    // at 12 V harmonic balance lights the green LED (1.3 mA at the lid, 0.41 mA at 40 mm); the
+    // describing function leaves it at nanoamperes everywhere
+    const ray = { from: [0, 0, LID] as [number, number, number], along: [0, 0, 1] as [number, number, number] };
+    const opts = { max: 0.06, step: 0.005, resolution: 5e-4 };
+    const r = findRange(bicolour(undefined, 12), ray, { ...opts, model: "auto" });
+    expect(r.range).toBeGreaterThan(0.01);
+    const th = r.litThreshold;
+    expect(dimmest(bicolour([0, 0, LID + r.range - 1e-3], 12), "auto")).toBeGreaterThanOrEqual(th);
+    expect(dimmest(bicolour([0, 0, LID + r.range + 1e-3], 12), "auto")).toBeLessThan(th);
+    expect(findRange(bicolour(undefined, 12), ray, opts).range).toBe(0);
+  });
+
+  it("rejects an unknown model naming the field", async () => {
+    await expect(coverageMap(bicolour(), { x: 0, y: 0, z: LID }, { model: "exact" as never })).rejects.toThrow(/model/);
+  });
+});
