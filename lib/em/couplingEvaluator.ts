@@ -193,10 +193,13 @@ const IDENTITY = Float64Array.of(1, 0, 0, 0, 1, 0, 0, 0, 1);
 
 /**
  * poseFrame without its allocations for the commonest pose, `{ position: [x, y, z] }` of finite
- * numbers (axis +z, no spin); every other pose, and every bad one, goes through poseFrame.
+ * numbers with no axis or the axis [0, 0, a > 0] and no spin (poseFrame's rotation is then the
+ * identity exactly); every other pose, and every bad one, goes through poseFrame.
  */
 function frameOf(pose: Pose, field: string): Frame {
-  if (pose !== null && typeof pose === "object" && pose.axis === undefined && pose.spin === undefined) {
+  if (pose !== null && typeof pose === "object" && (pose.spin === undefined || pose.spin === 0)) {
+    const a = pose.axis;
+    if (a !== undefined && !(Array.isArray(a) && a.length === 3 && a[0] === 0 && a[1] === 0 && a[2] > 0 && a[2] < Infinity)) return poseFrame(pose, "couplingEvaluator", field);
     const p = pose.position;
     if (Array.isArray(p) && p.length === 3 && Number.isFinite(p[0]) && Number.isFinite(p[1]) && Number.isFinite(p[2])) return { R: IDENTITY, position: p };
   }
