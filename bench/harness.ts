@@ -86,6 +86,46 @@ export function runWorkload(w: Workload): BenchResult {
   };
 }
 
+/**
+ * Runs a workload and its reference (`against`) in alternating rounds — reference, workload,
+ * reference, … — after warming both, so that a change of machine load during the run falls on
+ * both alike; the ratio printed for the pair comes from these rounds. Used where the reference
+ * is quick (a round ≈ 10 ms); a slow reference (seconds per call) is compared with its own earlier run.
+ */
+export function runInterleaved(ref: Workload, w: Workload): { ref: BenchResult; result: BenchResult } {
+  const warmEnd = performance.now() + 1000 * Math.max(ref.warmup ?? 0.2, w.warmup ?? 0.2);
+  do { sink.value = ref.fn(); sink.value = w.fn(); } while (performance.now() < warmEnd);
+  const calibrate = (fn: () => unknown): number => {
+    let batch = 1;
+    for (;;) {
+      const t0 = performance.now();
+      for (let i = 0; i < batch; i++) sink.value = fn();
+      const dt = (performance.now() - t0) / 1000;
+      if (dt > 0.01 || batch > 1e8) return batch;
+      batch *= dt < 1e-4 ? 16 : 2;
+    }
+  };
+  const bRef = calibrate(ref.fn), bW = calibrate(w.fn);
+  const tRef: number[] = [], tW: number[] = [];
+  const minRounds = Math.max(ref.rounds ?? 7, w.rounds ?? 7);
+  const minTime = Math.max(ref.minTime ?? 0.5, w.minTime ?? 0.5);
+  const start = performance.now();
+  const round = (fn: () => unknown, batch: number, into: number[]): void => {
+    const t0 = performance.now();
+    for (let i = 0; i < batch; i++) sink.value = fn();
+    into.push((performance.now() - t0) / 1000 / batch);
+  };
+  while (tW.length < minRounds || ((performance.now() - start) / 1000 < 2 * minTime && tW.length < 200)) {
+    round(ref.fn, bRef, tRef);
+    round(w.fn, bW, tW);
+  }
+  const summary = (x: Workload, t: number[]): BenchResult => {
+    t.sort((a, b) => a - b);
+    return { name: x.name, size: x.size, min: t[0]!, median: t[Math.floor(t.length / 2)]!, ...(x.target === undefined ? {} : { target: x.target }), rounds: t.length };
+  };
+  return { ref: summary(ref, tRef), result: summary(w, tW) };
+}
+
 /** Formats seconds with an SI prefix, e.g. 4.2e-8 → "42.0 ns". */
 export function formatSeconds(s: number): string {
   if (s >= 1) return `${s.toFixed(3)} s`;
