@@ -144,6 +144,16 @@ function pairMutual(a: Coil, pa: Pose, b: Coil, pb: Pose): PairMutual {
 }
 const Z_AXIS = [0, 0, 1] as const;
 
+/** Same position, axis and spin (defaults applied). */
+function samePose(a: Pose, b: Pose): boolean {
+  const ax = a.axis ?? Z_AXIS;
+  const bx = b.axis ?? Z_AXIS;
+  return (
+    a.position[0] === b.position[0] && a.position[1] === b.position[1] && a.position[2] === b.position[2] &&
+    ax[0] === bx[0] && ax[1] === bx[1] && ax[2] === bx[2] && (a.spin ?? 0) === (b.spin ?? 0)
+  );
+}
+
 /** L, R and the self-resonance of a coil at a frequency and temperature, memoised per coil object. */
 function coilNumbers(coil: Coil, f: number, temperature: number | undefined, warnings: string[], label: string): CoilNumbers {
   const key = `${f}|${temperature ?? ""}`;
@@ -362,6 +372,13 @@ function mutualMatrix(coils: readonly { coil: Coil; pose: Pose; label: string; p
     for (let j = i + 1; j < n; j++) {
       const a = coils[i]!;
       const b = coils[j]!;
+      // two copies of one coil at one pose (two tokens in one place); concentric coils of different sizes are legal
+      if (a.coil === b.coil && samePose(a.pose, b.pose)) {
+        throw new TanklightInputError(
+          [{ path: `${a.path}.pose`, message: `${a.label} and ${b.label} (${b.path}) are the same coil at the same pose: two of them cannot occupy one place; move one of them`, value: a.pose.position, expected: `a pose apart from ${b.path}.pose` }],
+          "solveLink",
+        );
+      }
       let m: PairMutual;
       try {
         m = pairMutual(a.coil, a.pose, b.coil, b.pose);

@@ -333,6 +333,6 @@ describe("solveLink input checks (issue 11)", () => {
   it("two tokens at one pose: an error naming both receivers", () => {
     const two = { ...one, receivers: [ledToken([0, 0, 0.02]), { ...ledToken([0, 0, 0.02]), label: "second" }] };
     expect(() => solveLink(two)).toThrow(TanklightInputError);
-    expect(() => solveLink(two)).toThrow(/receivers\[0\].*receiver 1 and second \(receivers\[1\]\) overlap/);
+    expect(() => solveLink(two)).toThrow(/receivers\[0\].*receiver 1 and second \(receivers\[1\]\) are the same coil at the same pose/);
   });
 });
