@@ -11,8 +11,12 @@
  * coefficients γ_d of the sampled conductance g(θ) = di/dv (γ_{h−k} + γ_{h+k} for Re V_k,
  * j(γ_{h−k} − γ_{h+k}) for Im V_k, 2γ_h for V₀), plus a rank-one term for loads with a
  * constant internal state (the reservoir). It is the exact derivative of the discrete residual,
- * so Newton converges quadratically near the solution. Steps are damped by backtracking on the
- * residual norm (Armijo); λ scales the sources for continuation (source stepping).
+ * so Newton converges quadratically near the solution. Steps are damped by backtracking with
+ * Deuflhard's natural monotonicity test (Deuflhard, *Newton Methods for Nonlinear Problems*,
+ * Springer 2004, §3.3: the simplified Newton correction J⁻¹r at the trial point, with the
+ * iteration's own factors, must shrink by 1 − α/4), which is affine invariant: a residual-norm
+ * (Armijo) test took steps of 1/128 for ≈ 35 iterations on a hard-clipping InGaN LED, whose
+ * exponential current dominates ‖r‖; λ scales the sources for continuation (source stepping).
  */
 import { luFactor, luSolve } from "../../math/lu.ts";
 import type { HarmonicPorts } from "./ports.ts";
@@ -52,6 +56,7 @@ export class HarmonicSystem {
   private readonly wdz: Float64Array;
   private readonly wzt: Float64Array;
   private readonly wrt: Float64Array;
+  private readonly wnat: Float64Array;
   newtonIterations = 0;
   factorizations = 0;
 
@@ -84,6 +89,7 @@ export class HarmonicSystem {
     this.wdz = new Float64Array(P * B);
     this.wzt = new Float64Array(P * B);
     this.wrt = new Float64Array(P * B);
+    this.wnat = new Float64Array(P * B);
   }
 
   /** Number of real unknowns. */
@@ -249,11 +255,19 @@ export class HarmonicSystem {
       let accepted = false;
       let stepMax = 0;
       for (let j = 0; j < Z; j++) stepMax = Math.max(stepMax, Math.abs(dz[j]!));
+      const dzNorm = l2(dz);
+      const nat = this.wnat;
       for (let tries = 0; tries < 30; tries++) {
         for (let j = 0; j < Z; j++) zt[j] = z[j]! + alpha * dz[j]!;
         const resT = this.residual(zt, lambda, rt);
         const normT = l2(rt);
-        if (Number.isFinite(normT) && normT <= (1 - 1e-4 * alpha) * norm) {
+        // Deuflhard's natural monotonicity test: the simplified Newton correction at the trial
+        // point, with this iteration's factors, must shrink (affine invariant, unlike ‖r‖);
+        // the residual itself only has to stay finite
+        nat.set(rt);
+        luSolve(this.jac, Z, this.piv, nat);
+        const natNorm = l2(nat);
+        if (Number.isFinite(normT) && Number.isFinite(natNorm) && natNorm <= (1 - alpha / 4) * dzNorm) {
           z.set(zt);
           r.set(rt);
           res = resT;
