@@ -154,6 +154,16 @@ function samePose(a: Pose, b: Pose): boolean {
   );
 }
 
+/**
+ * Whether two coils are the same winding: one object, or two built alike (the same filaments,
+ * conductor and shape), as two tokens made by one builder call each are.
+ */
+function sameWinding(a: Coil, b: Coil): boolean {
+  if (a === b) return true;
+  if (a.turns !== b.turns || a.filaments.length !== b.filaments.length) return false;
+  return JSON.stringify([a.filaments, a.conductor, a.shape ?? null]) === JSON.stringify([b.filaments, b.conductor, b.shape ?? null]);
+}
+
 /** L, R and the self-resonance of a coil at a frequency and temperature, memoised per coil object. */
 function coilNumbers(coil: Coil, f: number, temperature: number | undefined, warnings: string[], label: string): CoilNumbers {
   const key = `${f}|${temperature ?? ""}`;
@@ -373,7 +383,7 @@ function mutualMatrix(coils: readonly { coil: Coil; pose: Pose; label: string; p
       const a = coils[i]!;
       const b = coils[j]!;
       // two copies of one coil at one pose (two tokens in one place); concentric coils of different sizes are legal
-      if (a.coil === b.coil && samePose(a.pose, b.pose)) {
+      if (samePose(a.pose, b.pose) && sameWinding(a.coil, b.coil)) {
         throw new TanklightInputError(
           [{ path: `${a.path}.pose`, message: `${a.label} and ${b.label} (${b.path}) are the same coil at the same pose: two of them cannot occupy one place; move one of them`, value: a.pose.position, expected: `a pose apart from ${b.path}.pose` }],
           "solveLink",
