@@ -18,6 +18,9 @@ import { magneticField } from "../../lib/em/magneticField.ts";
 import { ledPreset } from "../../lib/circuit/loads/ledPresets.ts";
 import { TanklightInputError } from "../../lib/errors.ts";
 import type { Vec3 } from "../../lib/em/types.ts";
+import { summarizeLink } from "../../lib/circuit/link/summary.ts";
+import { supplyBudget } from "../../lib/analysis/supplyBudget.ts";
+import { designFromLink } from "../../lib/safety/design.ts";
 
 // demo parts (not a published design): two 40 mm, 5-turn pads side by side and a 30-turn token
 const pad = roundCoil({ meanRadius: "40 mm", turns: 5, wire: { diameter: "0.8 mm", insulation: "0.03 mm" } });
@@ -312,6 +315,33 @@ describe("solveLink with several transmitters", () => {
     expect(unused.warnings.join(" ")).toMatch(/'bus' feeds no transmitter/);
     expect(unused.errorBand.relative).toBe(Infinity);
     expect(unused.model).toBe("fundamental");
+  });
+});
+
+describe("several transmitters downstream: summary, supply budget, safety design", () => {
+  const sys: LinkSystem = {
+    frequency: "200 kHz",
+    sharedDrives: [{ name: "bus", drive: { kind: "fullBridge", supply: "12 V", onResistance: "0.1 Ω" }, wiring: "series" }],
+    transmitters: [padTx(left, { label: "A", drive: { kind: "halfBridge", supply: "12 V" } }), padTx(right, { label: "B", drive: "bus" }), padTx([0, 0.09, 0], { label: "C", drive: "bus", phase: "180 deg" })],
+    receivers: [ledToken([0, 0.02, 0.02])],
+  };
+  const r = solveLink(sys);
+  it("the summary lists every transmitter and the shared drive", () => {
+    const text = summarizeLink(r).text;
+    for (const l of ["A · coil current", "B · coil current", "C · coil current", "drive bus (series: B, C)"]) expect(text).toContain(l);
+  });
+  it("the supply budget sums every drive's draw from the one supply voltage", () => {
+    const b = supplyBudget(sys, { kind: "bench", voltage: "12 V", current: "10 A" });
+    expectRelClose(b.current, r.drives.reduce((a, d) => a + Math.max(0, d.inputPower), 0) / 12, 1e-12, "Σ P_in/V_DD");
+    expect(r.drives.map((d) => d.label)).toEqual(["A", "bus"]);
+    const mixed = { ...sys, transmitters: [padTx(left, { drive: { kind: "halfBridge", supply: "5 V" } }), ...sys.transmitters!.slice(1)] };
+    expect(() => supplyBudget(mixed, { kind: "bench", voltage: "12 V", current: "10 A" })).toThrow(/sharedDrives\[0\]\.drive.*one supply budget needs one supply voltage/);
+  });
+  it("designFromLink carries each transmitter's solved current and its (shared) drive's switch voltage", () => {
+    const d = designFromLink(sys, r, { surfaceHeight: 0.004 });
+    expect(d.transmitters.map((t) => t.label)).toEqual(["A", "B", "C"]);
+    d.transmitters.forEach((t, i) => expect(t.current).toBe(r.transmitters[i]!.coilCurrent));
+    expect(d.transmitters.map((t) => t.switchPeakVoltage)).toEqual([12, 12, 12]);
   });
 });
 

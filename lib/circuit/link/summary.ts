@@ -41,19 +41,27 @@ export function summarizeLink(result: LinkResult, digits = 3): LinkSummary {
     rows.push({ quantity, value, unit, text: formatQuantity(value, unit, digits) });
   };
   add("drive frequency", result.frequency, "Hz");
-  const t = result.transmitter;
-  const tx = t.label;
-  add(`${tx} · coil current (peak)`, t.coilCurrent, "A");
-  add(`${tx} · coil current (RMS)`, t.coilCurrentRms, "A");
-  add(`${tx} · coil voltage (peak)`, t.coilVoltage, "V");
-  add(`${tx} · capacitor voltage (peak)`, t.capacitorVoltage, "V");
-  add(`${tx} · capacitor current (peak)`, t.capacitorCurrent, "A");
-  add(`${tx} · source current (peak)`, t.sourceCurrent, "A");
-  add(`${tx} · reflected resistance`, t.reflectedImpedance.re, "Ω");
-  add(`${tx} · reflected reactance`, t.reflectedImpedance.im, "Ω");
-  add(`${tx} · coil loss`, t.coilLoss, "W");
-  add(`${tx} · capacitor loss`, t.capacitorLoss, "W");
-  add(`${tx} · driver loss`, t.driverLoss, "W");
+  for (const t of result.transmitters ?? [result.transmitter]) {
+    const tx = t.label;
+    add(`${tx} · coil current (peak)`, t.coilCurrent, "A");
+    add(`${tx} · coil current (RMS)`, t.coilCurrentRms, "A");
+    add(`${tx} · coil voltage (peak)`, t.coilVoltage, "V");
+    add(`${tx} · capacitor voltage (peak)`, t.capacitorVoltage, "V");
+    add(`${tx} · capacitor current (peak)`, t.capacitorCurrent, "A");
+    add(`${tx} · source current (peak)`, t.sourceCurrent, "A");
+    add(`${tx} · reflected resistance`, t.reflectedImpedance.re, "Ω");
+    add(`${tx} · reflected reactance`, t.reflectedImpedance.im, "Ω");
+    add(`${tx} · coil loss`, t.coilLoss, "W");
+    add(`${tx} · capacitor loss`, t.capacitorLoss, "W");
+    add(`${tx} · driver loss`, t.driverLoss, "W");
+  }
+  // shared drives (an own drive's numbers are its transmitter's above)
+  for (const d of (result.drives ?? []).filter((x) => x.wiring !== "own")) {
+    add(`drive ${d.label} (${d.wiring}: ${d.transmitters.join(", ")}) · source current (peak)`, d.sourceCurrent, "A");
+    add(`drive ${d.label} · terminal voltage (peak)`, d.sourceVoltage, "V");
+    add(`drive ${d.label} · input power`, d.inputPower, "W");
+    add(`drive ${d.label} · driver loss`, d.driverLoss, "W");
+  }
   const verdicts: string[] = [];
   for (const r of result.receivers) {
     const n = r.label;
