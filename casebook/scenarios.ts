@@ -3,6 +3,7 @@ import type { Notebook } from "../lib/mod.ts";
 import * as coaxialLoops from "./coaxialLoops.ts";
 import * as driveWaveforms from "./driveWaveforms.ts";
 import * as gameBoard from "./gameBoard.ts";
+import * as museumShelf from "./museumShelf.ts";
 import * as pebbleDrawer from "./pebbleDrawer.ts";
 import * as resinPendant from "./resinPendant.ts";
 import * as throughTheBooks from "./throughTheBooks.ts";
@@ -25,6 +26,7 @@ export const scenarios: Record<string, Scenario> = {
   "pebble-drawer": { title: "Will every pebble glow, wherever a visitor puts it?", run: pebbleDrawer.run },
   "coaxial-loops": { title: "How fast does coupling fall with height?", run: coaxialLoops.run },
   "through-the-books": { title: "Will a bookmark glow on top of a stack of books?", run: throughTheBooks.run },
+  "museum-shelf": { title: "Do replica coins and gems glow anywhere on a 60 cm shelf, and what does it take?", run: museumShelf.run },
   "resin-pendant": { title: "Which frequency, colour and tilt suit a pendant with a tiny coil?", run: resinPendant.run },
   "token-batch": { title: "Will two hundred hand-wound tokens all light, and what does 99 % take?", run: tokenBatch.run },
   "drive-waveforms": { title: "What does the single switch from 5 V really do to the coil, and how far does the fast model hold?", run: driveWaveforms.run },

@@ -23,6 +23,7 @@ export const MAIN_FIGURE: Readonly<Record<string, string>> = {
   "token-batch": "batch-histogram",
   "drive-waveforms": "fast-model-trust",
   "game-board": "board-coverage",
+  "museum-shelf": "shelf-array",
 };
 
 /** The scenario whose report.html the screenshot shows. */
