@@ -444,16 +444,21 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
       finish(mC, eC, "lumped", minA2);
       return mC;
     }
-    // level A, full tensor form: both coils at order 1
-    sumRings(rx1, t1, undefined);
-    const mA = sums.m;
-    const errA1 = sums.err + errA;
-    if (sums.minA2 < minA2) minA2 = sums.minA2;
-    const eRx = Math.abs(mA - m01) * lRx;
-    const eTx = Math.abs(mA - m10) * lTx;
-    if (lumpOk && accept(eRx + eTx + errA1, mA)) {
-      finish(mA, eRx + eTx + errA1, "lumped", minA2);
-      return mA;
+    // level A, full tensor form: both coils at order 1 — tried only where each coil's own
+    // lumping estimate (which the full form keeps) is within twice the tolerance; elsewhere the
+    // combination value stands in for it below (overlap answer, level B's lumped transmitter)
+    let mA = mC, eTx = dTx * lTx, errA1 = errA;
+    if (lumpOk && dRx * lRx + dTx * lTx + errA <= 2 * Math.max(relTol * Math.abs(mC), absTol)) {
+      sumRings(rx1, t1, undefined);
+      mA = sums.m;
+      errA1 = sums.err + errA;
+      if (sums.minA2 < minA2) minA2 = sums.minA2;
+      const eRx = Math.abs(mA - m01) * lRx;
+      eTx = Math.abs(mA - m10) * lTx;
+      if (accept(eRx + eTx + errA1, mA)) {
+        finish(mA, eRx + eTx + errA1, "lumped", minA2);
+        return mA;
+      }
     }
     // overlapping conductors (a receiver turn closer to a transmitter turn than the wire radii
     // sum): no filament value is physical, so the level-A value with its warning, at once — the
@@ -513,7 +518,7 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
     // level B: the receiver refined group by group, against the transmitter's order-1 lumps when
     // their own error estimate is well inside the tolerance and they are far from every ring
     // (a neighbouring token: only the receiver's lumping fails), else against every turn
-    const txLumped = D > GUARD * t0.extent && eTx <= TX_LUMP_SHARE * Math.max(relTol * Math.abs(mA), absTol);
+    const txLumped = lumpable && D > GUARD * t0.extent && eTx <= TX_LUMP_SHARE * Math.max(relTol * Math.abs(mA), absTol);
     const tB = txLumped ? t1 : tExact;
     const eB = txLumped ? eTx : 0;
     const far = (a2: number, extent: number): boolean => Math.sqrt(a2) > GUARD * (txLumped ? Math.max(extent, t0.extent) : extent);
