@@ -9,7 +9,7 @@
  * then solves the coupled-circuit matrix with each load's describing function.
  */
 import { z } from "zod";
-import { current, nearestKey, parseInput, voltage } from "../schema.ts";
+import { current, nearestKey, parseArgs, parseInput, voltage } from "../schema.ts";
 import { TanklightInputError, assertNever } from "../errors.ts";
 import { couplingEvaluator, type CouplingEvaluator } from "../em/couplingEvaluator.ts";
 import { selfInductance } from "../em/selfInductance.ts";
@@ -277,6 +277,9 @@ const ORIGIN: Pose = { position: [0, 0, 0] };
  * @example linkNetwork(system).coupling[0].length // → 2 (transmitter and one receiver)
  */
 export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoads?: boolean } = {}): LinkNetworkBuild {
+  if (typeof system !== "object" || system === null || Array.isArray(system)) {
+    throw new TanklightInputError([{ path: "system", message: "expected a link system { frequency, transmitter or transmitters, receivers }", value: system }], "solveLink");
+  }
   const s = parseInput(LinkSystemInput, system, "solveLink");
   const f = s.frequency;
   const w = 2 * Math.PI * f;
@@ -434,6 +437,8 @@ export const SolveLinkOptionsInput = z.strictObject({
   samples: z.number().int().min(4).max(65_536).optional(),
 });
 
+const SolveLinkArgs = z.strictObject({ system: z.unknown(), options: SolveLinkOptionsInput.optional() });
+
 /**
  * Steady state of a driven transmitter and any number of tokens at the drive frequency: every
  * element's current and voltage (peak and RMS), capacitor voltages, power delivered and lost in
@@ -484,7 +489,8 @@ export const SolveLinkOptionsInput = z.strictObject({
  *     .receivers[0].leds[0].lit // → true
  */
 export function solveLink(system: LinkSystem, options: SolveLinkOptions = {}): LinkSolution {
-  const opts = parseInput(SolveLinkOptionsInput, options, "solveLink") as SolveLinkOptions;
+  // options checked as the named second argument, so a message says "options…"
+  const opts = (parseArgs(SolveLinkArgs, [system, options], "solveLink").options ?? {}) as SolveLinkOptions;
   const built = linkNetwork(system, { tabulateLoads: opts.tabulateLoads ?? false });
   const net = built.network;
   const txs = networkTransmitters(net);

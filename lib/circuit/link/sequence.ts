@@ -14,7 +14,7 @@
  */
 import { z } from "zod";
 import { TanklightInputError } from "../../errors.ts";
-import { frequency, nearestKey, parseInput } from "../../schema.ts";
+import { frequency, nearestKey, parseArgs } from "../../schema.ts";
 import { linkNetwork, SolveLinkOptionsInput, type LinkSystem } from "../link.ts";
 import { DEFAULT_LIT_THRESHOLD, networkTransmitters, type LinkNetwork, type LinkOptions, type TransmitterNetwork } from "./network.ts";
 import type { LinkResult } from "./result.ts";
@@ -44,6 +44,8 @@ export const LinkSequenceInput = z.strictObject({
   idle: z.enum(["open", "held"]).optional(),
   repetitionRate: frequency().optional(),
 });
+const SequenceArgs = z.strictObject({ system: z.unknown(), sequence: LinkSequenceInput, options: SolveLinkOptionsInput.optional() });
+
 /** What solveLinkSequence accepts as its sequence. */
 export type LinkSequence = z.input<typeof LinkSequenceInput>;
 
@@ -135,12 +137,20 @@ const PERCEPTION =
  */
 export function solveLinkSequence(system: LinkSystem, sequence: LinkSequence, options: LinkOptions & { readonly tabulateLoads?: boolean } = {}): LinkSequenceResult {
   const where = "solveLinkSequence";
-  const seq = parseInput(LinkSequenceInput, sequence, where);
-  const opts = parseInput(SolveLinkOptionsInput, options, where);
+  const args = parseArgs(SequenceArgs, [system, sequence, options], where);
+  const seq = args.sequence;
+  const opts = args.options ?? {};
   if (opts.model === "harmonic") {
     throw new TanklightInputError([{ path: "options.model", message: "a sequence is solved with the describing function ('fundamental')", value: opts.model }], where);
   }
-  const built = linkNetwork(system, { tabulateLoads: opts.tabulateLoads ?? false });
+  // the system's errors under this function's name, its paths under "system"
+  let built: ReturnType<typeof linkNetwork>;
+  try {
+    built = linkNetwork(system, { tabulateLoads: opts.tabulateLoads ?? false });
+  } catch (e) {
+    if (!(e instanceof TanklightInputError)) throw e;
+    throw new TanklightInputError(e.issues.map((i) => ({ ...i, path: i.path === "system" || i.path === "" ? "system" : `system.${i.path}` })), where);
+  }
   const net = built.network;
   const txs = networkTransmitters(net);
   const labels = txs.map((t, i) => t.label ?? `transmitter ${i + 1}`);
