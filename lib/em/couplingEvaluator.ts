@@ -5,7 +5,7 @@
  */
 import { TanklightInputError } from "../errors.ts";
 import { aOverRhoKernel } from "./loopKernel.ts";
-import { filamentMutual, lastFilamentDistance2 } from "./filamentMutual.ts";
+import { filamentMutual, filamentProbe } from "./filamentMutual.ts";
 import { conductorRadius } from "./mutualInductance.ts";
 import { selfInductance } from "./selfInductance.ts";
 import { poseFrame, type Frame } from "./frames.ts";
@@ -360,17 +360,17 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
     let sum = 0;
     let sumAbs = 0;
     let min2 = Infinity;
+    const probe = filamentProbe();
     for (const g of rx.filaments) {
       const gw: Filament = g.kind === "circle"
         ? { kind: "circle", center: map(g.center), axis: dir(g.axis), radius: g.radius, turns: g.turns }
         : { kind: "path", points: g.points.map(map), turns: g.turns };
       for (const f of tx.filaments) {
         const ft: Filament = f.kind === "circle" ? { ...f, axis: dir0(f.axis) } : f;
-        const mp = f.turns * g.turns * filamentMutual(ft, gw, pairTol);
+        const mp = f.turns * g.turns * filamentMutual(ft, gw, pairTol, probe);
         sum += mp;
         sumAbs += Math.abs(mp);
-        const d2 = lastFilamentDistance2();
-        if (d2 < min2) min2 = d2;
+        if (probe.minDistance2 < min2) min2 = probe.minDistance2;
       }
     }
     finish(sum, pairTol * sumAbs, "exact", min2);

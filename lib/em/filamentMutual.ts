@@ -2,26 +2,36 @@
  * Per-turn mutual inductance of any two filaments (circle or polygon path) in world
  * coordinates: the dispatcher shared by mutualInductance, selfInductance and couplingEvaluator.
  */
-import { circleMutualCore, circleMutualState, LOOP_MUTUAL_TOL } from "./loopMutual.ts";
+import { circleMutualCore, circleMutualStats, LOOP_MUTUAL_TOL } from "./loopMutual.ts";
 import { circleSegmentMutual, polygonMutualState, segmentMutual } from "./polygonMutual.ts";
 import type { Filament } from "./types.ts";
 
-let lastMinDistance2 = Infinity;
+/** What {@link filamentMutual} reports besides the value (an out-parameter owned by the caller). */
+export interface FilamentProbe {
+  /** smallest squared distance found between the two filaments (node to wire), m² */
+  minDistance2: number;
+}
+
+/** A fresh {@link FilamentProbe}. */
+export function filamentProbe(): FilamentProbe {
+  return { minDistance2: Infinity };
+}
 
 /**
  * Per-turn mutual inductance of two filaments in world coordinates, H (circle–circle:
  * loopMutualInductance's line integral; circle–path and path–path: segment sums, polygonMutual).
- * Sets the smallest node-to-wire distance² seen (read with {@link lastFilamentDistance2}).
+ * Writes the smallest node-to-wire distance² seen to `probe` when one is given.
  */
-export function filamentMutual(a: Filament, b: Filament, tol = LOOP_MUTUAL_TOL): number {
+export function filamentMutual(a: Filament, b: Filament, tol = LOOP_MUTUAL_TOL, probe?: FilamentProbe): number {
   if (a.kind === "circle" && b.kind === "circle") {
     // integrate over the smaller circle (fewer nodes needed for the same accuracy)
     const [p, q] = a.radius >= b.radius ? [a, b] : [b, a];
+    const stats = circleMutualStats();
     const m = circleMutualCore(
       p.center[0], p.center[1], p.center[2], p.axis[0], p.axis[1], p.axis[2], p.radius,
-      q.center[0], q.center[1], q.center[2], q.axis[0], q.axis[1], q.axis[2], q.radius, tol,
+      q.center[0], q.center[1], q.center[2], q.axis[0], q.axis[1], q.axis[2], q.radius, tol, stats,
     );
-    lastMinDistance2 = circleMutualState.minDistance2;
+    if (probe) probe.minDistance2 = stats.minDistance2;
     return m;
   }
   if (a.kind === "path" && b.kind === "path") {
@@ -34,7 +44,7 @@ export function filamentMutual(a: Filament, b: Filament, tol = LOOP_MUTUAL_TOL):
         if (polygonMutualState.minDistance2 < min) min = polygonMutualState.minDistance2;
       }
     }
-    lastMinDistance2 = min;
+    if (probe) probe.minDistance2 = min;
     return sum;
   }
   const c = (a.kind === "circle" ? a : b) as Extract<Filament, { kind: "circle" }>;
@@ -45,12 +55,7 @@ export function filamentMutual(a: Filament, b: Filament, tol = LOOP_MUTUAL_TOL):
     sum += circleSegmentMutual(c.center, c.axis, c.radius, path.points[j]!, path.points[(j + 1) % path.points.length]!, tol);
     if (polygonMutualState.minDistance2 < min) min = polygonMutualState.minDistance2;
   }
-  lastMinDistance2 = min;
+  if (probe) probe.minDistance2 = min;
   return sum;
-}
-
-/** The smallest squared node-to-wire distance of the last {@link filamentMutual} call, m². */
-export function lastFilamentDistance2(): number {
-  return lastMinDistance2;
 }
 

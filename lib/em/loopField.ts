@@ -12,8 +12,6 @@ export interface LoopFieldValue {
   readonly bZ: number;
 }
 
-const scratch = new Float64Array(4);
-
 /**
  * Flux density of a circular filament of radius a carrying current I, at cylindrical
  * coordinates (ρ, z) of its own frame (loop in the plane z = 0, centred on the axis, current
@@ -47,6 +45,7 @@ export function loopField(radius: number, current: number, rho: number, z: numbe
       "loopField",
     );
   }
+  const scratch = new Float64Array(4);
   if (!loopKernel(radius, rho, z, scratch, true)) {
     throw new TanklightInputError(
       [{ path: "rho, z", message: "the point lies on the filament, where its field is infinite", value: [rho, z], expected: "a point off the wire" }],

@@ -1,14 +1,15 @@
 /**
  * Flux density of a coil in any pose at a world point.
  */
-import { TanklightInputError, requireFinite } from "../errors.ts";
+import { TanklightInputError } from "../errors.ts";
+import { current as currentQ, vec3 } from "../schema.ts";
+import { checkCoil, checkPose, parseArg, quantityArg } from "./inputs.ts";
 import { K_B_RHO, K_B_Z, loopKernel } from "./loopKernel.ts";
 import { addSegmentField } from "./segmentField.ts";
 import { poseFrame, rotate, toCoil } from "./frames.ts";
 import type { Coil, Pose, Vec3 } from "./types.ts";
 
-const ks = new Float64Array(4);
-const acc = new Float64Array(3);
+const POINT = vec3();
 
 /**
  * Flux density B of a coil carrying current I, placed by a pose, at a world point:
@@ -18,23 +19,24 @@ const acc = new Float64Array(3);
  *
  * @param coil a Coil (filaments in its own frame, axis +z).
  * @param pose `{ position, axis?, spin? }` — the coil's +z maps to `axis`.
- * @param current coil current I, A, finite (peak if you use it as an amplitude).
+ * @param current coil current I, A, finite (peak if you use it as an amplitude); "150 mA" accepted.
  * @param point world point, m.
  * @returns B as a world vector, T. Throws TanklightInputError for a point on a filament.
  * @example magneticField(coil, { position: [0, 0, 0] }, 1, [0, 0, 0]) // single 40 mm turn → [0, 0, 1.5708e-5]
  * @see loopField, mutualInductance
  */
-export function magneticField(coil: Coil, pose: Pose, current: number, point: Vec3): Vec3 {
-  requireFinite(current, "current", "A", "magneticField");
-  if (!Array.isArray(point) || point.length !== 3 || !point.every(Number.isFinite)) {
-    throw new TanklightInputError([{ path: "point", message: "must be three finite coordinates in m", value: point }], "magneticField");
-  }
-  if (!coil || !Array.isArray(coil.filaments)) {
-    throw new TanklightInputError([{ path: "coil.filaments", message: "must be a Coil with filaments", value: coil }], "magneticField");
-  }
-  const frame = poseFrame(pose, "magneticField", "pose");
-  const p = toCoil(frame, point);
-  acc[0] = 0; acc[1] = 0; acc[2] = 0;
+export function magneticField(coil: Coil, pose: Pose, current: number | string, point: Vec3): Vec3 {
+  const where = "magneticField";
+  checkCoil(coil, "coil", where);
+  const I = quantityArg(currentQ(), () => true, current, "current", where);
+  const x: Vec3 =
+    Array.isArray(point) && point.length === 3 && point.every((c) => typeof c === "number" && Number.isFinite(c))
+      ? (point as Vec3)
+      : parseArg(POINT, point, "point", where);
+  const frame = poseFrame(checkPose(pose, "pose", where), where, "pose");
+  const p = toCoil(frame, x);
+  const ks = new Float64Array(4);
+  const acc = new Float64Array(3);
   for (const f of coil.filaments) {
     if (f.kind === "circle") {
       const n = f.axis;
@@ -44,7 +46,7 @@ export function magneticField(coil: Coil, pose: Pose, current: number, point: Ve
       const z = wx * nx + wy * ny + wz * nz;
       const rx = wx - z * nx, ry = wy - z * ny, rz = wz - z * nz;
       const rho = Math.sqrt(rx * rx + ry * ry + rz * rz);
-      if (!loopKernel(f.radius, rho, z, ks, true)) onWire(point);
+      if (!loopKernel(f.radius, rho, z, ks, true)) onWire(x);
       const bz = ks[K_B_Z]! * f.turns;
       const br = rho > 0 ? (ks[K_B_RHO]! * f.turns) / rho : 0;
       acc[0] = acc[0]! + bz * nx + br * rx;
@@ -55,11 +57,11 @@ export function magneticField(coil: Coil, pose: Pose, current: number, point: Ve
       for (let i = 0; i < pts.length; i++) {
         const a = pts[i]!;
         const b = pts[(i + 1) % pts.length]!;
-        if (!addSegmentField(a[0], a[1], a[2], b[0], b[1], b[2], f.turns, p[0], p[1], p[2], acc)) onWire(point);
+        if (!addSegmentField(a[0], a[1], a[2], b[0], b[1], b[2], f.turns, p[0], p[1], p[2], acc)) onWire(x);
       }
     }
   }
-  const B = rotate(frame.R, [acc[0]! * current, acc[1]! * current, acc[2]! * current]);
+  const B = rotate(frame.R, [acc[0]! * I, acc[1]! * I, acc[2]! * I]);
   return [B[0] + 0, B[1] + 0, B[2] + 0];
 }
 

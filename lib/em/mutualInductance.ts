@@ -2,9 +2,10 @@
  * Mutual inductance and coupling factor of two coils in any poses (filament method).
  */
 import { TanklightInputError } from "../errors.ts";
-import { filamentMutual, lastFilamentDistance2 } from "./filamentMutual.ts";
+import { checkCoil, checkPose } from "./inputs.ts";
+import { filamentMutual, filamentProbe } from "./filamentMutual.ts";
 import { poseFrame, filamentToWorld } from "./frames.ts";
-import { selfInductance } from "./selfInductance.ts";
+import { selfInductanceCore } from "./selfInductance.ts";
 import type { Coil, Conductor, Pose } from "./types.ts";
 
 /** Outcome of {@link mutualInductanceChecked}. */
@@ -29,12 +30,6 @@ export function conductorRadius(c: Conductor): number {
   }
 }
 
-function checkCoil(c: Coil, field: string, where: string): void {
-  if (!c || !Array.isArray(c.filaments) || c.filaments.length === 0 || !c.conductor) {
-    throw new TanklightInputError([{ path: field, message: "must be a Coil with at least one filament and a conductor", value: c }], where);
-  }
-}
-
 /**
  * Mutual inductance with the overlap check reported instead of thrown: the filament sum
  * M = Σᵢ Σⱼ Nᵢ Nⱼ M(fᵢ, fⱼ) over the filaments of a (turn weights Nᵢ) and of b, both carried
@@ -47,20 +42,35 @@ function checkCoil(c: Coil, field: string, where: string): void {
  * @example mutualInductanceChecked(tx, { position: [0, 0, 0] }, token, { position: [0, 0, 0.03] }).value // → 5.5375e-7 (H; tx, token of docs/methods/em.md)
  */
 export function mutualInductanceChecked(a: Coil, poseA: Pose, b: Coil, poseB: Pose): MutualInductanceResult {
-  const where = "mutualInductance";
+  return mutualInductanceAt(a, poseA, b, poseB, "mutualInductance");
+}
+
+/** {@link mutualInductanceChecked} with its inputs checked under the public function's name `where`. */
+function mutualInductanceAt(a: Coil, poseA: Pose, b: Coil, poseB: Pose, where: string): MutualInductanceResult {
   checkCoil(a, "a", where);
   checkCoil(b, "b", where);
-  const fa = poseFrame(poseA, where, "poseA");
-  const fb = poseFrame(poseB, where, "poseB");
+  const fa = poseFrame(checkPose(poseA, "poseA", where), where, "poseA");
+  const fb = poseFrame(checkPose(poseB, "poseB", where), where, "poseB");
   const wa = a.filaments.map((f) => filamentToWorld(f, fa));
   const wb = b.filaments.map((f) => filamentToWorld(f, fb));
   let sum = 0;
   let min2 = Infinity;
-  for (const x of wa) {
-    for (const y of wb) {
-      sum += x.turns * y.turns * filamentMutual(x, y);
-      const d2 = lastFilamentDistance2();
-      if (d2 < min2) min2 = d2;
+  const probe = filamentProbe();
+  for (let i = 0; i < wa.length; i++) {
+    for (let j = 0; j < wb.length; j++) {
+      const x = wa[i]!, y = wb[j]!;
+      let m: number;
+      try {
+        m = filamentMutual(x, y, undefined, probe);
+      } catch (e) {
+        if (!(e instanceof TanklightInputError)) throw e;
+        throw new TanklightInputError(
+          [{ path: "poseA, poseB", message: `filament ${i} of a and filament ${j} of b intersect at these poses: their filament mutual inductance is not defined`, value: { poseA, poseB } }],
+          where,
+        );
+      }
+      sum += x.turns * y.turns * m;
+      if (probe.minDistance2 < min2) min2 = probe.minDistance2;
     }
   }
   const minDistance = Math.sqrt(min2);
@@ -92,9 +102,13 @@ export function mutualInductanceChecked(a: Coil, poseA: Pose, b: Coil, poseB: Po
  * @see couplingFactor, couplingEvaluator (fast sweeps)
  */
 export function mutualInductance(a: Coil, poseA: Pose, b: Coil, poseB: Pose): number {
-  const r = mutualInductanceChecked(a, poseA, b, poseB);
+  return mutualInductanceStrict(a, poseA, b, poseB, "mutualInductance");
+}
+
+function mutualInductanceStrict(a: Coil, poseA: Pose, b: Coil, poseB: Pose, where: string): number {
+  const r = mutualInductanceAt(a, poseA, b, poseB, where);
   if (r.warnings.length > 0) {
-    throw new TanklightInputError([{ path: "poseA, poseB", message: r.warnings[0]!, value: { poseA, poseB } }], "mutualInductance");
+    throw new TanklightInputError([{ path: "poseA, poseB", message: r.warnings[0]!, value: { poseA, poseB } }], where);
   }
   return r.value;
 }
@@ -106,6 +120,6 @@ export function mutualInductance(a: Coil, poseA: Pose, b: Coil, poseB: Pose): nu
  * @example couplingFactor(tx, { position: [0, 0, 0] }, token, { position: [0.02, 0, 0.03], axis: [Math.sin(π/6), 0, Math.cos(π/6)] }) // → 0.0151 (docs/methods/em.md)
  */
 export function couplingFactor(a: Coil, poseA: Pose, b: Coil, poseB: Pose): number {
-  const M = mutualInductance(a, poseA, b, poseB);
-  return M / Math.sqrt(selfInductance(a) * selfInductance(b));
+  const M = mutualInductanceStrict(a, poseA, b, poseB, "couplingFactor");
+  return M / Math.sqrt(selfInductanceCore(a) * selfInductanceCore(b));
 }

@@ -20,7 +20,8 @@
 import { EPS0 } from "../constants.ts";
 import { TanklightInputError } from "../errors.ts";
 import { ellipticK } from "../math/elliptic.ts";
-import { selfInductance } from "./selfInductance.ts";
+import { selfInductanceDetailCore } from "./selfInductance.ts";
+import { checkCoil } from "./inputs.ts";
 import type { Coil, Conductor } from "./types.ts";
 
 /** Medhurst 1947 table: ℓ/D → H (pF per cm of diameter). docs/references.md, status "checked". */
@@ -137,6 +138,7 @@ function medhurst(length: number, diameter: number, warnings: string[]): number 
  * @example selfCapacitanceDetail(solenoid({ radius: 0.02, turns: 40, pitch: 1e-3, wire: { diameter: 0.5e-3 } })).value // → 1.84e-12 (ℓ/D = 1: 0.46 pF/cm × 4 cm)
  */
 export function selfCapacitanceDetail(coil: Coil): SelfCapacitanceDetail {
+  checkCoil(coil, "coil", "selfCapacitance");
   const warnings: string[] = [];
   const s = coil.shape;
   const { d, od } = conductorSizes(coil.conductor);
@@ -224,10 +226,11 @@ const srfCache = new WeakMap<Coil, number>();
 export function selfResonance(coil: Coil): number {
   const cached = srfCache.get(coil);
   if (cached !== undefined) return cached;
+  checkCoil(coil, "coil", "selfResonance");
   const C = selfCapacitance(coil);
-  const L0 = selfInductance(coil);
+  const L0 = selfInductanceDetailCore(coil, undefined).value;
   const f0 = 1 / (2 * Math.PI * Math.sqrt(L0 * C));
-  const L1 = selfInductance(coil, { frequency: f0 });
+  const L1 = selfInductanceDetailCore(coil, f0).value;
   const f1 = 1 / (2 * Math.PI * Math.sqrt(L1 * C));
   srfCache.set(coil, f1);
   return f1;

@@ -2,7 +2,11 @@
  * Self-inductance of a coil by the filament method with each turn's own-wire term.
  */
 import { MU0 } from "../constants.ts";
+import { z } from "zod";
 import { TanklightInputError } from "../errors.ts";
+import { frequency } from "../schema.ts";
+import { checkCoil, optionsArg } from "./inputs.ts";
+import { skinDepthCore } from "./losses/skinDepth.ts";
 import { material, resistivityAt } from "./materials.ts";
 import { filamentMutual } from "./filamentMutual.ts";
 import { segmentMutual, straightWireSelfInductance } from "./polygonMutual.ts";
@@ -10,9 +14,12 @@ import type { Coil, Conductor, Filament } from "./types.ts";
 
 /** Options of {@link selfInductance}. */
 export interface SelfInductanceOptions {
-  /** frequency, Hz, ≥ 0; sets the internal-inductance factor Y from the skin depth (default: DC, Y = 1/4) */
-  readonly frequency?: number;
+  /** frequency, Hz, ≥ 0 ("200 kHz" accepted); sets the internal-inductance factor Y from the skin depth (default: DC, Y = 1/4) */
+  readonly frequency?: number | string;
 }
+
+/** The options of {@link selfInductance} as a strict schema (unknown keys name the nearest valid one). */
+const SelfInductanceOptionsSpec = z.strictObject({ frequency: frequency({ nonNegative: true }).optional() });
 
 /** Breakdown returned by {@link selfInductanceDetail}. */
 export interface SelfInductanceDetail {
@@ -56,8 +63,7 @@ export function ownWireGeometry(c: Conductor, frequency?: number): { r: number; 
     case "round": {
       const r = c.diameter / 2;
       if (frequency === undefined || frequency === 0) return { r, Y: 0.25 };
-      const rho = resistivityAt(material(c.material));
-      const delta = Math.sqrt(rho / (Math.PI * frequency * MU0));
+      const delta = skinDepthCore(frequency, resistivityAt(material(c.material)));
       return { r, Y: internalInductanceFactor(r / delta) };
     }
     case "litz":
@@ -98,13 +104,16 @@ export function ownTurnInductance(f: Filament, r: number, Y: number): number {
  */
 export function selfInductanceDetail(coil: Coil, options: SelfInductanceOptions = {}): SelfInductanceDetail {
   const where = "selfInductance";
-  if (!coil || !Array.isArray(coil.filaments) || coil.filaments.length === 0 || !coil.conductor) {
-    throw new TanklightInputError([{ path: "coil", message: "must be a Coil with at least one filament and a conductor", value: coil }], where);
-  }
-  const f = options.frequency;
-  if (f !== undefined && !(Number.isFinite(f) && f >= 0)) {
-    throw new TanklightInputError([{ path: "options.frequency", message: "must be a finite frequency ≥ 0 Hz", value: f, expected: "≥ 0 Hz" }], where);
-  }
+  checkCoil(coil, "coil", where);
+  const o = optionsArg(SelfInductanceOptionsSpec, options, "options", where);
+  return selfInductanceDetailCore(coil, o.frequency);
+}
+
+/**
+ * {@link selfInductanceDetail} on a checked coil and an SI frequency (or undefined: DC) — the
+ * unchecked core for callers that validated already.
+ */
+export function selfInductanceDetailCore(coil: Coil, f: number | undefined): SelfInductanceDetail {
   const { r, Y } = ownWireGeometry(coil.conductor, f);
   const warnings: string[] = [];
   const fil = coil.filaments.map((x) =>
@@ -125,7 +134,14 @@ export function selfInductanceDetail(coil: Coil, options: SelfInductanceOptions 
   let mutual = 0;
   for (let i = 0; i < fil.length; i++) {
     for (let j = i + 1; j < fil.length; j++) {
-      mutual += 2 * fil[i]!.turns * fil[j]!.turns * filamentMutual(fil[i]!, fil[j]!);
+      let m: number;
+      try {
+        m = filamentMutual(fil[i]!, fil[j]!);
+      } catch (e) {
+        if (!(e instanceof TanklightInputError)) throw e;
+        throw new TanklightInputError([{ path: "coil.filaments", message: `filaments ${i} and ${j} intersect: the filament method needs turns that do not touch`, value: `filaments ${i}, ${j}` }], "selfInductance");
+      }
+      mutual += 2 * fil[i]!.turns * fil[j]!.turns * m;
     }
   }
   return { value: own + mutual, ownTerms: own, mutualTerms: mutual, Y, warnings: [...new Set(warnings)] };
@@ -152,4 +168,9 @@ function normalise(v: readonly [number, number, number]): [number, number, numbe
  */
 export function selfInductance(coil: Coil, options: SelfInductanceOptions = {}): number {
   return selfInductanceDetail(coil, options).value;
+}
+
+/** Low-frequency self-inductance of a checked coil, H — the unchecked core of {@link selfInductance}. */
+export function selfInductanceCore(coil: Coil): number {
+  return selfInductanceDetailCore(coil, undefined).value;
 }

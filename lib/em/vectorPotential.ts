@@ -5,8 +5,6 @@
 import { TanklightInputError, requireFinite, requirePositive } from "../errors.ts";
 import { K_A_OVER_RHO, loopKernel } from "./loopKernel.ts";
 
-const scratch = new Float64Array(4);
-
 /**
  * Azimuthal vector potential A_φ of a circular filament in its own frame (Coulomb gauge):
  *
@@ -27,6 +25,7 @@ export function loopVectorPotential(radius: number, current: number, rho: number
   if (!(Number.isFinite(rho) && rho >= 0)) {
     throw new TanklightInputError([{ path: "rho", message: "must be a finite distance ≥ 0 m", value: rho }], "loopVectorPotential");
   }
+  const scratch = new Float64Array(4);
   if (!loopKernel(radius, rho, z, scratch, false)) {
     throw new TanklightInputError([{ path: "rho, z", message: "the point lies on the filament", value: [rho, z] }], "loopVectorPotential");
   }

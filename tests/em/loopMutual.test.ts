@@ -133,7 +133,7 @@ describe("loopMutualInductance", () => {
     // independent method: Neumann at 4000×4000 is too slow here; reciprocity exercises both branches
     expectRelClose(loopMutualInductance(a, b), loopMutualInductance(b, a), 1e-9, "near-pass reciprocity");
     expect(() => loopMutualInductance(a, a)).toThrow(/intersect|coincide/);
-    expect(() => loopMutualInductance(a, { ...a, axis: [0, 0, 0] })).toThrowErrorMatchingInlineSnapshot(`[TanklightInputError: loopMutualInductance: b.axis: must be a finite non-zero vector, got [0,0,0]]`);
+    expect(() => loopMutualInductance(a, { ...a, axis: [0, 0, 0] })).toThrowErrorMatchingInlineSnapshot(`[TanklightInputError: loopMutualInductance: b.axis: must be a non-zero direction, got [0,0,0]]`);
     // b passes through a point of a's wire: no filament mutual inductance
     expect(() => loopMutualInductance(a, { center: [0.012, 0, 0], axis: [0, 1, 0], radius: 0.002 })).toThrow(/intersect/);
     // linked pair (b encircles a's wire, 2 mm clearance): finite and equal to the Neumann double integral

@@ -83,7 +83,7 @@ describe("magneticField", () => {
   });
 
   it("has the documented signature", () => {
-    expectTypeOf(magneticField).parameters.toEqualTypeOf<[Coil, Pose, number, Vec3]>();
+    expectTypeOf(magneticField).parameters.toEqualTypeOf<[Coil, Pose, number | string, Vec3]>();
     expectTypeOf(magneticField).returns.toEqualTypeOf<Vec3>();
   });
 });

@@ -72,7 +72,7 @@ describe("selfInductance", () => {
   });
 
   it("rejects bad input and warns on thin-wire violations", () => {
-    expect(() => selfInductance(singleTurn(0.01, 1e-3), { frequency: -1 })).toThrowErrorMatchingInlineSnapshot(`[TanklightInputError: selfInductance: options.frequency: must be a finite frequency ≥ 0 Hz, got -1]`);
+    expect(() => selfInductance(singleTurn(0.01, 1e-3), { frequency: -1 })).toThrowErrorMatchingInlineSnapshot(`[TanklightInputError: selfInductance: options.frequency: must be ≥ 0 Hz, got -1]`);
     expect(selfInductanceDetail(singleTurn(0.001, 1e-3)).warnings.join()).toMatch(/wire radii/);
   });
 

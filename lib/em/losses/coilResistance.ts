@@ -3,8 +3,11 @@
  * the proximity effect of the field the other turns produce at each turn (Ferreira 1994).
  */
 
-import { TanklightInputError, requirePositive } from "../../errors.ts";
-import { MU0 } from "../../constants.ts";
+import { z } from "zod";
+import { TanklightInputError } from "../../errors.ts";
+import { frequency, temperature as temperatureQ } from "../../schema.ts";
+import { checkCoil, optionsArg, quantityArg } from "../inputs.ts";
+import { skinDepthCore } from "./skinDepth.ts";
 import type { Coil, Filament } from "../types.ts";
 import { material, resistivityAt, REFERENCE_TEMPERATURE } from "../materials.ts";
 import { acFactorFromQ } from "./roundWireAcFactor.ts";
@@ -15,8 +18,26 @@ import { selfResonanceWarning } from "../selfCapacitance.ts";
 
 /** Options of coilResistance. */
 export interface CoilResistanceOptions {
-  /** conductor temperature, K, 150–700 K (default 293.15 K = 20 °C) */
-  readonly temperature?: number;
+  /** conductor temperature, K, 150–700 K (default 293.15 K = 20 °C); "80 degC" accepted */
+  readonly temperature?: number | string;
+}
+
+/** The options of coilResistance and qualityFactor as a strict schema (unknown keys name the nearest valid one). */
+export const CoilResistanceOptionsSpec = z.strictObject({
+  temperature: temperatureQ()
+    .refine((t) => t >= 150 && t <= 700, { error: "must be a conductor temperature in kelvin between 150 K and 700 K (20 °C = 293.15 K; write \"20 degC\" for Celsius)" })
+    .optional(),
+});
+
+/**
+ * The checked inputs of coilResistance/qualityFactor: the coil, f in Hz (≥ 0, or > 0 when
+ * `positive`), the temperature in K.
+ */
+export function coilLossInputs(coil: Coil, f: unknown, opts: unknown, where: string, positive = false): { coil: Coil; f: number; temperature: number } {
+  checkCoil(coil, "coil", where);
+  const F = quantityArg(frequency(positive ? {} : { nonNegative: true }), (x) => (positive ? x > 0 : x >= 0), f, "f", where);
+  const o = optionsArg(CoilResistanceOptionsSpec, opts, "opts", where);
+  return { coil, f: F, temperature: o.temperature ?? REFERENCE_TEMPERATURE };
 }
 
 /** The parts of a coil's AC resistance, Ω (series resistance at the coil terminals). */
@@ -128,22 +149,26 @@ function filamentLengths(coil: Coil): Float64Array {
  * the bundle's internal field added (Bartoli et al. 1996). Traces: slab skin factor and
  * low-frequency strip eddy loss (a stated model). See docs/methods/losses.md.
  * @param coil the coil (any builder's, or hand-built circle/path filaments).
- * @param f frequency, Hz, ≥ 0.
- * @param opts temperature, K (default 293.15 K).
+ * @param f frequency, Hz, ≥ 0 (or a quantity string, "200 kHz").
+ * @param opts `{ temperature }`, K (default 293.15 K; "80 degC" accepted).
  * @returns the parts, Ω, and warnings (f above a third of the self-resonance, filaments standing
  *   for several turns, traces beyond the thin-strip regime, polygon turns approximated by circles
  *   for the proximity field).
  * @example coilResistanceDetail(roundCoil({ meanRadius: 0.04, turns: 20, wire: { diameter: 0.5e-3 } }), 200e3)
  *   // → { dc: 0.4414, skin: 0.0664, proximity: 0.2926, total: 0.8004, … } Ω
  */
-export function coilResistanceDetail(coil: Coil, f: number, opts: CoilResistanceOptions = {}): CoilResistanceDetail {
-  if (!(typeof f === "number" && Number.isFinite(f) && f >= 0)) {
-    throw new TanklightInputError([{ path: "f", message: "must be a finite frequency ≥ 0 Hz", value: f, expected: "≥ 0 Hz" }], "coilResistance");
-  }
-  const temperature = opts.temperature ?? REFERENCE_TEMPERATURE;
+export function coilResistanceDetail(coil: Coil, f: number | string, opts: CoilResistanceOptions = {}): CoilResistanceDetail {
+  const x = coilLossInputs(coil, f, opts, "coilResistance");
+  return coilResistanceCore(x.coil, x.f, x.temperature, true);
+}
+
+/**
+ * {@link coilResistanceDetail} on a checked coil and SI numbers (f ≥ 0 Hz, T in 150–700 K) — the
+ * unchecked core; `withSelfResonance` adds the f_sr/3 check (costs a self-capacitance estimate).
+ */
+export function coilResistanceCore(coil: Coil, f: number, temperature: number, withSelfResonance: boolean): CoilResistanceDetail {
   const c = coil.conductor;
   const rho = resistivityAt(material(c.material), temperature);
-  requirePositive(coil.wireLength, "coil.wireLength", "m", "coilResistance");
   const warnings: string[] = [];
   const len = coil.wireLength;
   let dc: number, skin: number, proximity = 0;
@@ -160,20 +185,16 @@ export function coilResistanceDetail(coil: Coil, f: number, opts: CoilResistance
   }
   switch (c.kind) {
     case "round": {
-      requirePositive(c.diameter, "coil.conductor.diameter", "m", "coilResistance");
       const r = c.diameter / 2;
       dc = (rho * len) / (Math.PI * r * r);
       if (!fields) { skin = 0; break; }
-      const delta = Math.sqrt(rho / (Math.PI * f * MU0));
+      const delta = skinDepthCore(f, rho);
       skin = dc * (acFactorFromQ((Math.SQRT2 * r) / delta) - 1);
       const G = rho * proximityG(c.diameter / (delta * Math.SQRT2));
       for (let i = 0; i < lengths.length; i++) proximity += lengths[i]! * 2 * G * fields.h2[i]!;
       break;
     }
     case "litz": {
-      requirePositive(c.strands, "coil.conductor.strands", "", "coilResistance");
-      requirePositive(c.strandDiameter, "coil.conductor.strandDiameter", "m", "coilResistance");
-      requirePositive(c.outerDiameter, "coil.conductor.outerDiameter", "m", "coilResistance");
       const p = litzResistancePerLength(c.strands, c.strandDiameter, c.outerDiameter, f, rho);
       dc = p.dc * len;
       skin = p.skin * len;
@@ -183,8 +204,6 @@ export function coilResistanceDetail(coil: Coil, f: number, opts: CoilResistance
       break;
     }
     case "trace": {
-      requirePositive(c.width, "coil.conductor.width", "m", "coilResistance");
-      requirePositive(c.thickness, "coil.conductor.thickness", "m", "coilResistance");
       const p = traceResistancePerLength(c.width, c.thickness, f, rho);
       dc = p.dc * len;
       skin = p.skin * len;
@@ -202,7 +221,7 @@ export function coilResistanceDetail(coil: Coil, f: number, opts: CoilResistance
       throw new TanklightInputError([{ path: "coil.conductor.kind", message: "unknown conductor kind", value: (never as { kind: string }).kind }], "coilResistance");
     }
   }
-  if (f > 0 && !(opts as { skipSelfResonance?: boolean }).skipSelfResonance) {
+  if (f > 0 && withSelfResonance) {
     try {
       const w = selfResonanceWarning(coil, f);
       if (w) warnings.push(w);
@@ -216,10 +235,11 @@ export function coilResistanceDetail(coil: Coil, f: number, opts: CoilResistance
 
 /**
  * AC series resistance of a coil (DC at temperature + skin + proximity), Ω.
- * @param coil the coil.  @param f frequency, Hz, ≥ 0.  @param opts temperature, K (default 293.15 K).
+ * @param coil the coil.  @param f frequency, Hz, ≥ 0 ("200 kHz" accepted).  @param opts `{ temperature }`, K (default 293.15 K).
  * @returns R, Ω. See coilResistanceDetail for the parts, the method and warnings.
  * @example coilResistance(coil, 0) // → the DC resistance ρℓ/A at 20 °C
  */
-export function coilResistance(coil: Coil, f: number, opts: CoilResistanceOptions = {}): number {
-  return coilResistanceDetail(coil, f, { ...opts, skipSelfResonance: true } as CoilResistanceOptions).total;
+export function coilResistance(coil: Coil, f: number | string, opts: CoilResistanceOptions = {}): number {
+  const x = coilLossInputs(coil, f, opts, "coilResistance");
+  return coilResistanceCore(x.coil, x.f, x.temperature, false).total;
 }

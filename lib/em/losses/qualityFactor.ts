@@ -2,11 +2,10 @@
  * Quality factor of a coil from the loss models: Q = ωL/R.
  */
 
-import { TanklightInputError } from "../../errors.ts";
 import type { Coil } from "../types.ts";
-import { selfInductance } from "../selfInductance.ts";
+import { selfInductanceDetailCore } from "../selfInductance.ts";
 import { selfResonance } from "../selfCapacitance.ts";
-import { coilResistanceDetail, type CoilResistanceOptions } from "./coilResistance.ts";
+import { coilLossInputs, coilResistanceCore, type CoilResistanceOptions } from "./coilResistance.ts";
 
 /** Q with what it was computed from. */
 export interface QualityFactorDetail {
@@ -27,16 +26,19 @@ export interface QualityFactorDetail {
  * Q = 2πf·L(f)/R(f), L from selfInductance(coil, { frequency: f }) (filament method), R from
  * coilResistanceDetail (DC at temperature + skin + proximity). The self-capacitance is not folded
  * into Q (it raises the apparent L and lowers Q near resonance); above f_sr/3 a warning says so.
- * @param coil the coil. @param f frequency, Hz, > 0. @param opts temperature, K (default 293.15 K).
+ * @param coil the coil. @param f frequency, Hz, > 0 ("200 kHz" accepted). @param opts `{ temperature }`, K (default 293.15 K).
  * @returns `{ q, inductance (H), resistance (Ω), selfResonance (Hz), warnings }`.
  * @example qualityFactorDetail(tx20Turns, 200e3).q // → 89.7 (radius 40 mm, 20 turns of 0.5 mm wire with 25 µm enamel)
  */
-export function qualityFactorDetail(coil: Coil, f: number, opts: CoilResistanceOptions = {}): QualityFactorDetail {
-  if (!(typeof f === "number" && Number.isFinite(f) && f > 0)) {
-    throw new TanklightInputError([{ path: "f", message: "must be a finite frequency > 0 Hz", value: f, expected: "> 0 Hz" }], "qualityFactor");
-  }
-  const r = coilResistanceDetail(coil, f, opts);
-  const L = selfInductance(coil, { frequency: f });
+export function qualityFactorDetail(coil: Coil, f: number | string, opts: CoilResistanceOptions = {}): QualityFactorDetail {
+  return qualityFactorAt(coil, f, opts, "qualityFactor");
+}
+
+function qualityFactorAt(coil: Coil, freq: number | string, opts: CoilResistanceOptions, where: string): QualityFactorDetail {
+  const x = coilLossInputs(coil, freq, opts, where, true);
+  const f = x.f;
+  const r = coilResistanceCore(coil, f, x.temperature, true);
+  const L = selfInductanceDetailCore(coil, f).value;
   const fsr = selfResonance(coil);
   const warnings = [...r.warnings];
   if (f > fsr / 3) {
@@ -51,6 +53,6 @@ export function qualityFactorDetail(coil: Coil, f: number, opts: CoilResistanceO
  * @returns Q, dimensionless.
  * @example qualityFactor(tx20Turns, 200e3) // → 89.7
  */
-export function qualityFactor(coil: Coil, f: number, opts: CoilResistanceOptions = {}): number {
-  return qualityFactorDetail(coil, f, opts).q;
+export function qualityFactor(coil: Coil, f: number | string, opts: CoilResistanceOptions = {}): number {
+  return qualityFactorAt(coil, f, opts, "qualityFactor").q;
 }
