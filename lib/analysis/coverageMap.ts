@@ -8,7 +8,9 @@
  * edge is flagged when its two nodes differ in verdict or when the transmitter–token mutual
  * inductance M changes sign along it for any of the token's orientations (a flat token beyond
  * a winding's edge sees reversed flux, so |M| — and the LED — passes through zero on a thin
- * line that a coarse grid can step over). Every cell with a flagged edge is solved again on a
+ * line that a coarse grid can step over; with several transmitters M is their net coupling
+ * Σᵢ Mᵢ·Re(Iᵢ/I₀), which crosses zero where neighbouring coils' fields cancel — the dead line
+ * on the symmetry plane of two coils in anti-phase). Every cell with a flagged edge is solved again on a
  * fine sub-grid of step ≤ `resolution`; a fine sub-grid that finds a change on a side shared
  * with an unrefined cell flags that cell too, so refinement follows a dead line across the map.
  * Dead zones are the marching-squares loops (./contours.ts) of the margin ln(I/I_lit) over the
@@ -128,8 +130,10 @@ const MARGIN_FLOOR = 1e-6;
  * LED current and lit/unlit over a line, plane or volume of token positions (see the module
  * comment for the method and the resolution guarantee).
  *
- * @param system a link system (solveLink's input); `options.token` names the receiver that moves
- *   (its own pose is ignored), the others are left out unless `options.others`.
+ * @param system a link system (solveLink's input, one transmitter or several with their own or
+ *   shared drives; several are solved with the describing function, as solveLink does);
+ *   `options.token` names the receiver that moves (its own pose is ignored), the others are left
+ *   out unless `options.others`.
  * @param region `{ x, y, z }`, each a coordinate or `{ from, to, points | step }` (m or "90 mm"):
  *   one range a line, two a plane, three a volume (planes of the first two, stacked along the third).
  * @param options see {@link CoverageOptions}.

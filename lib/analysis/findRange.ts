@@ -9,7 +9,8 @@
  * boundary is then bisected until its bracket is narrower than `resolution`; the reported
  * distance is the lit end of the bracket, so the token is lit there (to the model's accuracy)
  * and dark within `resolution` beyond it. Each evaluation is a full nonlinear link solve
- * (./probe.ts) with M from couplingEvaluator.
+ * (./probe.ts) with M from couplingEvaluator; with several transmitters every coil's M, and the
+ * sign test on their net coupling Σᵢ Mᵢ·Re(Iᵢ/I₀) (zero where their fields cancel).
  */
 import { z } from "zod";
 import type { Vec3 } from "../em/types.ts";

@@ -12,7 +12,7 @@
  */
 import { couplingEvaluator, type CouplingEvaluator } from "../em/couplingEvaluator.ts";
 import type { Coil, Pose, Vec3 } from "../em/types.ts";
-import type { LinkLoadModel, LinkNetwork, ReceiverNetwork } from "../circuit/link/network.ts";
+import type { LinkLoadModel, LinkNetwork, ReceiverNetwork, SharedDriveNetwork, TransmitterNetwork } from "../circuit/link/network.ts";
 import { solveLinkNetwork } from "../circuit/link/solveNetwork.ts";
 import { solveLinkModel } from "../circuit/harmonic/modelChoice.ts";
 import { tokenLoadModel } from "../circuit/link/tokenLoad.ts";
@@ -37,6 +37,17 @@ export interface ProbeSpec {
   /** index of the moving token among the receivers */
   readonly token: number;
   readonly tokenCoil: number;
+  /**
+   * a system of several transmitters (absent: the one `transmitter` at `txCoil`, `txPose`):
+   * every transmitter as numbers, its coil index and pose, and the shared drives. The
+   * inductance matrix then has these transmitters first (the network `linkNetwork` builds).
+   */
+  readonly array?: {
+    readonly transmitters: readonly TransmitterNetwork[];
+    readonly sharedDrives?: readonly SharedDriveNetwork[];
+    readonly coils: readonly number[];
+    readonly poses: readonly Pose[];
+  };
   /** the other receivers present: receiver index, coil index, pose */
   readonly others: readonly { readonly receiver: number; readonly coil: number; readonly pose: Pose }[];
   /** token axes to try at every position (unit vectors); the worst one counts */
@@ -56,7 +67,12 @@ export type LinkModelName = "fundamental" | "harmonic" | "auto";
 export interface ProbeValues {
   /** the dimmest LED's average current, worst over the axes, A */
   readonly current: Float64Array;
-  /** transmitter–token mutual inductance, H: mutual[p·axes + a] */
+  /**
+   * transmitter–token mutual inductance, H: mutual[p·axes + a]. With several transmitters the
+   * net coupling Σᵢ Mᵢ·Re(Iᵢ/I_r), I_r the first transmitter's current (the first that carries
+   * any): the flux linkage in phase with that coil, per ampere of it (zero where the coils' fields
+   * cancel through the token, e.g. on the symmetry plane of an anti-phase pair).
+   */
   readonly mutual: Float64Array;
   /** DC supply current, highest over the axes, A (0 when the drive has no DC supply) */
   readonly supply: Float64Array;
@@ -95,6 +111,24 @@ function evaluatorFor(a: Coil, b: Coil): CouplingEvaluator {
   return e;
 }
 
+/**
+ * The net coupling of several transmitters to the token, H: Σᵢ Mᵢ·Re(Iᵢ/I_r) with I_r the
+ * current of the first transmitter that carries any (its own term exactly M_r), so the sign
+ * convention is the same at every pose; 0 with every coil current zero.
+ */
+function netMutual(ms: readonly number[], currents: readonly { readonly re: number; readonly im: number }[]): number {
+  const ref = currents.findIndex((c) => c.re !== 0 || c.im !== 0);
+  if (ref < 0) return 0;
+  const cr = currents[ref]!;
+  const d = cr.re * cr.re + cr.im * cr.im;
+  let m = 0;
+  ms.forEach((mi, i) => {
+    const c = currents[i]!;
+    m += i === ref ? mi : (mi * (c.re * cr.re + c.im * cr.im)) / d;
+  });
+  return m;
+}
+
 /** A ready probe: evaluates batches of token positions. */
 export interface Probe {
   readonly spec: ProbeSpec;
@@ -112,27 +146,34 @@ export function makeProbe(spec: ProbeSpec & { readonly models?: readonly LinkLoa
   // in this thread the system's own tabulated loads; in a worker the same loads rebuilt from data
   const models: LinkLoadModel[] = spec.loads.map((l, i) => spec.models?.[i] ?? tokenLoadModel(decodeLoad(l!), { tabulate: true }));
   const ev = (a: number, b: number): CouplingEvaluator => evaluatorFor(spec.coils[a]!, spec.coils[b]!);
-  const evTx = ev(spec.txCoil, spec.tokenCoil);
+  const array = spec.array;
+  const evTxs = array ? array.coils.map((c) => ev(c, spec.tokenCoil)) : [ev(spec.txCoil, spec.tokenCoil)];
+  const txPoses = array ? array.poses : [spec.txPose];
   const evOthers = spec.others.map((o) => ev(o.coil, spec.tokenCoil));
-  const n = spec.receivers.length + 1;
-  const t = spec.token + 1;
+  const nt = evTxs.length;
+  const t = spec.token + nt;
   const receivers: ReceiverNetwork[] = spec.receivers.map((r, i) => ({ ...r, load: models[i]! }));
   const options = { litThreshold: spec.litThreshold, onNonConvergence: "warn" as const };
   const at = (position: Vec3, axis: Vec3): { current: number; mutual: number; supply: number; converged: boolean } => {
     const pose: Pose = { position, axis };
     const L = spec.inductance.map((row) => row.slice());
-    const m0 = evTx.mutual(spec.txPose, pose);
-    L[0]![t] = m0;
-    L[t]![0] = m0;
+    const ms = evTxs.map((e, i) => e.mutual(txPoses[i]!, pose));
+    ms.forEach((m, i) => {
+      L[i]![t] = m;
+      L[t]![i] = m;
+    });
     spec.others.forEach((o, j) => {
       const m = evOthers[j]!.mutual(o.pose, pose);
-      L[o.receiver + 1]![t] = m;
-      L[t]![o.receiver + 1] = m;
+      L[o.receiver + nt]![t] = m;
+      L[t]![o.receiver + nt] = m;
     });
-    void n;
-    const net = { frequency: spec.frequency, inductance: L, transmitter: spec.transmitter, receivers };
+    const net: LinkNetwork = array
+      ? { frequency: spec.frequency, inductance: L, transmitter: array.transmitters[0]!, transmitters: array.transmitters, ...(array.sharedDrives ? { sharedDrives: array.sharedDrives } : {}), receivers }
+      : { frequency: spec.frequency, inductance: L, transmitter: spec.transmitter, receivers };
     // the same solver solveLink uses for that model, so a map agrees with solveLink point by point
-    const r = spec.model === undefined || spec.model === "fundamental" ? solveLinkNetwork(net, options) : solveLinkModel(net, { ...options, model: spec.model });
+    // (several transmitters: the describing function, as solveLink)
+    const r = array || spec.model === undefined || spec.model === "fundamental" ? solveLinkNetwork(net, options) : solveLinkModel(net, { ...options, model: spec.model });
+    const m0 = array ? netMutual(ms, r.transmitters!.map((s) => s.coilCurrentPhasor)) : ms[0]!;
     let current = Infinity;
     for (const led of r.receivers[spec.token]!.leds) current = Math.min(current, led.averageCurrent);
     const supply = spec.supplyVoltage !== undefined ? Math.max(0, r.power.input) / spec.supplyVoltage : 0;

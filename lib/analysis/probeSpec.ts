@@ -5,7 +5,7 @@
  */
 import type { Coil, Pose, Vec3 } from "../em/types.ts";
 import { linkNetwork, type LinkSystem } from "../circuit/link.ts";
-import { LinkSystemInput, soleTransmitter } from "../circuit/link/schema.ts";
+import { LinkSystemInput, systemTransmitters } from "../circuit/link/schema.ts";
 import type { LinkLoadModel } from "../circuit/link/network.ts";
 import { DEFAULT_LIT_THRESHOLD } from "../circuit/link/network.ts";
 import { parseInput } from "../schema.ts";
@@ -37,7 +37,16 @@ export interface ProbeOptions {
  */
 export function probeSpec(system: LinkSystem, options: ProbeOptions, where: string): ProbeSpec & { readonly models: readonly LinkLoadModel[] } {
   const parsed = parseInput(LinkSystemInput, system, where);
-  const tx = soleTransmitter(parsed, where);
+  const txs = systemTransmitters(parsed);
+  const tx = txs[0]!;
+  if (txs.length > 1 || parsed.sharedDrives !== undefined) {
+    if (options.model === "harmonic") {
+      throw new TanklightInputError(
+        [{ path: "model", message: "harmonic balance solves one transmitter on its own drive; map several (or a shared drive) with 'fundamental' or 'auto' (which then keeps the describing function, as solveLink does)", value: options.model }],
+        where,
+      );
+    }
+  }
   const k = options.token ?? 0;
   if (!(Number.isInteger(k) && k >= 0 && k < parsed.receivers.length)) {
     throw new TanklightInputError(
@@ -57,6 +66,7 @@ export function probeSpec(system: LinkSystem, options: ProbeOptions, where: stri
     return coils.length - 1;
   };
   const txCoil = coilIndex(tx.coil);
+  const txCoils = txs.map((t) => coilIndex(t.coil));
   const receivers = keep.map((i) => parsed.receivers[i]!);
   const token = keep.indexOf(k);
   const tokenCoil = coilIndex(receivers[token]!.coil);
@@ -67,7 +77,20 @@ export function probeSpec(system: LinkSystem, options: ProbeOptions, where: stri
   if (!token0.load.ledCurrents || token0.load.ledCurrents(1).length === 0) {
     throw new TanklightInputError([{ path: `receivers[${k}].load`, message: "the moving token needs at least one LED (lit/unlit is an LED's verdict)", value: token0.load.label }], where);
   }
-  const supplyVoltage = supplyVoltageOf(tx.drive);
+  // one DC supply voltage over every drive in use (else none: the supply current is not mapped)
+  const driveSpecs = [...txs.flatMap((t) => (typeof t.drive === "string" ? [] : [t.drive])), ...(parsed.sharedDrives ?? []).filter((d) => txs.some((t) => t.drive === d.name)).map((d) => d.drive)];
+  const volts = driveSpecs.map(supplyVoltageOf);
+  const supplyVoltage = volts.every((v) => v !== undefined && v === volts[0]) ? volts[0] : undefined;
+  const array = net.transmitters !== undefined || net.sharedDrives !== undefined
+    ? {
+        array: {
+          transmitters: net.transmitters ?? [net.transmitter],
+          ...(net.sharedDrives !== undefined ? { sharedDrives: net.sharedDrives } : {}),
+          coils: txCoils,
+          poses: txs.map((t) => (t.pose as Pose | undefined) ?? ORIGIN),
+        },
+      }
+    : {};
   return {
     frequency: net.frequency,
     inductance: net.inductance,
@@ -79,11 +102,12 @@ export function probeSpec(system: LinkSystem, options: ProbeOptions, where: stri
     txPose: (tx.pose as Pose | undefined) ?? ORIGIN,
     token,
     tokenCoil,
+    ...array,
     others,
     axes: options.axes ?? [[0, 0, 1]],
     litThreshold: options.litThreshold ?? DEFAULT_LIT_THRESHOLD,
     ...(supplyVoltage !== undefined ? { supplyVoltage } : {}),
-    ...(options.model !== undefined && options.model !== "fundamental" ? { model: options.model } : {}),
+    ...(options.model !== undefined && options.model !== "fundamental" && !("array" in array) ? { model: options.model } : {}),
     models,
   };
 }
