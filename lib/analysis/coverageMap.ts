@@ -32,7 +32,7 @@ import type { LinkSystem } from "../circuit/link.ts";
 import { length, parseInput } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import { marchingSquares } from "./contours.ts";
-import { makeProbe, type ProbeValues } from "./probe.ts";
+import { makeProbe, type Probe, type ProbeValues } from "./probe.ts";
 import { probeSpec } from "./probeSpec.ts";
 import { parseRegion, tokenAxes, type GridAxis, type OrientationInput, type RegionInput } from "./region.ts";
 import { progressCounter, type ProgressCallback } from "./progress.ts";
@@ -150,7 +150,8 @@ export async function coverageMap(system: LinkSystem, region: RegionInput, optio
   const spec = probeSpec(system, { token: options.token ?? 0, others: options.others ?? false, axes: axesList, ...(opts.litThreshold !== undefined ? { litThreshold: opts.litThreshold } : {}), ...(opts.model !== undefined ? { model: opts.model } : {}) }, where);
   const evaluator = await pointEvaluator(spec, options.threads, () => makeProbe(spec));
   try {
-    return await runMap(grid.axes, grid.fixed, spec.litThreshold, axesList, spec.supplyVoltage, evaluator, options, opts.resolution, where);
+    const map = await runMap(grid.axes, grid.fixed, spec.litThreshold, axesList, spec.supplyVoltage, evaluator, options, opts.resolution, where);
+    return spec.model === undefined ? { ...map, warnings: [...map.warnings, ...fundamentalValidity(map, makeProbe(spec))] } : map;
   } finally {
     await evaluator.close();
   }
@@ -165,6 +166,27 @@ interface Ctx {
   maxSupply: number;
   solves: number;
   unconverged: number;
+}
+
+/**
+ * The describing function's validity where the map couples strongest (largest |M|: the tank
+ * clips hardest there): solveLink's "fundamental" warnings at that pose, each LED outside its
+ * validity named, with the pose. One extra solve and one harmonic-balance step per map.
+ */
+function fundamentalValidity(map: CoverageMap, probe: Probe): string[] {
+  const na = map.orientations.length;
+  let best = -1;
+  for (let k = 0; k < map.mutual.length; k++) if (best < 0 || Math.abs(map.mutual[k]!) > Math.abs(map.mutual[best]!)) best = k;
+  if (best < 0) return [];
+  let p = Math.floor(best / na);
+  const coords = map.axes.map((a) => {
+    const c = a.values[p % a.values.length]!;
+    p = Math.floor(p / a.values.length);
+    return c;
+  });
+  const position = world(map.fixed, map.axes.map((a) => a.name), coords);
+  const at = position.map((c) => (1e3 * c).toFixed(1)).join(", ");
+  return probe.validity(position, map.orientations[best % na]!).map((w) => `at the map's strongest coupling (${at}) mm: ${w}`);
 }
 
 function world(fixed: Readonly<Partial<Record<"x" | "y" | "z", number>>>, names: readonly ("x" | "y" | "z")[], coords: readonly number[]): Vec3 {

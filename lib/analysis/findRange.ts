@@ -107,7 +107,14 @@ export function findRange(system: LinkSystem, direction: RayInput, options: Rang
   }
   const axes = tokenAxes(options.orientation, where);
   const spec = probeSpec(system, { token: options.token ?? 0, others: options.others ?? false, axes, ...(options.litThreshold !== undefined ? { litThreshold: options.litThreshold } : {}), ...(o.model !== undefined ? { model: o.model } : {}) }, where);
-  return rangeWith(makeProbe(spec), (ray.from as Vec3 | undefined) ?? [0, 0, 0], ray.along as Vec3, max, step, resolution);
+  const probe = makeProbe(spec);
+  const from = (ray.from as Vec3 | undefined) ?? [0, 0, 0];
+  const r = rangeWith(probe, from, ray.along as Vec3, max, step, resolution);
+  if (spec.model !== undefined) return r;
+  // the describing function's validity at the ray's start (usually its strongest coupling), each LED outside it named
+  const at = from.map((c) => (1e3 * c).toFixed(1)).join(", ");
+  const validity = [...new Set(axes.flatMap((a) => probe.validity(from, a)))].map((w) => `at the ray's start (${at}) mm: ${w}`);
+  return validity.length > 0 ? { ...r, warnings: [...r.warnings, ...validity] } : r;
 }
 
 /** findRange's bracketing and bisection with a ready probe (also used by searchDesign). */

@@ -134,6 +134,11 @@ export interface Probe {
   readonly spec: ProbeSpec;
   /** positions as [x, y, z, x, y, z, …] (m) */
   evaluate(positions: Float64Array): ProbeValues;
+  /**
+   * The describing function's validity at one pose: solveLink's "fundamental" warnings there
+   * (each LED outside its validity named; docs/methods/harmonic-balance.md), empty when valid.
+   */
+  validity(position: Vec3, axis: Vec3): readonly string[];
   /** the worst-LED current at one pose (position and axis), A, and the mutual inductance, H */
   at(position: Vec3, axis: Vec3): { readonly current: number; readonly mutual: number; readonly supply: number; readonly converged: boolean };
 }
@@ -154,7 +159,7 @@ export function makeProbe(spec: ProbeSpec & { readonly models?: readonly LinkLoa
   const t = spec.token + nt;
   const receivers: ReceiverNetwork[] = spec.receivers.map((r, i) => ({ ...r, load: models[i]! }));
   const options = { litThreshold: spec.litThreshold, onNonConvergence: "warn" as const };
-  const at = (position: Vec3, axis: Vec3): { current: number; mutual: number; supply: number; converged: boolean } => {
+  const networkAt = (position: Vec3, axis: Vec3): { net: LinkNetwork; ms: number[] } => {
     const pose: Pose = { position, axis };
     const L = spec.inductance.map((row) => row.slice());
     const ms = evTxs.map((e, i) => e.mutual(txPoses[i]!, pose));
@@ -170,6 +175,10 @@ export function makeProbe(spec: ProbeSpec & { readonly models?: readonly LinkLoa
     const net: LinkNetwork = array
       ? { frequency: spec.frequency, inductance: L, transmitter: array.transmitters[0]!, transmitters: array.transmitters, ...(array.sharedDrives ? { sharedDrives: array.sharedDrives } : {}), receivers }
       : { frequency: spec.frequency, inductance: L, transmitter: spec.transmitter, receivers };
+    return { net, ms };
+  };
+  const at = (position: Vec3, axis: Vec3): { current: number; mutual: number; supply: number; converged: boolean } => {
+    const { net, ms } = networkAt(position, axis);
     // the same solver solveLink uses for that model, so a map agrees with solveLink point by point
     // (several transmitters: the describing function, as solveLink)
     const r = array || spec.model === undefined || spec.model === "fundamental" ? solveLinkNetwork(net, options) : solveLinkModel(net, { ...options, model: spec.model });
@@ -179,9 +188,14 @@ export function makeProbe(spec: ProbeSpec & { readonly models?: readonly LinkLoa
     const supply = spec.supplyVoltage !== undefined ? Math.max(0, r.power.input) / spec.supplyVoltage : 0;
     return { current: Math.max(0, current), mutual: m0, supply, converged: r.converged };
   };
+  const validity = (position: Vec3, axis: Vec3): readonly string[] =>
+    array
+      ? ["describing function used with its error not estimated (several transmitters), as solveLink does"]
+      : solveLinkModel(networkAt(position, axis).net, { ...options, model: "fundamental" }).warnings.filter((w) => w.startsWith("describing function"));
   return {
     spec,
     at,
+    validity,
     evaluate(positions: Float64Array): ProbeValues {
       const count = positions.length / 3;
       const na = spec.axes.length;
