@@ -7,8 +7,9 @@
  * (N parts per searched range). Combination rules: capacitors add in parallel and add
  * reciprocally in series; resistors and inductors (no mutual coupling) the other way round.
  */
-import { TanklightInputError, requirePositive } from "../errors.ts";
-import { standardValuesBetween, type ESeries } from "./eseries.ts";
+import { z } from "zod";
+import { dimensionless, oneOf, parseArgs, wholeNumber } from "../schema.ts";
+import { ESeriesSchema, standardValuesBetween, type ESeries } from "./eseries.ts";
 
 /** What is being combined: decides which connection adds. */
 export type PartKind = "capacitor" | "resistor" | "inductor";
@@ -17,20 +18,28 @@ export type PartKind = "capacitor" | "resistor" | "inductor";
 export type CombinationTopology = "series" | "parallel" | "any";
 
 /** Options of {@link bestCombination}. */
-export interface CombinationOptions {
+export const CombinationOptions = z.strictObject({
   /** most parts in a combination, 1–3; default 2 */
-  readonly maxParts?: 1 | 2 | 3;
+  maxParts: z.custom<1 | 2 | 3>((v) => v === 1 || v === 2 || v === 3, { error: "must be 1, 2 or 3" }).optional(),
   /** connections allowed; "any" also allows the mixed three-part forms; default "any" */
-  readonly topology?: CombinationTopology;
+  topology: oneOf(["series", "parallel", "any"] as const).optional(),
   /** part kind; default "capacitor" */
-  readonly kind?: PartKind;
+  kind: oneOf(["capacitor", "resistor", "inductor"] as const).optional(),
   /** keep only combinations within this relative error (e.g. 0.01); default: keep all */
-  readonly tolerance?: number;
+  tolerance: dimensionless({ positive: true }).optional(),
   /** how many results; default 5 */
-  readonly count?: number;
+  count: wholeNumber(1, 1000, "the ranked list is for reading, not for enumeration").optional(),
   /** "accuracy" (default): by |error|, then part count; "fewestParts": by part count, then |error| */
-  readonly prefer?: "accuracy" | "fewestParts";
-}
+  prefer: oneOf(["accuracy", "fewestParts"] as const).optional(),
+});
+/** What {@link bestCombination} accepts as options. */
+export type CombinationOptions = z.input<typeof CombinationOptions>;
+
+const CombinationArgs = z.strictObject({
+  x: z.number({ error: "must be a finite number > 0 (the target, in the parts' SI unit)" }).positive({ error: "must be a finite number > 0" }).refine(Number.isFinite, { error: "must be a finite number > 0" }),
+  series: ESeriesSchema,
+  options: CombinationOptions.optional(),
+});
 
 /** One combination of standard parts. */
 export interface Combination {
@@ -58,26 +67,15 @@ type Op = "add" | "rec";
  * @example bestCombination(5.6e-9 + 1.2e-9, "E12", { maxParts: 2 })[0] // → 6.8e-9 single part, error 0
  * @example bestCombination(3.0e-9, "E6", { maxParts: 2, topology: "parallel" })[0].parts // → [1.5e-9, 1.5e-9]
  */
-export function bestCombination(x: number, series: ESeries, options: CombinationOptions = {}): Combination[] {
-  const where = "bestCombination";
-  requirePositive(x, "x", "", where);
+export function bestCombination(target: number, seriesName: ESeries, opts: CombinationOptions = {}): Combination[] {
+  const args = parseArgs(CombinationArgs, [target, seriesName, opts], "bestCombination");
+  const x = args.x;
+  const series = args.series;
+  const options = args.options ?? {};
   const maxParts = options.maxParts ?? 2;
-  if (![1, 2, 3].includes(maxParts)) {
-    throw new TanklightInputError([{ path: "options.maxParts", message: "must be 1, 2 or 3", value: maxParts }], where);
-  }
   const topology = options.topology ?? "any";
-  if (!["series", "parallel", "any"].includes(topology)) {
-    throw new TanklightInputError([{ path: "options.topology", message: "must be 'series', 'parallel' or 'any'", value: topology }], where);
-  }
   const kind = options.kind ?? "capacitor";
-  if (!["capacitor", "resistor", "inductor"].includes(kind)) {
-    throw new TanklightInputError([{ path: "options.kind", message: "must be 'capacitor', 'resistor' or 'inductor'", value: kind }], where);
-  }
   const count = options.count ?? 5;
-  if (!(Number.isInteger(count) && count >= 1)) {
-    throw new TanklightInputError([{ path: "options.count", message: "must be an integer ≥ 1", value: count }], where);
-  }
-  if (options.tolerance !== undefined) requirePositive(options.tolerance, "options.tolerance", "", where);
   // which connection adds values directly
   const parallelOp: Op = kind === "capacitor" ? "add" : "rec";
   const seriesOp: Op = kind === "capacitor" ? "rec" : "add";

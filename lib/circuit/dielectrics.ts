@@ -67,7 +67,9 @@ export function dielectric(d: Dielectric): DielectricData {
  */
 export function esrFromDissipationFactor(dissipationFactor: number | Dielectric, frequency: number, capacitance: number): number {
   const where = "esrFromDissipationFactor";
-  const td = typeof dissipationFactor === "string" ? DIELECTRICS[checkDielectric(dissipationFactor, where)].dissipationFactor : dissipationFactor;
+  const td = typeof dissipationFactor === "string"
+    ? DIELECTRICS[parseInput(z.strictObject({ dissipationFactor: DielectricSchema }), { dissipationFactor }, where).dissipationFactor].dissipationFactor
+    : dissipationFactor;
   if (!(Number.isFinite(td) && td >= 0)) {
     throw new TanklightInputError([{ path: "dissipationFactor", message: "must be a finite number ≥ 0", value: td }], where);
   }
@@ -98,8 +100,9 @@ export interface CapacitorRecommendation {
  * @param options derating (default 2).
  * @example recommendCapacitor(40, 6.8e-9).ratedVoltage // → 100
  */
-export function recommendCapacitor(peakVoltage: number, capacitance: number, options: { readonly derating?: number } = {}): CapacitorRecommendation {
+export function recommendCapacitor(peakVoltage: number, capacitance: number, opts: { readonly derating?: number } = {}): CapacitorRecommendation {
   const where = "recommendCapacitor";
+  const options = parseInput(z.strictObject({ options: z.strictObject({ derating: z.number().optional() }) }), { options: opts }, where).options;
   if (!(Number.isFinite(peakVoltage) && peakVoltage >= 0)) {
     throw new TanklightInputError([{ path: "peakVoltage", message: "must be a finite number ≥ 0 V", value: peakVoltage }], where);
   }

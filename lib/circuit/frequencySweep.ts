@@ -44,7 +44,7 @@ const SweepOptions = z.strictObject({
 
 const SweepArgs = z.strictObject({
   network: z.custom<LinkNetwork | ((frequency: number) => LinkNetwork)>(
-    (n) => typeof n === "function" || (typeof n === "object" && n !== null && !Array.isArray(n)),
+    (n) => typeof n === "function" || (typeof n === "object" && n !== null && Array.isArray((n as LinkNetwork).receivers) && typeof (n as LinkNetwork).transmitter === "object"),
     { error: "must be a LinkNetwork or a function of frequency giving one" },
   ),
   frequencies: SweepFrequencies,

@@ -3,6 +3,13 @@
  * reaches it.
  */
 import { TanklightInputError, requireFinite, requirePositive } from "../errors.ts";
+import { z } from "zod";
+import { parseInput } from "../schema.ts";
+
+/** optimalLoad's options (values checked below). */
+const OptimalLoadOptions = z.strictObject({
+  options: z.strictObject({ topology: z.enum(["series", "parallel"], { error: "must be 'series' or 'parallel'" }).optional(), reactance: z.unknown().optional() }, { error: "must be an object { topology?, reactance? }" }),
+});
 
 /**
  * Maximum efficiency of a two-coil resonant link over all receiver loads, both tanks tuned:
@@ -56,6 +63,7 @@ export function optimalLoad(
   options: { readonly topology?: "series" | "parallel"; readonly reactance?: number } = {},
 ): number {
   const where = "optimalLoad";
+  parseInput(OptimalLoadOptions, { options }, where);
   checkK(k, where);
   requirePositive(q1, "q1", "(dimensionless)", where);
   requirePositive(q2, "q2", "(dimensionless)", where);
@@ -63,6 +71,9 @@ export function optimalLoad(
   const rs = r2 * Math.sqrt(1 + k * k * q1 * q2);
   if ((options.topology ?? "series") === "series") return rs;
   const x = requirePositive(options.reactance ?? NaN, "options.reactance", "Ω", where);
+  if (!(x <= 1e12)) {
+    throw new TanklightInputError([{ path: "options.reactance", message: "must be ≤ 1e12 Ω (far beyond any tank; its square overflows)", value: x }], where);
+  }
   const disc = 1 - (4 * rs * rs) / (x * x);
   if (disc < 0) {
     throw new TanklightInputError(

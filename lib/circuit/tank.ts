@@ -10,7 +10,7 @@
  */
 import { z } from "zod";
 import { TanklightInputError, requirePositive } from "../errors.ts";
-import { inductance, frequency, capacitance, oneOf, parseArgs, wholeNumber } from "../schema.ts";
+import { inductance, frequency, capacitance, dimensionless, oneOf, parseArgs, parseInput, resistance, wholeNumber } from "../schema.ts";
 import { formatQuantity, type QuantityInput } from "../units.ts";
 import { bestCombination, type CombinationTopology } from "./combination.ts";
 import { ESeriesSchema } from "./eseries.ts";
@@ -55,21 +55,23 @@ export function resonantFrequency(inductance: QuantityInput, capacitance: Quanti
   return 1 / (2 * Math.PI * Math.sqrt(a.inductance * a.capacitance));
 }
 
-/** A tank's parts and losses, for {@link tankQuality}. */
-export interface TankLosses {
+/** A tank's parts and losses, for {@link tankQuality} (SI numbers or quantity strings). */
+export const TankLosses = z.strictObject({
   /** inductance, H, > 0 */
-  readonly inductance: number;
+  inductance: inductance(),
   /** capacitance, F, > 0 */
-  readonly capacitance: number;
+  capacitance: capacitance(),
   /** coil series resistance at the operating frequency, Ω ≥ 0 */
-  readonly coilResistance?: number;
+  coilResistance: resistance().optional(),
   /** capacitor ESR, Ω ≥ 0 (or give dissipationFactor) */
-  readonly capacitorEsr?: number;
+  capacitorEsr: resistance().optional(),
   /** capacitor dissipation factor tan δ ≥ 0 (alternative to capacitorEsr) */
-  readonly dissipationFactor?: number;
+  dissipationFactor: dimensionless({ nonNegative: true }).optional(),
   /** resistance in parallel with the tank (a linear load), Ω > 0 */
-  readonly parallelResistance?: number;
-}
+  parallelResistance: resistance({ positive: true }).optional(),
+});
+/** What {@link tankQuality} accepts. */
+export type TankLosses = z.input<typeof TankLosses>;
 
 /** Quality factor of a tank and its parts. */
 export interface TankQuality {
@@ -98,10 +100,9 @@ export interface TankQuality {
  * @returns {@link TankQuality}.
  * @example tankQuality({ inductance: 100e-6, capacitance: 6.8e-9, coilResistance: 2 }).q // → 60.63390625908323
  */
-export function tankQuality(t: TankLosses): TankQuality {
+export function tankQuality(input: TankLosses): TankQuality {
   const where = "tankQuality";
-  requirePositive(t.inductance, "inductance", "H", where);
-  requirePositive(t.capacitance, "capacitance", "F", where);
+  const t = parseInput(TankLosses, input, where);
   const f = 1 / (2 * Math.PI * Math.sqrt(t.inductance * t.capacitance));
   const w = 2 * Math.PI * f;
   const wl = w * t.inductance;
@@ -182,6 +183,9 @@ export interface DetuningWindow {
  */
 export function detuningTolerance(q: number, fraction: number): DetuningWindow {
   requirePositive(q, "q", "", "detuningTolerance");
+  if (!(q >= 1e-6)) {
+    throw new TanklightInputError([{ path: "q", message: "must be ≥ 1e-6 (below it the window spans every frequency and overflows)", value: q }], "detuningTolerance");
+  }
   if (!(Number.isFinite(fraction) && fraction > 0 && fraction < 1)) {
     throw new TanklightInputError([{ path: "fraction", message: "must be between 0 and 1 (exclusive)", value: fraction }], "detuningTolerance");
   }

@@ -21,6 +21,7 @@ import type { LedCurrent, TokenLoad } from "./types.ts";
 import { JunctionBranch, halfWaveIntegrals, reverseHalfIntegrals, type StringBranch } from "./halfWave.ts";
 import { bridgeBranch, cachedBranch, reservoirSteadyState } from "./rectifier.ts";
 import { TanklightInputError, assertNever } from "../../errors.ts";
+import { unknownKeyMessage } from "../../schema.ts";
 import { integrateAdaptive } from "../../math/quadrature.ts";
 
 const fwd = new Float64Array(6);
@@ -76,10 +77,29 @@ function isJunction(j: unknown): boolean {
   return !!x && typeof x.is === "number" && x.is > 0 && typeof x.rs === "number" && x.rs > 0 && typeof x.n === "number" && x.n > 0 && typeof x.thermalVoltage === "number";
 }
 
-/** Cheap structural checks of plain-data loads (a few typeof tests: fine on the hot path); `where` names the public function. */
+/** The fields each load kind may carry (a Map: prototype words are no kind). */
+const LOAD_FIELDS: ReadonlyMap<string, readonly string[]> = new Map([
+  ["resistor", ["kind", "resistance"]],
+  ["led", ["kind", "led"]],
+  ["antiParallel", ["kind", "a", "b"]],
+  ["parallelSameDirection", ["kind", "a", "b"]],
+  ["bridge", ["kind", "diode", "led", "seriesResistance"]],
+  ["halfWaveReservoir", ["kind", "diode", "led", "capacitance", "seriesResistance", "frequency"]],
+]);
+
+/**
+ * Cheap structural checks of plain-data loads (a few typeof tests and a pass over the keys:
+ * fine on the hot path); `where` names the public function. An unknown key is an error that
+ * names the nearest valid one.
+ */
 export function checkLoad(load: TokenLoad, where: string): void {
   if (load === null || typeof load !== "object" || typeof (load as { kind?: unknown }).kind !== "string") {
     badLoad("load", "must be a TokenLoad object with a kind", load, where);
+  }
+  const fields = LOAD_FIELDS.get(load.kind);
+  if (fields === undefined) badLoad("load.kind", `is not a known token load (${[...LOAD_FIELDS.keys()].join(", ")})`, load.kind, where);
+  for (const key of Object.keys(load)) {
+    if (!fields.includes(key)) badLoad(`load.${key}`, unknownKeyMessage(key, fields), (load as unknown as Record<string, unknown>)[key], where);
   }
   switch (load.kind) {
     case "resistor":
@@ -307,7 +327,12 @@ export function describingFunctionReference(
   amplitude: number,
   relTol = 1e-12,
 ): { inPhase: number; quadrature: number; average: number } {
-  checkAmplitude(amplitude, "describingFunctionReference");
+  const where = "describingFunctionReference";
+  if (typeof current !== "function") badLoad("current", "must be a function i(v) of the voltage, A", current, where);
+  checkAmplitude(amplitude, where);
+  if (!(typeof relTol === "number" && relTol >= 1e-15 && relTol <= 0.1)) {
+    badLoad("relTol", "must be a number from 1e-15 (double precision's floor: below it the adaptive rule never stops) to 0.1", relTol, where);
+  }
   const A = amplitude;
   const opts = { absTol: 0, relTol, maxIntervals: 20000 };
   // split at the crests so the adaptive rule sees each half-cycle's peak at an interval end

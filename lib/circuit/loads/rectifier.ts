@@ -59,6 +59,14 @@ export interface ReservoirState {
 
 const scratch = new Float64Array(6);
 
+/** A junction from led()/diode()/…Preset(): its parameters positive, its functions present. */
+function requireJunction(j: unknown, field: string, where: string): void {
+  const x = j as Partial<Junction> | null;
+  const ok = x !== null && typeof x === "object" && typeof x.is === "number" && x.is > 0 && typeof x.rs === "number" && x.rs > 0 &&
+    typeof x.n === "number" && x.n > 0 && typeof x.thermalVoltage === "number" && typeof x.current === "function" && typeof x.voltage === "function" && typeof x.conductance === "function";
+  if (!ok) throw new TanklightInputError([{ path: field, message: "must be a junction from diode()/diodePreset() (or led())", value: j }], where);
+}
+
 /**
  * Steady state of a half-wave rectifier (diode + series resistor) charging a reservoir
  * capacitor with an LED across it, at tank amplitude A (charge balance, large reservoir).
@@ -77,6 +85,10 @@ export function reservoirSteadyState(
   branch?: JunctionBranch,
 ): ReservoirState {
   const where = "reservoirSteadyState";
+  requireJunction(diode, "diode", where);
+  if (!(led !== null && typeof led === "object" && typeof led.current === "function" && typeof led.conductance === "function")) {
+    throw new TanklightInputError([{ path: "led", message: "must be an LED (or any load with current(v) and conductance(v))", value: led }], where);
+  }
   if (!(Number.isFinite(amplitude) && amplitude >= 0)) {
     throw new TanklightInputError([{ path: "amplitude", message: "must be a finite number ≥ 0 V", value: amplitude }], where);
   }
@@ -164,6 +176,7 @@ export interface CurrentFedBridgeResult {
  * @example currentFedBridge(diodePreset("schottky"), 1000, 0.01).equivalentResistance // → 899.05… Ω (8·1000/π² = 810.6 Ω plus the diode drops at 6.4 V output)
  */
 export function currentFedBridge(diode: Junction, loadResistance: number, currentAmplitude: number): CurrentFedBridgeResult {
+  requireJunction(diode, "diode", "currentFedBridge");
   requirePositive(loadResistance, "loadResistance", "Ω", "currentFedBridge");
   requirePositive(currentAmplitude, "currentAmplitude", "A", "currentFedBridge");
   const vo = (loadResistance * 2 * currentAmplitude) / Math.PI;

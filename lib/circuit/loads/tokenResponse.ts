@@ -21,18 +21,19 @@ import { HIGH_VOLTAGE } from "../../hazards.ts";
 
 /** Inputs of {@link tokenResponse}: SI numbers or quantity strings ("0.2 V", "200 kHz", "100 uH"). */
 export const TokenResponseInput = z.strictObject({
-  /** induced EMF amplitude in the token coil, V (peak), ≥ 0 */
-  emf: voltage({ nonNegative: true }),
-  /** frequency, Hz > 0 */
-  frequency: frequency(),
-  /** token coil inductance, H > 0 */
-  inductance: inductance(),
-  /** token coil series resistance at the frequency, Ω > 0 */
-  coilResistance: resistance({ positive: true }),
-  /** tank capacitance, F > 0 */
-  capacitance: capacitance(),
-  /** capacitor ESR, Ω ≥ 0 (default 0) */
-  capacitorEsr: resistance().optional(),
+  // upper bounds: far beyond any token, and where the tank arithmetic would overflow
+  /** induced EMF amplitude in the token coil, V (peak), 0 … 1 MV */
+  emf: voltage({ nonNegative: true, max: 1e6 }),
+  /** frequency, Hz, > 0 and ≤ 1 GHz */
+  frequency: frequency({ max: 1e9 }),
+  /** token coil inductance, H, > 0 and ≤ 1 H */
+  inductance: inductance({ max: 1 }),
+  /** token coil series resistance at the frequency, Ω, > 0 and ≤ 1 GΩ */
+  coilResistance: resistance({ positive: true, max: 1e9 }),
+  /** tank capacitance, F, > 0 and ≤ 1 F */
+  capacitance: capacitance({ max: 1 }),
+  /** capacitor ESR, Ω, 0 … 1 GΩ (default 0) */
+  capacitorEsr: resistance({ max: 1e9 }).optional(),
   /** the load across the capacitor (checked by the describing function) */
   load: z.custom<TokenLoad>((l) => typeof l === "object" && l !== null && !Array.isArray(l), {
     error: "must be a TokenLoad ({ kind: 'led', led }, …; see tokenCircuits.ts)",

@@ -8,7 +8,33 @@
  * (no leakage, since the window holds whole periods).
  */
 
-import { requirePositive, TanklightInputError } from "../../errors.ts";
+import { z } from "zod";
+import { TanklightInputError } from "../../errors.ts";
+import { frequency, parseArgs, wholeNumber } from "../../schema.ts";
+
+/** Most samples a series may hold (as many as one simulate run keeps). */
+const MAX_SAMPLES = 5e7;
+
+/** A sampled series: a Float64Array or an array of finite numbers, at least 3 long. */
+const series = (what: string) =>
+  z.custom<ArrayLike<number>>(
+    (x) => {
+      if (!(x instanceof Float64Array || Array.isArray(x)) || x.length < 3 || x.length > MAX_SAMPLES) return false;
+      for (let i = 0; i < x.length; i++) if (!(typeof x[i] === "number" && Number.isFinite(x[i]))) return false;
+      return true;
+    },
+    { error: `must be a Float64Array or array of 3 to ${MAX_SAMPLES} finite ${what}` },
+  );
+
+const HarmonicsArgs = z.strictObject({
+  time: series("times (s)"),
+  samples: series("values"),
+  opts: z.strictObject({
+    frequency: frequency(),
+    count: wholeNumber(1).optional(),
+    cycles: wholeNumber(1).optional(),
+  }),
+});
 
 /** Harmonic content of a periodic waveform; index k of each array is harmonic k (index 0: dc). */
 export interface Harmonics {
@@ -36,33 +62,40 @@ export interface Harmonics {
  * @param time sample times, s (uniform, as returned by simulate)
  * @param samples values at those times (V or A)
  * @param opts.frequency fundamental, Hz > 0; a period must hold a whole number of steps
- * @param opts.count highest harmonic, default 10
+ * @param opts.count highest harmonic, ≤ half the samples a period (higher ones alias), default 10 (or that limit)
  * @param opts.cycles periods analysed, default 1
  * @example waveformHarmonics(Array.from({ length: 201 }, (_, i) => i * 5e-8), Array.from({ length: 201 }, (_, i) => Math.cos((Math.PI * i) / 100)), { frequency: 1e5 }).amplitude[1] // → 1 (a unit cosine sampled 200 times a period)
  */
 export function waveformHarmonics(
-  time: Float64Array,
-  samples: Float64Array,
-  opts: { readonly frequency: number; readonly count?: number; readonly cycles?: number },
+  time: ArrayLike<number>,
+  samples: ArrayLike<number>,
+  opts: { readonly frequency: number | string; readonly count?: number; readonly cycles?: number },
 ): Harmonics {
   const where = "waveformHarmonics";
-  const f = requirePositive(opts.frequency, "frequency", "Hz", where);
-  const count = opts.count ?? 10;
-  const cycles = opts.cycles ?? 1;
-  if (!(Number.isInteger(count) && count >= 1)) throw new TanklightInputError([{ path: "count", message: "must be an integer ≥ 1", value: count }], where);
-  if (!(Number.isInteger(cycles) && cycles >= 1)) throw new TanklightInputError([{ path: "cycles", message: "must be an integer ≥ 1", value: cycles }], where);
-  if (time.length !== samples.length || time.length < 3) {
+  const args = parseArgs(HarmonicsArgs, [time, samples, opts], where);
+  const f = args.opts.frequency;
+  let count = args.opts.count ?? 10;
+  const cycles = args.opts.cycles ?? 1;
+  if (time.length !== samples.length) {
     throw new TanklightInputError([{ path: "samples", message: "must have the same length as time (≥ 3)", value: samples.length, expected: `${time.length}` }], where);
   }
   const step = time[1]! - time[0]!;
   const perCycle = 1 / (f * step);
   const spc = Math.round(perCycle);
   if (!(spc >= 2) || Math.abs(perCycle - spc) > 1e-6 * perCycle) {
-    throw new TanklightInputError([{ path: "frequency", message: `a period must hold a whole number of steps (holds ${perCycle})`, value: f }], where);
+    throw new TanklightInputError([{ path: "opts.frequency", message: `a period must hold a whole number of steps (holds ${perCycle})`, value: f }], where);
+  }
+  // the default stops below the aliasing limit; an explicit count above it is refused
+  if (args.opts.count === undefined) count = Math.min(count, Math.floor(spc / 2));
+  if (count > Math.floor(spc / 2)) {
+    throw new TanklightInputError(
+      [{ path: "opts.count", message: `must be ≤ ${Math.floor(spc / 2)}: with ${spc} samples a period, harmonics above half of them alias onto lower ones`, value: count }],
+      where,
+    );
   }
   const N = spc * cycles;
   if (N + 1 > samples.length) {
-    throw new TanklightInputError([{ path: "cycles", message: `needs ${N + 1} samples, have ${samples.length}`, value: cycles }], where);
+    throw new TanklightInputError([{ path: "opts.cycles", message: `needs ${N + 1} samples, have ${samples.length}`, value: cycles }], where);
   }
   // the last N intervals: samples j = end − N … end − 1 (the end sample repeats the first)
   const start = samples.length - 1 - N;

@@ -125,10 +125,16 @@ export function simulate(circuit: TransientCircuit, opts: SimulateOptions): Tran
  * @example voltageBetween(result, "drain", "ground") // the drain waveform
  */
 export function voltageBetween(result: TransientResult, a: string, b: string): Float64Array {
-  const get = (name: string): Float64Array | undefined => (name === GROUND ? undefined : result.nodeVoltages[name]);
-  for (const name of [a, b]) {
-    if (name !== GROUND && result.nodeVoltages[name] === undefined) {
-      throw new TanklightInputError([{ path: "node", message: "is not a node of this result", value: name, expected: Object.keys(result.nodeVoltages).join(", ") }], "voltageBetween");
+  const where = "voltageBetween";
+  const nodes = result?.nodeVoltages;
+  if (nodes === null || typeof nodes !== "object" || !(result.time instanceof Float64Array)) {
+    throw new TanklightInputError([{ path: "result", message: "must be a TransientResult from simulate()", value: result }], where);
+  }
+  // own keys only: "toString" or "__proto__" is not a node
+  const get = (name: string): Float64Array | undefined => (name === GROUND ? undefined : nodes[name]);
+  for (const [field, name] of [["a", a], ["b", b]] as const) {
+    if (name !== GROUND && !(typeof name === "string" && Object.hasOwn(nodes, name) && nodes[name] instanceof Float64Array)) {
+      throw new TanklightInputError([{ path: field, message: "is not a node of this result", value: name, expected: Object.keys(nodes).join(", ") }], where);
     }
   }
   const va = get(a);

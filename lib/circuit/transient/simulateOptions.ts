@@ -106,6 +106,7 @@ function resolveSteady(opts: ParsedOptions, spc: number | undefined): RunPlan["s
  * @example resolveOptions({ stop: 1e-3, stepsPerCycle: 100, frequency: 1e5 }).nGrid // → 10000
  */
 export function resolveOptions(options: SimulateOptions): RunPlan {
+  if (options === null || typeof options !== "object" || Array.isArray(options)) bad("options", "must be an object { stop, step | stepsPerCycle, … }", options);
   const opts = parseInput(SimulateOptions, options, "simulate");
   const warnings: string[] = [];
   const stop = opts.stop;

@@ -8,8 +8,19 @@
  * needs (otherwise it floats).
  */
 
-import { assertNever, requirePositive, TanklightInputError } from "../../errors.ts";
+import { z } from "zod";
+import { assertNever, requireFinite, requirePositive, TanklightInputError } from "../../errors.ts";
+import { parseInput } from "../../schema.ts";
+
+/** The keys a token spec accepts (values checked in addToken, SI numbers). */
+const TokenSpecKeys = z.strictObject({
+  spec: z.strictObject(
+    Object.fromEntries(["name", "coupledTo", "mutualInductance", "k", "inductance", "resistance", "capacitance", "load"].map((k) => [k, z.unknown().optional()])),
+    { error: "must be an object { coupledTo, k | mutualInductance, inductance, resistance, capacitance, load }" },
+  ),
+});
 import type { TokenLoad } from "../loads/types.ts";
+import { checkLoad } from "../loads/describingFunction.ts";
 import { GROUND, type CircuitElement, type TransientCircuit } from "./circuit.ts";
 
 /** The token and how it couples. SI units. */
@@ -52,7 +63,11 @@ export interface TokenCircuit {
  */
 export function addToken(base: TransientCircuit, spec: TokenSpec): TokenCircuit {
   const where = "addToken";
-  const p = spec.name ?? "token";
+  if (base === null || typeof base !== "object" || !Array.isArray(base.elements)) {
+    throw new TanklightInputError([{ path: "base", message: "must be a circuit { elements: […] } (e.g. singleSwitchDrive(…).circuit)", value: base }], where);
+  }
+  parseInput(TokenSpecKeys, { spec }, where);
+  const p = spec.name === undefined ? "token" : spec.name;
   if (typeof p !== "string" || p === "") throw new TanklightInputError([{ path: "name", message: "must be a non-empty string", value: p }], where);
   const L = requirePositive(spec.inductance, "inductance", "H", where);
   const C = requirePositive(spec.capacitance, "capacitance", "F", where);
@@ -61,6 +76,10 @@ export function addToken(base: TransientCircuit, spec: TokenSpec): TokenCircuit 
   if ((spec.k === undefined) === (spec.mutualInductance === undefined)) {
     throw new TanklightInputError([{ path: "k", message: "give exactly one of k and mutualInductance", value: { k: spec.k, mutualInductance: spec.mutualInductance } }], where);
   }
+  if (spec.k !== undefined && !(typeof spec.k === "number" && Math.abs(spec.k) < 1)) {
+    throw new TanklightInputError([{ path: "k", message: "must be a coupling factor, −1 < k < 1", value: spec.k }], where);
+  }
+  if (spec.mutualInductance !== undefined) requireFinite(spec.mutualInductance, "mutualInductance", "H", where);
   const target = base.elements.find((e) => e.name === spec.coupledTo);
   if (!target || target.kind !== "inductor") {
     throw new TanklightInputError([{ path: "coupledTo", message: "must name an inductor of the circuit", value: spec.coupledTo }], where);
@@ -75,6 +94,7 @@ export function addToken(base: TransientCircuit, spec: TokenSpec): TokenCircuit 
     { kind: "capacitor", name: `${p}.C`, a: top, b: GROUND, capacitance: C },
     coupling,
   ];
+  checkLoad(spec.load, where);
   const load = loadElements(spec.load, p, top);
   return { circuit: { elements: [...base.elements, ...tank, ...load.elements] }, top, coil: `${p}.L`, leds: load.leds };
 }

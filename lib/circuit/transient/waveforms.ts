@@ -4,7 +4,16 @@
  * (phasors e^{jωt}, docs/design.md §3).
  */
 
+import { z } from "zod";
 import { requireFinite, requirePositive, TanklightInputError } from "../../errors.ts";
+import { parseInput } from "../../schema.ts";
+
+/** The keys each waveform's spec accepts (values checked in the function, SI numbers). */
+const keysOf = (name: string, keys: readonly string[]) =>
+  z.strictObject({ [name]: z.strictObject(Object.fromEntries(keys.map((k) => [k, z.unknown().optional()])), { error: `must be an object { ${keys.join(", ")} }` }) });
+const SineKeys = keysOf("spec", ["amplitude", "frequency", "phase", "offset"]);
+const StepKeys = keysOf("opts", ["at", "before"]);
+const GateKeys = keysOf("spec", ["frequency", "duty", "delay", "invert"]);
 import type { Waveform } from "./circuit.ts";
 
 /**
@@ -17,10 +26,11 @@ import type { Waveform } from "./circuit.ts";
  */
 export function sineWaveform(spec: { amplitude: number; frequency: number; phase?: number; offset?: number }): Waveform {
   const where = "sineWaveform";
+  parseInput(SineKeys, { spec }, where);
   const a = requireFinite(spec.amplitude, "amplitude", "V or A", where);
   const w = 2 * Math.PI * requirePositive(spec.frequency, "frequency", "Hz", where);
-  const ph = requireFinite(spec.phase ?? 0, "phase", "rad", where);
-  const off = requireFinite(spec.offset ?? 0, "offset", "V or A", where);
+  const ph = requireFinite(spec.phase === undefined ? 0 : spec.phase, "phase", "rad", where);
+  const off = requireFinite(spec.offset === undefined ? 0 : spec.offset, "offset", "V or A", where);
   return (t) => off + a * Math.cos(w * t + ph);
 }
 
@@ -30,9 +40,10 @@ export function sineWaveform(spec: { amplitude: number; frequency: number; phase
  */
 export function stepWaveform(level: number, opts: { at?: number; before?: number } = {}): Waveform {
   const where = "stepWaveform";
+  parseInput(StepKeys, { opts }, where);
   requireFinite(level, "level", "V or A", where);
-  const at = requireFinite(opts.at ?? 0, "at", "s", where);
-  const before = requireFinite(opts.before ?? 0, "before", "V or A", where);
+  const at = requireFinite(opts.at === undefined ? 0 : opts.at, "at", "s", where);
+  const before = requireFinite(opts.before === undefined ? 0 : opts.before, "before", "V or A", where);
   return (t) => (t >= at ? level : before);
 }
 
@@ -47,12 +58,16 @@ export function stepWaveform(level: number, opts: { at?: number; before?: number
  */
 export function periodicGate(spec: { frequency: number; duty: number; delay?: number; invert?: boolean }): (t: number) => boolean {
   const where = "periodicGate";
+  parseInput(GateKeys, { spec }, where);
   const f = requirePositive(spec.frequency, "frequency", "Hz", where);
   const duty = spec.duty;
   if (!(Number.isFinite(duty) && duty > 0 && duty < 1)) {
     throw new TanklightInputError([{ path: "duty", message: "must be between 0 and 1 (exclusive)", value: duty, expected: "0 < duty < 1" }], where);
   }
-  const delay = requireFinite(spec.delay ?? 0, "delay", "s", where);
+  const delay = requireFinite(spec.delay === undefined ? 0 : spec.delay, "delay", "s", where);
+  if (spec.invert !== undefined && typeof spec.invert !== "boolean") {
+    throw new TanklightInputError([{ path: "invert", message: "must be true or false", value: spec.invert }], where);
+  }
   const invert = spec.invert === true;
   return (t) => {
     const phase = (t - delay) * f;

@@ -69,7 +69,7 @@ describe("tokenResponse: a token's tank amplitude and LED currents for a given i
   it("zero EMF gives zero amplitude; bad input throws", () => {
     expect(tokenResponse({ emf: 0, frequency: f, inductance: L, coilResistance: R, capacitance: C, load: resistorLoad(10) }).amplitude).toBe(0);
     expect(() => tokenResponse({ emf: -1, frequency: f, inductance: L, coilResistance: R, capacitance: C, load: resistorLoad(10) })).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: tokenResponse: emf: must be ≥ 0 V, got -1]`,
+      `[TanklightInputError: tokenResponse: emf: must be ≥ 0 V and ≤ 1.000 MV, got -1]`,
     );
   });
 
