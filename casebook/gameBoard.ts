@@ -13,6 +13,7 @@
 import {
   addSafetySections,
   chart,
+  coverageMap,
   DEFAULT_LIT_THRESHOLD,
   designFromLink,
   formatQuantity,
@@ -25,6 +26,7 @@ import {
   safetyReport,
   selfInductance,
   solveLink,
+  solveLinkSequence,
   supplyVerdict,
   tuneWithStandardParts,
   wilsonInterval,
@@ -68,7 +70,7 @@ const q = formatQuantity;
 const pct = (x: number, digits = 1): string => `${(100 * x).toFixed(digits)} %`;
 
 /** Runs the scenario: returns the worked notebook and its numbers. */
-export function run(options: ScenarioOptions = {}): { notebook: Notebook; results: GameBoardResults } {
+export async function run(options: ScenarioOptions = {}): Promise<{ notebook: Notebook; results: GameBoardResults }> {
   const nb = notebook("Game board", {
     subtitle: "24 glowing pieces on a 40 cm board: tile phasing, neighbours, tilt and batch yield",
     note: "Demo data: the board, the tiles, the pieces and the parts are our own invention, not a product.",
@@ -126,26 +128,26 @@ export function run(options: ScenarioOptions = {}): { notebook: Notebook; result
     { label: "one tile at a time (¼ duty each)", phases: "sequence" },
   ];
   const tick = nb.step("maps of the board for each scheme");
-  const maps = schemes.map((sc, si) => {
+  // the phased schemes: coverageMap over the grid with the four tiles in one network (every
+  // node a full link solve; no refinement, so every scheme is judged on the same points)
+  const region = { x: { from: -PLAY, to: PLAY, points: N }, y: { from: -PLAY, to: PLAY, points: N }, z: PIECE_Z };
+  // switching in turn: solveLinkSequence, each tile alone a quarter of the time, the others held
+  // low by their half bridges (a closed tank that still couples); the LED's average over the slots
+  const sequenced = (pieces: Parameters<typeof system>[1]) => solveLinkSequence(system([0, 0, 0, 0], pieces), { steps: "scan", idle: "held" });
+  const maps: number[][][] = [];
+  const results: DriveScheme[] = [];
+  for (const [si, sc] of schemes.entries()) {
     tick(si + 1, schemes.length);
-    return grid.map((y) =>
-      grid.map((x) => {
-        const at: Vec3 = [x, y, PIECE_Z];
-        if (sc.phases !== "sequence") return ledOf(system(sc.phases, [{ at }]))[0]!;
-        // each tile drives a quarter of the time; the LED's average is the mean of the four slots
-        return TILE_CENTRES.reduce((sum, _c, i) => sum + ledOf(system({ only: i }, [{ at }]))[0]! / 4, 0);
-      }),
-    );
-  });
-  const atCentre = (sc: (typeof schemes)[number]): number => {
-    if (sc.phases === "sequence") {
-      const p = solveLink(system({ only: 0 }, [{ at: [0, 0, PIECE_Z] }])).power.input;
-      return p / SUPPLY / 4 + ((3 / 4) * 0) / SUPPLY; // one drive on at a time: a quarter of the time each, same draw
+    if (sc.phases !== "sequence") {
+      const m = await coverageMap(system(sc.phases, [{ at: [0, 0, PIECE_Z] }]), region, { refine: false });
+      maps.push(grid.map((_y, r) => grid.map((_x, c) => m.ledCurrent[c + N * r]!)));
+      const litShare = m.lit.reduce((a, v) => a + v, 0) / (N * N);
+      const supply = solveLink(system(sc.phases, [{ at: [0, 0, PIECE_Z] }])).power.input / SUPPLY;
+      results.push({ label: sc.label, litShare, weakest: m.weakest.current, weakestAt: [m.weakest.position[0], m.weakest.position[1]], supply });
+      continue;
     }
-    return solveLink(system(sc.phases, [{ at: [0, 0, PIECE_Z] }])).power.input / SUPPLY;
-  };
-  const results: DriveScheme[] = schemes.map((sc, si) => {
-    const m = maps[si]!;
+    const m = grid.map((y) => grid.map((x) => sequenced([{ at: [x, y, PIECE_Z] }]).receivers[0]!.leds[0]!.averageCurrent));
+    maps.push(m);
     let weakest = Infinity;
     let at: [number, number] = [0, 0];
     let lit = 0;
@@ -158,10 +160,10 @@ export function run(options: ScenarioOptions = {}): { notebook: Notebook; result
         }
       }),
     );
-    // sequencing: one drive on at a time for a quarter period each → four times the single draw, averaged over the cycle
-    const supply = sc.phases === "sequence" ? 4 * atCentre(sc) : atCentre(sc);
-    return { label: sc.label, litShare: lit / (N * N), weakest, weakestAt: at, supply };
-  });
+    // the sequence's time-average input power: one drive on at a time
+    const supply = sequenced([{ at: [0, 0, PIECE_Z] }]).power.input / SUPPLY;
+    results.push({ label: sc.label, litShare: lit / (N * N), weakest, weakestAt: at, supply });
+  }
   nb.table(
     ["scheme", "lit share of the board", "weakest LED current", "where (x, y)", "supply current (piece at the centre)"],
     results.map((r) => [r.label, pct(r.litShare), { value: r.weakest, unit: "A" }, `${q(r.weakestAt[0], "m")}, ${q(r.weakestAt[1], "m")}`, { value: r.supply, unit: "A" }]),

@@ -123,15 +123,18 @@ export async function run(options: ScenarioOptions = {}): Promise<{ notebook: No
   const centres = Array.from({ length: COUNT }, (_, i) => -SHELF.x + PITCH / 2 + i * PITCH);
   const phases = centres.map((_c, i) => (i % 2) * 90); // neighbours in quadrature: their fields cannot cancel together
   const row = (pieces: ReturnType<typeof receiver>[]): LinkSystem => ({ frequency: f, transmitters: centres.map((x, i) => transmitter(x, phases[i]!, i)), receivers: pieces });
-  const gx = Array.from({ length: 31 }, (_, i) => -SHELF.x + i * 0.02);
-  const gy = Array.from({ length: 7 }, (_, i) => -SHELF.y + i * 0.02);
   const tick = nb.step("maps of the shelf with the row of coils");
-  const arrayMap = (kind: "coin" | "gem") =>
-    gy.map((y, r) => {
-      tick(r + 1 + (kind === "gem" ? gy.length : 0), 2 * gy.length);
-      return gx.map((x) => solveLink(row([receiver(kind, [x, y, Z])])).receivers[0]!.leds[0]!.averageCurrent);
-    });
-  const maps = { coin: arrayMap("coin"), gem: arrayMap("gem") };
+  // coverageMap with the five coils in one network, every node a full link solve (no refinement:
+  // both replicas are judged on the same 20 mm grid)
+  const region = { x: { from: -SHELF.x, to: SHELF.x, step: "20 mm" }, y: { from: -SHELF.y, to: SHELF.y, step: "20 mm" }, z: Z };
+  const arrayMap = async (kind: "coin" | "gem", k: number) => {
+    tick(k, 2);
+    return await coverageMap(row([receiver(kind, [0, 0, Z])]), region, { refine: false });
+  };
+  const cover = { coin: await arrayMap("coin", 1), gem: await arrayMap("gem", 2) };
+  const gx = Array.from(cover.gem.axes[0]!.values);
+  const gy = Array.from(cover.gem.axes[1]!.values);
+  const maps = { coin: gy.map((_y, r) => gx.map((_x, c) => cover.coin.ledCurrent[c + gx.length * r]!)), gem: gy.map((_y, r) => gx.map((_x, c) => cover.gem.ledCurrent[c + gx.length * r]!)) };
   const share = (m: number[][]) => m.flat().filter((v) => v >= DEFAULT_LIT_THRESHOLD).length / m.flat().length;
   const weakest = (m: number[][]) => Math.min(...m.flat());
   nb.figure(

@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { run } from "../casebook/gameBoard.ts";
 
-describe("casebook: game-board (four tiles, 24 pieces, 40 cm)", () => {
-  const { notebook, results: r } = run();
+describe("casebook: game-board (four tiles, 24 pieces, 40 cm)", async () => {
+  const { notebook, results: r } = await run();
   const scheme = Object.fromEntries(r.schemes.map((s) => [s.label, s]));
 
   it("alternate phasing leaves a null on the seams; quadrature lights the whole playing area", () => {
