@@ -10,7 +10,7 @@
  */
 
 // ── errors and schema building blocks ────────────────────────────────
-export { requirePositive, requireFinite, describeValue, formatIssue } from "./errors.ts";
+export { requirePositive, requireNonNegative, requireFinite, describeValue, formatIssue } from "./errors.ts";
 export {
   quantity,
   quantityMeta,

@@ -71,6 +71,22 @@ export function requirePositive(x: number, field: string, unit: string, where: s
 }
 
 /**
+ * Guard for hot paths: throws TanklightInputError unless x is a finite number ≥ 0 (the one
+ * non-negative guard; a distance from an axis, a frequency that may be DC).
+ * @example requireNonNegative(0, "f", "Hz", "roundWireAcFactor") // → 0
+ */
+export function requireNonNegative(x: number, field: string, unit: string, where: string): number {
+  if (!(typeof x === "number" && Number.isFinite(x) && x >= 0)) {
+    const u = unit === "" ? "" : ` ${unit}`;
+    throw new TanklightInputError(
+      [{ path: field, message: `must be a finite number ≥ 0${u}`, value: x, expected: `≥ 0${u}` }],
+      where,
+    );
+  }
+  return x;
+}
+
+/**
  * Guard for hot paths: throws TanklightInputError unless x is a finite number (any sign).
  * @example requireFinite(0.2, "radius", "m", "myBuilder") // → 0.2;  requireFinite(NaN, "radius", "m", "myBuilder") // → throws TanklightInputError
  */

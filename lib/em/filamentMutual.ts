@@ -3,7 +3,7 @@
  * coordinates: the dispatcher shared by mutualInductance, selfInductance and couplingEvaluator.
  */
 import { circleMutualCore, circleMutualStats, LOOP_MUTUAL_TOL } from "./loopMutual.ts";
-import { circleSegmentMutual, polygonMutualState, segmentMutual } from "./polygonMutual.ts";
+import { circleSegmentMutual, segmentMutual, type SegmentProbe } from "./polygonMutual.ts";
 import type { Filament } from "./types.ts";
 
 /** What {@link filamentMutual} reports besides the value (an out-parameter owned by the caller). */
@@ -37,11 +37,12 @@ export function filamentMutual(a: Filament, b: Filament, tol = LOOP_MUTUAL_TOL, 
   if (a.kind === "path" && b.kind === "path") {
     let sum = 0;
     let min = Infinity;
+    const seg: SegmentProbe = { minDistance2: Infinity };
     for (let i = 0; i < a.points.length; i++) {
       const p1 = a.points[i]!, q1 = a.points[(i + 1) % a.points.length]!;
       for (let j = 0; j < b.points.length; j++) {
-        sum += segmentMutual(p1, q1, b.points[j]!, b.points[(j + 1) % b.points.length]!, tol);
-        if (polygonMutualState.minDistance2 < min) min = polygonMutualState.minDistance2;
+        sum += segmentMutual(p1, q1, b.points[j]!, b.points[(j + 1) % b.points.length]!, tol, seg);
+        if (seg.minDistance2 < min) min = seg.minDistance2;
       }
     }
     if (probe) probe.minDistance2 = min;
@@ -51,9 +52,10 @@ export function filamentMutual(a: Filament, b: Filament, tol = LOOP_MUTUAL_TOL, 
   const path = (a.kind === "path" ? a : b) as Extract<Filament, { kind: "path" }>;
   let sum = 0;
   let min = Infinity;
+  const seg: SegmentProbe = { minDistance2: Infinity };
   for (let j = 0; j < path.points.length; j++) {
-    sum += circleSegmentMutual(c.center, c.axis, c.radius, path.points[j]!, path.points[(j + 1) % path.points.length]!, tol);
-    if (polygonMutualState.minDistance2 < min) min = polygonMutualState.minDistance2;
+    sum += circleSegmentMutual(c.center, c.axis, c.radius, path.points[j]!, path.points[(j + 1) % path.points.length]!, tol, seg);
+    if (seg.minDistance2 < min) min = seg.minDistance2;
   }
   if (probe) probe.minDistance2 = min;
   return sum;

@@ -225,10 +225,12 @@ export function quantityArg(schema: QuantitySchema, ok: (x: number) => boolean, 
 }
 
 /**
- * An options argument: undefined → {}; otherwise parsed by a strict object schema (unknown keys
- * name the nearest valid one).
+ * An options argument: undefined → {}; an object that passes `fast` (a check of valid SI input:
+ * known keys, numbers in range) as it is; otherwise parsed by a strict object schema (which
+ * converts quantity strings, and names the nearest valid key for an unknown one).
  */
-export function optionsArg<T extends object>(schema: z.ZodType<T>, value: unknown, field: string, where: string): T {
+export function optionsArg<T extends object>(schema: z.ZodType<T>, value: unknown, field: string, where: string, fast?: (o: Record<string, unknown>) => boolean): T {
   if (value === undefined) return {} as T;
+  if (fast !== undefined && plain(value) && Object.getOwnPropertySymbols(value).length === 0 && fast(value)) return value as T;
   return parseArg(schema, value, field, where);
 }

@@ -1,7 +1,7 @@
 /**
  * Magnetic flux density of a circular current filament in its own frame.
  */
-import { TanklightInputError, requireFinite, requirePositive } from "../errors.ts";
+import { TanklightInputError, requireFinite, requirePositive, requireNonNegative } from "../errors.ts";
 import { K_B_RHO, K_B_Z, loopKernel } from "./loopKernel.ts";
 
 /** Radial and axial flux density of a loop, T. */
@@ -39,12 +39,7 @@ export function loopField(radius: number, current: number, rho: number, z: numbe
   requirePositive(radius, "radius", "m", "loopField");
   requireFinite(current, "current", "A", "loopField");
   requireFinite(z, "z", "m", "loopField");
-  if (!(Number.isFinite(rho) && rho >= 0)) {
-    throw new TanklightInputError(
-      [{ path: "rho", message: "must be a finite distance ≥ 0 m", value: rho, expected: "≥ 0 m" }],
-      "loopField",
-    );
-  }
+  requireNonNegative(rho, "rho", "m", "loopField");
   const scratch = new Float64Array(4);
   if (!loopKernel(radius, rho, z, scratch, true)) {
     throw new TanklightInputError(

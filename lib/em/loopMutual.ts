@@ -154,14 +154,6 @@ export function circleMutualCore(
     if (alpha2 > maxA2) maxA2 = alpha2;
     return aOverRhoKernel(ra, rho, z2, alpha2) * (c * Dv - s * Du + Nn);
   };
-  // squared distance to a's wire at angle t (no kernel: the cheap scan of the adaptive path)
-  const dist2 = (t: number): number => {
-    const c = Math.cos(t), s = Math.sin(t);
-    const px = Dx + c * Xx + s * Yx, py = Dy + c * Xy + s * Yy, pz = Dz + c * Xz + s * Yz;
-    const dm = ra - Math.sqrt(px * px + py * py + pz * pz);
-    const z = z0 + c * zu + s * zv;
-    return dm * dm + z * z;
-  };
 
   // nested trapezoidal rule: N nodes t_k = 2πk/N; each doubling adds the odd nodes
   let sum = f(1, 0) + f(-1, 0) + f(0, 1) + f(0, -1);
@@ -197,7 +189,8 @@ export function circleMutualCore(
     // not peaked (the distance to a's wire varies < 4× over the nodes): no narrow dip can hide
     // between nodes, and the closest node is within 2× of the closest approach
     const peaky = maxA2 > 4 * minA2;
-    const delta = peaky ? (delta2 > 0 ? Math.sqrt(delta2) : 0) : 0.5 * Math.sqrt(minA2);
+    const bound = delta2 > 0 ? Math.sqrt(delta2) : 0;
+    const delta = peaky ? bound : Math.max(bound, 0.5 * Math.sqrt(minA2));
     const sigma = SIGMA_FRACTION * Math.asinh(delta / rb);
     const d1 = Math.abs(value - t1);
     const d2 = Math.abs(t1 - t2);
@@ -211,7 +204,17 @@ export function circleMutualCore(
     // at this rate even MAX_TRAPEZOID nodes will not reach the tolerance: split and go adaptive now
     if ((peaky && sigma * MAX_TRAPEZOID < 2 * MIN_SIGMA_N) || d1 * Math.exp(-sigma * (MAX_TRAPEZOID - n / 2)) > tol * scale) break;
   }
-  return nearPass(f, dist2, tol * scale, stats, evaluations, () => minA2);
+  // squared distance to a's wire at angle t (no kernel: the cheap scan of the adaptive path)
+  const dist2 = (t: number): number => {
+    const c = Math.cos(t), s = Math.sin(t);
+    const px = Dx + c * Xx + s * Yx, py = Dy + c * Xy + s * Yy, pz = Dz + c * Xz + s * Yz;
+    const dm = ra - Math.sqrt(px * px + py * py + pz * pz);
+    const z = z0 + c * zu + s * zv;
+    return dm * dm + z * z;
+  };
+  const near = nearPass(f, dist2, tol * scale, stats, evaluations);
+  stats.minDistance2 = Math.min(stats.minDistance2, minA2);
+  return near;
 }
 
 /**
@@ -225,16 +228,20 @@ function nearPass(
   absTol: number,
   stats: CircleMutualStats,
   evaluations: number,
-  minA2: () => number,
 ): number {
   const SAMPLES = 256;
   const step = TWO_PI / SAMPLES;
   const d = new Float64Array(SAMPLES);
   for (let k = 0; k < SAMPLES; k++) d[k] = dist2(k * step);
   const cuts: number[] = [];
+  let closest = Infinity;
   for (let k = 0; k < SAMPLES; k++) {
     const prev = d[(k + SAMPLES - 1) % SAMPLES]!, here = d[k]!, next = d[(k + 1) % SAMPLES]!;
-    if (here <= prev && here < next) cuts.push(goldenMin(dist2, (k - 1) * step, (k + 1) * step));
+    if (here <= prev && here < next) {
+      const t = goldenMin(dist2, (k - 1) * step, (k + 1) * step);
+      cuts.push(t);
+      closest = Math.min(closest, dist2(t));
+    }
   }
   if (cuts.length === 0) cuts.push(0); // constant distance (coaxial): any start
   cuts.sort((x, y) => x - y);
@@ -250,7 +257,7 @@ function nearPass(
     error += res.error;
     evaluations += res.evaluations;
   }
-  stats.minDistance2 = minA2();
+  stats.minDistance2 = closest;
   stats.error = error;
   stats.evaluations = evaluations;
   return value;
@@ -279,6 +286,13 @@ function goldenMin(g: (t: number) => number, lo: number, hi: number): number {
 const LoopMutualOptionsSpec = z.strictObject({
   relTol: z.number({ error: "must be a number in (0, 1)" }).gt(0, { error: "must be a number in (0, 1)" }).lt(1, { error: "must be a number in (0, 1)" }).optional(),
 });
+
+/** Fast check of valid options: only `relTol`, a number in (0, 1). */
+const relTolOnly = (o: Record<string, unknown>): boolean => {
+  for (const k in o) if (k !== "relTol") return false;
+  const t = o["relTol"];
+  return t === undefined || (typeof t === "number" && t > 0 && t < 1);
+};
 
 const normalised = (v: Vec3): [number, number, number] => {
   const n = Math.hypot(v[0], v[1], v[2]);
@@ -319,7 +333,7 @@ export function loopMutualInductance(a: CircleFilament, b: CircleFilament, optio
   b = checkLoop(b, "b", where);
   const na = normalised(a.axis);
   const nb = normalised(b.axis);
-  const tol = optionsArg(LoopMutualOptionsSpec, options, "options", where).relTol ?? LOOP_MUTUAL_TOL;
+  const tol = optionsArg(LoopMutualOptionsSpec, options, "options", where, relTolOnly).relTol ?? LOOP_MUTUAL_TOL;
   const stats = circleMutualStats();
   const M = circleMutualCore(
     a.center[0], a.center[1], a.center[2], na[0], na[1], na[2], a.radius,

@@ -10,6 +10,7 @@ import { poseFrame, rotate, toCoil } from "./frames.ts";
 import type { Coil, Pose, Vec3 } from "./types.ts";
 
 const POINT = vec3();
+const CURRENT = currentQ();
 
 /**
  * Flux density B of a coil carrying current I, placed by a pose, at a world point:
@@ -28,7 +29,7 @@ const POINT = vec3();
 export function magneticField(coil: Coil, pose: Pose, current: number | string, point: Vec3): Vec3 {
   const where = "magneticField";
   checkCoil(coil, "coil", where);
-  const I = quantityArg(currentQ(), () => true, current, "current", where);
+  const I = quantityArg(CURRENT, () => true, current, "current", where);
   const x: Vec3 =
     Array.isArray(point) && point.length === 3 && point.every((c) => typeof c === "number" && Number.isFinite(c))
       ? (point as Vec3)

@@ -15,8 +15,10 @@ const MU0_OVER_4PI = MU0 / (4 * Math.PI);
 /** Relative tolerance of the segment quadratures (the adaptive rule's target). */
 export const POLYGON_MUTUAL_TOL = 1e-10;
 
-/** Smallest squared distance (m²) between quadrature nodes and the other conductor seen by the last call. */
-export const polygonMutualState = { minDistance2: Infinity };
+/** Out-parameter of the segment mutuals: the smallest squared distance (m²) between quadrature nodes and the other conductor. */
+export interface SegmentProbe {
+  minDistance2: number;
+}
 
 function overlapError(where: string): never {
   throw new TanklightInputError(
@@ -32,7 +34,7 @@ function overlapError(where: string): never {
  * Gauss–Kronrod 7/15 (handles the logarithmic end singularity of segments meeting at a
  * vertex). Perpendicular segments give exactly 0. Per turn, H; symmetric in the two segments.
  */
-export function segmentMutual(p1: Vec3, q1: Vec3, p2: Vec3, q2: Vec3, tol = POLYGON_MUTUAL_TOL): number {
+export function segmentMutual(p1: Vec3, q1: Vec3, p2: Vec3, q2: Vec3, tol = POLYGON_MUTUAL_TOL, probe?: SegmentProbe): number {
   const ax = q1[0] - p1[0], ay = q1[1] - p1[1], az = q1[2] - p1[2];
   const bx = q2[0] - p2[0], by = q2[1] - p2[1], bz = q2[2] - p2[2];
   const L1 = Math.sqrt(ax * ax + ay * ay + az * az);
@@ -56,7 +58,7 @@ export function segmentMutual(p1: Vec3, q1: Vec3, p2: Vec3, q2: Vec3, tol = POLY
     return segmentLog(t, d2, L1);
   };
   const res = integrateAdaptive(f, 0, L2, { relTol: tol, absTol: tol * 1e-3 * L2, maxIntervals: 4000 });
-  polygonMutualState.minDistance2 = minD2;
+  if (probe) probe.minDistance2 = minD2;
   return MU0_OVER_4PI * cosang * res.value;
 }
 
@@ -65,7 +67,7 @@ export function segmentMutual(p1: Vec3, q1: Vec3, p2: Vec3, q2: Vec3, tol = POLY
  * segment p→q: M = ∫ A_circle · ŝ dl with A_φ in closed form (Smythe 1950 §7.10, AGM kernel),
  * adaptive Gauss–Kronrod along the segment. Per turn, H.
  */
-export function circleSegmentMutual(center: Vec3, axis: Vec3, radius: number, p: Vec3, q: Vec3, tol = POLYGON_MUTUAL_TOL): number {
+export function circleSegmentMutual(center: Vec3, axis: Vec3, radius: number, p: Vec3, q: Vec3, tol = POLYGON_MUTUAL_TOL, probe?: SegmentProbe): number {
   const bx = q[0] - p[0], by = q[1] - p[1], bz = q[2] - p[2];
   const L = Math.sqrt(bx * bx + by * by + bz * bz);
   if (L === 0) return 0;
@@ -87,7 +89,7 @@ export function circleSegmentMutual(center: Vec3, axis: Vec3, radius: number, p:
   };
   // the integrand is of order μ₀ (A_φ/ρ ~ μ₀/a times a length ~ a): absolute floor tol·1e-3·μ₀·L
   const res = integrateAdaptive(f, 0, L, { relTol: tol, absTol: tol * 1e-3 * MU0 * L, maxIntervals: 4000 });
-  polygonMutualState.minDistance2 = minD2;
+  if (probe) probe.minDistance2 = minD2;
   return res.value;
 }
 

@@ -105,7 +105,11 @@ export function ownTurnInductance(f: Filament, r: number, Y: number): number {
 export function selfInductanceDetail(coil: Coil, options: SelfInductanceOptions = {}): SelfInductanceDetail {
   const where = "selfInductance";
   checkCoil(coil, "coil", where);
-  const o = optionsArg(SelfInductanceOptionsSpec, options, "options", where);
+  const o = optionsArg(SelfInductanceOptionsSpec, options, "options", where, (x) => {
+    for (const k in x) if (k !== "frequency") return false;
+    const f = x["frequency"];
+    return f === undefined || (typeof f === "number" && Number.isFinite(f) && f >= 0);
+  }) as { frequency?: number };
   return selfInductanceDetailCore(coil, o.frequency);
 }
 

@@ -2,7 +2,7 @@
  * Magnetic vector potential of a circular filament (closed form); a straight segment's is in
  * segmentPotential.ts.
  */
-import { TanklightInputError, requireFinite, requirePositive } from "../errors.ts";
+import { TanklightInputError, requireFinite, requirePositive, requireNonNegative } from "../errors.ts";
 import { K_A_OVER_RHO, loopKernel } from "./loopKernel.ts";
 
 /**
@@ -22,9 +22,7 @@ export function loopVectorPotential(radius: number, current: number, rho: number
   requirePositive(radius, "radius", "m", "loopVectorPotential");
   requireFinite(current, "current", "A", "loopVectorPotential");
   requireFinite(z, "z", "m", "loopVectorPotential");
-  if (!(Number.isFinite(rho) && rho >= 0)) {
-    throw new TanklightInputError([{ path: "rho", message: "must be a finite distance ≥ 0 m", value: rho }], "loopVectorPotential");
-  }
+  requireNonNegative(rho, "rho", "m", "loopVectorPotential");
   const scratch = new Float64Array(4);
   if (!loopKernel(radius, rho, z, scratch, false)) {
     throw new TanklightInputError([{ path: "rho, z", message: "the point lies on the filament", value: [rho, z] }], "loopVectorPotential");

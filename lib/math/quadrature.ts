@@ -161,11 +161,8 @@ export interface AdaptiveOptions {
   readonly maxIntervals?: number;
 }
 
-// results of the last kronrod15() call (module scratch: no allocation per interval)
-let qkValue = 0;
-let qkError = 0;
-
-function kronrod15(f: (x: number) => number, a: number, b: number): void {
+/** Gauss–Kronrod 7/15 on [a, b]: writes the value to out[0] and QUADPACK's error estimate to out[1] (an explicit workspace, no module state). */
+function kronrod15(f: (x: number) => number, a: number, b: number, out: Float64Array): void {
   const c = 0.5 * (a + b);
   const h = 0.5 * (b - a);
   // 15 values kept for the I_abs estimate: a local array, not module scratch, because f may
@@ -201,8 +198,8 @@ function kronrod15(f: (x: number) => number, a: number, b: number): void {
   kAbs *= ah;
   if (asc !== 0 && err !== 0) err = asc * Math.min(1, Math.pow((200 * err) / asc, 1.5));
   if (kAbs > Number.MIN_VALUE / (50 * EPS)) err = Math.max(50 * EPS * kAbs, err);
-  qkValue = k * h;
-  qkError = err;
+  out[0] = k * h;
+  out[1] = err;
 }
 
 /**
@@ -241,12 +238,13 @@ export function integrateAdaptive(
   if (a === b) return { value: 0, error: 0, evaluations: 0, converged: true };
   const lo: number[] = [a];
   const hi: number[] = [b];
-  kronrod15(f, a, b);
-  const val: number[] = [qkValue];
-  const err: number[] = [qkError];
+  const qk = new Float64Array(2);
+  kronrod15(f, a, b, qk);
+  const val: number[] = [qk[0]!];
+  const err: number[] = [qk[1]!];
   let evaluations = 15;
-  let value = qkValue;
-  let error = qkError;
+  let value = qk[0]!;
+  let error = qk[1]!;
   while (error > Math.max(absTol, relTol * Math.abs(value)) && lo.length < maxIntervals) {
     let worst = 0;
     for (let i = 1; i < err.length; i++) if (err[i]! > err[worst]!) worst = i;
@@ -254,20 +252,22 @@ export function integrateAdaptive(
     const pb = hi[worst]!;
     const mid = 0.5 * (pa + pb);
     if (mid === pa || mid === pb) break; // interval at rounding resolution: cannot split further
-    kronrod15(f, pa, mid);
-    const lv = qkValue;
-    const le = qkError;
-    kronrod15(f, mid, pb);
+    kronrod15(f, pa, mid, qk);
+    const lv = qk[0]!;
+    const le = qk[1]!;
+    kronrod15(f, mid, pb, qk);
+    const rv = qk[0]!;
+    const re = qk[1]!;
     evaluations += 30;
-    value += lv + qkValue - val[worst]!;
-    error += le + qkError - err[worst]!;
+    value += lv + rv - val[worst]!;
+    error += le + re - err[worst]!;
     hi[worst] = mid;
     val[worst] = lv;
     err[worst] = le;
     lo.push(mid);
     hi.push(pb);
-    val.push(qkValue);
-    err.push(qkError);
+    val.push(rv);
+    err.push(re);
   }
   // re-sum once to remove the drift of the running updates
   value = 0;

@@ -33,10 +33,17 @@ export const CoilResistanceOptionsSpec = z.strictObject({
  * The checked inputs of coilResistance/qualityFactor: the coil, f in Hz (≥ 0, or > 0 when
  * `positive`), the temperature in K.
  */
+const FREQUENCY_DC = frequency({ nonNegative: true });
+const FREQUENCY_AC = frequency();
+
 export function coilLossInputs(coil: Coil, f: unknown, opts: unknown, where: string, positive = false): { coil: Coil; f: number; temperature: number } {
   checkCoil(coil, "coil", where);
-  const F = quantityArg(frequency(positive ? {} : { nonNegative: true }), (x) => (positive ? x > 0 : x >= 0), f, "f", where);
-  const o = optionsArg(CoilResistanceOptionsSpec, opts, "opts", where);
+  const F = quantityArg(positive ? FREQUENCY_AC : FREQUENCY_DC, (x) => (positive ? x > 0 : x >= 0), f, "f", where);
+  const o = optionsArg(CoilResistanceOptionsSpec, opts, "opts", where, (x) => {
+    for (const k in x) if (k !== "temperature") return false;
+    const t = x["temperature"];
+    return t === undefined || (typeof t === "number" && t >= 150 && t <= 700);
+  }) as { temperature?: number };
   return { coil, f: F, temperature: o.temperature ?? REFERENCE_TEMPERATURE };
 }
 

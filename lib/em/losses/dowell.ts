@@ -3,8 +3,8 @@
  * windings (Dowell, Proc. IEE 113(8):1387–1394, 1966).
  */
 
-import { MU0 } from "../../constants.ts";
-import { TanklightInputError, requirePositive } from "../../errors.ts";
+import { TanklightInputError, requirePositive, requireNonNegative } from "../../errors.ts";
+import { skinDepthCore } from "./skinDepth.ts";
 
 /**
  * Dowell's AC resistance factor of a winding of m layers (averaged over the winding).
@@ -20,9 +20,7 @@ import { TanklightInputError, requirePositive } from "../../errors.ts";
  * @example dowellFactor(0, 5) // → 1
  */
 export function dowellFactor(Delta: number, layers: number): number {
-  if (!(Number.isFinite(Delta) && Delta >= 0)) {
-    throw new TanklightInputError([{ path: "Delta", message: "must be a finite number ≥ 0", value: Delta }], "dowellFactor");
-  }
+  requireNonNegative(Delta, "Delta", "", "dowellFactor");
   if (!(Number.isFinite(layers) && layers >= 1)) {
     throw new TanklightInputError([{ path: "layers", message: "must be a finite number ≥ 1", value: layers }], "dowellFactor");
   }
@@ -61,6 +59,6 @@ export function dowellDelta(diameter: number, pitch: number, f: number, resistiv
   requirePositive(f, "f", "Hz", "dowellDelta");
   requirePositive(resistivity, "resistivity", "Ω·m", "dowellDelta");
   const h = (Math.sqrt(Math.PI) / 2) * diameter;
-  const delta = Math.sqrt(resistivity / (Math.PI * f * MU0));
+  const delta = skinDepthCore(f, resistivity);
   return (h / delta) * Math.sqrt(h / pitch);
 }

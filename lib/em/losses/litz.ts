@@ -13,7 +13,7 @@
 
 import { acFactorFromQ } from "./roundWireAcFactor.ts";
 import { proximityG } from "./proximity.ts";
-import { MU0 } from "../../constants.ts";
+import { skinDepthCore } from "./skinDepth.ts";
 
 /** Per-unit-length resistances of a litz bundle at one frequency, Ω/m. */
 export interface LitzResistance {
@@ -45,7 +45,7 @@ export function litzResistancePerLength(strands: number, strandDiameter: number,
   const rs = strandDiameter / 2;
   const dc = resistivity / (strands * Math.PI * rs * rs);
   if (f === 0) return { dc, skin: 0, internalProximity: 0, externalFactor: 0 };
-  const delta = Math.sqrt(resistivity / (Math.PI * f * MU0));
+  const delta = skinDepthCore(f, resistivity);
   const q = (Math.SQRT2 * rs) / delta;
   const skin = dc * (acFactorFromQ(q) - 1);
   // P′ = n·ρ·g(γ)·⟨H²⟩ with ⟨H²⟩ = Î²(h² + 1/(8π²R_b²)); resistance = 2P′/Î²

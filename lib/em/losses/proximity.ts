@@ -11,12 +11,12 @@
  */
 
 import { MU0 } from "../../constants.ts";
-import { TanklightInputError, requirePositive } from "../../errors.ts";
+import { TanklightInputError, requirePositive, requireNonNegative } from "../../errors.ts";
 import { kelvinScaledInto } from "../../math/kelvin.ts";
 import { loopField } from "../loopField.ts";
 import type { Coil, Filament } from "../types.ts";
+import { skinDepthCore } from "./skinDepth.ts";
 
-const buf = new Float64Array(6);
 
 /**
  * g(γ) = P′·σ/Ĥ² of a round wire in a uniform transverse field (hot path, no checks), γ ≥ 0.
@@ -28,6 +28,7 @@ const buf = new Float64Array(6);
 export function proximityG(gamma: number): number {
   if (gamma === 0) return 0;
   if (gamma < 1e-3) return (Math.PI * gamma ** 4) / 8; // next term is O(γ⁸): relative 1e-13 here
+  const buf = new Float64Array(6);
   kelvinScaledInto(gamma, buf);
   const br = buf[0]!, bi = buf[1]!;
   const b1r = buf[2]!, b1i = buf[3]!;
@@ -55,11 +56,9 @@ export function proximityG(gamma: number): number {
 export function roundWireProximityFactor(diameter: number, f: number, resistivity: number): number {
   requirePositive(diameter, "diameter", "m", "roundWireProximityFactor");
   requirePositive(resistivity, "resistivity", "Ω·m", "roundWireProximityFactor");
-  if (!(Number.isFinite(f) && f >= 0)) {
-    throw new TanklightInputError([{ path: "f", message: "must be a finite number ≥ 0 Hz", value: f }], "roundWireProximityFactor");
-  }
+  requireNonNegative(f, "f", "Hz", "roundWireProximityFactor");
   if (f === 0) return 0;
-  const delta = Math.sqrt(resistivity / (Math.PI * f * MU0));
+  const delta = skinDepthCore(f, resistivity);
   return resistivity * proximityG(diameter / (delta * Math.SQRT2));
 }
 

@@ -2,11 +2,10 @@
  * Exact skin-effect resistance ratio of an isolated straight round wire.
  */
 
-import { MU0 } from "../../constants.ts";
-import { TanklightInputError, requirePositive } from "../../errors.ts";
+import { requirePositive, requireNonNegative } from "../../errors.ts";
 import { kelvinScaledInto } from "../../math/kelvin.ts";
+import { skinDepthCore } from "./skinDepth.ts";
 
-const buf = new Float64Array(6);
 
 /**
  * R_ac/R_dc from q = √2·r/δ (hot path: no checks, no allocation). q ≥ 0.
@@ -16,6 +15,7 @@ const buf = new Float64Array(6);
  */
 export function acFactorFromQ(q: number): number {
   if (q === 0) return 1;
+  const buf = new Float64Array(6);
   kelvinScaledInto(q, buf);
   const br = buf[0]!, bi = buf[1]!;
   const b1r = buf[2]!, b1i = buf[3]!;
@@ -42,11 +42,9 @@ export function acFactorFromQ(q: number): number {
 export function roundWireAcFactor(radius: number, f: number, resistivity: number): number {
   requirePositive(radius, "radius", "m", "roundWireAcFactor");
   requirePositive(resistivity, "resistivity", "Ω·m", "roundWireAcFactor");
-  if (!(typeof f === "number" && Number.isFinite(f) && f >= 0)) {
-    throw new TanklightInputError([{ path: "f", message: "must be a finite number ≥ 0 Hz", value: f, expected: "≥ 0 Hz" }], "roundWireAcFactor");
-  }
+  requireNonNegative(f, "f", "Hz", "roundWireAcFactor");
   if (f === 0) return 1;
-  const delta = Math.sqrt(resistivity / (Math.PI * f * MU0));
+  const delta = skinDepthCore(f, resistivity);
   return acFactorFromQ((Math.SQRT2 * radius) / delta);
 }
 
@@ -66,14 +64,13 @@ export function roundWireAcFactor(radius: number, f: number, resistivity: number
 export function roundWireInternalInductanceFactor(radius: number, f: number, resistivity: number): number {
   requirePositive(radius, "radius", "m", "roundWireInternalInductanceFactor");
   requirePositive(resistivity, "resistivity", "Ω·m", "roundWireInternalInductanceFactor");
-  if (!(typeof f === "number" && Number.isFinite(f) && f >= 0)) {
-    throw new TanklightInputError([{ path: "f", message: "must be a finite number ≥ 0 Hz", value: f, expected: "≥ 0 Hz" }], "roundWireInternalInductanceFactor");
-  }
+  requireNonNegative(f, "f", "Hz", "roundWireInternalInductanceFactor");
   if (f === 0) return 0.25;
-  const q = (Math.SQRT2 * radius) / Math.sqrt(resistivity / (Math.PI * f * MU0));
+  const q = (Math.SQRT2 * radius) / skinDepthCore(f, resistivity);
   // small q: ber′ = (ber₁ + bei₁)/√2 cancels to O(q³), so use the series Y = 1/4 − x⁴/384 + O(x⁸),
   // x = r/δ = q/√2 (checked against the exact fixture); at x < 0.05 the O(x⁸) rest is < 1e-14
   if (q < 0.05 * Math.SQRT2) return 0.25 - (q * q * q * q) / 1536;
+  const buf = new Float64Array(6);
   kelvinScaledInto(q, buf);
   const br = buf[0]!, bi = buf[1]!;
   const b1r = buf[2]!, b1i = buf[3]!;

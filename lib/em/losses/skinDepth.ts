@@ -6,6 +6,10 @@ import { MU0 } from "../../constants.ts";
 import { dimensionless, frequency, resistivity as resistivityQ } from "../../schema.ts";
 import { quantityArg } from "../inputs.ts";
 
+const FREQUENCY = frequency();
+const RESISTIVITY = resistivityQ();
+const MU_R = dimensionless({ min: 1 });
+
 /**
  * Skin depth: the depth at which a plane wave's current density in a good conductor falls to 1/e.
  *
@@ -20,9 +24,9 @@ import { quantityArg } from "../inputs.ts";
  */
 export function skinDepth(f: number | string, resistivity: number | string, muR: number | string = 1): number {
   const where = "skinDepth";
-  const F = quantityArg(frequency(), (x) => x > 0, f, "f", where);
-  const rho = quantityArg(resistivityQ(), (x) => x > 0, resistivity, "resistivity", where);
-  const mu = quantityArg(dimensionless({ min: 1 }), (x) => x >= 1, muR, "muR", where);
+  const F = quantityArg(FREQUENCY, (x) => x > 0, f, "f", where);
+  const rho = quantityArg(RESISTIVITY, (x) => x > 0, resistivity, "resistivity", where);
+  const mu = quantityArg(MU_R, (x) => x >= 1, muR, "muR", where);
   return skinDepthCore(F, rho, mu);
 }
 

@@ -15,6 +15,7 @@
  */
 
 import { MU0 } from "../../constants.ts";
+import { skinDepthCore } from "./skinDepth.ts";
 
 /** Per-unit-length trace resistances at one frequency. */
 export interface TraceResistance {
@@ -51,7 +52,7 @@ export function slabSkinFactor(Delta: number): number {
 export function traceResistancePerLength(width: number, thickness: number, f: number, resistivity: number): TraceResistance {
   const dc = resistivity / (width * thickness);
   if (f === 0) return { dc, skin: 0, normalFactor: 0, tangentialFactor: 0, beyondThinStrip: false };
-  const delta = Math.sqrt(resistivity / (Math.PI * f * MU0));
+  const delta = skinDepthCore(f, resistivity);
   const skin = dc * (slabSkinFactor(thickness / (2 * delta)) - 1);
   const sigma = 1 / resistivity;
   const w = 2 * Math.PI * f;
