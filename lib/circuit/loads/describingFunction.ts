@@ -87,6 +87,9 @@ const LOAD_FIELDS: ReadonlyMap<string, readonly string[]> = new Map([
   ["halfWaveReservoir", ["kind", "diode", "led", "capacitance", "seriesResistance", "frequency"]],
 ]);
 
+/** Loads whose keys were checked (a cache keyed by the immutable load objects: the hot path checks each once). */
+const keysChecked = new WeakSet<object>();
+
 /**
  * Cheap structural checks of plain-data loads (a few typeof tests and a pass over the keys:
  * fine on the hot path); `where` names the public function. An unknown key is an error that
@@ -98,8 +101,11 @@ export function checkLoad(load: TokenLoad, where: string): void {
   }
   const fields = LOAD_FIELDS.get(load.kind);
   if (fields === undefined) badLoad("load.kind", `is not a known token load (${[...LOAD_FIELDS.keys()].join(", ")})`, load.kind, where);
-  for (const key of Object.keys(load)) {
-    if (!fields.includes(key)) badLoad(`load.${key}`, unknownKeyMessage(key, fields), (load as unknown as Record<string, unknown>)[key], where);
+  if (!keysChecked.has(load)) {
+    for (const key of Object.keys(load)) {
+      if (!fields.includes(key)) badLoad(`load.${key}`, unknownKeyMessage(key, fields), (load as unknown as Record<string, unknown>)[key], where);
+    }
+    keysChecked.add(load);
   }
   switch (load.kind) {
     case "resistor":
