@@ -8,10 +8,12 @@ describe("casebook: museum-shelf (replica coins and gems, one coil or a row)", a
     expect(r.single.litShare).toBeLessThan(0.5);
     expect(r.single.deadZones).toBeGreaterThan(0);
     expect(r.array.coils).toBe(5);
-    expect(r.array.litShare.gem).toBeGreaterThan(2 * r.single.litShare);
-    expect(r.array.litShare.coin).toBeGreaterThan(0.8);
-    // every marked display spot lights a nominal gem with margin
-    expect(r.array.weakestSpot).toBeGreaterThan(2 * 5e-4);
+    // demo design (every second coil a layer lower, so neighbouring windings do not touch):
+    // the row about doubles the lit share and lights about three quarters of the shelf
+    expect(r.array.litShare.gem).toBeGreaterThan(1.8 * r.single.litShare);
+    expect(r.array.litShare.coin).toBeGreaterThan(0.7);
+    // every marked display spot lights a nominal gem with margin (1.5 × the 0.5 mA lit threshold)
+    expect(r.array.weakestSpot).toBeGreaterThan(1.5 * 5e-4);
   });
 
   it("a batch of gems lights on every display spot, visitors' hands stay within the basic restriction, the supply holds", () => {
