@@ -17,16 +17,28 @@ import type { Coil, Filament, Pose, Vec3 } from "./types.ts";
 
 // ── building blocks (SI numbers: coils and filaments are plain data in metres) ─────────────
 
+/**
+ * Sane magnitudes of geometry (m) and turn weights: beyond them products of lengths overflow or
+ * underflow double precision (the field and inductance kernels form a⁴ and 1/β³), and no coil
+ * is that big or that fine.
+ */
+export const GEOMETRY_LIMITS = { maxLength: 1e6, minLength: 1e-12, maxTurns: 1e9 } as const;
+const WHY = "beyond it products of lengths leave double precision";
+
 const finiteNumber = (rule: string) => z.number({ error: `must be a finite number${rule}` });
 const positive = (unit: string) => finiteNumber(` > 0 ${unit}`.trimEnd()).positive({ error: `must be a finite number > 0 ${unit}`.trimEnd() });
-const point = z.tuple([finiteNumber(" in m"), finiteNumber(" in m"), finiteNumber(" in m")], { error: "must be three finite coordinates [x, y, z] in m" });
+const size = positive("m")
+  .min(GEOMETRY_LIMITS.minLength, { error: `must be ≥ ${GEOMETRY_LIMITS.minLength} m (${WHY})` })
+  .max(GEOMETRY_LIMITS.maxLength, { error: `must be ≤ ${GEOMETRY_LIMITS.maxLength} m (${WHY})` });
+const coordinate = finiteNumber(" in m").min(-GEOMETRY_LIMITS.maxLength, { error: `must be within ±${GEOMETRY_LIMITS.maxLength} m (${WHY})` }).max(GEOMETRY_LIMITS.maxLength, { error: `must be within ±${GEOMETRY_LIMITS.maxLength} m (${WHY})` });
+const point = z.tuple([coordinate, coordinate, coordinate], { error: "must be three finite coordinates [x, y, z] in m" });
 const direction = z
   .tuple([finiteNumber(""), finiteNumber(""), finiteNumber("")], { error: "must be a direction [x, y, z]" })
   .refine((v) => Math.hypot(v[0], v[1], v[2]) > 0, { error: "must be a non-zero direction" });
-const turns = positive("").describe("turns the filament stands for");
+const turns = positive("").max(GEOMETRY_LIMITS.maxTurns, { error: `must be ≤ ${GEOMETRY_LIMITS.maxTurns} (${WHY})` });
 
 /** A circle filament of a Coil: `{ kind: "circle", center (m), axis (non-zero), radius (m, > 0), turns (> 0) }`. */
-export const CircleFilamentSpec = z.strictObject({ kind: z.literal("circle"), center: point, axis: direction, radius: positive("m"), turns });
+export const CircleFilamentSpec = z.strictObject({ kind: z.literal("circle"), center: point, axis: direction, radius: size, turns });
 /** A closed polygon filament of a Coil: `{ kind: "path", points (≥ 3 points in m), turns (> 0) }`. */
 export const PathFilamentSpec = z.strictObject({
   kind: z.literal("path"),
@@ -41,38 +53,38 @@ const materialName = z.string({ error: "must be a material name" }).refine((m) =
 });
 /** The conductor of a Coil (SI numbers), as the builders' conductor helpers make it. */
 export const ConductorSpec = z.discriminatedUnion("kind", [
-  z.strictObject({ kind: z.literal("round"), diameter: positive("m"), outerDiameter: positive("m"), material: materialName.optional() }),
+  z.strictObject({ kind: z.literal("round"), diameter: size, outerDiameter: size, material: materialName.optional() }),
   z.strictObject({
     kind: z.literal("litz"),
     strands: z.number({ error: "must be a whole number ≥ 1" }).int({ error: "must be a whole number ≥ 1" }).min(1, { error: "must be a whole number ≥ 1" }).max(SIZE_LIMITS.strands.max, { error: `must be ≤ ${SIZE_LIMITS.strands.max} (${SIZE_LIMITS.strands.why})` }),
-    strandDiameter: positive("m"),
-    outerDiameter: positive("m"),
+    strandDiameter: size,
+    outerDiameter: size,
     material: materialName.optional(),
   }),
-  z.strictObject({ kind: z.literal("trace"), width: positive("m"), thickness: positive("m"), material: materialName.optional() }),
+  z.strictObject({ kind: z.literal("trace"), width: size, thickness: size, material: materialName.optional() }),
 ]);
 
 /** A Coil as plain data (any builder's output, or hand-made filaments): SI numbers, strict keys. */
 export const CoilSpec = z.strictObject({
   filaments: z.array(FilamentSpec).min(1, { error: "must hold at least one filament" }),
   conductor: ConductorSpec,
-  turns: positive(""),
-  wireLength: positive("m"),
+  turns,
+  wireLength: size,
   shape: z.custom<NonNullable<Coil["shape"]>>((s) => typeof s === "object" && s !== null && typeof (s as { kind?: unknown }).kind === "string", {
     error: "must be a shape record { kind, … } (as the builders write it) or absent",
   }).optional(),
 });
 
 /** A pose: position (lengths, "12 mm" accepted), axis (non-zero direction, default +z), spin (angle, default 0). */
-export const PoseSpec = z.strictObject({ position: vec3(), axis: unitVector().optional(), spin: angle().optional() });
+export const PoseSpec = z.strictObject({ position: vec3({ min: -GEOMETRY_LIMITS.maxLength, max: GEOMETRY_LIMITS.maxLength }), axis: unitVector().optional(), spin: angle().optional() });
 
 /** A circle filament for loopMutualInductance: `{ center, axis, radius }`, or a Coil's circle filament (kind, turns ignored). */
 export const LoopSpec = z.strictObject({
   kind: z.literal("circle").optional(),
   center: point,
   axis: direction,
-  radius: positive("m"),
-  turns: positive("").optional(),
+  radius: size,
+  turns: turns.optional(),
 });
 
 // ── running the checks ───────────────────────────────────────────────────────
@@ -96,16 +108,17 @@ export function parseArg<T>(schema: z.ZodType<T>, value: unknown, field: string,
   }
 }
 
-const isFinite3 = (v: unknown): boolean =>
-  Array.isArray(v) && v.length === 3 && typeof v[0] === "number" && typeof v[1] === "number" && typeof v[2] === "number" &&
-  Number.isFinite(v[0]) && Number.isFinite(v[1]) && Number.isFinite(v[2]);
+const L = GEOMETRY_LIMITS.maxLength;
+const inRange = (x: unknown): boolean => typeof x === "number" && x >= -L && x <= L;
+const isFinite3 = (v: unknown): boolean => Array.isArray(v) && v.length === 3 && inRange(v[0]) && inRange(v[1]) && inRange(v[2]);
 const plain = (v: unknown): v is Record<string, unknown> => typeof v === "object" && v !== null && !Array.isArray(v) && Object.getPrototypeOf(v) === Object.prototype;
 /** every own key of v is one of `keys` */
 function onlyKeys(v: Record<string, unknown>, keys: readonly string[]): boolean {
   for (const k in v) if (!keys.includes(k)) return false;
   return Object.getOwnPropertySymbols(v).length === 0;
 }
-const pos = (x: unknown): boolean => typeof x === "number" && Number.isFinite(x) && x > 0;
+const pos = (x: unknown): boolean => typeof x === "number" && x >= GEOMETRY_LIMITS.minLength && x <= L;
+const posTurns = (x: unknown): boolean => typeof x === "number" && x > 0 && x <= GEOMETRY_LIMITS.maxTurns;
 
 const CIRCLE_KEYS = ["kind", "center", "axis", "radius", "turns"] as const;
 const PATH_KEYS = ["kind", "points", "turns"] as const;
@@ -114,7 +127,7 @@ const CONDUCTOR_KEYS = { round: ["kind", "diameter", "outerDiameter", "material"
 
 /** The fast check of one filament (true: valid). */
 function filamentOk(f: unknown): boolean {
-  if (!plain(f) || !pos(f["turns"])) return false;
+  if (!plain(f) || !posTurns(f["turns"])) return false;
   if (f["kind"] === "circle") {
     if (!onlyKeys(f, CIRCLE_KEYS) || !isFinite3(f["center"]) || !isFinite3(f["axis"]) || !pos(f["radius"])) return false;
     const a = f["axis"] as Vec3;
@@ -157,7 +170,7 @@ const checkedCoils = new WeakSet<object>();
  */
 export function checkCoil(coil: unknown, field: string, where: string): Coil {
   if (typeof coil === "object" && coil !== null && checkedCoils.has(coil)) return coil as Coil;
-  let ok = plain(coil) && onlyKeys(coil, COIL_KEYS) && pos(coil["turns"]) && pos(coil["wireLength"]) && Array.isArray(coil["filaments"]) && coil["filaments"].length > 0 && conductorOk(coil["conductor"]);
+  let ok = plain(coil) && onlyKeys(coil, COIL_KEYS) && posTurns(coil["turns"]) && pos(coil["wireLength"]) && Array.isArray(coil["filaments"]) && coil["filaments"].length > 0 && conductorOk(coil["conductor"]);
   let vertices = 0;
   if (ok) {
     const s = (coil as Record<string, unknown>)["shape"];
@@ -207,7 +220,7 @@ export function checkPose(pose: unknown, field: string, where: string): Pose {
  * circle filament), strict keys, returned with its axis as given (callers normalise).
  */
 export function checkLoop(loop: unknown, field: string, where: string): { center: Vec3; axis: Vec3; radius: number } {
-  if (plain(loop) && onlyKeys(loop, CIRCLE_KEYS) && (loop["kind"] === undefined || loop["kind"] === "circle") && isFinite3(loop["center"]) && isFinite3(loop["axis"]) && pos(loop["radius"]) && (loop["turns"] === undefined || pos(loop["turns"]))) {
+  if (plain(loop) && onlyKeys(loop, CIRCLE_KEYS) && (loop["kind"] === undefined || loop["kind"] === "circle") && isFinite3(loop["center"]) && isFinite3(loop["axis"]) && pos(loop["radius"]) && (loop["turns"] === undefined || posTurns(loop["turns"]))) {
     const a = loop["axis"] as Vec3;
     if (Math.hypot(a[0], a[1], a[2]) > 0) return loop as unknown as { center: Vec3; axis: Vec3; radius: number };
   }

@@ -3,13 +3,13 @@
  */
 import { TanklightInputError } from "../errors.ts";
 import { current as currentQ, vec3 } from "../schema.ts";
-import { checkCoil, checkPose, parseArg, quantityArg } from "./inputs.ts";
+import { checkCoil, checkPose, GEOMETRY_LIMITS, parseArg, quantityArg } from "./inputs.ts";
 import { K_B_RHO, K_B_Z, loopKernel } from "./loopKernel.ts";
 import { addSegmentField } from "./segmentField.ts";
 import { poseFrame, rotate, toCoil } from "./frames.ts";
 import type { Coil, Pose, Vec3 } from "./types.ts";
 
-const POINT = vec3();
+const POINT = vec3({ min: -GEOMETRY_LIMITS.maxLength, max: GEOMETRY_LIMITS.maxLength });
 const CURRENT = currentQ();
 
 /**
@@ -31,7 +31,7 @@ export function magneticField(coil: Coil, pose: Pose, current: number | string, 
   checkCoil(coil, "coil", where);
   const I = quantityArg(CURRENT, () => true, current, "current", where);
   const x: Vec3 =
-    Array.isArray(point) && point.length === 3 && point.every((c) => typeof c === "number" && Number.isFinite(c))
+    Array.isArray(point) && point.length === 3 && point.every((c) => typeof c === "number" && Math.abs(c) <= GEOMETRY_LIMITS.maxLength)
       ? (point as Vec3)
       : parseArg(POINT, point, "point", where);
   const frame = poseFrame(checkPose(pose, "pose", where), where, "pose");

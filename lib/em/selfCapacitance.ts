@@ -232,6 +232,12 @@ export function selfResonance(coil: Coil): number {
   const f0 = 1 / (2 * Math.PI * Math.sqrt(L0 * C));
   const L1 = selfInductanceDetailCore(coil, f0).value;
   const f1 = 1 / (2 * Math.PI * Math.sqrt(L1 * C));
+  if (!(Number.isFinite(f1) && f1 > 0)) {
+    throw new TanklightInputError(
+      [{ path: "coil", message: `has no finite self-resonance estimate (L = ${L1} H, C = ${C} F): its wire does not fit its turns, or its turns are not physical`, value: "coil" }],
+      "selfResonance",
+    );
+  }
   srfCache.set(coil, f1);
   return f1;
 }

@@ -2,6 +2,7 @@
  * Quality factor of a coil from the loss models: Q = ωL/R.
  */
 
+import { underName } from "../../errors.ts";
 import type { Coil } from "../types.ts";
 import { selfInductanceDetailCore } from "../selfInductance.ts";
 import { selfResonance } from "../selfCapacitance.ts";
@@ -39,7 +40,7 @@ function qualityFactorAt(coil: Coil, freq: number | string, opts: CoilResistance
   const f = x.f;
   const r = coilResistanceCore(coil, f, x.temperature, true);
   const L = selfInductanceDetailCore(coil, f).value;
-  const fsr = selfResonance(coil);
+  const fsr = underName(where, () => selfResonance(coil));
   const warnings = [...r.warnings];
   if (f > fsr / 3) {
     warnings.push(`frequency ${f.toPrecision(4)} Hz is above a third of the coil's estimated self-resonance ${fsr.toPrecision(3)} Hz: lumped L, R and Q are no longer accurate`);
