@@ -24,8 +24,6 @@ import { TanklightInputError, assertNever } from "../../errors.ts";
 import { unknownKeyMessage } from "../../schema.ts";
 import { integrateAdaptive } from "../../math/quadrature.ts";
 
-const fwd = new Float64Array(6);
-const rev = new Float64Array(6);
 
 /** Fundamental current, its slope and per-junction averages for one junction (LED) across the tank. */
 interface JunctionResult {
@@ -43,9 +41,20 @@ function junctionBranch(j: Junction): JunctionBranch {
   return cachedBranch(j, () => new JunctionBranch(j.is, j.n * j.thermalVoltage, j.rs));
 }
 
-function evalJunction(j: Junction, A: number, r: JunctionResult): void {
-  if (r.j === j && r.A === A) return;
+/**
+ * One junction's half-cycle integrals at amplitude A, memoised per junction object for its last
+ * amplitude (fundamentalConductance and fundamentalCurrentSlope at one A share the work).
+ */
+function junctionAt(j: Junction, A: number): JunctionResult {
+  let r = lastAmplitude.get(j);
+  if (r === undefined) {
+    r = { j: null, A: NaN, i1: 0, slope: 0, avg: 0, peak: 0 };
+    lastAmplitude.set(j, r);
+  }
+  if (r.j === j && r.A === A) return r;
   const br = junctionBranch(j);
+  const fwd = new Float64Array(6);
+  const rev = new Float64Array(6);
   halfWaveIntegrals(br, A, 0, fwd);
   reverseHalfIntegrals(br, A, rev);
   r.i1 = fwd[0]! - rev[0]!;
@@ -54,10 +63,11 @@ function evalJunction(j: Junction, A: number, r: JunctionResult): void {
   r.peak = fwd[5]! - j.is + j.leakage * A;
   r.j = j;
   r.A = A;
+  return r;
 }
 
-const ra: JunctionResult = { j: null, A: NaN, i1: 0, slope: 0, avg: 0, peak: 0 };
-const rb: JunctionResult = { j: null, A: NaN, i1: 0, slope: 0, avg: 0, peak: 0 };
+/** Each junction's last evaluation (a memo keyed by the immutable junction object). */
+const lastAmplitude = new WeakMap<Junction, JunctionResult>();
 
 function checkAmplitude(amplitude: number, where: string): void {
   if (!(typeof amplitude === "number" && Number.isFinite(amplitude) && amplitude >= 0)) {
@@ -158,7 +168,7 @@ function fundamentalInto(load: TokenLoad, A: number, where: string): void {
         resp.slope = l.conductance(0);
         return;
       }
-      evalJunction(l, A, ra);
+      const ra = junctionAt(l, A);
       resp.current = ra.i1 / Math.PI + l.leakage * A;
       resp.slope = ra.slope / Math.PI + l.leakage;
       return;
@@ -170,8 +180,8 @@ function fundamentalInto(load: TokenLoad, A: number, where: string): void {
         resp.slope = load.a.conductance(0) + load.b.conductance(0);
         return;
       }
-      evalJunction(load.a, A, ra);
-      evalJunction(load.b, A, rb);
+      const ra = junctionAt(load.a, A);
+      const rb = junctionAt(load.b, A);
       resp.current = (ra.i1 + rb.i1) / Math.PI + (load.a.leakage + load.b.leakage) * A;
       resp.slope = (ra.slope + rb.slope) / Math.PI + load.a.leakage + load.b.leakage;
       return;
@@ -184,6 +194,7 @@ function fundamentalInto(load: TokenLoad, A: number, where: string): void {
         resp.slope = br.g;
         return;
       }
+      const fwd = new Float64Array(6);
       halfWaveIntegrals(br, A, 0, fwd);
       // both half-cycles conduct through the string: I₁ = (2/π)∫₀^π i sin θ dθ
       resp.current = (2 * fwd[0]!) / Math.PI;
@@ -295,19 +306,20 @@ export function averageLoadCurrent(load: TokenLoad, amplitude: number): readonly
       return [];
     case "led": {
       if (A === 0) return [ledEntry("led", load.led, 0, 0)];
-      evalJunction(load.led, A, ra);
+      const ra = junctionAt(load.led, A);
       return [ledEntry("led", load.led, ra.avg, ra.peak)];
     }
     case "antiParallel":
     case "parallelSameDirection": {
       if (A === 0) return [ledEntry("a", load.a, 0, 0), ledEntry("b", load.b, 0, 0)];
-      evalJunction(load.a, A, ra);
-      evalJunction(load.b, A, rb);
+      const ra = junctionAt(load.a, A);
+      const rb = junctionAt(load.b, A);
       return [ledEntry("a", load.a, ra.avg, ra.peak), ledEntry("b", load.b, rb.avg, rb.peak)];
     }
     case "bridge": {
       if (A === 0) return [ledEntry("led", load.led, 0, 0)];
       const br = bridgeOf(load);
+      const fwd = new Float64Array(6);
       halfWaveIntegrals(br, A, 0, fwd);
       // the LED conducts on both half-cycles: average = 2·∫₀^π i dθ / 2π
       return [ledEntry("led", load.led, fwd[1]! / Math.PI, fwd[5]!)];

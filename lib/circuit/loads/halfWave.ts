@@ -158,7 +158,7 @@ export function halfWaveIntegrals(br: Branch, A: number, offset: number, out: Fl
   // nearest singularity θ_s = asin((u* + offset + iπ·nvt)/A); grade the panels towards Re θ_s
   const zr = (br.singularVoltage() + offset) / A;
   const zi = (Math.PI * br.nvt) / A;
-  complexAsin(zr, zi);
+  const [asinRe, asinIm] = complexAsin(zr, zi);
   const centre = Math.min(half, Math.max(thLow, asinRe));
   // scale: the singularity's distance, but no more than the crest's Gaussian width √(nvt/A)
   // (far below the knee the current is ∝ exp(A·sin θ/nvt), entire but steep)
@@ -185,10 +185,8 @@ export function halfWaveIntegrals(br: Branch, A: number, offset: number, out: Fl
   for (let k = 0; k < 5; k++) out[k] = 2 * out[k]!;
 }
 
-let asinRe = 0;
-let asinIm = 0;
-/** Principal complex arcsine of x + iy into (asinRe, asinIm): asin z = −i·ln(iz + √(1 − z²)). */
-function complexAsin(x: number, y: number): void {
+/** Principal complex arcsine of x + iy as [re, im]: asin z = −i·ln(iz + √(1 − z²)). */
+function complexAsin(x: number, y: number): [number, number] {
   const wr = 1 - (x * x - y * y);
   const wi = -2 * x * y;
   const m = Math.hypot(wr, wi);
@@ -196,8 +194,7 @@ function complexAsin(x: number, y: number): void {
   const si = (wi < 0 ? -1 : 1) * Math.sqrt(Math.max(0, (m - wr) / 2));
   const ar = sr - y;
   const ai = x + si;
-  asinRe = Math.atan2(ai, ar);
-  asinIm = -Math.log(Math.hypot(ar, ai));
+  return [Math.atan2(ai, ar), -Math.log(Math.hypot(ar, ai))];
 }
 
 function angleOf(s: number): number {

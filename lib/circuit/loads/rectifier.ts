@@ -57,7 +57,6 @@ export interface ReservoirState {
   readonly warnings: readonly string[];
 }
 
-const scratch = new Float64Array(6);
 
 /** A junction from led()/diode()/…Preset(): its parameters positive, its functions present. */
 function requireJunction(j: unknown, field: string, where: string): void {
@@ -101,6 +100,7 @@ export function reservoirSteadyState(
     return { reservoirVoltage: 0, ledCurrent: 0, fundamentalCurrent: 0, peakDiodeCurrent: 0, slope: diode.conductance(0), warnings: [] };
   }
   const A = amplitude;
+  const scratch = new Float64Array(6); // the half-cycle integrals at the last V tried
   // h(V) = average diode current − LED current; decreasing in V.
   // Average diode current = (1/2π)(∫ i⁺) − I_s − g_leak·V over the whole cycle.
   const h = (V: number): number => {
