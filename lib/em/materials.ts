@@ -64,7 +64,9 @@ export const REFERENCE_TEMPERATURE = 293.15;
 export function material(material?: string | Material): Material {
   if (material === undefined) return COPPER;
   if (typeof material !== "string") return material;
-  const m = MATERIALS[material.toLowerCase()];
+  const key = material.toLowerCase();
+  // own keys only: "__proto__", "constructor" are not materials
+  const m = Object.hasOwn(MATERIALS, key) ? MATERIALS[key] : undefined;
   if (!m) {
     throw new TanklightInputError(
       [{ path: "material", message: `is not a known material (known: ${Object.keys(MATERIALS).join(", ")})`, value: material }],

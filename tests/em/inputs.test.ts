@@ -14,6 +14,7 @@ import { qualityFactor } from "../../lib/em/losses/qualityFactor.ts";
 import { skinDepth } from "../../lib/em/losses/skinDepth.ts";
 import { selfCapacitance } from "../../lib/em/selfCapacitance.ts";
 import type { Coil } from "../../lib/em/types.ts";
+import { material } from "../../lib/em/materials.ts";
 import { expectRelClose } from "../helpers/expectRelClose.ts";
 
 const tx = roundCoil({ innerRadius: "20 mm", turns: 10, wire: { diameter: "0.5 mm" } });
@@ -38,6 +39,11 @@ describe("EM inputs are checked at every public entry", () => {
     expect(() => coilResistance(null as never, 2e5)).toThrow(TanklightInputError);
     expect(() => selfCapacitance({ ...tx, filaments: [] })).toThrow(/selfCapacitance: coil.filaments: must hold at least one filament/);
     expect(() => magneticField({ ...tx, conductor: { kind: "round", diameter: 5e-4, outerDiameter: 5e-4, material: "toString" } }, P0, 1, [0, 0, 0.01])).toThrow(/coil.conductor.material: is not a known material/);
+  });
+
+  it("prototype words are not materials", () => {
+    expect(() => material("__proto__")).toThrow(/material: material: is not a known material/);
+    expect(() => material("constructor")).toThrow(/is not a known material/);
   });
 
   it("options are strict objects", () => {
