@@ -1,8 +1,8 @@
 /**
  * Magnetic flux density of a circular current filament in its own frame.
  */
-import { TanklightInputError, requireFinite, requirePositive, requireNonNegative } from "../errors.ts";
-import { K_B_RHO, K_B_Z, loopKernel } from "./loopKernel.ts";
+import { TanklightInputError } from "../errors.ts";
+import { K_B_RHO, K_B_Z, checkLoopArgs, loopKernel } from "./loopKernel.ts";
 
 /** Radial and axial flux density of a loop, T. */
 export interface LoopFieldValue {
@@ -36,10 +36,7 @@ export interface LoopFieldValue {
  * @see magneticField (coils in any pose), loopVectorPotential
  */
 export function loopField(radius: number, current: number, rho: number, z: number): LoopFieldValue {
-  requirePositive(radius, "radius", "m", "loopField");
-  requireFinite(current, "current", "A", "loopField");
-  requireFinite(z, "z", "m", "loopField");
-  requireNonNegative(rho, "rho", "m", "loopField");
+  checkLoopArgs(radius, current, rho, z, "loopField");
   const scratch = new Float64Array(4);
   if (!loopKernel(radius, rho, z, scratch, true)) {
     throw new TanklightInputError(

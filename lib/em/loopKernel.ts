@@ -25,6 +25,8 @@
  */
 import { MU0 } from "../constants.ts";
 import { agmScaledSum, type AgmSums } from "../math/elliptic.ts";
+import { TanklightInputError, requireFinite, requireNonNegative, requirePositive } from "../errors.ts";
+import { GEOMETRY_LIMITS } from "./inputs.ts";
 
 /** Above this m the near-wire (textbook) field forms are used; below it the AGM-sum forms. */
 const M_SPLIT = 0.7;
@@ -105,4 +107,22 @@ export function aOverRhoKernel(a: number, rho: number, z2: number, alpha2: numbe
   const sums: AgmSums = { K: 0, T: 0 };
   agmScaledSum(m, m1, sums);
   return (8 * MU0_OVER_PI * a * a * sums.K * sums.T) / (beta2 * Math.sqrt(beta2));
+}
+
+/**
+ * Checks the arguments of the single-loop field and potential (loopField, loopVectorPotential):
+ * radius > 0, rho ≥ 0, z and current finite, and every length within GEOMETRY_LIMITS.maxLength
+ * (beyond it the kernel's squares overflow). Throws TanklightInputError naming the argument.
+ */
+export function checkLoopArgs(radius: number, current: number, rho: number, z: number, where: string): void {
+  requirePositive(radius, "radius", "m", where);
+  requireFinite(current, "current", "A", where);
+  requireFinite(z, "z", "m", where);
+  requireNonNegative(rho, "rho", "m", where);
+  const limit = GEOMETRY_LIMITS.maxLength;
+  for (const [name, v] of [["radius", radius], ["rho", rho], ["z", z]] as const) {
+    if (Math.abs(v) > limit) {
+      throw new TanklightInputError([{ path: name, message: `must be at most ${limit} m in magnitude (a longer length overflows the field kernel)`, value: v }], where);
+    }
+  }
 }

@@ -2,8 +2,8 @@
  * Magnetic vector potential of a circular filament (closed form); a straight segment's is in
  * segmentPotential.ts.
  */
-import { TanklightInputError, requireFinite, requirePositive, requireNonNegative } from "../errors.ts";
-import { K_A_OVER_RHO, loopKernel } from "./loopKernel.ts";
+import { TanklightInputError } from "../errors.ts";
+import { K_A_OVER_RHO, checkLoopArgs, loopKernel } from "./loopKernel.ts";
 
 /**
  * Azimuthal vector potential A_φ of a circular filament in its own frame (Coulomb gauge):
@@ -19,10 +19,7 @@ import { K_A_OVER_RHO, loopKernel } from "./loopKernel.ts";
  * @example loopVectorPotential(0.04, 1, 0.006, 0.03) // → 2πρA_φ = coaxialLoopMutualInductance(0.04, 0.006, 0.03)
  */
 export function loopVectorPotential(radius: number, current: number, rho: number, z: number): number {
-  requirePositive(radius, "radius", "m", "loopVectorPotential");
-  requireFinite(current, "current", "A", "loopVectorPotential");
-  requireFinite(z, "z", "m", "loopVectorPotential");
-  requireNonNegative(rho, "rho", "m", "loopVectorPotential");
+  checkLoopArgs(radius, current, rho, z, "loopVectorPotential");
   const scratch = new Float64Array(4);
   if (!loopKernel(radius, rho, z, scratch, false)) {
     throw new TanklightInputError([{ path: "rho, z", message: "the point lies on the filament", value: [rho, z] }], "loopVectorPotential");

@@ -123,3 +123,17 @@ describe("loopField", () => {
     expectTypeOf(loopField).returns.toEqualTypeOf<LoopFieldValue>();
   });
 });
+
+describe("loopField and loopVectorPotential: lengths beyond the kernel's range (issue 11)", () => {
+  it("refuse a radius, rho or z above 1e6 m with the limit and why, instead of returning NaN", () => {
+    for (const f of [loopField, loopVectorPotential]) {
+      expect(() => f(1e300, 1, 0, 0.03)).toThrow(/radius: must be at most 1000000 m.*overflows/);
+      expect(() => f(0.04, 1, 1e300, 0)).toThrow(/rho: must be at most 1000000 m/);
+      expect(() => f(0.04, 1, 0, -1e300)).toThrow(/z: must be at most 1000000 m/);
+    }
+    // at the limit the values stay finite: the on-axis field μ₀Ia²/(2(a²+z²)^{3/2}) (Biot–Savart, closed form)
+    const b = loopField(0.04, 1, 0, 1e6).bZ;
+    expect(Number.isFinite(b)).toBe(true);
+    expectRelClose(b, (MU0 * 0.04 ** 2) / (2 * (0.04 ** 2 + 1e12) ** 1.5), 1e-12);
+  });
+});
