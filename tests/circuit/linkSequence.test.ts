@@ -57,7 +57,7 @@ describe("solveLinkSequence", () => {
       expect(r.leds[0]!.lit).toBe(mean >= seq.litThreshold);
     });
     seq.transmitters.forEach((t, i) => {
-      expect(t.duty).toBeCloseTo(1 / 3, 15);
+      expectRelClose(t.duty, 1 / 3, 1e-15, "duty of one coil in a 3-step scan");
       const a = alone[i]!.transmitters[0]!;
       expectRelClose(t.coilCurrentRms, a.coilCurrentRms * Math.sqrt(1 / 3), 1e-12, "RMS over the sequence");
       expectRelClose(t.peakCapacitorVoltage, a.capacitorVoltage, 1e-12, "peak capacitor voltage");

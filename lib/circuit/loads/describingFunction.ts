@@ -25,21 +25,28 @@ import { unknownKeyMessage } from "../../schema.ts";
 import { integrateAdaptive } from "../../math/quadrature.ts";
 
 
-/** Fundamental current, its slope and per-junction averages for one junction (LED) across the tank. */
+/**
+ * Fundamental current, its slope and per-junction averages for one junction (LED) across the tank,
+ * at the last amplitude it was evaluated at (a one-entry memo per junction: averageLoadCurrent
+ * right after fundamentalConductance at the same amplitude reuses the pass), with the half-cycle
+ * integral buffers that pass writes into.
+ */
 interface JunctionResult {
-  /** the junction and amplitude these numbers belong to (a one-entry memo: averageLoadCurrent
-   * right after fundamentalConductance at the same amplitude reuses the pass) */
-  j: Junction | null;
   A: number;
   i1: number; // π·I₁ contribution (without leakage)
   slope: number; // π·dI₁/dA contribution (without leakage)
   avg: number; // average current, A
   peak: number; // peak current, A
+  readonly fwd: Float64Array;
+  readonly rev: Float64Array;
 }
 
 function junctionBranch(j: Junction): JunctionBranch {
   return cachedBranch(j, () => new JunctionBranch(j.is, j.n * j.thermalVoltage, j.rs));
 }
+
+/** Each junction's last evaluation (a memo keyed by the immutable junction object). */
+const lastAmplitude = new WeakMap<Junction, JunctionResult>();
 
 /**
  * One junction's half-cycle integrals at amplitude A, memoised per junction object for its last
@@ -48,26 +55,21 @@ function junctionBranch(j: Junction): JunctionBranch {
 function junctionAt(j: Junction, A: number): JunctionResult {
   let r = lastAmplitude.get(j);
   if (r === undefined) {
-    r = { j: null, A: NaN, i1: 0, slope: 0, avg: 0, peak: 0 };
+    r = { A: NaN, i1: 0, slope: 0, avg: 0, peak: 0, fwd: new Float64Array(6), rev: new Float64Array(6) };
     lastAmplitude.set(j, r);
   }
-  if (r.j === j && r.A === A) return r;
+  if (r.A === A) return r;
+  const { fwd, rev } = r;
   const br = junctionBranch(j);
-  const fwd = new Float64Array(6);
-  const rev = new Float64Array(6);
   halfWaveIntegrals(br, A, 0, fwd);
   reverseHalfIntegrals(br, A, rev);
   r.i1 = fwd[0]! - rev[0]!;
   r.slope = fwd[2]! + rev[2]!;
   r.avg = (fwd[1]! + rev[1]!) / (2 * Math.PI) - j.is;
   r.peak = fwd[5]! - j.is + j.leakage * A;
-  r.j = j;
   r.A = A;
   return r;
 }
-
-/** Each junction's last evaluation (a memo keyed by the immutable junction object). */
-const lastAmplitude = new WeakMap<Junction, JunctionResult>();
 
 function checkAmplitude(amplitude: number, where: string): void {
   if (!(typeof amplitude === "number" && Number.isFinite(amplitude) && amplitude >= 0)) {
