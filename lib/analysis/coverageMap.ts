@@ -293,7 +293,7 @@ async function runMap(
   let refinedCells = 0;
   const refine = options.refine !== false;
   if (axes.length === 1) {
-    const r = await refineLine(ctx, axes[0]!, (u) => world(fixed, names, [u]), ledCurrent, mutual, refine ? resolution : Infinity);
+    const r = await refineLine(ctx, axes[0]!, (u) => world(fixed, names, [u]), { current: ledCurrent, mutual, resolution: refine ? resolution : Infinity });
     deadZones.push(...r.zones);
     deadMeasure = r.deadLength;
     refinedCells = r.refined;
@@ -307,9 +307,11 @@ async function runMap(
         axes[0]!,
         axes[1]!,
         (u, v) => world(fixed, names, [u, v, ...wValue]),
-        ledCurrent.subarray(w * nu * nv, (w + 1) * nu * nv),
-        mutual.subarray(w * nu * nv * na, (w + 1) * nu * nv * na),
-        refine ? resolution : Infinity,
+        {
+          current: ledCurrent.subarray(w * nu * nv, (w + 1) * nu * nv),
+          mutual: mutual.subarray(w * nu * nv * na, (w + 1) * nu * nv * na),
+          resolution: refine ? resolution : Infinity,
+        },
         w,
       );
       deadZones.push(...r.zones);
@@ -397,20 +399,25 @@ function changes(ca: number, cb: number, ma: ArrayLike<number>, oa: number, mb: 
   return false;
 }
 
+/** The coarse grid's values handed to the refinement, and the fine step (Infinity: no refinement). */
+interface Coarse {
+  readonly current: Float64Array;
+  readonly mutual: Float64Array;
+  readonly resolution: number;
+}
+
+/** Fine steps per coarse step h so that each is ≤ resolution (1 without refinement). */
+function fineSteps(h: number, resolution: number): number {
+  return Number.isFinite(resolution) ? Math.max(1, Math.ceil(Math.abs(h) / resolution - 1e-9)) : 1;
+}
+
 // ── a line ──────────────────────────────────────────────────────────────────────
-async function refineLine(
-  ctx: Ctx,
-  axis: GridAxis,
-  at: (u: number) => Vec3,
-  current: Float64Array,
-  mutual: Float64Array,
-  resolution: number,
-): Promise<{ zones: DeadZone[]; deadLength: number; refined: number }> {
+async function refineLine(ctx: Ctx, axis: GridAxis, at: (u: number) => Vec3, coarse: Coarse): Promise<{ zones: DeadZone[]; deadLength: number; refined: number }> {
+  const { current, mutual } = coarse;
   const u = axis.values;
   const n = u.length;
   const na = ctx.na;
-  const h = Math.abs(u[1]! - u[0]!);
-  const s = Number.isFinite(resolution) ? Math.max(1, Math.ceil(h / resolution - 1e-9)) : 1;
+  const s = fineSteps(u[1]! - u[0]!, coarse.resolution);
   // samples in order: coarse nodes plus fine samples inside flagged intervals
   const flagged: number[] = [];
   for (let i = 0; i + 1 < n; i++) {
@@ -470,11 +477,10 @@ async function refinePlane(
   axisU: GridAxis,
   axisV: GridAxis,
   at: (u: number, v: number) => Vec3,
-  current: Float64Array,
-  mutual: Float64Array,
-  resolution: number,
+  coarse: Coarse,
   slice: number,
 ): Promise<{ zones: DeadZone[]; deadArea: number; refined: number }> {
+  const { current, mutual } = coarse;
   const U = axisU.values;
   const V = axisV.values;
   const nu = U.length;
@@ -483,8 +489,8 @@ async function refinePlane(
   const th = ctx.threshold;
   const hu = (U[nu - 1]! - U[0]!) / (nu - 1);
   const hv = (V[nv - 1]! - V[0]!) / (nv - 1);
-  const su = Number.isFinite(resolution) ? Math.max(1, Math.ceil(Math.abs(hu) / resolution - 1e-9)) : 1;
-  const sv = Number.isFinite(resolution) ? Math.max(1, Math.ceil(Math.abs(hv) / resolution - 1e-9)) : 1;
+  const su = fineSteps(hu, coarse.resolution);
+  const sv = fineSteps(hv, coarse.resolution);
   const NI = (nu - 1) * su;
   const NJ = (nv - 1) * sv;
   const cells = (nu - 1) * (nv - 1);
