@@ -21,6 +21,11 @@ function check(where: string, path: string, x: number, rule: "positive" | "nonNe
   }
 }
 
+/** {@link check} of every argument in `args` (its key is the field name), in order: each a finite number > 0. */
+function checkPositive(where: string, args: Readonly<Record<string, number>>): void {
+  for (const [path, x] of Object.entries(args)) check(where, path, x);
+}
+
 // ── wire gauges ──────────────────────────────────────────────────────────────
 
 const AWG_NAMED: Readonly<Record<string, number>> = {
@@ -72,8 +77,7 @@ export function awgDiameter(gauge: number | string): number {
  * @example nagaokaCoefficient(0.01, 0.02) // → 0.68842… (D/ℓ = 1)
  */
 export function nagaokaCoefficient(radius: number, length: number): number {
-  check("nagaokaCoefficient", "radius", radius);
-  check("nagaokaCoefficient", "length", length);
+  checkPositive("nagaokaCoefficient", { radius, length });
   const fourA2 = 4 * radius * radius;
   const l2 = length * length;
   const k2 = fourA2 / (fourA2 + l2);
@@ -124,8 +128,7 @@ function ellipticKAndKMinusE(m: number, m1: number): { K: number; KminusE: numbe
  * @example lundinNagaokaCoefficient(0.01, 0.02) // → 0.68842… (x = 1)
  */
 export function lundinNagaokaCoefficient(radius: number, length: number): number {
-  check("lundinNagaokaCoefficient", "radius", radius);
-  check("lundinNagaokaCoefficient", "length", length);
+  checkPositive("lundinNagaokaCoefficient", { radius, length });
   const x = (2 * radius) / length;
   const f1 = (z: number): number => (1 + z * (0.383901 + 0.017108 * z)) / (1 + 0.258952 * z);
   const f2 = (z: number): number => z * (0.093842 + z * (0.002029 - 0.000801 * z));
@@ -159,9 +162,7 @@ export function currentSheetInductance(radius: number, length: number, turns: nu
  * @example wheeler1982Inductance(0.01, 0.02, 20) // → 5.4355e-6 (H; 20 turns, radius 10 mm, 20 mm long)
  */
 export function wheeler1982Inductance(radius: number, length: number, turns: number): number {
-  check("wheeler1982Inductance", "radius", radius);
-  check("wheeler1982Inductance", "length", length);
-  check("wheeler1982Inductance", "turns", turns);
+  checkPositive("wheeler1982Inductance", { radius, length, turns });
   const d = 2 * radius;
   const u = length / d;
   const tail = 1 / (2.3004 + 3.437 * u + 1.7636 * u * u - 0.47 / Math.pow(0.755 + 1 / u, 1.44));
@@ -179,9 +180,7 @@ export function wheeler1982Inductance(radius: number, length: number, turns: num
  * @example wheelerSingleLayerInductance(0.0254, 0.0508, 10) // → 3.448e-6 (100/29 µH)
  */
 export function wheelerSingleLayerInductance(meanRadius: number, length: number, turns: number): number {
-  check("wheelerSingleLayerInductance", "meanRadius", meanRadius);
-  check("wheelerSingleLayerInductance", "length", length);
-  check("wheelerSingleLayerInductance", "turns", turns);
+  checkPositive("wheelerSingleLayerInductance", { meanRadius, length, turns });
   const a = meanRadius / INCH;
   const b = length / INCH;
   return ((a * a * turns * turns) / (9 * a + 10 * b)) * MICROHENRY;
@@ -197,8 +196,7 @@ export function wheelerSingleLayerInductance(meanRadius: number, length: number,
  * @example wheelerMultilayerInductance(0.0254, 0.0254, 0.0254, 10) // → 3.2e-6 (80/25 µH)
  */
 export function wheelerMultilayerInductance(meanRadius: number, length: number, depth: number, turns: number): number {
-  check("wheelerMultilayerInductance", "meanRadius", meanRadius);
-  check("wheelerMultilayerInductance", "length", length);
+  checkPositive("wheelerMultilayerInductance", { meanRadius, length });
   check("wheelerMultilayerInductance", "depth", depth, "nonNegative");
   check("wheelerMultilayerInductance", "turns", turns);
   const a = meanRadius / INCH;
@@ -215,9 +213,7 @@ export function wheelerMultilayerInductance(meanRadius: number, length: number, 
  * @example wheelerFlatSpiralInductance(0.0254, 0.0254, 10) // → 5.263e-6 (100/19 µH)
  */
 export function wheelerFlatSpiralInductance(meanRadius: number, depth: number, turns: number): number {
-  check("wheelerFlatSpiralInductance", "meanRadius", meanRadius);
-  check("wheelerFlatSpiralInductance", "depth", depth);
-  check("wheelerFlatSpiralInductance", "turns", turns);
+  checkPositive("wheelerFlatSpiralInductance", { meanRadius, depth, turns });
   const a = meanRadius / INCH;
   const c = depth / INCH;
   return ((a * a * turns * turns) / (8 * a + 11 * c)) * MICROHENRY;
@@ -244,8 +240,7 @@ const MOHAN_SHEET: Readonly<Record<SpiralOutline, readonly [number, number, numb
 };
 
 function spiralMeans(where: string, turns: number, dOut: number, dIn: number): { dAvg: number; rho: number } {
-  check(where, "turns", turns);
-  check(where, "outerDiameter", dOut);
+  checkPositive(where, { turns, outerDiameter: dOut });
   check(where, "innerDiameter", dIn, "nonNegative");
   if (!(dIn < dOut)) {
     throw new TanklightInputError(
@@ -330,9 +325,7 @@ export function groverRectangleInductance(
   opts: { readonly internal?: number } = {},
 ): number {
   const where = "groverRectangleInductance";
-  check(where, "width", width);
-  check(where, "height", height);
-  check(where, "wireRadius", wireRadius);
+  checkPositive(where, { width, height, wireRadius });
   const y = opts.internal ?? 0.25;
   check(where, "internal", y, "nonNegative");
   const a = width;
@@ -387,9 +380,7 @@ export function rosaB(turns: number): number {
  */
 export function rosaRoundWireCorrection(radius: number, turns: number, pitch: number, wireDiameter: number): number {
   const where = "rosaRoundWireCorrection";
-  check(where, "radius", radius);
-  check(where, "pitch", pitch);
-  check(where, "wireDiameter", wireDiameter);
+  checkPositive(where, { radius, pitch, wireDiameter });
   const A = 1.25 - Math.log((2 * pitch) / wireDiameter);
   return MU0 * radius * turns * (A + rosaB(turns));
 }

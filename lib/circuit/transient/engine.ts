@@ -45,6 +45,17 @@ function bdf2Point(h: ReactiveHistory, capV0: Float64Array, indI0: Float64Array)
   for (let k = 0; k < h.indI.length; k++) h.indI[k] = BDF2_A1 * h.indI[k]! - BDF2_A0 * indI0[k]!;
 }
 
+/** A run's counters, as a transient result reports them. */
+export interface EngineStats {
+  /** accepted integration steps, including sub-steps */
+  readonly steps: number;
+  /** steps halved because Newton's method failed */
+  readonly rejectedSteps: number;
+  readonly newtonIterations: number;
+  readonly factorizations: number;
+  readonly switchingEvents: number;
+}
+
 /** The integrator state and its preallocated workspace. */
 export class Engine {
   readonly cc: CompiledCircuit;
@@ -123,6 +134,17 @@ export class Engine {
     this.diodeI = new Float64Array(cc.diodes.length);
     this.diodeG = new Float64Array(cc.diodes.length);
     this.diodeI0 = new Float64Array(cc.diodes.length);
+  }
+
+  /** The counters so far (a copy: the engine keeps counting). */
+  stats(): EngineStats {
+    return {
+      steps: this.steps,
+      rejectedSteps: this.rejected,
+      newtonIterations: this.newtonIterations,
+      factorizations: this.factorizations,
+      switchingEvents: this.switchingEvents,
+    };
   }
 
   /** Sets the switch states at t = 0 and solves the t = 0 network (a backward-Euler step of 1e-4·h, state then restored). */

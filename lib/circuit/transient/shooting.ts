@@ -129,13 +129,7 @@ export function periodicSteadyState(circuit: TransientCircuit, opts: ShootingOpt
   return {
     ...periodicRecording(recorder.finish(), t0),
     step: h,
-    stats: {
-      steps: engine.steps,
-      rejectedSteps: engine.rejected,
-      newtonIterations: engine.newtonIterations,
-      factorizations: engine.factorizations,
-      switchingEvents: engine.switchingEvents,
-    },
+    stats: engine.stats(),
     warnings: converged ? [...engine.warnings] : [...engine.warnings, `${where}: shooting did not converge in ${maxIter} Newton iterations (relative mismatch ${residual.toExponential(2)}, tolerance ${tol})`],
     shooting: { converged, iterations, periods, residual },
   };

@@ -21,7 +21,7 @@
 import { TanklightInputError } from "../../errors.ts";
 import { GROUND, type TransientCircuit } from "./circuit.ts";
 import { compileCircuit } from "./compile.ts";
-import { Engine } from "./engine.ts";
+import { Engine, type EngineStats } from "./engine.ts";
 import { Recorder } from "./recorder.ts";
 import { resolveOptions, type SimulateOptions } from "./simulateOptions.ts";
 import { SteadyStateTracker, type SteadyState } from "./steadyState.ts";
@@ -46,15 +46,8 @@ export interface TransientResult {
   readonly currents: Readonly<Record<string, Float64Array>>;
   /** present when `untilSteady` was set */
   readonly steady?: SteadyState;
-  readonly stats: {
-    /** accepted integration steps, including sub-steps */
-    readonly steps: number;
-    /** steps halved because Newton's method failed */
-    readonly rejectedSteps: number;
-    readonly newtonIterations: number;
-    readonly factorizations: number;
-    readonly switchingEvents: number;
-  };
+  /** steps, rejected steps, Newton iterations, factorizations, switching events */
+  readonly stats: EngineStats;
   readonly warnings: string[];
 }
 
@@ -109,13 +102,7 @@ export function simulate(circuit: TransientCircuit, opts: SimulateOptions): Tran
     ...recorder.finish(),
     step: h,
     ...(steady ? { steady } : {}),
-    stats: {
-      steps: engine.steps,
-      rejectedSteps: engine.rejected,
-      newtonIterations: engine.newtonIterations,
-      factorizations: engine.factorizations,
-      switchingEvents: engine.switchingEvents,
-    },
+    stats: engine.stats(),
     warnings,
   };
 }

@@ -11,12 +11,12 @@
  */
 
 import { MU0 } from "../../constants.ts";
-import { TanklightInputError, requirePositive, requireNonNegative } from "../../errors.ts";
+import { TanklightInputError } from "../../errors.ts";
 import { kelvinScaledInto } from "../../math/kelvin.ts";
 import { loopField } from "../loopField.ts";
 import type { Coil, Filament } from "../types.ts";
+import { checkRoundWire } from "./roundWireAcFactor.ts";
 import { skinDepthCore } from "./skinDepth.ts";
-
 
 /**
  * g(γ) = P′·σ/Ĥ² of a round wire in a uniform transverse field (hot path, no checks), γ ≥ 0.
@@ -54,9 +54,7 @@ export function proximityG(gamma: number): number {
  * @example roundWireProximityFactor(0.5e-3, 200e3, 1.7241e-8) // → 1.1654e-7 W·m⁻¹/(A/m)² (0.5 mm copper, 200 kHz)
  */
 export function roundWireProximityFactor(diameter: number, f: number, resistivity: number): number {
-  requirePositive(diameter, "diameter", "m", "roundWireProximityFactor");
-  requirePositive(resistivity, "resistivity", "Ω·m", "roundWireProximityFactor");
-  requireNonNegative(f, "f", "Hz", "roundWireProximityFactor");
+  checkRoundWire("roundWireProximityFactor", "diameter", diameter, f, resistivity);
   if (f === 0) return 0;
   const delta = skinDepthCore(f, resistivity);
   return resistivity * proximityG(diameter / (delta * Math.SQRT2));

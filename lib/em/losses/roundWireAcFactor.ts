@@ -25,6 +25,18 @@ export function acFactorFromQ(q: number): number {
 }
 
 /**
+ * The input check of the round-wire loss functions: the wire's size (radius or diameter, m) and
+ * its resistivity (Ω·m) finite and > 0, the frequency (Hz) finite and ≥ 0; throws
+ * TanklightInputError naming the field under `where`.
+ * @example checkRoundWire("roundWireAcFactor", "radius", 0.25e-3, 0, 1.7241e-8) // → undefined
+ */
+export function checkRoundWire(where: string, sizeField: string, size: number, f: number, resistivity: number): void {
+  requirePositive(size, sizeField, "m", where);
+  requirePositive(resistivity, "resistivity", "Ω·m", where);
+  requireNonNegative(f, "f", "Hz", where);
+}
+
+/**
  * Exact AC-to-DC resistance ratio of an isolated straight round wire (skin effect only).
  *
  * With δ = √(ρ/(πfμ₀)) and q = √2·r/δ:
@@ -40,9 +52,7 @@ export function acFactorFromQ(q: number): number {
  * @example roundWireAcFactor(0.25e-3, 0, 1.7241e-8) // → 1
  */
 export function roundWireAcFactor(radius: number, f: number, resistivity: number): number {
-  requirePositive(radius, "radius", "m", "roundWireAcFactor");
-  requirePositive(resistivity, "resistivity", "Ω·m", "roundWireAcFactor");
-  requireNonNegative(f, "f", "Hz", "roundWireAcFactor");
+  checkRoundWire("roundWireAcFactor", "radius", radius, f, resistivity);
   if (f === 0) return 1;
   const delta = skinDepthCore(f, resistivity);
   return acFactorFromQ((Math.SQRT2 * radius) / delta);
@@ -62,9 +72,7 @@ export function roundWireAcFactor(radius: number, f: number, resistivity: number
  * @example roundWireInternalInductanceFactor(0.25e-3, 200e3, 1.7241e-8) // → 0.2314
  */
 export function roundWireInternalInductanceFactor(radius: number, f: number, resistivity: number): number {
-  requirePositive(radius, "radius", "m", "roundWireInternalInductanceFactor");
-  requirePositive(resistivity, "resistivity", "Ω·m", "roundWireInternalInductanceFactor");
-  requireNonNegative(f, "f", "Hz", "roundWireInternalInductanceFactor");
+  checkRoundWire("roundWireInternalInductanceFactor", "radius", radius, f, resistivity);
   if (f === 0) return 0.25;
   const q = (Math.SQRT2 * radius) / skinDepthCore(f, resistivity);
   // small q: ber′ = (ber₁ + bei₁)/√2 cancels to O(q³), so use the series Y = 1/4 − x⁴/384 + O(x⁸),

@@ -4,11 +4,10 @@
  * and dead zones outlined and labelled.
  */
 import { formatQuantity } from "../../units.ts";
-import { levelSegments } from "../contour.ts";
-import { axisTitle, displayScale, maxAbs, tidy } from "../scale.ts";
+import { axisTitle, tidy } from "../scale.ts";
 import { HEAT_RAMP, PALETTE } from "../theme.ts";
-import { finiteArray, gridShape, positive } from "./check.ts";
-import { cellEdges, frame, type ChartSpec, type ChartTitle } from "./spec.ts";
+import { heatGrid } from "./heatGrid.ts";
+import { frame, type ChartSpec, type ChartTitle } from "./spec.ts";
 
 /** Input of {@link coverageChart}; positions in m, currents in A. */
 export interface CoverageChartInput extends ChartTitle {
@@ -35,28 +34,15 @@ export interface CoverageChartInput extends ChartTitle {
  * @example coverageChart({ x: [0, 0.01], y: [0, 0.01], current: [[1e-3, 2e-4], [8e-4, 1e-4]], threshold: 5e-4 })
  */
 export function coverageChart(input: CoverageChartInput): ChartSpec {
-  const where = "chart.coverage";
-  finiteArray(input.x, "x", where, "m");
-  finiteArray(input.y, "y", where, "m");
-  gridShape(input.current, input.y.length, input.x.length, "current", where);
-  positive(input.threshold, "threshold", where, "A");
-  const len = displayScale(Math.max(maxAbs(input.x), maxAbs(input.y)), "m");
-  const amps = displayScale(Math.max(maxAbs(input.current.flat()), input.threshold), "A");
-  const xe = cellEdges(input.x), ye = cellEdges(input.y);
+  const grid = heatGrid("chart.coverage", { x: ["x", input.x], y: ["y", input.y], values: ["current", input.current], level: ["threshold", input.threshold], unit: "A" });
+  const { length: len, value: amps, xEdges: xe, yEdges: ye } = grid;
   const cells: Record<string, number | boolean>[] = [];
   input.current.forEach((row, r) => {
     row.forEach((i, c) => {
-      cells.push({
-        x: tidy(xe[c]! * len.factor), x2: tidy(xe[c + 1]! * len.factor),
-        y: tidy(ye[r]! * len.factor), y2: tidy(ye[r + 1]! * len.factor),
-        current: tidy(Math.max(i, input.threshold / 100) * amps.factor),
-        lit: i >= input.threshold,
-      });
+      cells.push({ ...grid.cell(r, c), current: tidy(Math.max(i, input.threshold / 100) * amps.factor), lit: i >= input.threshold });
     });
   });
-  const boundary = levelSegments(input.x, input.y, input.current, input.threshold).map((s) => ({
-    x: tidy(s.x1 * len.factor), y: tidy(s.y1 * len.factor), x2: tidy(s.x2 * len.factor), y2: tidy(s.y2 * len.factor),
-  }));
+  const boundary = grid.levelLine;
   const zones = (input.deadZones ?? []).flatMap((poly, zone) =>
     [...poly, poly[0]!].map((p, order) => ({ zone, order, x: tidy(p[0] * len.factor), y: tidy(p[1] * len.factor) })),
   );

@@ -4,11 +4,10 @@
  * as a contour line and labelled.
  */
 import { formatQuantity } from "../../units.ts";
-import { levelSegments } from "../contour.ts";
-import { axisTitle, displayScale, maxAbs, tidy } from "../scale.ts";
+import { axisTitle, tidy } from "../scale.ts";
 import { HEAT_RAMP, PALETTE } from "../theme.ts";
-import { finiteArray, gridShape, positive } from "./check.ts";
-import { cellEdges, frame, type ChartSpec, type ChartTitle } from "./spec.ts";
+import { heatGrid } from "./heatGrid.ts";
+import { frame, type ChartSpec, type ChartTitle } from "./spec.ts";
 
 /** Input of {@link exposureChart}: positions in m, field in T RMS. */
 export interface ExposureChartInput extends ChartTitle {
@@ -29,24 +28,11 @@ export interface ExposureChartInput extends ChartTitle {
  * @example exposureChart({ offset: [0, 0.05], height: [0.01, 0.05], field: [[3e-5, 1e-5], [5e-6, 3e-6]], referenceLevel: 27e-6, referenceName: "ICNIRP 2010 public" })
  */
 export function exposureChart(input: ExposureChartInput): ChartSpec {
-  const where = "chart.exposure";
-  finiteArray(input.offset, "offset", where, "m");
-  finiteArray(input.height, "height", where, "m");
-  gridShape(input.field, input.height.length, input.offset.length, "field", where);
-  positive(input.referenceLevel, "referenceLevel", where, "T");
-  const len = displayScale(Math.max(maxAbs(input.offset), maxAbs(input.height)), "m");
-  const tesla = displayScale(Math.max(input.referenceLevel, maxAbs(input.field.flat())), "T");
-  const xe = cellEdges(input.offset), ye = cellEdges(input.height);
+  const grid = heatGrid("chart.exposure", { x: ["offset", input.offset], y: ["height", input.height], values: ["field", input.field], level: ["referenceLevel", input.referenceLevel], unit: "T" });
+  const { length: len, value: tesla } = grid;
   const floor = input.referenceLevel / 1000;
-  const cells = input.field.flatMap((row, r) =>
-    row.map((b, c) => ({
-      x: tidy(xe[c]! * len.factor), x2: tidy(xe[c + 1]! * len.factor), y: tidy(ye[r]! * len.factor), y2: tidy(ye[r + 1]! * len.factor),
-      field: tidy(Math.max(b, floor) * tesla.factor),
-    })),
-  );
-  const line = levelSegments(input.offset, input.height, input.field, input.referenceLevel).map((s) => ({
-    x: tidy(s.x1 * len.factor), y: tidy(s.y1 * len.factor), x2: tidy(s.x2 * len.factor), y2: tidy(s.y2 * len.factor),
-  }));
+  const cells = input.field.flatMap((row, r) => row.map((b, c) => ({ ...grid.cell(r, c), field: tidy(Math.max(b, floor) * tesla.factor) })));
+  const line = grid.levelLine;
   const layers: Record<string, unknown>[] = [
     {
       data: { values: cells },
