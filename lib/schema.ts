@@ -137,6 +137,46 @@ export function quantityMeta(schema: z.ZodType): QuantityMeta | undefined {
   return m as QuantityMeta;
 }
 
+// ── schemas built on first use ───────────────────────────────────────────────
+
+/**
+ * A module-level schema that is built on first use, so that importing the library builds no
+ * schema (issue 12: import cost): `export const PoseSpec = lazySchema(() => z.strictObject({ … }))`.
+ * The value stands for the schema itself (a Proxy forwarding every property to it): the first
+ * access (`.safeParse`, `.shape`, `.extend`, nesting inside another schema) runs `build` once,
+ * and every later use gets that same, never-changing schema. Names, types, messages and
+ * metadata (`.describe`, `.meta`, also in `z.toJSONSchema`) stay as with the eager schema.
+ * @param build makes the schema (or a plain object of schemas); called at most once.
+ * @example schema.lazySchema(() => quantity("length")).parse("12 mm") // → 0.012
+ */
+export function lazySchema<T extends object>(build: () => T): T {
+  let built: T | undefined;
+  const real = (): T => {
+    if (built === undefined) {
+      built = build();
+      // z.toJSONSchema and the registry look metadata up by object: give the stand-in the schema's
+      const meta = "_zod" in built ? z.globalRegistry.get(built as unknown as z.ZodType) : undefined;
+      if (meta !== undefined) z.globalRegistry.add(standIn as unknown as z.ZodType, meta);
+    }
+    return built;
+  };
+  const standIn: T = new Proxy({} as T, {
+    get: (_, key) => Reflect.get(real(), key),
+    set: (_, key, value) => Reflect.set(real(), key, value),
+    has: (_, key) => Reflect.has(real(), key),
+    ownKeys: () => Reflect.ownKeys(real()),
+    // reported configurable: a Proxy may not report a non-configurable key its (empty) target lacks
+    getOwnPropertyDescriptor: (_, key) => {
+      const d = Reflect.getOwnPropertyDescriptor(real(), key);
+      return d === undefined ? undefined : { ...d, configurable: true };
+    },
+    defineProperty: (_, key, d) => Reflect.defineProperty(real(), key, d),
+    deleteProperty: (_, key) => Reflect.deleteProperty(real(), key),
+    getPrototypeOf: () => Reflect.getPrototypeOf(real()),
+  });
+  return standIn;
+}
+
 // ── shorthands ───────────────────────────────────────────────────────────────
 // Sizes of things and circuit element values are positive by default (a coil radius, a wire
 // diameter, a frequency, an inductance, a capacitance, a time step): zero or negative has no

@@ -30,7 +30,7 @@
  * 0.3 s to import. The loop below is 40 lines and stops on relative progress.
  */
 import { z } from "zod";
-import { current, frequency, length, parseInput, voltage } from "../schema.ts";
+import { current, frequency, length, parseInput, voltage, lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import { createRandom } from "../math/random.ts";
 import { DEFAULT_LIT_THRESHOLD } from "../circuit/link/network.ts";
@@ -59,13 +59,13 @@ import type { Vec3 } from "../em/types.ts";
  * - `frequency` — the drive frequency; `coilCurrent` — the transmitter coil current
  *   amplitude (peak), where a current probe was at hand.
  */
-export const MeasurementInput = z.discriminatedUnion("kind", [
+export const MeasurementInput = lazySchema(() => z.discriminatedUnion("kind", [
   z.strictObject({ kind: z.literal("edge"), token: z.string(), pose: PoseInput, along: unitVector().optional(), uncertainty: length() }),
   z.strictObject({ kind: z.literal("lit"), token: z.string(), pose: PoseInput, lit: z.boolean() }),
   z.strictObject({ kind: z.literal("tankAmplitude"), token: z.string(), pose: PoseInput, value: voltage({ positive: true }), uncertainty: voltage({ positive: true }) }),
   z.strictObject({ kind: z.literal("frequency"), value: frequency(), uncertainty: frequency() }),
   z.strictObject({ kind: z.literal("coilCurrent"), value: current({ positive: true }), uncertainty: current({ positive: true }) }),
-]);
+]));
 export type Measurement = z.input<typeof MeasurementInput>;
 type MeasurementParsed = z.output<typeof MeasurementInput>;
 
@@ -75,21 +75,21 @@ const UNKNOWNS: readonly CalibrationUnknown[] = ["coilCurrent", "tokenQ", "litTh
 const UNITS: Record<CalibrationUnknown, string> = { coilCurrent: "A", tokenQ: "", litThreshold: "A", frequencyOffset: "Hz" };
 
 /** Some or all of the calibration parameters, with units (for `assume` and `initial`). */
-const ParameterValuesInput = z.strictObject({
+const ParameterValuesInput = lazySchema(() => z.strictObject({
   coilCurrent: current({ positive: true }).optional(),
   tokenQ: z.number().positive().finite().optional(),
   litThreshold: current({ positive: true }).optional(),
   frequencyOffset: frequency({ positive: false }).optional(),
-});
+}));
 
-const CalibrateOptionsInput = z.strictObject({
+const CalibrateOptionsInput = lazySchema(() => z.strictObject({
   /** values of the parameters that are not fitted (defaults: tokenQ 1, litThreshold 0.5 mA, frequencyOffset 0) */
   assume: ParameterValuesInput.optional(),
   /** starting values for the fit (by default found from the data) */
   initial: ParameterValuesInput.optional(),
   /** iteration cap of the least-squares loop (default 60) */
   maxIterations: z.number().int().min(1).max(1000).optional(),
-});
+}));
 export type CalibrateOptions = z.input<typeof CalibrateOptionsInput>;
 
 // ── results ──────────────────────────────────────────────────────────────────
@@ -606,12 +606,12 @@ function residualTable(
 
 // ── predictions ──────────────────────────────────────────────────────────────
 
-const PredictOptionsInput = z.strictObject({
+const PredictOptionsInput = lazySchema(() => z.strictObject({
   /** Monte Carlo samples over the fitted parameters (default 200, at most 100 000) */
   samples: z.number().int().min(1).max(100_000).optional(),
   /** seed of the random stream (default 1) */
   seed: z.number().int().optional(),
-});
+}));
 export type PredictOptions = z.input<typeof PredictOptionsInput>;
 
 /** A predicted quantity with its spread over the calibrated parameters. */

@@ -12,7 +12,7 @@
  * - frequencyOffset — drive frequency minus the nominal, Hz.
  */
 import { z } from "zod";
-import { frequency, parseInput, temperature, unitVector } from "../schema.ts";
+import { frequency, parseInput, temperature, unitVector, lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import { solveLink } from "../circuit/link.ts";
 import { PoseInput, ReceiverInput, TransmitterInput } from "../circuit/link/schema.ts";
@@ -20,7 +20,7 @@ import { coilResistance } from "../em/losses/coilResistance.ts";
 import type { Vec3 } from "../em/types.ts";
 
 /** What the maker knows: the coils and parts they can see, and the nominal frequency. */
-export const CalibrationDesignInput = z.strictObject({
+export const CalibrationDesignInput = lazySchema(() => z.strictObject({
   /** nominal drive frequency, Hz */
   frequency: frequency(),
   /** the transmitter coil and its pose (default: origin, axis +z); its drive is what is unknown */
@@ -29,7 +29,7 @@ export const CalibrationDesignInput = z.strictObject({
   tokens: z.record(z.string().min(1), ReceiverInput.omit({ pose: true })),
   /** conductor temperature for the coil resistances, K (default 20 °C) */
   temperature: temperature().optional(),
-});
+}));
 export type CalibrationDesign = z.input<typeof CalibrationDesignInput>;
 export type CalibrationDesignParsed = z.output<typeof CalibrationDesignInput>;
 
@@ -208,4 +208,4 @@ export function parsePose(pose: unknown, where: string, field: string): PoseSI {
 }
 
 /** A direction given with or without units (normalised). */
-export const DirectionInput = unitVector();
+export const DirectionInput = lazySchema(() => unitVector());

@@ -29,7 +29,7 @@
 import { z } from "zod";
 import type { Vec3 } from "../em/types.ts";
 import type { LinkSystem } from "../circuit/link.ts";
-import { length, parseInput } from "../schema.ts";
+import { length, parseInput, lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import { marchingSquares } from "./contours.ts";
 import { makeProbe, type Probe, type ProbeValues } from "./probe.ts";
@@ -117,11 +117,11 @@ export interface CoverageMap {
   readonly warnings: readonly string[];
 }
 
-const OptionsSchema = z.object({
+const OptionsSchema = lazySchema(() => z.object({
   resolution: length().optional(),
   litThreshold: z.number().positive().finite().optional(),
   model: z.enum(["fundamental", "harmonic", "auto"]).optional(),
-});
+}));
 
 /** Floor of the margin ln(I/I_lit) (I → 0): −ln 10⁶. */
 const MARGIN_FLOOR = 1e-6;

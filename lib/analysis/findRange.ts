@@ -15,19 +15,19 @@
 import { z } from "zod";
 import type { Vec3 } from "../em/types.ts";
 import type { LinkSystem } from "../circuit/link.ts";
-import { length, parseInput, vec3, unitVector } from "../schema.ts";
+import { length, parseInput, vec3, unitVector, lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import { makeProbe, type Probe } from "./probe.ts";
 import { probeSpec } from "./probeSpec.ts";
 import { tokenAxes, type OrientationInput } from "./region.ts";
 
 /** A ray of token positions: start point and direction. */
-export const RayInput = z.strictObject({
+export const RayInput = lazySchema(() => z.strictObject({
   /** where the ray starts (the token's centre), m; default [0, 0, 0] */
   from: vec3().optional(),
   /** direction, normalised (e.g. [0, 0, 1] on the axis, [1, 0, 0] sideways) */
   along: unitVector(),
-});
+}));
 /** What findRange accepts as a direction. */
 export type RayInput = z.input<typeof RayInput>;
 
@@ -78,12 +78,12 @@ export interface RangeResult {
   readonly warnings: readonly string[];
 }
 
-const Opts = z.object({
+const Opts = lazySchema(() => z.object({
   max: length().optional(),
   step: length().optional(),
   resolution: length().optional(),
   model: z.enum(["fundamental", "harmonic", "auto"]).optional(),
-});
+}));
 
 /**
  * The furthest distance along a ray at which a token still lights (see the module comment).

@@ -4,14 +4,14 @@
  * units.
  */
 import { z } from "zod";
-import { angle, length, parseInput, quantity, unitVector } from "../schema.ts";
+import { angle, length, parseInput, quantity, unitVector, lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import type { Vec3 } from "../em/types.ts";
 
-const coordinate = quantity("length");
+const coordinate = lazySchema(() => quantity("length"));
 
 /** One axis of a region: a fixed coordinate, or a range with a number of points or a step. */
-export const AxisInput = z.union([
+export const AxisInput = lazySchema(() => z.union([
   coordinate,
   z.strictObject({
     from: coordinate,
@@ -21,10 +21,10 @@ export const AxisInput = z.union([
     /** grid step, m (rounded so the points fall on both ends) */
     step: length().optional(),
   }),
-]);
+]));
 
 /** A region: each of x, y, z is a fixed coordinate or a range; one range is a line, two a plane, three a volume. */
-export const RegionInput = z.strictObject({ x: AxisInput, y: AxisInput, z: AxisInput });
+export const RegionInput = lazySchema(() => z.strictObject({ x: AxisInput, y: AxisInput, z: AxisInput }));
 /** What coverageMap accepts as a region. */
 export type RegionInput = z.input<typeof RegionInput>;
 
@@ -72,9 +72,9 @@ export function parseRegion(input: RegionInput, where: string): Region {
 }
 
 /** A tilt of the token: its axis turned by `tilt` about the direction `about` (default the x axis). */
-export const TiltInput = z.strictObject({ tilt: angle(), about: unitVector().optional() });
+export const TiltInput = lazySchema(() => z.strictObject({ tilt: angle(), about: unitVector().optional() }));
 /** Orientation: flat (omit), one tilt, or several (the worst counts at each point). */
-export const OrientationInput = z.union([TiltInput, z.array(TiltInput).min(1)]);
+export const OrientationInput = lazySchema(() => z.union([TiltInput, z.array(TiltInput).min(1)]));
 /** What coverageMap and findRange accept as an orientation. */
 export type OrientationInput = z.input<typeof OrientationInput>;
 

@@ -15,7 +15,7 @@
  * Derivative-free because the score jumps (E-series capacitors, integer turns).
  */
 import { z } from "zod";
-import { frequency as frequencyQ, length, parseInput, angle, current as currentQ } from "../schema.ts";
+import { frequency as frequencyQ, length, parseInput, angle, current as currentQ, lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import { standardValues, type ESeries } from "../circuit/eseries.ts";
 import type { LedColour } from "../circuit/loads/ledPresets.ts";
@@ -25,12 +25,12 @@ import { evaluateDesign, type Candidate, type DesignEvaluation, type DesignProbl
 import { progressCounter, type ProgressCallback } from "./progress.ts";
 import { checkThreads, taskPool, type TaskPool, type ThreadsOption } from "./pool.ts";
 
-const colour = z.enum(["red", "orange", "yellow", "green-gap", "green-ingan", "blue", "white"]);
+const colour = lazySchema(() => z.enum(["red", "orange", "yellow", "green-gap", "green-ingan", "blue", "white"]));
 const range = <T extends z.ZodType<number, number | string>>(q: T) => z.strictObject({ min: q, max: q });
-const intRange = z.strictObject({ min: z.number().int().min(1), max: z.number().int().min(1) });
+const intRange = lazySchema(() => z.strictObject({ min: z.number().int().min(1), max: z.number().int().min(1) }));
 
 /** What the design must do (quantities with units). */
-export const RequirementsInput = z.strictObject({
+export const RequirementsInput = lazySchema(() => z.strictObject({
   /** the area tokens may be put on, centred over the transmitter: a rectangle or a disc */
   cover: z.union([z.strictObject({ width: length(), depth: length() }), z.strictObject({ radius: length() })]),
   /** barrier between the transmitter winding and the token's underside, m */
@@ -49,12 +49,12 @@ export const RequirementsInput = z.strictObject({
   tilt: angle({ nonNegative: true }).optional(),
   /** lit threshold, A (default 0.5 mA, trade practice) */
   litThreshold: currentQ({ positive: true }).optional(),
-});
+}));
 /** What searchDesign accepts as requirements. */
 export type RequirementsInput = z.input<typeof RequirementsInput>;
 
 /** The search space. */
-export const DesignSpaceInput = z.strictObject({
+export const DesignSpaceInput = lazySchema(() => z.strictObject({
   /** transmitter mean radius range, m */
   radius: range(length()),
   /** transmitter turns */
@@ -65,7 +65,7 @@ export const DesignSpaceInput = z.strictObject({
   tokenTurns: intRange,
   /** E-series for both capacitors (default E12) */
   series: z.enum(["E6", "E12", "E24"]).optional(),
-});
+}));
 /** What searchDesign accepts as a search space. */
 export type DesignSpaceInput = z.input<typeof DesignSpaceInput>;
 

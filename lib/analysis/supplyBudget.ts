@@ -12,7 +12,7 @@
  */
 import { z } from "zod";
 import { TanklightInputError } from "../errors.ts";
-import { current as currentQ, parseInput, voltage as voltageQ } from "../schema.ts";
+import { current as currentQ, parseInput, voltage as voltageQ, lazySchema } from "../schema.ts";
 import { LinkSystemInput, systemTransmitters, type DriveParsed } from "../circuit/link/schema.ts";
 import { solveLink, type LinkSystem, type LinkSolution } from "../circuit/link.ts";
 import type { LinkOptions } from "../circuit/link/network.ts";
@@ -29,7 +29,7 @@ export const USB_SUPPLIES = {
 export type UsbSupply = keyof typeof USB_SUPPLIES;
 
 /** A supply: a named USB port, or a bench/mains adapter by its rating. */
-export const SupplyInput = z.union([
+export const SupplyInput = lazySchema(() => z.union([
   z.enum(Object.keys(USB_SUPPLIES) as [UsbSupply, ...UsbSupply[]]),
   z.strictObject({
     kind: z.literal("bench"),
@@ -39,7 +39,7 @@ export const SupplyInput = z.union([
     current: currentQ({ positive: true }),
     label: z.string().optional(),
   }),
-]);
+]));
 /** What {@link supplyBudget} accepts as a supply. */
 export type SupplyInput = z.input<typeof SupplyInput>;
 

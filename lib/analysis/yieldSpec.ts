@@ -4,7 +4,7 @@
  * their own L, R and M, and the random draws of every sample from one seeded generator.
  */
 import { z } from "zod";
-import { angle, length, parseInput, quantity, voltage } from "../schema.ts";
+import { angle, length, parseInput, quantity, voltage, lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import { createRandom } from "../math/random.ts";
 import type { Coil, Pose, Vec3 } from "../em/types.ts";
@@ -19,21 +19,21 @@ import { supplyVoltageOf } from "./supplyBudget.ts";
 import { PROBE_MUTUAL_RTOL } from "./probe.ts";
 import { DRAWS, DRAW_NAMES, type WindingLevel, type YieldSpec } from "./yieldModel.ts";
 
-const distribution = z.enum(["uniform", "normal"]);
+const distribution = lazySchema(() => z.enum(["uniform", "normal"]));
 /** A spread: ±tolerance (a number or quantity), uniform by default ("normal": tolerance = 3σ, truncated there). */
 function spread(dim: "dimensionless" | "voltage" | "length" | "angle") {
   const q = dim === "dimensionless" ? quantity("dimensionless", { nonNegative: true, max: 0.9 }) : dim === "voltage" ? voltage({ nonNegative: true }) : dim === "length" ? length({ nonNegative: true }) : angle({ nonNegative: true });
   return z.union([q, z.strictObject({ tolerance: q, distribution: distribution.optional() })]);
 }
-const winding = z.strictObject({
+const winding = lazySchema(() => z.strictObject({
   /** ± turns, integer; every count in between equally likely */
   spread: z.number().int().min(0).max(50),
   /** builds the coil with a given number of turns (the nominal coil's own builder and spec) */
   build: z.custom<(turns: number) => Coil>((f) => typeof f === "function", { message: "expected a function turns → Coil" }),
-});
+}));
 
 /** The variations of a batch (all optional; relative tolerances as fractions, e.g. 0.05 for ±5 %). */
-export const VariationsInput = z.strictObject({
+export const VariationsInput = lazySchema(() => z.strictObject({
   /** token tank capacitor, relative */
   tokenCapacitor: spread("dimensionless").optional(),
   /** transmitter capacitor, relative */
@@ -53,7 +53,7 @@ export const VariationsInput = z.strictObject({
   tilt: spread("angle").optional(),
   /** supply voltage, relative */
   supply: spread("dimensionless").optional(),
-});
+}));
 /** What toleranceYield accepts as variations. */
 export type VariationsInput = z.input<typeof VariationsInput>;
 

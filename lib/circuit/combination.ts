@@ -8,7 +8,7 @@
  * reciprocally in series; resistors and inductors (no mutual coupling) the other way round.
  */
 import { z } from "zod";
-import { dimensionless, oneOf, parseArgs, wholeNumber } from "../schema.ts";
+import { dimensionless, oneOf, parseArgs, wholeNumber, lazySchema } from "../schema.ts";
 import { ESeriesSchema, standardValuesBetween, type ESeries } from "./eseries.ts";
 
 /** What is being combined: decides which connection adds. */
@@ -18,7 +18,7 @@ export type PartKind = "capacitor" | "resistor" | "inductor";
 export type CombinationTopology = "series" | "parallel" | "any";
 
 /** Options of {@link bestCombination}. */
-export const CombinationOptions = z.strictObject({
+export const CombinationOptions = lazySchema(() => z.strictObject({
   /** most parts in a combination, 1–3; default 2 */
   maxParts: z.custom<1 | 2 | 3>((v) => v === 1 || v === 2 || v === 3, { error: "must be 1, 2 or 3" }).optional(),
   /** connections allowed; "any" also allows the mixed three-part forms; default "any" */
@@ -31,15 +31,15 @@ export const CombinationOptions = z.strictObject({
   count: wholeNumber(1, 1000, "the ranked list is for reading, not for enumeration").optional(),
   /** "accuracy" (default): by |error|, then part count; "fewestParts": by part count, then |error| */
   prefer: oneOf(["accuracy", "fewestParts"] as const).optional(),
-});
+}));
 /** What {@link bestCombination} accepts as options. */
 export type CombinationOptions = z.input<typeof CombinationOptions>;
 
-const CombinationArgs = z.strictObject({
+const CombinationArgs = lazySchema(() => z.strictObject({
   x: z.number({ error: "must be a finite number > 0 (the target, in the parts' SI unit)" }).positive({ error: "must be a finite number > 0" }).refine(Number.isFinite, { error: "must be a finite number > 0" }),
   series: ESeriesSchema,
   options: CombinationOptions.optional(),
-});
+}));
 
 /** One combination of standard parts. */
 export interface Combination {

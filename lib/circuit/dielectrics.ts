@@ -11,7 +11,7 @@
  * film runs warm at tank currents.
  */
 import { z } from "zod";
-import { oneOf, parseInput } from "../schema.ts";
+import { oneOf, parseInput, lazySchema } from "../schema.ts";
 import { TanklightInputError, requirePositive } from "../errors.ts";
 
 const DIELECTRIC_NAMES = ["C0G", "mica", "polypropylene", "PPS", "polyester", "X7R", "Y5V"] as const;
@@ -20,8 +20,8 @@ const DIELECTRIC_NAMES = ["C0G", "mica", "polypropylene", "PPS", "polyester", "X
 export type Dielectric = (typeof DIELECTRIC_NAMES)[number];
 
 /** zod schema of a dielectric key (a Set lookup: prototype words are refused, a near miss suggested). */
-export const DielectricSchema = oneOf(DIELECTRIC_NAMES);
-const DielectricArg = z.strictObject({ dielectric: DielectricSchema });
+export const DielectricSchema = lazySchema(() => oneOf(DIELECTRIC_NAMES));
+const DielectricArg = lazySchema(() => z.strictObject({ dielectric: DielectricSchema }));
 
 /** What we hold about one dielectric. */
 export interface DielectricData {

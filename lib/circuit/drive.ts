@@ -22,13 +22,13 @@
  */
 import { z } from "zod";
 import { TanklightInputError } from "../errors.ts";
-import { current, frequency, inductance, parseArgs, parseInput, power, resistance, voltage } from "../schema.ts";
+import { current, frequency, inductance, parseArgs, parseInput, power, resistance, voltage, lazySchema } from "../schema.ts";
 import type { QuantityInput } from "../units.ts";
 
 // Argument schemas: SI numbers or quantity strings ("12 V", "0.1 ohm"); messages name the argument.
-const SineArgs = z.strictObject({ amplitude: voltage({ nonNegative: true }), outputResistance: resistance().optional() });
-const SupplyArgs = z.strictObject({ supply: voltage({ positive: true }), onResistance: resistance().optional() });
-const CurrentArgs = z.strictObject({ amplitude: current({ nonNegative: true }) });
+const SineArgs = lazySchema(() => z.strictObject({ amplitude: voltage({ nonNegative: true }), outputResistance: resistance().optional() }));
+const SupplyArgs = lazySchema(() => z.strictObject({ supply: voltage({ positive: true }), onResistance: resistance().optional() }));
+const CurrentArgs = lazySchema(() => z.strictObject({ amplitude: current({ nonNegative: true }) }));
 
 /** Equivalent fundamental source of a drive, as the link solver sees it (SI, peak). */
 export type DriveEquivalent =
@@ -230,7 +230,7 @@ export interface ClassEDesign {
 }
 
 /** What {@link classEDesign} takes: supply, frequency, and power or resistance (SI numbers or quantity strings). */
-export const ClassEDesignSpec = z.strictObject({
+export const ClassEDesignSpec = lazySchema(() => z.strictObject({
   /** V_DD, V, > 0 */
   supply: voltage({ positive: true }),
   /** switching frequency, Hz, > 0 */
@@ -241,12 +241,12 @@ export const ClassEDesignSpec = z.strictObject({
   resistance: resistance({ positive: true }).optional(),
   /** series-network inductance (the transmitter coil), H, > 0 */
   inductance: inductance().optional(),
-});
+}));
 /** What {@link classEDesign} accepts. */
 export type ClassEDesignSpec = z.input<typeof ClassEDesignSpec>;
 
 /** The fields of a {@link ClassEDesign} that {@link classEDrive} reads (any object from classEDesign has them). */
-const ClassEDriveArgs = z.strictObject({
+const ClassEDriveArgs = lazySchema(() => z.strictObject({
   design: z.looseObject({
     supply: voltage({ positive: true }),
     frequency: frequency(),
@@ -255,7 +255,7 @@ const ClassEDriveArgs = z.strictObject({
     excessReactance: z.number().refine(Number.isFinite, { error: "must be a finite number of Ω" }),
   }),
   onResistance: resistance().optional(),
-});
+}));
 
 /**
  * Sizes an optimum class-E single-switch drive (50 % duty, shunt capacitor, high loaded Q).

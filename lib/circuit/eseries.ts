@@ -14,7 +14,7 @@
  */
 import { z } from "zod";
 import { requirePositive } from "../errors.ts";
-import { oneOf, parseInput } from "../schema.ts";
+import { oneOf, parseInput, lazySchema } from "../schema.ts";
 
 /** The IEC 60063 series names, in order. */
 const SERIES_NAMES = ["E3", "E6", "E12", "E24", "E48", "E96", "E192"] as const;
@@ -23,8 +23,8 @@ const SERIES_NAMES = ["E3", "E6", "E12", "E24", "E48", "E96", "E192"] as const;
 export type ESeries = (typeof SERIES_NAMES)[number];
 
 /** zod schema of a series name (a Set lookup: "toString" is refused like any unknown word). */
-export const ESeriesSchema = oneOf(SERIES_NAMES);
-const SeriesArg = z.strictObject({ series: ESeriesSchema });
+export const ESeriesSchema = lazySchema(() => oneOf(SERIES_NAMES));
+const SeriesArg = lazySchema(() => z.strictObject({ series: ESeriesSchema }));
 
 const E24 = [1.0, 1.1, 1.2, 1.3, 1.5, 1.6, 1.8, 2.0, 2.2, 2.4, 2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7, 5.1, 5.6, 6.2, 6.8, 7.5, 8.2, 9.1] as const;
 const E12 = [1.0, 1.2, 1.5, 1.8, 2.2, 2.7, 3.3, 3.9, 4.7, 5.6, 6.8, 8.2] as const;

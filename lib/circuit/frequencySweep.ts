@@ -6,7 +6,7 @@
  */
 import { z } from "zod";
 import { TanklightInputError, underName } from "../errors.ts";
-import { frequency, oneOf, parseArgs, wholeNumber } from "../schema.ts";
+import { frequency, oneOf, parseArgs, wholeNumber, lazySchema } from "../schema.ts";
 import type { LinkNetwork, LinkOptions } from "./link/network.ts";
 import { solveLinkNetwork } from "./link/solveNetwork.ts";
 import type { LinkResult } from "./link/result.ts";
@@ -19,7 +19,7 @@ export const MAX_SWEEP_POINTS = 100_000;
 const WHY_POINTS = "each point solves the whole link";
 
 /** The sweep's frequencies: an explicit list, or a range (SI numbers or quantity strings). */
-export const SweepFrequencies = z.union([
+export const SweepFrequencies = lazySchema(() => z.union([
   z.array(frequency()).max(MAX_SWEEP_POINTS, { error: `must hold at most ${MAX_SWEEP_POINTS} frequencies (${WHY_POINTS})` }).readonly(),
   z.strictObject({
     start: frequency(),
@@ -27,12 +27,12 @@ export const SweepFrequencies = z.union([
     points: wholeNumber(2, MAX_SWEEP_POINTS, WHY_POINTS),
     spacing: oneOf(["linear", "log"] as const).optional(),
   }),
-]);
+]));
 /** What {@link frequencySweep} accepts as frequencies. */
 export type SweepFrequencies = z.input<typeof SweepFrequencies>;
 
 /** The options of {@link frequencySweep}: the link options (checked by the solver) plus `refine`. */
-const SweepOptions = z.strictObject({
+const SweepOptions = lazySchema(() => z.strictObject({
   litThreshold: z.unknown(),
   brightnessReference: z.unknown(),
   cautionVoltage: z.unknown(),
@@ -40,16 +40,16 @@ const SweepOptions = z.strictObject({
   tolerance: z.unknown(),
   onNonConvergence: z.unknown(),
   refine: z.boolean({ error: "must be true or false" }).optional(),
-});
+}));
 
-const SweepArgs = z.strictObject({
+const SweepArgs = lazySchema(() => z.strictObject({
   network: z.custom<LinkNetwork | ((frequency: number) => LinkNetwork)>(
     (n) => typeof n === "function" || (typeof n === "object" && n !== null && Array.isArray((n as LinkNetwork).receivers) && typeof (n as LinkNetwork).transmitter === "object"),
     { error: "must be a LinkNetwork or a function of frequency giving one" },
   ),
   frequencies: SweepFrequencies,
   options: SweepOptions.partial().optional(),
-});
+}));
 
 /** Quantities a peak search can follow. */
 export type SweepQuantity = "transmitterCurrent" | "inputPower" | "delivered" | "efficiency";

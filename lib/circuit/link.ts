@@ -9,7 +9,7 @@
  * then solves the coupled-circuit matrix with each load's describing function.
  */
 import { z } from "zod";
-import { current, nearestKey, parseArgs, parseInput, voltage } from "../schema.ts";
+import { current, nearestKey, parseArgs, parseInput, voltage, lazySchema } from "../schema.ts";
 import { TanklightInputError, assertNever } from "../errors.ts";
 import { couplingEvaluator, type CouplingEvaluator } from "../em/couplingEvaluator.ts";
 import { selfInductance } from "../em/selfInductance.ts";
@@ -423,7 +423,7 @@ export type SolveLinkOptions = ModelOptions & { readonly tabulateLoads?: boolean
  * The options of solveLink as a strict schema: a mistyped key is an error naming the nearest
  * valid one; quantities accept units ("1 mA", "30 V").
  */
-export const SolveLinkOptionsInput = z.strictObject({
+export const SolveLinkOptionsInput = lazySchema(() => z.strictObject({
   litThreshold: current({ positive: true }).optional(),
   brightnessReference: current({ positive: true }).optional(),
   cautionVoltage: voltage({ positive: true }).optional(),
@@ -435,9 +435,9 @@ export const SolveLinkOptionsInput = z.strictObject({
   order: z.number().int().min(1).max(200).optional(),
   /** samples per period of harmonic balance: at most 65 536 (memory and time grow with samples × order) */
   samples: z.number().int().min(4).max(65_536).optional(),
-});
+}));
 
-const SolveLinkArgs = z.strictObject({ system: z.unknown(), options: SolveLinkOptionsInput.optional() });
+const SolveLinkArgs = lazySchema(() => z.strictObject({ system: z.unknown(), options: SolveLinkOptionsInput.optional() }));
 
 /**
  * Steady state of a driven transmitter and any number of tokens at the drive frequency: every

@@ -4,12 +4,12 @@
  */
 import { TanklightInputError, requireFinite, requirePositive } from "../errors.ts";
 import { z } from "zod";
-import { parseInput } from "../schema.ts";
+import { parseInput, lazySchema } from "../schema.ts";
 
 /** optimalLoad's options (values checked below). */
-const OptimalLoadOptions = z.strictObject({
+const OptimalLoadOptions = lazySchema(() => z.strictObject({
   options: z.strictObject({ topology: z.enum(["series", "parallel"], { error: "must be 'series' or 'parallel'" }).optional(), reactance: z.unknown().optional() }, { error: "must be an object { topology?, reactance? }" }),
-});
+}));
 
 /**
  * Maximum efficiency of a two-coil resonant link over all receiver loads, both tanks tuned:

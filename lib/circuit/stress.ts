@@ -6,11 +6,11 @@
 import { z } from "zod";
 import { TanklightInputError } from "../errors.ts";
 import { HIGH_VOLTAGE } from "../hazards.ts";
-import { capacitance, current, dimensionless, frequency, parseInput, voltage } from "../schema.ts";
+import { capacitance, current, dimensionless, frequency, parseInput, voltage, lazySchema } from "../schema.ts";
 import { DIELECTRICS, DielectricSchema, esrFromDissipationFactor, recommendCapacitor, type CapacitorRecommendation } from "./dielectrics.ts";
 
 /** Inputs of {@link capacitorStress}: give the voltage amplitude or the current amplitude (SI numbers or quantity strings). */
-export const CapacitorStressInput = z.strictObject({
+export const CapacitorStressInput = lazySchema(() => z.strictObject({
   /** capacitance, F > 0 */
   capacitance: capacitance(),
   /** frequency, Hz > 0 */
@@ -25,7 +25,7 @@ export const CapacitorStressInput = z.strictObject({
   dissipationFactor: dimensionless({ nonNegative: true, max: 1 }).optional(),
   /** DC voltage rating of the chosen part, V > 0 (checked against derating × peak) */
   ratedVoltage: voltage({ positive: true }).optional(),
-});
+}));
 /** What {@link capacitorStress} accepts. */
 export type CapacitorStressInput = z.input<typeof CapacitorStressInput>;
 

@@ -10,7 +10,7 @@
  */
 import { z } from "zod";
 import { TanklightInputError, requirePositive } from "../errors.ts";
-import { inductance, frequency, capacitance, dimensionless, oneOf, parseArgs, parseInput, resistance, wholeNumber } from "../schema.ts";
+import { inductance, frequency, capacitance, dimensionless, oneOf, parseArgs, parseInput, resistance, wholeNumber, lazySchema } from "../schema.ts";
 import { formatQuantity, type QuantityInput } from "../units.ts";
 import { bestCombination, type CombinationTopology } from "./combination.ts";
 import { ESeriesSchema } from "./eseries.ts";
@@ -22,8 +22,8 @@ import { ESeriesSchema } from "./eseries.ts";
  */
 export const PURCHASABLE_CAPACITANCE = { min: 0.1e-12, max: 10e-3 } as const;
 
-const LcArgs = z.strictObject({ inductance: inductance(), frequency: frequency() });
-const LcFromCArgs = z.strictObject({ inductance: inductance(), capacitance: capacitance() });
+const LcArgs = lazySchema(() => z.strictObject({ inductance: inductance(), frequency: frequency() }));
+const LcFromCArgs = lazySchema(() => z.strictObject({ inductance: inductance(), capacitance: capacitance() }));
 
 /**
  * Capacitance that tunes an inductance to a frequency: C = 1/((2πf)²·L).
@@ -56,7 +56,7 @@ export function resonantFrequency(inductance: QuantityInput, capacitance: Quanti
 }
 
 /** A tank's parts and losses, for {@link tankQuality} (SI numbers or quantity strings). */
-export const TankLosses = z.strictObject({
+export const TankLosses = lazySchema(() => z.strictObject({
   /** inductance, H, > 0 */
   inductance: inductance(),
   /** capacitance, F, > 0 */
@@ -69,7 +69,7 @@ export const TankLosses = z.strictObject({
   dissipationFactor: dimensionless({ nonNegative: true }).optional(),
   /** resistance in parallel with the tank (a linear load), Ω > 0 */
   parallelResistance: resistance({ positive: true }).optional(),
-});
+}));
 /** What {@link tankQuality} accepts. */
 export type TankLosses = z.input<typeof TankLosses>;
 
@@ -217,7 +217,7 @@ export interface TuningChoice {
 }
 
 /** Options of {@link tuneWithStandardParts}. */
-export const TuneOptions = z.strictObject({
+export const TuneOptions = lazySchema(() => z.strictObject({
   /** IEC 60063 series of the capacitors, default "E12" */
   series: ESeriesSchema.optional(),
   /** most capacitors in a combination, 1–3, default 2 */
@@ -226,11 +226,11 @@ export const TuneOptions = z.strictObject({
   count: wholeNumber(1, 100, "the ranked list is for reading, not for enumeration").optional(),
   /** connections allowed: "series", "parallel" or "any" */
   topology: oneOf(["series", "parallel", "any"] as const).optional(),
-});
+}));
 /** What {@link tuneWithStandardParts} accepts as options. */
 export type TuneOptions = z.input<typeof TuneOptions>;
 
-const TuneArgs = z.strictObject({ inductance: inductance(), frequency: frequency(), options: TuneOptions.optional() });
+const TuneArgs = lazySchema(() => z.strictObject({ inductance: inductance(), frequency: frequency(), options: TuneOptions.optional() }));
 
 /**
  * Tunes a coil to a frequency with standard capacitors: the ideal capacitance

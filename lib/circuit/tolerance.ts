@@ -11,7 +11,7 @@
 import { mean, quantileSorted, sampleStandardDeviation } from "simple-statistics";
 import { createRandom } from "../math/random.ts";
 import { z } from "zod";
-import { capacitance, inductance, oneOf, parseInput, quantity, wholeNumber } from "../schema.ts";
+import { capacitance, inductance, oneOf, parseInput, quantity, wholeNumber, lazySchema } from "../schema.ts";
 
 /** Relative part tolerance, e.g. 0.05 (or "5 %") for ±5 %, 0 ≤ t < 1. */
 const relativeTolerance = () =>
@@ -23,7 +23,7 @@ const relativeTolerance = () =>
 export const MAX_TOLERANCE_SAMPLES = 10_000_000;
 
 /** Inputs of {@link resonantFrequencyWindow} (SI numbers or quantity strings). */
-export const ToleranceInput = z.strictObject({
+export const ToleranceInput = lazySchema(() => z.strictObject({
   /** nominal inductance, H, > 0 */
   inductance: inductance(),
   /** nominal capacitance, F, > 0 */
@@ -40,7 +40,7 @@ export const ToleranceInput = z.strictObject({
   seed: wholeNumber(0, Number.MAX_SAFE_INTEGER, "the generator's seed range").optional(),
   /** central fraction of the batch the statistical band covers, default 0.99, 0 < coverage < 1 */
   coverage: z.number({ error: "must be a number between 0 and 1 (exclusive)" }).gt(0, { error: "must be between 0 and 1 (exclusive)" }).lt(1, { error: "must be between 0 and 1 (exclusive)" }).optional(),
-});
+}));
 /** What {@link resonantFrequencyWindow} accepts. */
 export type ToleranceInput = z.input<typeof ToleranceInput>;
 

@@ -10,7 +10,7 @@
  */
 import { z } from "zod";
 import { TanklightInputError, type InputIssue } from "../errors.ts";
-import { angle, parseInput, unitVector, vec3, type QuantitySchema } from "../schema.ts";
+import { angle, parseInput, unitVector, vec3, type QuantitySchema, lazySchema } from "../schema.ts";
 import { MATERIALS } from "./materials.ts";
 import { SIZE_LIMITS } from "./builders/common.ts";
 import type { Coil, Filament, Pose, Vec3 } from "./types.ts";
@@ -27,32 +27,32 @@ const WHY = "beyond it products of lengths leave double precision";
 
 const finiteNumber = (rule: string) => z.number({ error: `must be a finite number${rule}` });
 const positive = (unit: string) => finiteNumber(` > 0 ${unit}`.trimEnd()).positive({ error: `must be a finite number > 0 ${unit}`.trimEnd() });
-const size = positive("m")
+const size = lazySchema(() => positive("m")
   .min(GEOMETRY_LIMITS.minLength, { error: `must be ≥ ${GEOMETRY_LIMITS.minLength} m (${WHY})` })
-  .max(GEOMETRY_LIMITS.maxLength, { error: `must be ≤ ${GEOMETRY_LIMITS.maxLength} m (${WHY})` });
-const coordinate = finiteNumber(" in m").min(-GEOMETRY_LIMITS.maxLength, { error: `must be within ±${GEOMETRY_LIMITS.maxLength} m (${WHY})` }).max(GEOMETRY_LIMITS.maxLength, { error: `must be within ±${GEOMETRY_LIMITS.maxLength} m (${WHY})` });
-const point = z.tuple([coordinate, coordinate, coordinate], { error: "must be three finite coordinates [x, y, z] in m" });
-const direction = z
+  .max(GEOMETRY_LIMITS.maxLength, { error: `must be ≤ ${GEOMETRY_LIMITS.maxLength} m (${WHY})` }));
+const coordinate = lazySchema(() => finiteNumber(" in m").min(-GEOMETRY_LIMITS.maxLength, { error: `must be within ±${GEOMETRY_LIMITS.maxLength} m (${WHY})` }).max(GEOMETRY_LIMITS.maxLength, { error: `must be within ±${GEOMETRY_LIMITS.maxLength} m (${WHY})` }));
+const point = lazySchema(() => z.tuple([coordinate, coordinate, coordinate], { error: "must be three finite coordinates [x, y, z] in m" }));
+const direction = lazySchema(() => z
   .tuple([finiteNumber(""), finiteNumber(""), finiteNumber("")], { error: "must be a direction [x, y, z]" })
-  .refine((v) => Math.hypot(v[0], v[1], v[2]) > 0, { error: "must be a non-zero direction" });
-const turns = positive("").max(GEOMETRY_LIMITS.maxTurns, { error: `must be ≤ ${GEOMETRY_LIMITS.maxTurns} (${WHY})` });
+  .refine((v) => Math.hypot(v[0], v[1], v[2]) > 0, { error: "must be a non-zero direction" }));
+const turns = lazySchema(() => positive("").max(GEOMETRY_LIMITS.maxTurns, { error: `must be ≤ ${GEOMETRY_LIMITS.maxTurns} (${WHY})` }));
 
 /** A circle filament of a Coil: `{ kind: "circle", center (m), axis (non-zero), radius (m, > 0), turns (> 0) }`. */
-export const CircleFilamentSpec = z.strictObject({ kind: z.literal("circle"), center: point, axis: direction, radius: size, turns });
+export const CircleFilamentSpec = lazySchema(() => z.strictObject({ kind: z.literal("circle"), center: point, axis: direction, radius: size, turns }));
 /** A closed polygon filament of a Coil: `{ kind: "path", points (≥ 3 points in m), turns (> 0) }`. */
-export const PathFilamentSpec = z.strictObject({
+export const PathFilamentSpec = lazySchema(() => z.strictObject({
   kind: z.literal("path"),
   points: z.array(point).min(3, { error: "must list at least 3 points (a closed polygon)" }),
   turns,
-});
+}));
 /** One filament of a Coil. */
-export const FilamentSpec = z.discriminatedUnion("kind", [CircleFilamentSpec, PathFilamentSpec]);
+export const FilamentSpec = lazySchema(() => z.discriminatedUnion("kind", [CircleFilamentSpec, PathFilamentSpec]));
 
-const materialName = z.string({ error: "must be a material name" }).refine((m) => Object.hasOwn(MATERIALS, m.toLowerCase()), {
+const materialName = lazySchema(() => z.string({ error: "must be a material name" }).refine((m) => Object.hasOwn(MATERIALS, m.toLowerCase()), {
   error: `is not a known material (known: ${Object.keys(MATERIALS).join(", ")})`,
-});
+}));
 /** The conductor of a Coil (SI numbers), as the builders' conductor helpers make it. */
-export const ConductorSpec = z.discriminatedUnion("kind", [
+export const ConductorSpec = lazySchema(() => z.discriminatedUnion("kind", [
   z.strictObject({ kind: z.literal("round"), diameter: size, outerDiameter: size, material: materialName.optional() }),
   z.strictObject({
     kind: z.literal("litz"),
@@ -62,10 +62,10 @@ export const ConductorSpec = z.discriminatedUnion("kind", [
     material: materialName.optional(),
   }),
   z.strictObject({ kind: z.literal("trace"), width: size, thickness: size, material: materialName.optional() }),
-]);
+]));
 
 /** A Coil as plain data (any builder's output, or hand-made filaments): SI numbers, strict keys. */
-export const CoilSpec = z.strictObject({
+export const CoilSpec = lazySchema(() => z.strictObject({
   filaments: z.array(FilamentSpec).min(1, { error: "must hold at least one filament" }),
   conductor: ConductorSpec,
   turns,
@@ -73,19 +73,19 @@ export const CoilSpec = z.strictObject({
   shape: z.custom<NonNullable<Coil["shape"]>>((s) => typeof s === "object" && s !== null && typeof (s as { kind?: unknown }).kind === "string", {
     error: "must be a shape record { kind, … } (as the builders write it) or absent",
   }).optional(),
-});
+}));
 
 /** A pose: position (lengths, "12 mm" accepted), axis (non-zero direction, default +z), spin (angle, default 0). */
-export const PoseSpec = z.strictObject({ position: vec3({ min: -GEOMETRY_LIMITS.maxLength, max: GEOMETRY_LIMITS.maxLength }), axis: unitVector().optional(), spin: angle().optional() });
+export const PoseSpec = lazySchema(() => z.strictObject({ position: vec3({ min: -GEOMETRY_LIMITS.maxLength, max: GEOMETRY_LIMITS.maxLength }), axis: unitVector().optional(), spin: angle().optional() }));
 
 /** A circle filament for loopMutualInductance: `{ center, axis, radius }`, or a Coil's circle filament (kind, turns ignored). */
-export const LoopSpec = z.strictObject({
+export const LoopSpec = lazySchema(() => z.strictObject({
   kind: z.literal("circle").optional(),
   center: point,
   axis: direction,
   radius: size,
   turns: turns.optional(),
-});
+}));
 
 // ── running the checks ───────────────────────────────────────────────────────
 

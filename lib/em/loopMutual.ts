@@ -3,6 +3,7 @@
  * over filament b, of filament a's closed-form vector potential.
  */
 import { z } from "zod";
+import { lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import { checkLoop, optionsArg } from "./inputs.ts";
 import { integrateAdaptive } from "../math/quadrature.ts";
@@ -283,9 +284,9 @@ function goldenMin(g: (t: number) => number, lo: number, hi: number): number {
 }
 
 /** The options of {@link loopMutualInductance} as a strict schema. */
-const LoopMutualOptionsSpec = z.strictObject({
+const LoopMutualOptionsSpec = lazySchema(() => z.strictObject({
   relTol: z.number({ error: "must be a number in (0, 1)" }).gt(0, { error: "must be a number in (0, 1)" }).lt(1, { error: "must be a number in (0, 1)" }).optional(),
-});
+}));
 
 /** Fast check of valid options: only `relTol`, a number in (0, 1). */
 const relTolOnly = (o: Record<string, unknown>): boolean => {

@@ -2,15 +2,15 @@
  * Flux density of a coil in any pose at a world point.
  */
 import { TanklightInputError } from "../errors.ts";
-import { current as currentQ, vec3 } from "../schema.ts";
+import { current as currentQ, vec3, lazySchema } from "../schema.ts";
 import { checkCoil, checkPose, GEOMETRY_LIMITS, parseArg, quantityArg } from "./inputs.ts";
 import { K_B_RHO, K_B_Z, loopKernel } from "./loopKernel.ts";
 import { addSegmentField } from "./segmentField.ts";
 import { poseFrame, rotate, toCoil } from "./frames.ts";
 import type { Coil, Pose, Vec3 } from "./types.ts";
 
-const POINT = vec3({ min: -GEOMETRY_LIMITS.maxLength, max: GEOMETRY_LIMITS.maxLength });
-const CURRENT = currentQ();
+const POINT = lazySchema(() => vec3({ min: -GEOMETRY_LIMITS.maxLength, max: GEOMETRY_LIMITS.maxLength }));
+const CURRENT = lazySchema(() => currentQ());
 
 /**
  * Flux density B of a coil carrying current I, placed by a pose, at a world point:

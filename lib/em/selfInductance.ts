@@ -4,7 +4,7 @@
 import { MU0 } from "../constants.ts";
 import { z } from "zod";
 import { TanklightInputError } from "../errors.ts";
-import { frequency } from "../schema.ts";
+import { frequency, lazySchema } from "../schema.ts";
 import { checkCoil, optionsArg } from "./inputs.ts";
 import { skinDepthCore } from "./losses/skinDepth.ts";
 import { material, resistivityAt } from "./materials.ts";
@@ -19,7 +19,7 @@ export interface SelfInductanceOptions {
 }
 
 /** The options of {@link selfInductance} as a strict schema (unknown keys name the nearest valid one). */
-const SelfInductanceOptionsSpec = z.strictObject({ frequency: frequency({ nonNegative: true }).optional() });
+const SelfInductanceOptionsSpec = lazySchema(() => z.strictObject({ frequency: frequency({ nonNegative: true }).optional() }));
 
 /** Breakdown returned by {@link selfInductanceDetail}. */
 export interface SelfInductanceDetail {

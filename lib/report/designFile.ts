@@ -15,7 +15,7 @@ import { FlatSpiralSpec } from "../em/builders/flatSpiral.ts";
 import { RectSpiralSpec } from "../em/builders/rectSpiral.ts";
 import { RoundCoilSpec } from "../em/builders/roundCoil.ts";
 import { SolenoidSpec } from "../em/builders/solenoid.ts";
-import { current, frequency, length, parseInput, quantityMeta, resistivity, voltage } from "../schema.ts";
+import { current, frequency, length, parseInput, quantityMeta, resistivity, voltage, lazySchema } from "../schema.ts";
 import { DIMENSIONS } from "../units.ts";
 
 /** Largest design file accepted, bytes. */
@@ -24,22 +24,22 @@ export const DESIGN_FILE_MAX_BYTES = 64 * 1024;
 /** Most turns a design file may ask for (a bound on the work an untrusted file can cause). */
 export const DESIGN_MAX_TURNS = 3000;
 
-const bounded = { turns: z.number().int().min(1).max(DESIGN_MAX_TURNS), segmentsPerTurn: z.number().int().min(8).max(256).optional() };
-const coil = z
+const bounded = lazySchema(() => ({ turns: z.number().int().min(1).max(DESIGN_MAX_TURNS), segmentsPerTurn: z.number().int().min(8).max(256).optional() }));
+const coil = lazySchema(() => z
   .discriminatedUnion("shape", [
     RoundCoilSpec.extend({ shape: z.literal("roundCoil"), turns: bounded.turns }),
     FlatSpiralSpec.extend({ shape: z.literal("flatSpiral"), ...bounded }),
     RectSpiralSpec.extend({ shape: z.literal("rectSpiral"), ...bounded }),
     SolenoidSpec.extend({ shape: z.literal("solenoid"), turns: bounded.turns }),
   ])
-  .describe("a coil: shape 'roundCoil' | 'flatSpiral' | 'rectSpiral' | 'solenoid' with that builder's fields (docs/methods/coils.md)");
+  .describe("a coil: shape 'roundCoil' | 'flatSpiral' | 'rectSpiral' | 'solenoid' with that builder's fields (docs/methods/coils.md)"));
 
-const series = z.enum(["E3", "E6", "E12", "E24", "E48", "E96", "E192"]);
-const ledColour = z.enum(Object.keys(LED_PRESET_DATA) as [string, ...string[]]);
+const series = lazySchema(() => z.enum(["E3", "E6", "E12", "E24", "E48", "E96", "E192"]));
+const ledColour = lazySchema(() => z.enum(Object.keys(LED_PRESET_DATA) as [string, ...string[]]));
 const text = (max: number) => z.string().max(max);
 
 /** The schema of a design file. */
-export const DesignFile = z.strictObject({
+export const DesignFile = lazySchema(() => z.strictObject({
   /** editors' schema reference (ignored) */
   $schema: text(300).optional(),
   /** short name: the report folder out/<name> (lower-case letters, digits, '-') */
@@ -90,7 +90,7 @@ export const DesignFile = z.strictObject({
   }),
   /** lit threshold (default 0.5 mA, the link solver's) */
   litThreshold: current({ positive: true, max: 1 }).optional(),
-});
+}));
 
 /** A design file as written (quantities as numbers or strings). */
 export type DesignFileInput = z.input<typeof DesignFile>;

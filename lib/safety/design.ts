@@ -6,7 +6,7 @@
  * {@link designFromLink}.
  */
 import { z } from "zod";
-import { parseInput, angle, capacitance, current, frequency, length, power, voltage } from "../schema.ts";
+import { parseInput, angle, capacitance, current, frequency, length, power, voltage, lazySchema } from "../schema.ts";
 import { PoseInput, TransmitterInput, LinkSystemInput, systemTransmitters, type DriveParsed, type LinkSystem } from "../circuit/link/schema.ts";
 import type { LinkSolution } from "../circuit/link.ts";
 import type { TransmitterState, ReceiverState } from "../circuit/link/result.ts";
@@ -14,7 +14,7 @@ import { CLASS_E } from "../circuit/drive.ts";
 import type { Coil, Pose } from "../em/types.ts";
 
 /** A tank capacitor and its operating stress (peak values) and ratings. */
-export const SafetyCapacitorInput = z.strictObject({
+export const SafetyCapacitorInput = lazySchema(() => z.strictObject({
   capacitance: capacitance(),
   /** operating voltage across it, V peak */
   voltage: voltage({ nonNegative: true }),
@@ -22,10 +22,10 @@ export const SafetyCapacitorInput = z.strictObject({
   rating: voltage({ positive: true }).optional(),
   /** RMS current rating of the part, A RMS */
   currentRating: current({ positive: true }).optional(),
-});
+}));
 
 /** One transmitter coil at its operating point. */
-export const SafetyTransmitterInput = z.strictObject({
+export const SafetyTransmitterInput = lazySchema(() => z.strictObject({
   label: z.string().optional(),
   coil: TransmitterInput.shape.coil,
   /** pose of the coil (default: at the origin, axis +z) */
@@ -41,10 +41,10 @@ export const SafetyTransmitterInput = z.strictObject({
   switchRating: voltage({ positive: true }).optional(),
   /** loss in the winding, W (default: not given; the winding-temperature estimate then uses the coil's AC resistance) */
   coilLoss: power().optional(),
-});
+}));
 
 /** One LED on a token, with its operating current and ratings. */
-export const SafetyLedInput = z.strictObject({
+export const SafetyLedInput = lazySchema(() => z.strictObject({
   label: z.string().optional(),
   /** average forward current, A */
   averageCurrent: current({ nonNegative: true }),
@@ -52,26 +52,26 @@ export const SafetyLedInput = z.strictObject({
   ratedCurrent: current({ positive: true }).optional(),
   /** absolute-maximum continuous forward current, A; default: a typical indicator LED */
   maximumCurrent: current({ positive: true }).optional(),
-});
+}));
 
 /** One token (receiver). */
-export const SafetyReceiverInput = z.strictObject({
+export const SafetyReceiverInput = lazySchema(() => z.strictObject({
   label: z.string().optional(),
   capacitor: SafetyCapacitorInput.optional(),
   leds: z.array(SafetyLedInput).default([]),
   /** largest outer dimension of the token, m (small-parts caution); default unknown */
   size: length().optional(),
-});
+}));
 
 /** The whole design as the safety checks see it. */
-export const SafetyDesignInput = z.strictObject({
+export const SafetyDesignInput = lazySchema(() => z.strictObject({
   /** operating (drive) frequency, Hz */
   frequency: frequency(),
   transmitters: z.array(SafetyTransmitterInput).min(1),
   /** the surface people touch: its height z in the world frame, m (points with z ≥ it are accessible) */
   surfaceHeight: length({ positive: false }),
   receivers: z.array(SafetyReceiverInput).default([]),
-});
+}));
 
 /** What the safety checks accept (quantities as numbers or strings with units). */
 export type SafetyDesign = z.input<typeof SafetyDesignInput>;

@@ -5,7 +5,7 @@
  * An estimate from our own field model, not a compliance assessment.
  */
 import { z } from "zod";
-import { parseInput, length } from "../schema.ts";
+import { parseInput, length, lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import { MU0 } from "../constants.ts";
 import type { Pose, Vec3 } from "../em/types.ts";
@@ -22,10 +22,10 @@ import {
   type SourceStatus,
 } from "./referenceLevels.ts";
 
-const range = z.tuple([length({ positive: false }), length({ positive: false })]);
+const range = lazySchema(() => z.tuple([length({ positive: false }), length({ positive: false })]));
 
 /** Options of {@link exposureCheck}. */
-export const ExposureOptionsInput = z.strictObject({
+export const ExposureOptionsInput = lazySchema(() => z.strictObject({
   /** accessible x range (world), m; default: the transmitters' footprint plus 0.1 m each side */
   x: range.optional(),
   /** accessible y range (world), m; default as x */
@@ -40,7 +40,7 @@ export const ExposureOptionsInput = z.strictObject({
   discs: z.array(z.strictObject({ label: z.string(), radius: length() })).optional(),
   /** disc centres per side on the surface (default 11: the flux through a hand-sized disc changes slowly with its centre) */
   discGrid: z.int().min(2).max(201).optional(),
-});
+}));
 export type ExposureOptions = z.input<typeof ExposureOptionsInput>;
 
 /**

@@ -3,7 +3,7 @@
  * surface above the transmitter, from the transmitters' own field at their operating current.
  */
 import { z } from "zod";
-import { parseInput, length, resistivity, vec3 } from "../schema.ts";
+import { parseInput, length, resistivity, vec3, lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import { MU0 } from "../constants.ts";
 import { COPPER, ALUMINIUM, type Material } from "../em/materials.ts";
@@ -29,10 +29,10 @@ export const OBJECT_METALS: Readonly<Record<string, Material>> = {
   "stainless steel": { name: "stainless steel", resistivity20: 7.2e-7, temperatureCoefficient20: 0.001, relativePermeability: 1, source: "trade practice (no source): austenitic (non-magnetic) grades" },
 };
 
-const metal = z.union([z.enum(Object.keys(OBJECT_METALS) as [string, ...string[]]), z.strictObject({ name: z.string(), resistivity: resistivity() })]);
+const metal = lazySchema(() => z.union([z.enum(Object.keys(OBJECT_METALS) as [string, ...string[]]), z.strictObject({ name: z.string(), resistivity: resistivity() })]));
 
 /** The object: a thin disc (coin, foil) or a ring (finger ring), lying flat on the surface. */
-export const MetalObjectInput = z.discriminatedUnion("kind", [
+export const MetalObjectInput = lazySchema(() => z.discriminatedUnion("kind", [
   z.strictObject({
     kind: z.literal("disc"),
     label: z.string().optional(),
@@ -54,7 +54,7 @@ export const MetalObjectInput = z.discriminatedUnion("kind", [
     metal,
     position: vec3().optional(),
   }),
-]);
+]));
 export type MetalObject = z.input<typeof MetalObjectInput>;
 
 /** What metalHeating returns. */

@@ -3,14 +3,14 @@
  * loads. Quantities accept SI numbers or strings with units ("200 kHz", "2.2 nF", "5 V").
  */
 import { z } from "zod";
-import { angle, capacitance, current, frequency, power, quantity, resistance, temperature, unitVector, vec3, voltage } from "../../schema.ts";
+import { angle, capacitance, current, frequency, power, quantity, resistance, temperature, unitVector, vec3, voltage, lazySchema } from "../../schema.ts";
 import type { Coil } from "../../em/types.ts";
 import { TanklightInputError } from "../../errors.ts";
 import type { DriveEquivalent } from "../drive.ts";
 import type { TokenLoad } from "../loads/types.ts";
 import type { LinkLoadModel } from "./network.ts";
 
-const coilSchema = z.custom<Coil>(
+const coilSchema = lazySchema(() => z.custom<Coil>(
   (c) =>
     typeof c === "object" &&
     c !== null &&
@@ -18,17 +18,17 @@ const coilSchema = z.custom<Coil>(
     (c as Coil).filaments.length > 0 &&
     typeof (c as Coil).conductor === "object",
   { message: "expected a Coil from a builder (roundCoil, flatSpiral, …)" },
-);
+));
 
 /** A pose: position (lengths), axis (direction, default +z), spin (angle, default 0). */
-export const PoseInput = z.strictObject({
+export const PoseInput = lazySchema(() => z.strictObject({
   position: vec3(),
   axis: unitVector().optional(),
   spin: angle().optional(),
-});
+}));
 
 /** A capacitor: value, and its loss as ESR or dissipation factor tan δ, and a voltage rating. */
-export const CapacitorInput = z.strictObject({
+export const CapacitorInput = lazySchema(() => z.strictObject({
   capacitance: capacitance(),
   /** equivalent series resistance, Ω (give this or dissipationFactor; default 0) */
   esr: resistance().optional(),
@@ -36,10 +36,10 @@ export const CapacitorInput = z.strictObject({
   dissipationFactor: quantity("dimensionless", { nonNegative: true, max: 1 }).optional(),
   /** voltage rating, V (compared with the peak voltage) */
   rating: voltage({ positive: true }).optional(),
-});
+}));
 
 /** Drive specs with units; or pass a ready DriveEquivalent (sineDrive(…), classEDrive(…), …). */
-export const DriveInput = z.union([
+export const DriveInput = lazySchema(() => z.union([
   z.strictObject({ kind: z.literal("sine"), amplitude: voltage({ nonNegative: true }), outputResistance: resistance().optional() }),
   z.strictObject({ kind: z.literal("halfBridge"), supply: voltage({ positive: true }), onResistance: resistance().optional() }),
   z.strictObject({ kind: z.literal("fullBridge"), supply: voltage({ positive: true }), onResistance: resistance().optional() }),
@@ -54,15 +54,15 @@ export const DriveInput = z.union([
       typeof (d as DriveEquivalent).amplitude === "number",
     { message: "expected a drive spec { kind: 'sine' | 'halfBridge' | 'fullBridge' | 'currentRegulated' | 'parallelTank' | 'classE', … } or a drive equivalent from sineDrive(), classEDrive(), …" },
   ),
-]);
+]));
 
-const loadSchema = z.custom<TokenLoad | LinkLoadModel>(
+const loadSchema = lazySchema(() => z.custom<TokenLoad | LinkLoadModel>(
   (l) =>
     typeof l === "object" &&
     l !== null &&
     (typeof (l as { kind?: unknown }).kind === "string" || typeof (l as LinkLoadModel).conductance === "function"),
   { message: "expected a TokenLoad ({ kind: 'led', led }, …) or a load model with conductance(amplitude)" },
-);
+));
 
 /**
  * A transmitter: coil, pose (default at the origin, axis +z), compensation, capacitor, and its
@@ -70,7 +70,7 @@ const loadSchema = z.custom<TokenLoad | LinkLoadModel>(
  * or the `name` of an entry of the system's `sharedDrives` (then `phase` is 0 or 180°: which
  * way round the coil is connected).
  */
-export const TransmitterInput = z.strictObject({
+export const TransmitterInput = lazySchema(() => z.strictObject({
   label: z.string().optional(),
   coil: coilSchema,
   pose: PoseInput.optional(),
@@ -81,22 +81,22 @@ export const TransmitterInput = z.strictObject({
   phase: angle().optional(),
   /** override of the coil's AC resistance, Ω (default: coilResistance at the frequency) */
   resistance: resistance().optional(),
-});
+}));
 
 /**
  * A drive shared by several transmitters: its spec, its name (which transmitters give as their
  * `drive`), how the coils hang on it — "series" (one string through every tank) or "parallel"
  * (every tank across its terminals) — and its phase (default 0).
  */
-export const SharedDriveInput = z.strictObject({
+export const SharedDriveInput = lazySchema(() => z.strictObject({
   name: z.string().min(1),
   drive: DriveInput,
   wiring: z.enum(["series", "parallel"]),
   phase: angle().optional(),
-});
+}));
 
 /** One receiver (token). */
-export const ReceiverInput = z.strictObject({
+export const ReceiverInput = lazySchema(() => z.strictObject({
   label: z.string().optional(),
   coil: coilSchema,
   pose: PoseInput,
@@ -104,7 +104,7 @@ export const ReceiverInput = z.strictObject({
   capacitor: CapacitorInput,
   load: loadSchema,
   resistance: resistance().optional(),
-});
+}));
 
 /** At most this many transmitters in one link (each adds a row to a dense complex matrix solved per iteration). */
 export const MAX_TRANSMITTERS = 256;
@@ -113,7 +113,7 @@ export const MAX_TRANSMITTERS = 256;
  * The whole system: one `transmitter` (shorthand) or several `transmitters` (give one of the
  * two), the drives they share, and the receivers.
  */
-export const LinkSystemInput = z
+export const LinkSystemInput = lazySchema(() => z
   .strictObject({
     frequency: frequency(),
     transmitter: TransmitterInput.optional(),
@@ -133,7 +133,7 @@ export const LinkSystemInput = z
     names.forEach((nm, g) => {
       if (names.indexOf(nm) !== g) ctx.addIssue({ code: "custom", path: ["sharedDrives", g, "name"], message: `'${nm}' names two shared drives`, input: nm });
     });
-  });
+  }));
 
 /** What solveLink accepts (quantities as numbers or strings). */
 export type LinkSystem = z.input<typeof LinkSystemInput>;

@@ -14,7 +14,7 @@
  */
 import { z } from "zod";
 import { TanklightInputError } from "../../errors.ts";
-import { frequency, nearestKey, parseArgs } from "../../schema.ts";
+import { frequency, nearestKey, parseArgs, lazySchema } from "../../schema.ts";
 import { linkNetwork, SolveLinkOptionsInput, type LinkSystem } from "../link.ts";
 import { DEFAULT_LIT_THRESHOLD, networkTransmitters, type LinkNetwork, type LinkOptions, type TransmitterNetwork } from "./network.ts";
 import type { LinkResult } from "./result.ts";
@@ -29,7 +29,7 @@ export const FLICKER_FUSION_RATE = 100;
 /** At most this many steps in one sequence (each is one link solve). */
 export const MAX_SEQUENCE_STEPS = 1024;
 
-const STEP_TRANSMITTER = z.union([z.number().int().nonnegative(), z.string().min(1)]);
+const STEP_TRANSMITTER = lazySchema(() => z.union([z.number().int().nonnegative(), z.string().min(1)]));
 
 /**
  * A sequence: `steps` — "scan" (each transmitter alone, equal time) or a list of
@@ -39,12 +39,12 @@ const STEP_TRANSMITTER = z.union([z.number().int().nonnegative(), z.string().min
  * closed loop that couples to the others; a held current of zero is open); `repetitionRate` —
  * how often the whole sequence repeats, Hz (optional: a warning below 100 Hz).
  */
-export const LinkSequenceInput = z.strictObject({
+export const LinkSequenceInput = lazySchema(() => z.strictObject({
   steps: z.union([z.literal("scan"), z.array(z.strictObject({ on: z.array(STEP_TRANSMITTER).min(1), weight: z.number().positive().finite().optional() })).min(1).max(MAX_SEQUENCE_STEPS)]),
   idle: z.enum(["open", "held"]).optional(),
   repetitionRate: frequency().optional(),
-});
-const SequenceArgs = z.strictObject({ system: z.unknown(), sequence: LinkSequenceInput, options: SolveLinkOptionsInput.optional() });
+}));
+const SequenceArgs = lazySchema(() => z.strictObject({ system: z.unknown(), sequence: LinkSequenceInput, options: SolveLinkOptionsInput.optional() }));
 
 /** What solveLinkSequence accepts as its sequence. */
 export type LinkSequence = z.input<typeof LinkSequenceInput>;

@@ -18,17 +18,17 @@ import type { DiodeModel } from "../types.ts";
 import { thermalVoltage } from "../../constants.ts";
 import { z } from "zod";
 import { TanklightInputError, requireFinite } from "../../errors.ts";
-import { conductance, current, dimensionless, parseArgs, parseInput, resistance, temperature, voltage } from "../../schema.ts";
+import { conductance, current, dimensionless, parseArgs, parseInput, resistance, temperature, voltage, lazySchema } from "../../schema.ts";
 import { lambertWOfLogCore } from "../../math/lambertW.ts";
 import { luFactorCore, luSolveCore } from "../../math/lu.ts";
 
 /** A datasheet-style point of the forward characteristic: the voltage at a current. */
-export const ForwardPoint = z.strictObject({
+export const ForwardPoint = lazySchema(() => z.strictObject({
   /** forward current, A, > 0 */
   current: current({ positive: true }),
   /** forward voltage at that current, V, > 0 */
   voltage: voltage({ positive: true }),
-});
+}));
 /** A forward point in SI numbers (as results carry it; specs also accept quantity strings). */
 export type ForwardPoint = z.output<typeof ForwardPoint>;
 
@@ -45,7 +45,7 @@ export interface ShockleyParameters {
 const positiveNumber = () => dimensionless({ positive: true });
 
 /** Options shared by {@link led} and {@link diode}. */
-const junctionOptions = {
+const junctionOptions = lazySchema(() => ({
   /** junction temperature the model is evaluated at, K; default = referenceTemperature */
   temperature: temperature({ positive: true }).optional(),
   /** temperature at which the points or parameters hold, K; default 298.15 (25 °C, datasheet convention) */
@@ -63,19 +63,19 @@ const junctionOptions = {
   label: z.string().optional(),
   /** where the numbers come from (datasheet, preset table, fit …) */
   source: z.string().optional(),
-};
-const pointsList = z
+}));
+const pointsList = lazySchema(() => z
   .array(ForwardPoint, { error: "must be a list of two or three (current, voltage) points" })
   .min(2, { error: "must hold two or three (current, voltage) points" })
   .max(3, { error: "must hold two or three (current, voltage) points" })
-  .readonly();
+  .readonly());
 /** The extra fields of an LED spec. */
-const ledFields = {
+const ledFields = lazySchema(() => ({
   /** colour name, e.g. "red" (free text) */
   colour: z.string().optional(),
   /** current at which relative brightness is 1, A; default 20 mA */
   ratedCurrent: current({ positive: true }).optional(),
-};
+}));
 
 /** The two forms of a junction spec: forward points, or Shockley parameters. */
 function junctionForms<E extends z.ZodRawShape>(extra: E) {
@@ -97,15 +97,15 @@ function junctionForms<E extends z.ZodRawShape>(extra: E) {
     }),
   };
 }
-const DIODE_FORMS = junctionForms({});
-const LED_FORMS = junctionForms(ledFields);
+const DIODE_FORMS = lazySchema(() => junctionForms({}));
+const LED_FORMS = lazySchema(() => junctionForms(ledFields));
 
 /** How a junction is specified: datasheet-style points, or Shockley parameters directly (SI numbers or quantity strings). */
-export const JunctionSpec = z.union([DIODE_FORMS.points, DIODE_FORMS.parameters]);
+export const JunctionSpec = lazySchema(() => z.union([DIODE_FORMS.points, DIODE_FORMS.parameters]));
 /** What {@link diode} accepts. */
 export type JunctionSpec = z.input<typeof JunctionSpec>;
 /** What {@link led} accepts: a junction spec plus colour and rated current. */
-export const LedSpec = z.union([LED_FORMS.points, LED_FORMS.parameters]);
+export const LedSpec = lazySchema(() => z.union([LED_FORMS.points, LED_FORMS.parameters]));
 /** What {@link led} accepts. */
 export type LedSpec = z.input<typeof LedSpec>;
 type ParsedSpec = z.output<typeof LedSpec>;
@@ -204,11 +204,11 @@ export function fitShockley(
   return fitShockleyCore(a.points, a.temperature ?? DEFAULT_T, a.idealityFactor ?? 2, "fitShockley");
 }
 
-const FitArgs = z.strictObject({
+const FitArgs = lazySchema(() => z.strictObject({
   points: pointsList,
   temperature: temperature({ positive: true }).optional(),
   idealityFactor: positiveNumber().optional(),
-});
+}));
 
 /** fitShockley on checked points (SI); `where` names the public function in its errors. */
 function fitShockleyCore(points: readonly ForwardPoint[], temperature: number, idealityFactor: number, where: string): ShockleyParameters {

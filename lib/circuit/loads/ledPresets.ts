@@ -19,7 +19,7 @@
 import { z } from "zod";
 import { led, diode, type Diode, type ForwardPoint, type Led } from "./led.ts";
 import { TanklightInputError } from "../../errors.ts";
-import { oneOf, parseArgs, temperature } from "../../schema.ts";
+import { oneOf, parseArgs, temperature, lazySchema } from "../../schema.ts";
 
 const LED_COLOURS = ["red", "orange", "yellow", "green-gap", "green-ingan", "blue", "white"] as const;
 const DIODE_KINDS = ["schottky", "silicon"] as const;
@@ -95,20 +95,20 @@ export const DIODE_PRESET_DATA: Readonly<Record<DiodeKind, { readonly points: re
 };
 
 /** Options for presets: the junction temperature and a label override. */
-export const PresetOptions = z.strictObject({
+export const PresetOptions = lazySchema(() => z.strictObject({
   /** junction temperature, K (or "60 degC"); default 298.15 (the points hold at 25 °C) */
   temperature: temperature({ positive: true }).optional(),
   /** label for reports */
   label: z.string().optional(),
-});
+}));
 /** What {@link ledPreset} and {@link diodePreset} accept as options. */
 export type PresetOptions = z.input<typeof PresetOptions>;
 
-const LedPresetArgs = z.strictObject({
+const LedPresetArgs = lazySchema(() => z.strictObject({
   colour: oneOf(LED_COLOURS),
   options: PresetOptions.optional(),
-});
-const DiodePresetArgs = z.strictObject({ kind: oneOf(DIODE_KINDS), options: PresetOptions.optional() });
+}));
+const DiodePresetArgs = lazySchema(() => z.strictObject({ kind: oneOf(DIODE_KINDS), options: PresetOptions.optional() }));
 
 const ledCache = new Map<string, Led>();
 

@@ -6,12 +6,12 @@ import type { Diode, Led } from "./led.ts";
 import type { TokenLoad } from "./types.ts";
 import { z } from "zod";
 import { TanklightInputError } from "../../errors.ts";
-import { parseInput } from "../../schema.ts";
+import { parseInput, lazySchema } from "../../schema.ts";
 
 /** halfWaveReservoir's options: only their keys are checked here (values below, SI numbers). */
-const HalfWaveOptions = z.strictObject({
+const HalfWaveOptions = lazySchema(() => z.strictObject({
   options: z.strictObject({ seriesResistance: z.unknown().optional(), frequency: z.unknown().optional() }, { error: "must be an object { seriesResistance?, frequency? }" }),
-});
+}));
 
 function requireJunction(x: unknown, kind: "led" | "diode", field: string, where: string): void {
   const k = (x as { kind?: unknown } | null)?.kind;

@@ -16,11 +16,11 @@ import type { TokenLoad, LedCurrent } from "./types.ts";
 import { averageLoadCurrent, checkLoad, fundamentalConductance } from "./describingFunction.ts";
 import { z } from "zod";
 import { TanklightInputError } from "../../errors.ts";
-import { capacitance, frequency, inductance, parseInput, resistance, voltage } from "../../schema.ts";
+import { capacitance, frequency, inductance, parseInput, resistance, voltage, lazySchema } from "../../schema.ts";
 import { HIGH_VOLTAGE } from "../../hazards.ts";
 
 /** Inputs of {@link tokenResponse}: SI numbers or quantity strings ("0.2 V", "200 kHz", "100 uH"). */
-export const TokenResponseInput = z.strictObject({
+export const TokenResponseInput = lazySchema(() => z.strictObject({
   // upper bounds: far beyond any token, and where the tank arithmetic would overflow
   /** induced EMF amplitude in the token coil, V (peak), 0 … 1 MV */
   emf: voltage({ nonNegative: true, max: 1e6 }),
@@ -38,7 +38,7 @@ export const TokenResponseInput = z.strictObject({
   load: z.custom<TokenLoad>((l) => typeof l === "object" && l !== null && !Array.isArray(l), {
     error: "must be a TokenLoad ({ kind: 'led', led }, …; see tokenCircuits.ts)",
   }),
-});
+}));
 /** What {@link tokenResponse} accepts. */
 export type TokenResponseInput = z.input<typeof TokenResponseInput>;
 

@@ -11,7 +11,7 @@
 
 import { z } from "zod";
 import { assertNever, TanklightInputError } from "../../errors.ts";
-import { capacitance, dimensionless, frequency, inductance, oneOf, parseInput, resistance, voltage } from "../../schema.ts";
+import { capacitance, dimensionless, frequency, inductance, oneOf, parseInput, resistance, voltage, lazySchema } from "../../schema.ts";
 import { GROUND, type CircuitElement, type TransientCircuit } from "./circuit.ts";
 import { periodicGate, stepWaveform } from "./waveforms.ts";
 
@@ -35,7 +35,7 @@ const duty = () =>
   dimensionless({ example: "50 %" }).pipe(z.number().gt(0, { error: "must be between 0 and 1 (exclusive)" }).lt(1, { error: "must be between 0 and 1 (exclusive)" }));
 
 /** Options of the single-switch drive: SI numbers or quantity strings ("5 V", "200 kHz", "10 uH"). */
-export const SingleSwitchDriveSpec = z.strictObject({
+export const SingleSwitchDriveSpec = lazySchema(() => z.strictObject({
   /** supply voltage V_DD, V, > 0 */
   supply: voltage({ positive: true }),
   /** switching frequency, Hz, > 0 */
@@ -67,7 +67,7 @@ export const SingleSwitchDriveSpec = z.strictObject({
   onResistance: resistance({ positive: true }).optional(),
   /** switch off-resistance, Ω > onResistance; default 1 MΩ */
   offResistance: resistance({ positive: true }).optional(),
-});
+}));
 /** What {@link singleSwitchDrive} accepts. */
 export type SingleSwitchDriveSpec = z.input<typeof SingleSwitchDriveSpec>;
 
@@ -143,7 +143,7 @@ export function singleSwitchDrive(input: SingleSwitchDriveSpec): DriveCircuit {
 }
 
 /** Options of the bridge drive: SI numbers or quantity strings. */
-export const BridgeDriveSpec = z.strictObject({
+export const BridgeDriveSpec = lazySchema(() => z.strictObject({
   /** supply voltage V_DD, V, > 0 */
   supply: voltage({ positive: true }),
   /** switching frequency, Hz, > 0 */
@@ -162,7 +162,7 @@ export const BridgeDriveSpec = z.strictObject({
   onResistance: resistance({ positive: true }).optional(),
   /** switch off-resistance, Ω > onResistance; default 1 MΩ */
   offResistance: resistance({ positive: true }).optional(),
-});
+}));
 /** What {@link bridgeDrive} accepts. */
 export type BridgeDriveSpec = z.input<typeof BridgeDriveSpec>;
 

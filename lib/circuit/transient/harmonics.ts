@@ -10,7 +10,7 @@
 
 import { z } from "zod";
 import { TanklightInputError } from "../../errors.ts";
-import { frequency, parseArgs, wholeNumber } from "../../schema.ts";
+import { frequency, parseArgs, wholeNumber, lazySchema } from "../../schema.ts";
 
 /** Most samples a series may hold (as many as one simulate run keeps). */
 const MAX_SAMPLES = 5e7;
@@ -26,7 +26,7 @@ const series = (what: string) =>
     { error: `must be a Float64Array or array of 3 to ${MAX_SAMPLES} finite ${what}` },
   );
 
-const HarmonicsArgs = z.strictObject({
+const HarmonicsArgs = lazySchema(() => z.strictObject({
   time: series("times (s)"),
   samples: series("values"),
   opts: z.strictObject({
@@ -34,7 +34,7 @@ const HarmonicsArgs = z.strictObject({
     count: wholeNumber(1).optional(),
     cycles: wholeNumber(1).optional(),
   }),
-});
+}));
 
 /** Harmonic content of a periodic waveform; index k of each array is harmonic k (index 0: dc). */
 export interface Harmonics {

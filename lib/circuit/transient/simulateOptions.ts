@@ -7,7 +7,7 @@
  */
 import { z } from "zod";
 import { TanklightInputError } from "../../errors.ts";
-import { dimensionless, frequency, parseInput, time, wholeNumber } from "../../schema.ts";
+import { dimensionless, frequency, parseInput, time, wholeNumber, lazySchema } from "../../schema.ts";
 
 /** Output steps a run may ask for: 5e7 samples of one waveform are 400 MB. */
 export const MAX_OUTPUT_STEPS = 5e7;
@@ -16,7 +16,7 @@ export const MAX_OUTPUT_STEPS = 5e7;
 const MAX_NEWTON = 10_000;
 
 /** How to run a simulation: SI numbers or quantity strings ("10 ns", "200 kHz"). */
-export const SimulateOptions = z.strictObject({
+export const SimulateOptions = lazySchema(() => z.strictObject({
   /** end time, s, > 0 (the longest run when `untilSteady` is set) */
   stop: time(),
   /** output and integration step, s; or give `stepsPerCycle` with `frequency` */
@@ -47,7 +47,7 @@ export const SimulateOptions = z.strictObject({
     .optional(),
   /** Newton iterations per step before the step is halved; default 50 */
   maxNewtonIterations: wholeNumber(2, MAX_NEWTON, "a step that needs more is not converging; it is halved").optional(),
-});
+}));
 /** What {@link simulate} accepts as options. */
 export type SimulateOptions = z.input<typeof SimulateOptions>;
 type ParsedOptions = z.output<typeof SimulateOptions>;

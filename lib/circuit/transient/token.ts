@@ -10,15 +10,15 @@
 
 import { z } from "zod";
 import { assertNever, requireFinite, requirePositive, TanklightInputError } from "../../errors.ts";
-import { parseInput } from "../../schema.ts";
+import { parseInput, lazySchema } from "../../schema.ts";
 
 /** The keys a token spec accepts (values checked in addToken, SI numbers). */
-const TokenSpecKeys = z.strictObject({
+const TokenSpecKeys = lazySchema(() => z.strictObject({
   spec: z.strictObject(
     Object.fromEntries(["name", "coupledTo", "mutualInductance", "k", "inductance", "resistance", "capacitance", "load"].map((k) => [k, z.unknown().optional()])),
     { error: "must be an object { coupledTo, k | mutualInductance, inductance, resistance, capacitance, load }" },
   ),
-});
+}));
 import type { TokenLoad } from "../loads/types.ts";
 import { checkLoad } from "../loads/describingFunction.ts";
 import { GROUND, type CircuitElement, type TransientCircuit } from "./circuit.ts";

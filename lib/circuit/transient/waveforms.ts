@@ -6,14 +6,14 @@
 
 import { z } from "zod";
 import { requireFinite, requirePositive, TanklightInputError } from "../../errors.ts";
-import { parseInput } from "../../schema.ts";
+import { parseInput, lazySchema } from "../../schema.ts";
 
 /** The keys each waveform's spec accepts (values checked in the function, SI numbers). */
 const keysOf = (name: string, keys: readonly string[]) =>
   z.strictObject({ [name]: z.strictObject(Object.fromEntries(keys.map((k) => [k, z.unknown().optional()])), { error: `must be an object { ${keys.join(", ")} }` }) });
-const SineKeys = keysOf("spec", ["amplitude", "frequency", "phase", "offset"]);
-const StepKeys = keysOf("opts", ["at", "before"]);
-const GateKeys = keysOf("spec", ["frequency", "duty", "delay", "invert"]);
+const SineKeys = lazySchema(() => keysOf("spec", ["amplitude", "frequency", "phase", "offset"]));
+const StepKeys = lazySchema(() => keysOf("opts", ["at", "before"]));
+const GateKeys = lazySchema(() => keysOf("spec", ["frequency", "duty", "delay", "invert"]));
 import type { Waveform } from "./circuit.ts";
 
 /**

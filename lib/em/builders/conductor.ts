@@ -4,7 +4,7 @@
  */
 import { z } from "zod";
 import { TanklightInputError, underName } from "../../errors.ts";
-import { dimensionless, length, parseInput } from "../../schema.ts";
+import { dimensionless, length, parseInput, lazySchema } from "../../schema.ts";
 import { parseQuantity } from "../../units.ts";
 import { awgDiameter } from "../classicFormulas.ts";
 import { MATERIALS } from "../materials.ts";
@@ -31,18 +31,18 @@ export interface RoundWireOptions {
   readonly material?: string;
 }
 
-const lengthOrString = z.union([z.number(), z.string()], { error: "expected a length like '0.5 mm' or a number in m" });
+const lengthOrString = lazySchema(() => z.union([z.number(), z.string()], { error: "expected a length like '0.5 mm' or a number in m" }));
 /** Strict shape of {@link RoundWireOptions} (the values are checked by the builder). */
-const RoundWireOptionsShape = z.strictObject({ insulation: lengthOrString.optional(), outerDiameter: lengthOrString.optional(), material: z.string().optional() });
+const RoundWireOptionsShape = lazySchema(() => z.strictObject({ insulation: lengthOrString.optional(), outerDiameter: lengthOrString.optional(), material: z.string().optional() }));
 /** Strict shape of {@link LitzWireOptions}. */
-const LitzWireOptionsShape = z.strictObject({
+const LitzWireOptionsShape = lazySchema(() => z.strictObject({
   outerDiameter: lengthOrString.optional(),
   strandInsulation: lengthOrString.optional(),
   fillFactor: dimensionless().optional(),
   material: z.string().optional(),
-});
+}));
 /** Strict shape of the options of {@link pcbTrace}. */
-const TraceOptionsShape = z.strictObject({ material: z.string().optional() });
+const TraceOptionsShape = lazySchema(() => z.strictObject({ material: z.string().optional() }));
 /** Options given as `undefined` mean none; anything else must be an options object (paths start with "opts."). */
 function readOptions<T>(shape: z.ZodType<T>, opts: unknown, where: string): T {
   return underName(where, () => parseInput(shape.optional(), opts, where) ?? ({} as T), "opts.");
@@ -257,7 +257,7 @@ function copperThickness(): z.ZodType<number, number | string> {
 }
 
 /** The `wire` field of a builder: a plain spec `{ diameter, insulation? | outerDiameter? }`, or a record from roundWire/awgWire/litzWire. */
-export const WireInput = z.strictObject({
+export const WireInput = lazySchema(() => z.strictObject({
   kind: z.enum(["round", "litz"]).optional(),
   diameter: length().optional(),
   insulation: length({ nonNegative: true }).optional(),
@@ -265,22 +265,22 @@ export const WireInput = z.strictObject({
   strands: count(1, "strands").optional(),
   strandDiameter: length().optional(),
   material: z.string().optional(),
-});
+}));
 
 /** The `trace` field of a builder: `{ width, thickness }` (thickness a length or "1 oz"), or a record from pcbTrace. */
-export const TraceInput = z.strictObject({
+export const TraceInput = lazySchema(() => z.strictObject({
   kind: z.literal("trace").optional(),
   width: length(),
   thickness: copperThickness(),
   material: z.string().optional(),
-});
+}));
 
 /** zod fields shared by every builder: exactly one of wire, awg, trace. */
-export const conductorFields = {
+export const conductorFields = lazySchema(() => ({
   wire: WireInput.optional(),
   awg: z.union([z.number(), z.string()]).optional(),
   trace: TraceInput.optional(),
-};
+}));
 
 /** Parsed conductor fields. */
 export interface ConductorFields {

@@ -17,13 +17,13 @@
  * the return lead or other leads, in both models.
  */
 import { z } from "zod";
-import { parseInput, length } from "../../schema.ts";
+import { parseInput, length, lazySchema } from "../../schema.ts";
 import type { Coil, CoilShape, Filament, Vec3 } from "../types.ts";
 import { IssueList, SIZE_LIMITS, count, archimedeanArcLength, circleTurn, metres } from "./common.ts";
 import { conductorFields, conductorFootprint, resolveConductor } from "./conductor.ts";
 
 /** Input of {@link flatSpiral}: lengths as SI numbers (m) or strings. */
-export const FlatSpiralSpec = z.strictObject({
+export const FlatSpiralSpec = lazySchema(() => z.strictObject({
   /** innermost conductor edge, m (give this or outerRadius) */
   innerRadius: length().optional(),
   /** outermost conductor edge, m */
@@ -35,7 +35,7 @@ export const FlatSpiralSpec = z.strictObject({
   /** chords per turn of the "spiral" model, integer ≥ 8 (default 64) */
   segmentsPerTurn: count(8, "segmentsPerTurn").optional(),
   ...conductorFields,
-});
+}));
 /** What {@link flatSpiral} accepts. */
 export type FlatSpiralInput = z.input<typeof FlatSpiralSpec>;
 /** The shape record of a flat spiral. */

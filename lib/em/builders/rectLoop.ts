@@ -4,19 +4,19 @@
  * seen from +z; wire length 2(width + height) (sharp corners; leads excluded).
  */
 import { z } from "zod";
-import { parseInput, length } from "../../schema.ts";
+import { parseInput, length, lazySchema } from "../../schema.ts";
 import type { Coil, CoilShape } from "../types.ts";
 import { IssueList, metres, roundedRectangle } from "./common.ts";
 import { conductorFields, conductorFootprint, resolveConductor } from "./conductor.ts";
 
 /** Input of {@link rectLoop}: lengths as SI numbers (m) or strings. */
-export const RectLoopSpec = z.strictObject({
+export const RectLoopSpec = lazySchema(() => z.strictObject({
   /** centreline width along x, m */
   width: length(),
   /** centreline height along y, m */
   height: length(),
   ...conductorFields,
-});
+}));
 /** What {@link rectLoop} accepts. */
 export type RectLoopInput = z.input<typeof RectLoopSpec>;
 /** The shape record of a rectangular loop. */

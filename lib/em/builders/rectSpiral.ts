@@ -12,13 +12,13 @@
  * that the first ring's last side stops one pitch short); wound: Σ √(perimeter² + p²). Leads excluded.
  */
 import { z } from "zod";
-import { parseInput, length } from "../../schema.ts";
+import { parseInput, length, lazySchema } from "../../schema.ts";
 import type { Coil, CoilShape, Filament } from "../types.ts";
 import { IssueList, SIZE_LIMITS, count, metres, roundedRectangle, roundedRectanglePerimeter } from "./common.ts";
 import { conductorFields, conductorFootprint, resolveConductor } from "./conductor.ts";
 
 /** Input of {@link rectSpiral}: lengths as SI numbers (m) or strings. */
-export const RectSpiralSpec = z.strictObject({
+export const RectSpiralSpec = lazySchema(() => z.strictObject({
   outerWidth: length(),
   outerHeight: length(),
   turns: count(1, "turns"),
@@ -30,7 +30,7 @@ export const RectSpiralSpec = z.strictObject({
   /** chords per rounded corner (default 8) */
   cornerSegments: count(1, "cornerSegments").optional(),
   ...conductorFields,
-});
+}));
 /** What {@link rectSpiral} accepts. */
 export type RectSpiralInput = z.input<typeof RectSpiralSpec>;
 /** The shape record of a rectangular spiral. */

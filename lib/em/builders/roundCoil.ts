@@ -12,13 +12,13 @@
  *   radial pitch at a layer change); leads are not included.
  */
 import { z } from "zod";
-import { parseInput, length } from "../../schema.ts";
+import { parseInput, length, lazySchema } from "../../schema.ts";
 import type { Coil, CoilShape, Filament } from "../types.ts";
 import { IssueList, count, circleTurn, metres } from "./common.ts";
 import { conductorFields, conductorFootprint, resolveConductor } from "./conductor.ts";
 
 /** Input of {@link roundCoil}: lengths as SI numbers (m) or strings ("12 mm"). */
-export const RoundCoilSpec = z.strictObject({
+export const RoundCoilSpec = lazySchema(() => z.strictObject({
   /** radius of the former: inner boundary of the winding window, m (give this or meanRadius) */
   innerRadius: length().optional(),
   /** mean radius (inner + outer)/2 of the winding window, m */
@@ -32,7 +32,7 @@ export const RoundCoilSpec = z.strictObject({
   /** radial centre-to-centre distance of layers, m (default: wire outer diameter) */
   radialPitch: length().optional(),
   ...conductorFields,
-});
+}));
 /** What {@link roundCoil} accepts. */
 export type RoundCoilInput = z.input<typeof RoundCoilSpec>;
 /** The shape record of a roundCoil. */

@@ -6,14 +6,14 @@
  * z = (i − (N − 1)/2)·pitch; wire length N·√((2πa)² + pitch²) (the helix; leads excluded).
  */
 import { z } from "zod";
-import { parseInput, length } from "../../schema.ts";
+import { parseInput, length, lazySchema } from "../../schema.ts";
 import type { Coil, CoilShape } from "../types.ts";
 import { IssueList, count, metres } from "./common.ts";
 import { conductorFields, conductorFootprint, resolveConductor } from "./conductor.ts";
 import { layeredTurns } from "./roundCoil.ts";
 
 /** Input of {@link solenoid}: lengths as SI numbers (m) or strings. */
-export const SolenoidSpec = z.strictObject({
+export const SolenoidSpec = lazySchema(() => z.strictObject({
   /** radius of the wire centres, m */
   radius: length(),
   turns: count(1, "turns"),
@@ -22,7 +22,7 @@ export const SolenoidSpec = z.strictObject({
   /** winding length = turns·pitch, m */
   length: length().optional(),
   ...conductorFields,
-});
+}));
 /** What {@link solenoid} accepts. */
 export type SolenoidInput = z.input<typeof SolenoidSpec>;
 /** The shape record of a solenoid. */

@@ -5,7 +5,7 @@
 
 import { z } from "zod";
 import { TanklightInputError } from "../../errors.ts";
-import { frequency, temperature as temperatureQ } from "../../schema.ts";
+import { frequency, temperature as temperatureQ, lazySchema } from "../../schema.ts";
 import { checkCoil, optionsArg, quantityArg } from "../inputs.ts";
 import { skinDepthCore } from "./skinDepth.ts";
 import type { Coil, Filament } from "../types.ts";
@@ -23,18 +23,18 @@ export interface CoilResistanceOptions {
 }
 
 /** The options of coilResistance and qualityFactor as a strict schema (unknown keys name the nearest valid one). */
-export const CoilResistanceOptionsSpec = z.strictObject({
+export const CoilResistanceOptionsSpec = lazySchema(() => z.strictObject({
   temperature: temperatureQ()
     .refine((t) => t >= 150 && t <= 700, { error: "must be a conductor temperature in kelvin between 150 K and 700 K (20 °C = 293.15 K; write \"20 degC\" for Celsius)" })
     .optional(),
-});
+}));
 
 /**
  * The checked inputs of coilResistance/qualityFactor: the coil, f in Hz (≥ 0, or > 0 when
  * `positive`), the temperature in K.
  */
-const FREQUENCY_DC = frequency({ nonNegative: true });
-const FREQUENCY_AC = frequency();
+const FREQUENCY_DC = lazySchema(() => frequency({ nonNegative: true }));
+const FREQUENCY_AC = lazySchema(() => frequency());
 
 export function coilLossInputs(coil: Coil, f: unknown, opts: unknown, where: string, positive = false): { coil: Coil; f: number; temperature: number } {
   checkCoil(coil, "coil", where);

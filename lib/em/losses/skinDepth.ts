@@ -3,12 +3,12 @@
  */
 
 import { MU0 } from "../../constants.ts";
-import { dimensionless, frequency, resistivity as resistivityQ } from "../../schema.ts";
+import { dimensionless, frequency, resistivity as resistivityQ, lazySchema } from "../../schema.ts";
 import { quantityArg } from "../inputs.ts";
 
-const FREQUENCY = frequency();
-const RESISTIVITY = resistivityQ();
-const MU_R = dimensionless({ min: 1 });
+const FREQUENCY = lazySchema(() => frequency());
+const RESISTIVITY = lazySchema(() => resistivityQ());
+const MU_R = lazySchema(() => dimensionless({ min: 1 }));
 
 /**
  * Skin depth: the depth at which a plane wave's current density in a good conductor falls to 1/e.
