@@ -11,7 +11,7 @@ import {
 } from "./network.ts";
 import { networkTransmitters } from "./network.ts";
 import { receiverLabel, type LinkWorkspace } from "./operatingPoint.ts";
-import type { DriveState, LedState, LinkResult, Phasor, ReceiverState, TransmitterState } from "./result.ts";
+import type { DriveState, LedState, LinkResult, Phasor, ReceiverState, TankState, TransmitterState } from "./result.ts";
 
 const LITTHRESHOLD_SOURCE =
   "trade practice (no source): indicator LEDs are visible indoors from about 0.1–1 mA average current";
@@ -207,37 +207,53 @@ function transmitterTank(ws: LinkWorkspace, i: number, coil: { re: Float64Array;
 }
 
 /**
- * The transmitters' states and the drives': an own drive's source power (½Re(V·I*) of the ideal
- * source; of the terminals for a held current), driver loss and input impedance go with its
- * transmitter; a shared drive's source current (string current, or the sum of its branches'),
- * terminal voltage and power are the drive's, each coil on it reporting its own tank's terminals.
+ * The transmitters' states and the drives': each transmitter's own drive goes with it
+ * ({@link ownDrive}); a shared drive's numbers are its own ({@link sharedDrive}), each coil on it
+ * reporting its own tank's terminals.
  */
 function driveStates(ws: LinkWorkspace, tanks: readonly TransmitterTank[]): { transmitters: TransmitterState[]; drives: DriveState[] } {
   const txs = networkTransmitters(ws.network);
   const transmitters: TransmitterState[] = [];
   const drives: DriveState[] = [];
   tanks.forEach((k, i) => {
-    const tx = txs[i]!;
-    if (tx.feed !== undefined) {
+    if (txs[i]!.feed !== undefined) {
       const termP = 0.5 * (k.termVRe * k.srcIRe + k.termVIm * k.srcIIm);
       transmitters.push(transmitterState(ws, i, k, terminalImpedance(k.termVRe, k.termVIm, k.srcIRe, k.srcIIm), 0, termP));
       return;
     }
-    const drive = tx.drive;
-    const srcIa2 = k.srcIRe * k.srcIRe + k.srcIIm * k.srcIIm;
-    // ½Re(V·I*) of the ideal source (V = amplitude·e^{jφ}), or of the terminals for a current drive
-    const phase = tx.phase ?? 0;
-    const input =
-      drive.kind === "voltage"
-        ? phase === 0
-          ? 0.5 * drive.amplitude * k.srcIRe
-          : 0.5 * drive.amplitude * (Math.cos(phase) * k.srcIRe + Math.sin(phase) * k.srcIIm)
-        : 0.5 * (k.termVRe * k.srcIRe + k.termVIm * k.srcIIm);
-    const driverLoss = drive.kind === "voltage" ? 0.5 * srcIa2 * drive.resistance : 0;
-    const inZ = terminalImpedance(k.termVRe, k.termVIm, k.srcIRe, k.srcIIm);
-    const state = transmitterState(ws, i, k, inZ, driverLoss, input - driverLoss);
-    transmitters.push(state);
-    drives.push({
+    const own = ownDrive(ws, i, k);
+    transmitters.push(own.state);
+    drives.push(own.drive);
+  });
+  (ws.network.sharedDrives ?? []).forEach((sd, g) => {
+    const members = txs.flatMap((tx, i) => (tx.feed?.drive === g ? [i] : []));
+    if (members.length > 0) drives.push(sharedDrive(ws, g, members, tanks, transmitters));
+  });
+  return { transmitters, drives };
+}
+
+/**
+ * Transmitter i on its own drive: the source power (½Re(V·I*) of the ideal source; of the
+ * terminals for a held current), driver loss and input impedance, with its state.
+ */
+function ownDrive(ws: LinkWorkspace, i: number, k: TransmitterTank): { state: TransmitterState; drive: DriveState } {
+  const tx = networkTransmitters(ws.network)[i]!;
+  const drive = tx.drive;
+  const srcIa2 = k.srcIRe * k.srcIRe + k.srcIIm * k.srcIIm;
+  // ½Re(V·I*) of the ideal source (V = amplitude·e^{jφ}), or of the terminals for a current drive
+  const phase = tx.phase ?? 0;
+  const input =
+    drive.kind === "voltage"
+      ? phase === 0
+        ? 0.5 * drive.amplitude * k.srcIRe
+        : 0.5 * drive.amplitude * (Math.cos(phase) * k.srcIRe + Math.sin(phase) * k.srcIIm)
+      : 0.5 * (k.termVRe * k.srcIRe + k.termVIm * k.srcIIm);
+  const driverLoss = drive.kind === "voltage" ? 0.5 * srcIa2 * drive.resistance : 0;
+  const inZ = terminalImpedance(k.termVRe, k.termVIm, k.srcIRe, k.srcIIm);
+  const state = transmitterState(ws, i, k, inZ, driverLoss, input - driverLoss);
+  return {
+    state,
+    drive: {
       label: state.label,
       description: drive.label,
       wiring: "own",
@@ -249,60 +265,64 @@ function driveStates(ws: LinkWorkspace, tanks: readonly TransmitterTank[]): { tr
       inputImpedance: inZ,
       inputPower: input,
       driverLoss,
-    });
-  });
-  (ws.network.sharedDrives ?? []).forEach((sd, g) => {
-    const members = txs.flatMap((tx, i) => (tx.feed?.drive === g ? [i] : []));
-    if (members.length === 0) return;
-    let iRe = 0;
-    let iIm = 0;
-    let vRe = 0;
-    let vIm = 0;
-    if (sd.wiring === "series") {
-      const u = ws.base.stringUnknown[g]!;
-      iRe = ws.iRe[u]!;
-      iIm = ws.iIm[u]!;
-      for (const i of members) {
-        const s = txs[i]!.feed!.polarity;
-        vRe += s * tanks[i]!.termVRe;
-        vIm += s * tanks[i]!.termVIm;
-      }
-    } else {
-      for (const i of members) {
-        const s = txs[i]!.feed!.polarity;
-        iRe += s * tanks[i]!.srcIRe;
-        iIm += s * tanks[i]!.srcIIm;
-      }
-      const first = members[0]!;
-      const s0 = txs[first]!.feed!.polarity;
-      vRe = s0 * tanks[first]!.termVRe;
-      vIm = s0 * tanks[first]!.termVIm;
+    },
+  };
+}
+
+/**
+ * Shared drive g feeding the transmitters `members`: its source current (the string current in
+ * series, the sum of the branches' in parallel), terminal voltage, power and driver loss.
+ */
+function sharedDrive(ws: LinkWorkspace, g: number, members: readonly number[], tanks: readonly TransmitterTank[], transmitters: readonly TransmitterState[]): DriveState {
+  const txs = networkTransmitters(ws.network);
+  const sd = ws.network.sharedDrives![g]!;
+  let iRe = 0;
+  let iIm = 0;
+  let vRe = 0;
+  let vIm = 0;
+  if (sd.wiring === "series") {
+    const u = ws.base.stringUnknown[g]!;
+    iRe = ws.iRe[u]!;
+    iIm = ws.iIm[u]!;
+    for (const i of members) {
+      const s = txs[i]!.feed!.polarity;
+      vRe += s * tanks[i]!.termVRe;
+      vIm += s * tanks[i]!.termVIm;
     }
-    const drive = sd.drive;
-    const phase = sd.phase ?? 0;
-    const ia2 = iRe * iRe + iIm * iIm;
-    const input =
-      drive.kind === "voltage"
-        ? 0.5 * drive.amplitude * (Math.cos(phase) * iRe + Math.sin(phase) * iIm)
-        : 0.5 * (vRe * iRe + vIm * iIm);
-    const driverLoss = drive.kind === "voltage" ? 0.5 * ia2 * drive.resistance : 0;
-    const srcI = Math.sqrt(ia2);
-    const termV = Math.hypot(vRe, vIm);
-    drives.push({
-      label: sd.label,
-      description: drive.label,
-      wiring: sd.wiring,
-      transmitters: members.map((i) => transmitters[i]!.label),
-      sourceCurrent: srcI,
-      sourceCurrentRms: srcI * SQRT1_2,
-      sourceVoltage: termV,
-      sourceVoltageRms: termV * SQRT1_2,
-      inputImpedance: terminalImpedance(vRe, vIm, iRe, iIm),
-      inputPower: input,
-      driverLoss,
-    });
-  });
-  return { transmitters, drives };
+  } else {
+    for (const i of members) {
+      const s = txs[i]!.feed!.polarity;
+      iRe += s * tanks[i]!.srcIRe;
+      iIm += s * tanks[i]!.srcIIm;
+    }
+    const first = members[0]!;
+    const s0 = txs[first]!.feed!.polarity;
+    vRe = s0 * tanks[first]!.termVRe;
+    vIm = s0 * tanks[first]!.termVIm;
+  }
+  const drive = sd.drive;
+  const phase = sd.phase ?? 0;
+  const ia2 = iRe * iRe + iIm * iIm;
+  const input =
+    drive.kind === "voltage"
+      ? 0.5 * drive.amplitude * (Math.cos(phase) * iRe + Math.sin(phase) * iIm)
+      : 0.5 * (vRe * iRe + vIm * iIm);
+  const driverLoss = drive.kind === "voltage" ? 0.5 * ia2 * drive.resistance : 0;
+  const srcI = Math.sqrt(ia2);
+  const termV = Math.hypot(vRe, vIm);
+  return {
+    label: sd.label,
+    description: drive.label,
+    wiring: sd.wiring,
+    transmitters: members.map((i) => transmitters[i]!.label),
+    sourceCurrent: srcI,
+    sourceCurrentRms: srcI * SQRT1_2,
+    sourceVoltage: termV,
+    sourceVoltageRms: termV * SQRT1_2,
+    inputImpedance: terminalImpedance(vRe, vIm, iRe, iIm),
+    inputPower: input,
+    driverLoss,
+  };
 }
 
 /** V/I at a pair of terminals, Ω (0 + 0j when no current flows). */
@@ -325,20 +345,7 @@ function transmitterState(ws: LinkWorkspace, i: number, k: TransmitterTank, inZ:
   const srcI = Math.hypot(k.srcIRe, k.srcIIm);
   const termV = Math.hypot(k.termVRe, k.termVIm);
   const i0 = Math.sqrt(i0a2);
-  // written out field by field: an object spread here made the whole solve 2–5× slower (V8)
-  return {
-    label: k.label,
-    coilCurrent: i0,
-    coilCurrentRms: i0 * SQRT1_2,
-    coilCurrentPhasor: { re: k.iRe, im: k.iIm },
-    coilVoltage: coilV,
-    coilVoltageRms: coilV * SQRT1_2,
-    capacitorVoltage: capV,
-    capacitorVoltageRms: capV * SQRT1_2,
-    capacitorCurrent: capI,
-    capacitorCurrentRms: capI * SQRT1_2,
-    coilLoss,
-    capacitorLoss: capLoss,
+  return Object.assign(tankState(k.label, i0, k.iRe, k.iIm, coilV, capV, capI, coilLoss, capLoss), {
     sourceCurrent: srcI,
     sourceCurrentRms: srcI * SQRT1_2,
     sourceVoltage: termV,
@@ -347,6 +354,24 @@ function transmitterState(ws: LinkWorkspace, i: number, k: TransmitterTank, inZ:
     reflectedImpedance: k.refl,
     driverLoss,
     terminalPower,
+  });
+}
+
+/** The {@link TankState} of a coil (current i, phasor iRe + j·iIm, voltage coilV) and its capacitor (capV, capI), peak, with their losses. */
+function tankState(label: string, i: number, iRe: number, iIm: number, coilV: number, capV: number, capI: number, coilLoss: number, capLoss: number): TankState {
+  return {
+    label,
+    coilCurrent: i,
+    coilCurrentRms: i * SQRT1_2,
+    coilCurrentPhasor: { re: iRe, im: iIm },
+    coilVoltage: coilV,
+    coilVoltageRms: coilV * SQRT1_2,
+    capacitorVoltage: capV,
+    capacitorVoltageRms: capV * SQRT1_2,
+    capacitorCurrent: capI,
+    capacitorCurrentRms: capI * SQRT1_2,
+    coilLoss,
+    capacitorLoss: capLoss,
   };
 }
 
@@ -441,19 +466,7 @@ function receiverState(ws: LinkWorkspace, k: number, coil: { re: Float64Array; i
   checkSelfResonance(label + " coil", w / (2 * Math.PI), r.selfResonance, v.warnings);
   caution(label + " tank", Math.max(capV, coilV), v.cautionV, v.cautions);
   const i = Math.sqrt(ia2);
-  return {
-    label,
-    coilCurrent: i,
-    coilCurrentRms: i * SQRT1_2,
-    coilCurrentPhasor: { re: ir, im: ii },
-    coilVoltage: coilV,
-    coilVoltageRms: coilV * SQRT1_2,
-    capacitorVoltage: capV,
-    capacitorVoltageRms: capV * SQRT1_2,
-    capacitorCurrent: capI,
-    capacitorCurrentRms: capI * SQRT1_2,
-    coilLoss,
-    capacitorLoss: capLoss,
+  return Object.assign(tankState(label, i, ir, ii, coilV, capV, capI, coilLoss, capLoss), {
     emf: Math.hypot(eRe, eIm),
     loadVoltage: vl,
     loadVoltageRms: vl * SQRT1_2,
@@ -463,7 +476,7 @@ function receiverState(ws: LinkWorkspace, k: number, coil: { re: Float64Array; i
     leds,
     lit: leds.some((d) => d.lit),
     allLit: leds.length > 0 && leds.every((d) => d.lit),
-  };
+  });
 }
 
 function checkPartVoltage(what: string, peak: number, rating: number | undefined, warnings: string[]): void {

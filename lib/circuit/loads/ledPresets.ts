@@ -43,43 +43,24 @@ export interface LedPresetData {
 const TABLE_20MA = "V_F at 20 mA inside the docs/references.md range (reference tables, not a handbook)";
 const LOW_POINTS = "1 mA and 5 mA points from memory (unverified), typical indicator-LED curve";
 
+/** The currents of every LED preset's forward points, A: the curve's knee (1, 5 mA) and the rated 20 mA. */
+const PRESET_CURRENTS = [1e-3, 5e-3, 20e-3] as const;
+
+/** One LED preset: its forward voltages at {@link PRESET_CURRENTS} (V) and the 20 mA range of docs/references.md they sit in. */
+function ledRow(colour: LedColour, chemistry: string, wavelength: number, voltages: readonly [number, number, number], range: string): LedPresetData {
+  const points = PRESET_CURRENTS.map((current, i) => ({ current, voltage: voltages[i]! }));
+  return { colour, chemistry, wavelength, points, source: `${TABLE_20MA} (${range}); ${LOW_POINTS}` };
+}
+
 /** The preset table (plain data, exported for docs and tests). */
 export const LED_PRESET_DATA: Readonly<Record<LedColour, LedPresetData>> = {
-  red: {
-    colour: "red", chemistry: "AlInGaP", wavelength: 625e-9,
-    points: [{ current: 1e-3, voltage: 1.66 }, { current: 5e-3, voltage: 1.77 }, { current: 20e-3, voltage: 1.92 }],
-    source: `${TABLE_20MA} (red AlInGaP 1.8–2.1 V); ${LOW_POINTS}`,
-  },
-  orange: {
-    colour: "orange", chemistry: "AlInGaP", wavelength: 605e-9,
-    points: [{ current: 1e-3, voltage: 1.78 }, { current: 5e-3, voltage: 1.9 }, { current: 20e-3, voltage: 2.05 }],
-    source: `${TABLE_20MA} (orange 2.0–2.1 V); ${LOW_POINTS}`,
-  },
-  yellow: {
-    colour: "yellow", chemistry: "AlInGaP", wavelength: 590e-9,
-    points: [{ current: 1e-3, voltage: 1.85 }, { current: 5e-3, voltage: 1.97 }, { current: 20e-3, voltage: 2.15 }],
-    source: `${TABLE_20MA} (yellow 2.1–2.2 V); ${LOW_POINTS}`,
-  },
-  "green-gap": {
-    colour: "green-gap", chemistry: "GaP (yellow-green, the older 'about 2 V' indicator green)", wavelength: 570e-9,
-    points: [{ current: 1e-3, voltage: 1.9 }, { current: 5e-3, voltage: 1.99 }, { current: 20e-3, voltage: 2.15 }],
-    source: `${TABLE_20MA} (yellow-green GaP about 2.1 V, dim); ${LOW_POINTS}`,
-  },
-  "green-ingan": {
-    colour: "green-ingan", chemistry: "InGaN (true green)", wavelength: 525e-9,
-    points: [{ current: 1e-3, voltage: 2.65 }, { current: 5e-3, voltage: 2.85 }, { current: 20e-3, voltage: 3.2 }],
-    source: `${TABLE_20MA} (green InGaN 3.0–3.5 V); ${LOW_POINTS}`,
-  },
-  blue: {
-    colour: "blue", chemistry: "InGaN", wavelength: 470e-9,
-    points: [{ current: 1e-3, voltage: 2.7 }, { current: 5e-3, voltage: 2.88 }, { current: 20e-3, voltage: 3.15 }],
-    source: `${TABLE_20MA} (blue 3.0–3.3 V); ${LOW_POINTS}`,
-  },
-  white: {
-    colour: "white", chemistry: "InGaN blue + phosphor", wavelength: 455e-9,
-    points: [{ current: 1e-3, voltage: 2.68 }, { current: 5e-3, voltage: 2.86 }, { current: 20e-3, voltage: 3.15 }],
-    source: `${TABLE_20MA} (white 3.0–3.3 V); ${LOW_POINTS}`,
-  },
+  red: ledRow("red", "AlInGaP", 625e-9, [1.66, 1.77, 1.92], "red AlInGaP 1.8–2.1 V"),
+  orange: ledRow("orange", "AlInGaP", 605e-9, [1.78, 1.9, 2.05], "orange 2.0–2.1 V"),
+  yellow: ledRow("yellow", "AlInGaP", 590e-9, [1.85, 1.97, 2.15], "yellow 2.1–2.2 V"),
+  "green-gap": ledRow("green-gap", "GaP (yellow-green, the older 'about 2 V' indicator green)", 570e-9, [1.9, 1.99, 2.15], "yellow-green GaP about 2.1 V, dim"),
+  "green-ingan": ledRow("green-ingan", "InGaN (true green)", 525e-9, [2.65, 2.85, 3.2], "green InGaN 3.0–3.5 V"),
+  blue: ledRow("blue", "InGaN", 470e-9, [2.7, 2.88, 3.15], "blue 3.0–3.3 V"),
+  white: ledRow("white", "InGaN blue + phosphor", 455e-9, [2.68, 2.86, 3.15], "white 3.0–3.3 V"),
 };
 
 /** Diode preset data. */
@@ -110,7 +91,11 @@ const LedPresetArgs = lazySchema(() => z.strictObject({
 }));
 const DiodePresetArgs = lazySchema(() => z.strictObject({ kind: oneOf(DIODE_KINDS), options: PresetOptions.optional() }));
 
-const ledCache = new Map<string, Led>();
+/**
+ * The presets at the default options, each fitted on first use (the fit is not free) and never
+ * changed after: at most one entry per colour. With a temperature or a label the LED is fitted anew.
+ */
+const defaultLeds = new Map<LedColour, Led>();
 
 /**
  * A ready-made LED of a colour, fitted (three points, exact) to its preset forward points.
@@ -128,24 +113,22 @@ export function ledPreset(colour: LedColour, options: PresetOptions = {}): Led {
   }
   const args = parseArgs(LedPresetArgs, [colour, options], "ledPreset");
   const o = args.options ?? {};
-  const data = LED_PRESET_DATA[args.colour];
-  return cachedPreset(args.colour, data, o);
+  if (o.temperature !== undefined || o.label !== undefined) return presetLed(args.colour, o);
+  const made = defaultLeds.get(args.colour) ?? presetLed(args.colour, o);
+  defaultLeds.set(args.colour, made);
+  return made;
 }
 
-/** One preset LED per colour, temperature and label (built once: the fit is not free). */
-function cachedPreset(colour: LedColour, data: LedPresetData, options: { readonly temperature?: number | undefined; readonly label?: string | undefined }): Led {
-  const key = `${colour}|${options.temperature ?? ""}|${options.label ?? ""}`;
-  const hit = ledCache.get(key);
-  if (hit) return hit;
-  const made = led({
+/** The preset LED of a colour fitted to its points, at a temperature and with a label. */
+function presetLed(colour: LedColour, options: { readonly temperature?: number | undefined; readonly label?: string | undefined }): Led {
+  const data = LED_PRESET_DATA[colour];
+  return led({
     points: data.points,
     colour,
     label: options.label ?? `${colour} LED (preset)`,
     source: data.source,
     ...(options.temperature !== undefined ? { temperature: options.temperature } : {}),
   });
-  ledCache.set(key, made);
-  return made;
 }
 
 /**
