@@ -44,7 +44,7 @@ export function formatIssue(issue: InputIssue): string {
  * @example describeValue("5 kHz") // → "'5 kHz'";  describeValue(null) // → "null"
  */
 export function describeValue(value: unknown): string {
-  if (typeof value === "string") return `'${value}'`;
+  if (typeof value === "string") return value.length > 80 ? `'${value.slice(0, 77)}...' (${value.length} characters)` : `'${value}'`;
   if (typeof value === "number") return Number.isNaN(value) ? "NaN" : String(value);
   if (value === undefined) return "nothing";
   if (value === null) return "null";

@@ -205,15 +205,26 @@ function quantityError(
   detail?: string,
 ): TanklightInputError {
   const info = DIMENSIONS[dimension];
-  return new TanklightInputError([
-    {
-      path: field ?? "",
-      message,
-      value,
-      expected: info.unit === "" ? info.noun : `${info.noun} in ${info.unit} or a string like '${info.example}'`,
-      ...(detail === undefined ? {} : { detail }),
-    },
-  ]);
+  return new TanklightInputError(
+    [
+      {
+        path: field ?? "value",
+        message,
+        value,
+        expected: info.unit === "" ? info.noun : `${info.noun} in ${info.unit} or a string like '${info.example}'`,
+        ...(detail === undefined ? {} : { detail }),
+      },
+    ],
+    "parseQuantity",
+  );
+}
+
+const DIMENSION_LIST = (): string => Object.keys(DIMENSIONS).join(", ");
+
+/** A dimension argument: one of the own keys of DIMENSIONS ("toString" is none). */
+function checkDimension(dimension: unknown, field: string, where: string): void {
+  if (typeof dimension === "string" && Object.hasOwn(DIMENSIONS, dimension)) return;
+  throw new TanklightInputError([{ path: field, message: `must be one of ${DIMENSION_LIST()}`, value: dimension }], where);
 }
 
 function expectation(dimension: Dimension): string {
@@ -245,6 +256,10 @@ function expectation(dimension: Dimension): string {
  * @example parseQuantity("0.5 mil", "length") // → 1.27e-5 (1 mil = 0.001 in = 25.4 µm exactly)
  */
 export function parseQuantity(value: QuantityInput, dimension: Dimension, field?: string): number {
+  checkDimension(dimension, "dimension", "parseQuantity");
+  if (field !== undefined && typeof field !== "string") {
+    throw new TanklightInputError([{ path: "field", message: "must be the field's name (a string) or absent", value: field }], "parseQuantity");
+  }
   if (typeof value === "number") {
     if (!Number.isFinite(value)) {
       throw quantityError(field, value, dimension, `${expectation(dimension)} (a finite number)`);
@@ -342,6 +357,7 @@ function scaleDecimal(mantissa: string, exponent: number, factor: number): numbe
  * @example isQuantity("5 kHz", "length") // → false
  */
 export function isQuantity(value: unknown, dimension: Dimension): boolean {
+  checkDimension(dimension, "dimension", "isQuantity");
   if (typeof value !== "number" && typeof value !== "string") return false;
   try {
     parseQuantity(value, dimension);
@@ -402,16 +418,16 @@ export interface FormatOptions {
  * @example formatQuantity(7.18e-22, "A", { floor: 1e-12 }) // → "0 A"
  */
 export function formatQuantity(x: number | string, unit: string, digits: number | FormatOptions = 3): string {
-  const opts: FormatOptions = typeof digits === "number" ? { digits } : digits ?? {};
-  const figures = opts.digits ?? 3;
+  const opts = formatOptions(digits);
+  const figures = opts.digits === undefined ? 3 : opts.digits;
   if (!(Number.isInteger(figures) && figures >= 1 && figures <= 17)) {
     throw new TanklightInputError(
       [{ path: "digits", message: "must be an integer from 1 to 17", value: figures, expected: "1–17" }],
       "formatQuantity",
     );
   }
-  const floor = opts.floor ?? 0;
-  if (!(Number.isFinite(floor) && floor >= 0)) {
+  const floor = opts.floor === undefined ? 0 : opts.floor;
+  if (!(typeof floor === "number" && Number.isFinite(floor) && floor >= 0)) {
     throw new TanklightInputError(
       [{ path: "floor", message: `must be a finite number ≥ 0 in ${unit || "SI units"}`, value: floor, expected: "≥ 0" }],
       "formatQuantity",
@@ -434,6 +450,22 @@ export function formatQuantity(x: number | string, unit: string, digits: number 
   return formatNumber(x, unit, figures);
 }
 
+/** formatQuantity's third argument: a digit count, or `{ digits?, floor? }` (strict keys). */
+function formatOptions(digits: unknown): FormatOptions {
+  if (typeof digits === "number") return { digits };
+  if (digits === undefined) return {};
+  if (typeof digits !== "object" || digits === null || Array.isArray(digits)) {
+    throw new TanklightInputError([{ path: "digits", message: "must be a number of significant figures or { digits?, floor? }", value: digits }], "formatQuantity");
+  }
+  for (const key of Reflect.ownKeys(digits)) {
+    if (key !== "digits" && key !== "floor") {
+      const near = typeof key === "string" && /^(dig|flo)/i.test(key) ? `; did you mean '${/^dig/i.test(key) ? "digits" : "floor"}'?` : " (accepted: digits, floor)";
+      throw new TanklightInputError([{ path: `options.${String(key)}`, message: `unknown option${near}`, value: (digits as Record<PropertyKey, unknown>)[key] }], "formatQuantity");
+    }
+  }
+  return digits as FormatOptions;
+}
+
 /** A quantity string given to formatQuantity: parsed in the dimension whose SI unit is `unit`, or refused. */
 function parseForFormat(x: string, unit: string): number {
   const dimension = DIMENSION_NAMES.find((d) => DIMENSIONS[d].unit === unit);
@@ -452,7 +484,12 @@ function parseForFormat(x: string, unit: string): number {
       "formatQuantity",
     );
   }
-  return parseQuantity(x, dimension, "formatQuantity: x");
+  try {
+    return parseQuantity(x, dimension, "x");
+  } catch (e) {
+    if (e instanceof TanklightInputError) throw new TanklightInputError(e.issues, "formatQuantity");
+    throw e;
+  }
 }
 
 /** formatQuantity's body for a checked number. */
@@ -516,5 +553,6 @@ function exponentForm(x: number, digits: number): string {
  * @example siUnit("resistance") // → "Ω"
  */
 export function siUnit(dimension: Dimension): string {
+  checkDimension(dimension, "dimension", "siUnit");
   return DIMENSIONS[dimension].unit;
 }

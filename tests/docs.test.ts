@@ -180,7 +180,7 @@ describe("docs runner (fixtures in tests/fixtures/docs, not scanned by default)"
     if (first === undefined || second === undefined) throw new Error("fixture blocks missing");
     await runBlock(first);
     await expect(runBlock(second)).rejects.toThrow(
-      "tests/fixtures/docs/throwing.md:12: TanklightInputError: coil.radius: expected a length like '12 mm', got '5 kHz' (a frequency)",
+      "tests/fixtures/docs/throwing.md:12: TanklightInputError: parseQuantity: coil.radius: expected a length like '12 mm', got '5 kHz' (a frequency)",
     );
   });
 

@@ -23,13 +23,13 @@ describe("parseQuantity: numbers are SI", () => {
 
   it("rejects NaN, Infinity and -Infinity with the field name", () => {
     expect(() => parseQuantity(NaN, "length", "coil.radius")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: coil.radius: expected a length like '12 mm' (a finite number), got NaN]`,
+      `[TanklightInputError: parseQuantity: coil.radius: expected a length like '12 mm' (a finite number), got NaN]`,
     );
     expect(() => parseQuantity(Infinity, "frequency", "f")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: f: expected a frequency like '217 kHz' (a finite number), got Infinity]`,
+      `[TanklightInputError: parseQuantity: f: expected a frequency like '217 kHz' (a finite number), got Infinity]`,
     );
     expect(() => parseQuantity(-Infinity, "capacitance", "c")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: c: expected a capacitance like '4.7 nF' (a finite number), got -Infinity]`,
+      `[TanklightInputError: parseQuantity: c: expected a capacitance like '4.7 nF' (a finite number), got -Infinity]`,
     );
   });
 });
@@ -129,37 +129,37 @@ describe("parseQuantity: strings with units", () => {
 describe("parseQuantity: rejected strings", () => {
   it("rejects a unit of the wrong dimension and says what it was", () => {
     expect(() => parseQuantity("5 kHz", "length", "coil.radius")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: coil.radius: expected a length like '12 mm', got '5 kHz' (a frequency)]`,
+      `[TanklightInputError: parseQuantity: coil.radius: expected a length like '12 mm', got '5 kHz' (a frequency)]`,
     );
     expect(() => parseQuantity("5 kg", "length", "coil.radius")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: coil.radius: expected a length like '12 mm', got '5 kg' (unit 'kg' is not a length)]`,
+      `[TanklightInputError: parseQuantity: coil.radius: expected a length like '12 mm', got '5 kg' (unit 'kg' is not a length)]`,
     );
     expect(() => parseQuantity("30 deg", "dimensionless", "k")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: k: expected a plain number like '0.5', got '30 deg' (an angle)]`,
+      `[TanklightInputError: parseQuantity: k: expected a plain number like '0.5', got '30 deg' (an angle)]`,
     );
   });
 
   it("rejects a bare number string where a unit is needed", () => {
     expect(() => parseQuantity("12", "length", "coil.radius")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: coil.radius: expected a length like '12 mm', got '12' (no unit; write e.g. '12 m' or pass the number for SI)]`,
+      `[TanklightInputError: parseQuantity: coil.radius: expected a length like '12 mm', got '12' (no unit; write e.g. '12 m' or pass the number for SI)]`,
     );
   });
 
   it("rejects empty, blank, unknown-unit and malformed strings", () => {
     expect(() => parseQuantity("", "length", "r")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: r: expected a length like '12 mm', got '' (no leading number)]`,
+      `[TanklightInputError: parseQuantity: r: expected a length like '12 mm', got '' (no leading number)]`,
     );
     expect(() => parseQuantity("   ", "length", "r")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: r: expected a length like '12 mm', got '   ' (no leading number)]`,
+      `[TanklightInputError: parseQuantity: r: expected a length like '12 mm', got '   ' (no leading number)]`,
     );
     expect(() => parseQuantity("5 furlongs", "length", "r")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: r: expected a length like '12 mm', got '5 furlongs' (unknown unit 'furlongs')]`,
+      `[TanklightInputError: parseQuantity: r: expected a length like '12 mm', got '5 furlongs' (unknown unit 'furlongs')]`,
     );
     expect(() => parseQuantity("4.7n F", "capacitance", "c")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: c: expected a capacitance like '4.7 nF', got '4.7n F' (unknown unit 'n F'; write the prefix with its unit: '4.7 nF'?)]`,
+      `[TanklightInputError: parseQuantity: c: expected a capacitance like '4.7 nF', got '4.7n F' (unknown unit 'n F'; write the prefix with its unit: '4.7 nF'?)]`,
     );
     expect(() => parseQuantity("5 5 mm", "length", "r")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: r: expected a length like '12 mm', got '5 5 mm' (more than one number)]`,
+      `[TanklightInputError: parseQuantity: r: expected a length like '12 mm', got '5 5 mm' (more than one number)]`,
     );
     expect(() => parseQuantity("5 2mm", "length", "r")).toThrow(TanklightInputError);
     expect(() => parseQuantity("mm", "length", "r")).toThrow(TanklightInputError);
@@ -172,32 +172,32 @@ describe("parseQuantity: rejected strings", () => {
 
   it("hints at the right case when a unit is unknown only by its case", () => {
     expect(() => parseQuantity("217 khz", "frequency", "f")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: f: expected a frequency like '217 kHz', got '217 khz' (unknown unit 'khz'; units are case-sensitive: 'kHz'?)]`,
+      `[TanklightInputError: parseQuantity: f: expected a frequency like '217 kHz', got '217 khz' (unknown unit 'khz'; units are case-sensitive: 'kHz'?)]`,
     );
     expect(() => parseQuantity("1 MOHM", "resistance", "r")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: r: expected a resistance like '0.5 ohm', got '1 MOHM' (unknown unit 'MOHM'; units are case-sensitive: 'mohm' or 'Mohm'?)]`,
+      `[TanklightInputError: parseQuantity: r: expected a resistance like '0.5 ohm', got '1 MOHM' (unknown unit 'MOHM'; units are case-sensitive: 'mohm' or 'Mohm'?)]`,
     );
   });
 
   it("rejects strings that overflow or underflow the double range", () => {
     expect(() => parseQuantity("1e400 m", "length", "r")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: r: expected a length like '12 mm' (a finite number), got '1e400 m' (overflows)]`,
+      `[TanklightInputError: parseQuantity: r: expected a length like '12 mm' (a finite number), got '1e400 m' (overflows)]`,
     );
     expect(() => parseQuantity("1e-400 F", "capacitance", "c")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: c: expected a capacitance like '4.7 nF' (a representable number), got '1e-400 F' (underflows to 0)]`,
+      `[TanklightInputError: parseQuantity: c: expected a capacitance like '4.7 nF' (a representable number), got '1e-400 F' (underflows to 0)]`,
     );
   });
 
   it("rejects temperatures below absolute zero", () => {
     expect(() => parseQuantity("-300 degC", "temperature", "ambient")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: ambient: must be ≥ 0 K (absolute temperature), got '-300 degC' (-26.85 K)]`,
+      `[TanklightInputError: parseQuantity: ambient: must be ≥ 0 K (absolute temperature), got '-300 degC' (-26.85 K)]`,
     );
     expect(() => parseQuantity(-1, "temperature", "ambient")).toThrow(TanklightInputError);
   });
 
   it("rejects values that are neither number nor string", () => {
     expect(() => parseQuantity(null as unknown as number, "length", "r")).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: r: expected a length like '12 mm', got null]`,
+      `[TanklightInputError: parseQuantity: r: expected a length like '12 mm', got null]`,
     );
   });
 

@@ -2,6 +2,8 @@
  * Small complex arithmetic for hot paths: plain numbers in, results written into a caller's
  * Float64Array at an offset (re at out[i], im at out[i + 1]) — no allocation per call.
  * Phasor convention e^{jωt} (docs/design.md §3); these helpers know no physics.
+ * Every argument is checked (finite parts, an `out` with room at `offset`) and a result that
+ * leaves the double range is an error, not ±∞: these are public helpers, not a hot path.
  *
  * Methods: division by Smith's algorithm (R. L. Smith, "Algorithm 116: Complex division",
  * Comm. ACM 5(8):435, 1962), which avoids overflow/underflow of |b|²; modulus by
@@ -10,6 +12,7 @@
  * principal branch).
  */
 import { TanklightInputError } from "../errors.ts";
+import { finiteArg, outArg, overflowError } from "./args.ts";
 
 /** A complex number as plain data (mathjs Complex objects also fit this shape). */
 export interface Complex {
@@ -24,8 +27,22 @@ export interface Complex {
  * @example complexMul(1, 2, 3, -1, out) // out → [5, 5]
  */
 export function complexMul(ar: number, ai: number, br: number, bi: number, out: Float64Array, offset = 0): void {
-  out[offset] = ar * br - ai * bi;
-  out[offset + 1] = ar * bi + ai * br;
+  const at = checkParts("complexMul", out, offset, ar, ai, br, bi);
+  write("complexMul", "the product", out, at, ar * br - ai * bi, ar * bi + ai * br);
+}
+
+/** Checks the parts (named ar, ai, br, bi in order) and the output array; returns the offset. */
+function checkParts(where: string, out: unknown, offset: unknown, ...parts: number[]): number {
+  const names = parts.length === 4 ? ["ar", "ai", "br", "bi"] : ["br", "bi"];
+  parts.forEach((x, i) => finiteArg(x, names[i]!, where));
+  return outArg(out, offset, 2, where);
+}
+
+/** Writes re, im at out[at], or throws when either left the double range. */
+function write(where: string, what: string, out: Float64Array, at: number, re: number, im: number): void {
+  if (!Number.isFinite(re) || !Number.isFinite(im)) throw overflowError(what, where, [re, im]);
+  out[at] = re;
+  out[at + 1] = im;
 }
 
 /**
@@ -33,8 +50,8 @@ export function complexMul(ar: number, ai: number, br: number, bi: number, out: 
  * @example complexMulConj(1, 2, 3, -1, out) // out → [1, 7]
  */
 export function complexMulConj(ar: number, ai: number, br: number, bi: number, out: Float64Array, offset = 0): void {
-  out[offset] = ar * br + ai * bi;
-  out[offset + 1] = ai * br - ar * bi;
+  const at = checkParts("complexMulConj", out, offset, ar, ai, br, bi);
+  write("complexMulConj", "the product", out, at, ar * br + ai * bi, ai * br - ar * bi);
 }
 
 /**
@@ -42,19 +59,21 @@ export function complexMulConj(ar: number, ai: number, br: number, bi: number, o
  * @example complexDiv(5, 5, 3, -1, out) // out → [1, 2]
  */
 export function complexDiv(ar: number, ai: number, br: number, bi: number, out: Float64Array, offset = 0): void {
+  divide("complexDiv", ar, ai, br, bi, out, checkParts("complexDiv", out, offset, ar, ai, br, bi));
+}
+
+function divide(where: string, ar: number, ai: number, br: number, bi: number, out: Float64Array, at: number): void {
   if (br === 0 && bi === 0) {
-    throw new TanklightInputError([{ path: "b", message: "divisor must be non-zero", value: 0 }], "complexDiv");
+    throw new TanklightInputError([{ path: "br, bi", message: "divisor must be non-zero", value: 0 }], where);
   }
   if (Math.abs(br) >= Math.abs(bi)) {
     const r = bi / br;
     const d = br + bi * r;
-    out[offset] = (ar + ai * r) / d;
-    out[offset + 1] = (ai - ar * r) / d;
+    write(where, "the quotient", out, at, (ar + ai * r) / d, (ai - ar * r) / d);
   } else {
     const r = br / bi;
     const d = br * r + bi;
-    out[offset] = (ar * r + ai) / d;
-    out[offset + 1] = (ai * r - ar) / d;
+    write(where, "the quotient", out, at, (ar * r + ai) / d, (ai * r - ar) / d);
   }
 }
 
@@ -63,7 +82,7 @@ export function complexDiv(ar: number, ai: number, br: number, bi: number, out: 
  * @example complexInv(0, 2, out) // out → [0, −0.5]
  */
 export function complexInv(br: number, bi: number, out: Float64Array, offset = 0): void {
-  complexDiv(1, 0, br, bi, out, offset);
+  divide("complexInv", 1, 0, br, bi, out, checkParts("complexInv", out, offset, br, bi));
 }
 
 /**
@@ -71,7 +90,9 @@ export function complexInv(br: number, bi: number, out: Float64Array, offset = 0
  * @example complexAbs(3, 4) // → 5
  */
 export function complexAbs(ar: number, ai: number): number {
-  return Math.hypot(ar, ai);
+  const r = Math.hypot(finiteArg(ar, "ar", "complexAbs"), finiteArg(ai, "ai", "complexAbs"));
+  if (!Number.isFinite(r)) throw overflowError("|a|", "complexAbs", r);
+  return r;
 }
 
 /**
@@ -79,7 +100,7 @@ export function complexAbs(ar: number, ai: number): number {
  * @example complexArg(0, 1) // → π/2
  */
 export function complexArg(ar: number, ai: number): number {
-  return Math.atan2(ai, ar);
+  return Math.atan2(finiteArg(ai, "ai", "complexArg"), finiteArg(ar, "ar", "complexArg"));
 }
 
 /**
@@ -88,6 +109,9 @@ export function complexArg(ar: number, ai: number): number {
  * @example complexSqrt(-4, 0, out) // out → [0, 2];  complexSqrt(3, 4, out) // out → [2, 1]
  */
 export function complexSqrt(ar: number, ai: number, out: Float64Array, offset = 0): void {
+  finiteArg(ar, "ar", "complexSqrt");
+  finiteArg(ai, "ai", "complexSqrt");
+  offset = outArg(out, offset, 2, "complexSqrt");
   if (ar === 0 && ai === 0) {
     out[offset] = 0;
     out[offset + 1] = ai;
@@ -118,6 +142,8 @@ export function complexSqrt(ar: number, ai: number, out: Float64Array, offset = 
  * @example complexFromPolar(2, Math.PI / 2, out) // out → [1.2e−16, 2]
  */
 export function complexFromPolar(r: number, theta: number, out: Float64Array, offset = 0): void {
-  out[offset] = r * Math.cos(theta);
-  out[offset + 1] = r * Math.sin(theta);
+  finiteArg(r, "r", "complexFromPolar");
+  finiteArg(theta, "theta", "complexFromPolar");
+  const at = outArg(out, offset, 2, "complexFromPolar");
+  write("complexFromPolar", "the phasor", out, at, r * Math.cos(theta), r * Math.sin(theta));
 }

@@ -11,9 +11,12 @@
  */
 
 import { TanklightInputError } from "../errors.ts";
-import { LU_PIVOT_RTOL, SingularMatrixError } from "./lu.ts";
+import { LU_PIVOT_RTOL, SingularMatrixError, checkPivots } from "./lu.ts";
+import { typedArg } from "./args.ts";
 
 function checkDims(re: Float64Array, im: Float64Array, n: number, where: string): void {
+  typedArg(re, Float64Array, "re", where);
+  typedArg(im, Float64Array, "im", where);
   if (!(Number.isInteger(n) && n >= 1)) {
     throw new TanklightInputError([{ path: "n", message: "must be an integer ≥ 1", value: n }], where);
   }
@@ -36,19 +39,25 @@ function checkDims(re: Float64Array, im: Float64Array, n: number, where: string)
  */
 export function complexLuFactor(re: Float64Array, im: Float64Array, n: number, piv: Int32Array): void {
   checkDims(re, im, n, "complexLuFactor");
+  typedArg(piv, Int32Array, "piv", "complexLuFactor");
   if (piv.length < n) {
     throw new TanklightInputError([{ path: "piv.length", message: `must be ≥ n = ${n}`, value: piv.length }], "complexLuFactor");
   }
   for (let i = 0; i < n * n; i++) {
     if (!Number.isFinite(re[i]!) || !Number.isFinite(im[i]!)) {
       throw new TanklightInputError(
-        [{ path: `matrix[${Math.floor(i / n)}][${i % n}]`, message: "entries must be finite", value: { re: re[i], im: im[i] } }],
+        [{ path: `re[${i}], im[${i}] (row ${Math.floor(i / n)}, column ${i % n})`, message: "entries must be finite", value: { re: re[i], im: im[i] } }],
         "complexLuFactor",
       );
     }
   }
   const bad = complexLuFactorCore(re, im, n, piv);
   if (bad >= 0) throw new SingularMatrixError(bad, 0, "complexLuFactor");
+  for (let i = 0; i < n * n; i++) {
+    if (!Number.isFinite(re[i]!) || !Number.isFinite(im[i]!)) {
+      throw new TanklightInputError([{ path: "re, im", message: "the elimination overflows the double range (entries too large or too unequal in scale)", value: { re: re[i], im: im[i] } }], "complexLuFactor");
+    }
+  }
 }
 
 /**
@@ -58,10 +67,32 @@ export function complexLuFactor(re: Float64Array, im: Float64Array, n: number, p
  */
 export function complexLuSolve(re: Float64Array, im: Float64Array, n: number, piv: Int32Array, br: Float64Array, bi: Float64Array): void {
   checkDims(re, im, n, "complexLuSolve");
+  checkPivots(piv, n, "piv", "complexLuSolve");
+  typedArg(br, Float64Array, "br", "complexLuSolve");
+  typedArg(bi, Float64Array, "bi", "complexLuSolve");
   if (br.length < n || bi.length < n) {
     throw new TanklightInputError([{ path: "br.length, bi.length", message: `must be ≥ n = ${n}`, value: [br.length, bi.length] }], "complexLuSolve");
   }
+  for (let i = 0; i < n; i++) {
+    if (!Number.isFinite(br[i]!) || !Number.isFinite(bi[i]!)) {
+      throw new TanklightInputError([{ path: `br[${i}], bi[${i}]`, message: "entries must be finite", value: [br[i], bi[i]] }], "complexLuSolve");
+    }
+  }
+  for (let i = 0; i < n; i++) {
+    const dr = re[i * n + i]!, di = im[i * n + i]!;
+    if (!(Number.isFinite(dr) && Number.isFinite(di) && (dr !== 0 || di !== 0))) {
+      throw new TanklightInputError([{ path: `re[${i * n + i}], im[${i * n + i}]`, message: "must be a finite, non-zero pivot (re, im hold complexLuFactor's output)", value: [dr, di] }], "complexLuSolve");
+    }
+  }
   complexLuSolveCore(re, im, n, piv, br, bi);
+  for (let i = 0; i < n; i++) {
+    if (!Number.isFinite(br[i]!) || !Number.isFinite(bi[i]!)) {
+      throw new TanklightInputError(
+        [{ path: "re, im", message: "the solution is not finite: re, im and piv are not complexLuFactor's output, or the solution overflows the double range", value: [br[i], bi[i]] }],
+        "complexLuSolve",
+      );
+    }
+  }
 }
 
 /**

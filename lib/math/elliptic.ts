@@ -25,6 +25,7 @@
  * relative for K and E over 0 ≤ m ≤ 1 − 1e-300 (parameter and complementary forms).
  */
 import { TanklightInputError } from "../errors.ts";
+import { outArg } from "./args.ts";
 
 const HALF_PI = Math.PI / 2;
 /**
@@ -104,8 +105,8 @@ function pair(m: number, m1: number): EllipticPair {
 
 /** The error of ellipticKEInto for a bad (m, m₁). */
 function pairError(m: number, m1: number): TanklightInputError {
-  if (!(m >= 0 && m <= 1)) return domainError("ellipticKEInto", "m", m);
-  if (!(m1 >= 0 && m1 <= 1)) return domainError("ellipticKEInto", "m1", m1);
+  if (!(typeof m === "number" && m >= 0 && m <= 1)) return domainError("ellipticKEInto", "m", m);
+  if (!(typeof m1 === "number" && m1 >= 0 && m1 <= 1)) return domainError("ellipticKEInto", "m1", m1);
   return new TanklightInputError(
     [{ path: "m1", message: `must equal 1 − m to within ${SUM_TOLERANCE} (m = ${m})`, value: m1, expected: "m + m1 = 1" }],
     "ellipticKEInto",
@@ -129,7 +130,7 @@ function domainError(where: string, field: string, value: number): TanklightInpu
  * @see ellipticKE, ellipticK, ellipticE
  */
 export function ellipticKEComplement(m1: number): EllipticPair {
-  if (!(m1 >= 0 && m1 <= 1)) throw domainError("ellipticKEComplement", "m1", m1);
+  if (!(typeof m1 === "number" && m1 >= 0 && m1 <= 1)) throw domainError("ellipticKEComplement", "m1", m1);
   if (m1 === 0) return { K: Infinity, E: 1 };
   return pair(1 - m1, m1);
 }
@@ -147,8 +148,8 @@ export function ellipticKEComplement(m1: number): EllipticPair {
  */
 export function ellipticKEInto(m: number, m1: number, out: Float64Array, offset?: number): void {
   // one test on the hot path; the diagnosis only when it fails
-  if (!(m >= 0 && m1 >= 0 && Math.abs(m + m1 - 1) <= SUM_TOLERANCE && m <= 1 && m1 <= 1)) throw pairError(m, m1);
-  const at = offset ?? 0;
+  if (!(typeof m === "number" && typeof m1 === "number" && m >= 0 && m1 >= 0 && Math.abs(m + m1 - 1) <= SUM_TOLERANCE && m <= 1 && m1 <= 1)) throw pairError(m, m1);
+  const at = outArg(out, offset, 2, "ellipticKEInto");
   let K = Infinity;
   let E = 1;
   if (m1 > 0) {
@@ -170,7 +171,7 @@ export function ellipticKEInto(m: number, m1: number, out: Float64Array, offset?
  * @example ellipticKE(0.5) // → { K: 1.8540746773013719, E: 1.3506438810476755 }
  */
 export function ellipticKE(m: number): EllipticPair {
-  if (!(m >= 0 && m <= 1)) throw domainError("ellipticKE", "m", m);
+  if (!(typeof m === "number" && m >= 0 && m <= 1)) throw domainError("ellipticKE", "m", m);
   if (m === 1) return { K: Infinity, E: 1 };
   return pair(m, 1 - m);
 }
@@ -186,7 +187,7 @@ export function ellipticKE(m: number): EllipticPair {
  * @see ellipticE, ellipticKEComplement (for m near 1)
  */
 export function ellipticK(m: number): number {
-  if (!(m >= 0 && m <= 1)) throw domainError("ellipticK", "m", m);
+  if (!(typeof m === "number" && m >= 0 && m <= 1)) throw domainError("ellipticK", "m", m);
   if (m === 1) return Infinity;
   const sums: AgmSums = { K: 0, T: 0 };
   agmScaledSum(m, 1 - m, sums);
@@ -202,7 +203,7 @@ export function ellipticK(m: number): number {
  * @example ellipticE(0.5) // → 1.3506438810476755;  ellipticE(1) // → 1
  */
 export function ellipticE(m: number): number {
-  if (!(m >= 0 && m <= 1)) throw domainError("ellipticE", "m", m);
+  if (!(typeof m === "number" && m >= 0 && m <= 1)) throw domainError("ellipticE", "m", m);
   if (m === 1) return 1;
   return pair(m, 1 - m).E;
 }

@@ -187,19 +187,23 @@ function assemble(x: number, scale: number): KelvinValues {
 
 /** ber x (A&S 9.9.1), 0 ≤ x ≤ 1000. @example ber(2) // → 0.7517341827 */
 export function ber(x: number): number {
-  return kelvin(x).ber;
+  checkX(x, "ber", UNSCALED_MAX);
+  return assemble(x, Math.exp(x * SQRT1_2)).ber;
 }
 /** bei x (A&S 9.9.1), 0 ≤ x ≤ 1000. @example bei(2) // → 0.9722916273 */
 export function bei(x: number): number {
-  return kelvin(x).bei;
+  checkX(x, "bei", UNSCALED_MAX);
+  return assemble(x, Math.exp(x * SQRT1_2)).bei;
 }
 /** ber′x = d ber x/dx (A&S 9.9.14), 0 ≤ x ≤ 1000. @example berPrime(1) // → −0.0624457522 */
 export function berPrime(x: number): number {
-  return kelvin(x).berp;
+  checkX(x, "berPrime", UNSCALED_MAX);
+  return assemble(x, Math.exp(x * SQRT1_2)).berp;
 }
 /** bei′x = d bei x/dx (A&S 9.9.14), 0 ≤ x ≤ 1000. @example beiPrime(1) // → 0.4973965115 */
 export function beiPrime(x: number): number {
-  return kelvin(x).beip;
+  checkX(x, "beiPrime", UNSCALED_MAX);
+  return assemble(x, Math.exp(x * SQRT1_2)).beip;
 }
 
 /**

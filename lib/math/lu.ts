@@ -15,7 +15,8 @@
  * names the column. Column-relative so that badly scaled but regular MNA matrices (a 1 MΩ
  * and a 1 mΩ branch side by side) are not rejected.
  */
-import { TanklightInputError } from "../errors.ts";
+import { TanklightInputError, underName } from "../errors.ts";
+import { typedArg } from "./args.ts";
 
 /** Relative pivot tolerance (times n) below which a matrix is called singular: a few ulps. */
 export const LU_PIVOT_RTOL = 4 * Number.EPSILON;
@@ -42,6 +43,7 @@ export class SingularMatrixError extends TanklightInputError {
 }
 
 function checkDims(a: Float64Array, n: number, where: string): void {
+  typedArg(a, Float64Array, "a", where);
   if (!(Number.isInteger(n) && n >= 1)) {
     throw new TanklightInputError([{ path: "n", message: "must be an integer ≥ 1", value: n }], where);
   }
@@ -70,13 +72,14 @@ function checkDims(a: Float64Array, n: number, where: string): void {
  */
 export function luFactor(a: Float64Array, n: number, pivots: Int32Array): void {
   checkDims(a, n, "luFactor");
+  typedArg(pivots, Int32Array, "pivots", "luFactor");
   if (pivots.length < n) {
     throw new TanklightInputError([{ path: "pivots.length", message: `must be ≥ n = ${n}`, value: pivots.length }], "luFactor");
   }
   for (let i = 0; i < n * n; i++) {
     if (!Number.isFinite(a[i]!)) {
       throw new TanklightInputError(
-        [{ path: `matrix[${Math.floor(i / n)}][${i % n}]`, message: "entries must be finite", value: a[i] }],
+        [{ path: `a[${i}] (row ${Math.floor(i / n)}, column ${i % n})`, message: "entries must be finite", value: a[i] }],
         "luFactor",
       );
     }
@@ -86,6 +89,23 @@ export function luFactor(a: Float64Array, n: number, pivots: Int32Array): void {
     let big = 0; // the largest pivot candidate of the failed column (left unchanged by the core)
     for (let i = bad; i < n; i++) big = Math.max(big, Math.abs(a[i * n + bad]!));
     throw new SingularMatrixError(bad, big, "luFactor");
+  }
+  for (let i = 0; i < n * n; i++) {
+    if (!Number.isFinite(a[i]!)) {
+      throw new TanklightInputError([{ path: "a", message: "the elimination overflows the double range (entries too large or too unequal in scale)", value: a[i] }], "luFactor");
+    }
+  }
+}
+
+/** Checks pivots as luFactor writes them: a Int32Array whose entry k lies in [k, n). */
+export function checkPivots(pivots: unknown, n: number, field: string, where: string): void {
+  typedArg(pivots, Int32Array, field, where);
+  const p = pivots as Int32Array;
+  if (p.length < n) throw new TanklightInputError([{ path: `${field}.length`, message: `must be ≥ n = ${n}`, value: p.length }], where);
+  for (let k = 0; k < n; k++) {
+    if (!(p[k]! >= k && p[k]! < n)) {
+      throw new TanklightInputError([{ path: `${field}[${k}]`, message: `must lie in [${k}, ${n}) (the row interchanges written by the factorisation)`, value: p[k] }], where);
+    }
   }
 }
 
@@ -151,10 +171,28 @@ export function luFactorCore(a: Float64Array, n: number, pivots: Int32Array): nu
  */
 export function luSolve(a: Float64Array, n: number, pivots: Int32Array, b: Float64Array): void {
   checkDims(a, n, "luSolve");
+  checkPivots(pivots, n, "pivots", "luSolve");
+  typedArg(b, Float64Array, "b", "luSolve");
   if (b.length < n) {
     throw new TanklightInputError([{ path: "b.length", message: `must be ≥ n = ${n}`, value: b.length }], "luSolve");
   }
+  for (let i = 0; i < n; i++) {
+    if (!Number.isFinite(b[i]!)) throw new TanklightInputError([{ path: `b[${i}]`, message: "entries must be finite", value: b[i] }], "luSolve");
+  }
+  // U's diagonal (what the back substitution divides by): finite and non-zero, as luFactor leaves it
+  for (let i = 0; i < n; i++) {
+    const d = a[i * n + i]!;
+    if (!(Number.isFinite(d) && d !== 0)) throw new TanklightInputError([{ path: `a[${i * n + i}]`, message: "must be a finite, non-zero pivot (a holds luFactor's output)", value: d }], "luSolve");
+  }
   luSolveCore(a, n, pivots, b);
+  for (let i = 0; i < n; i++) {
+    if (!Number.isFinite(b[i]!)) {
+      throw new TanklightInputError(
+        [{ path: "a", message: "the solution is not finite: a and pivots are not luFactor's output, or the solution overflows the double range", value: b[i] }],
+        "luSolve",
+      );
+    }
+  }
 }
 
 /**
@@ -193,7 +231,10 @@ export function luSolveCore(a: Float64Array, n: number, pivots: Int32Array, b: F
  * @example solveLinear(Float64Array.of(2, 1, 1, 3), Float64Array.of(3, 5)) // → [0.8, 1.4]
  */
 export function solveLinear(a: Float64Array, b: Float64Array): Float64Array {
+  typedArg(a, Float64Array, "a", "solveLinear");
+  typedArg(b, Float64Array, "b", "solveLinear");
   const n = b.length;
+  if (n < 1) throw new TanklightInputError([{ path: "b", message: "must hold at least one entry", value: b }], "solveLinear");
   if (a.length !== n * n) {
     throw new TanklightInputError(
       [{ path: "a.length", message: `must equal b.length² = ${n * n}`, value: a.length }],
@@ -203,7 +244,9 @@ export function solveLinear(a: Float64Array, b: Float64Array): Float64Array {
   const lu = Float64Array.from(a);
   const x = Float64Array.from(b);
   const piv = new Int32Array(n);
-  luFactor(lu, n, piv);
-  luSolve(lu, n, piv, x);
+  underName("solveLinear", () => {
+    luFactor(lu, n, piv);
+    luSolve(lu, n, piv, x);
+  });
   return x;
 }

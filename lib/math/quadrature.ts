@@ -94,7 +94,7 @@ export function gaussLegendre(n: number): GaussRule {
 }
 
 function requireLimits(a: number, b: number, where: string): void {
-  if (!Number.isFinite(a) || !Number.isFinite(b)) {
+  if (!Number.isFinite(a) || !Number.isFinite(b) || !Number.isFinite(b - a)) {
     throw new TanklightInputError(
       [{ path: Number.isFinite(a) ? "b" : "a", message: "integration limit must be finite", value: Number.isFinite(a) ? b : a }],
       where,
@@ -111,13 +111,30 @@ function requireLimits(a: number, b: number, where: string): void {
  * @example integrateGaussLegendre((x) => x ** 3, 0, 1, 2) // → 0.25 (exact: degree 3 ≤ 2n − 1)
  */
 export function integrateGaussLegendre(f: (x: number) => number, a: number, b: number, n: number): number {
+  requireIntegrand(f, "integrateGaussLegendre");
   requireLimits(a, b, "integrateGaussLegendre");
+  if (!(Number.isInteger(n) && n >= 1 && n <= 10000)) {
+    throw new TanklightInputError([{ path: "n", message: "must be a whole number from 1 to 10000", value: n }], "integrateGaussLegendre");
+  }
   const { nodes, weights } = gaussLegendre(n);
   const half = 0.5 * (b - a);
   const mid = 0.5 * (a + b);
   let s = 0;
   for (let i = 0; i < n; i++) s += weights[i]! * f(mid + half * nodes[i]!);
-  return s * half;
+  const value = s * half;
+  if (!Number.isFinite(value)) {
+    throw new TanklightInputError(
+      [{ path: "f", message: `the integral on [${a}, ${b}] is not finite (the integrand is not finite at a node, or the sum overflows)`, value }],
+      "integrateGaussLegendre",
+    );
+  }
+  return value;
+}
+
+function requireIntegrand(f: unknown, where: string): void {
+  if (typeof f !== "function") {
+    throw new TanklightInputError([{ path: "f", message: "must be a function of one number (the integrand)", value: f }], where);
+  }
 }
 
 // QUADPACK QK15 abscissae (Kronrod nodes; odd indices are the 7-point Gauss nodes) and weights.
@@ -159,6 +176,23 @@ export interface AdaptiveOptions {
   readonly relTol?: number;
   /** maximum number of subintervals, integer ≥ 1; default 2000 */
   readonly maxIntervals?: number;
+}
+
+/** The largest maxIntervals (the describing function's reference uses 20000). */
+const MAX_INTERVALS = 20000;
+const ADAPTIVE_KEYS = ["absTol", "relTol", "maxIntervals"];
+
+/** options: undefined or an object with only the keys of AdaptiveOptions (a typo is an error listing the accepted keys). */
+function checkAdaptiveOptions(options: unknown): void {
+  if (options === undefined) return;
+  if (typeof options !== "object" || options === null || Array.isArray(options)) {
+    throw new TanklightInputError([{ path: "options", message: "must be an object { absTol?, relTol?, maxIntervals? }", value: options }], "integrateAdaptive");
+  }
+  for (const key of Reflect.ownKeys(options)) {
+    if (typeof key !== "string" || !ADAPTIVE_KEYS.includes(key)) {
+      throw new TanklightInputError([{ path: `options.${String(key)}`, message: `unknown option (accepted: ${ADAPTIVE_KEYS.join(", ")})`, value: (options as Record<PropertyKey, unknown>)[key] }], "integrateAdaptive");
+    }
+  }
 }
 
 /** Gauss–Kronrod 7/15 on [a, b]: writes the value to out[0] and QUADPACK's error estimate to out[1] (an explicit workspace, no module state). */
@@ -222,18 +256,24 @@ export function integrateAdaptive(
   b: number,
   options: AdaptiveOptions = {},
 ): IntegrationResult {
-  const absTol = options.absTol ?? 1e-12;
-  const relTol = options.relTol ?? 1e-10;
-  const maxIntervals = options.maxIntervals ?? 2000;
+  requireIntegrand(f, "integrateAdaptive");
+  checkAdaptiveOptions(options);
+  // undefined means the default; null is a value (and refused below)
+  const absTol = options.absTol === undefined ? 1e-12 : options.absTol;
+  const relTol = options.relTol === undefined ? 1e-10 : options.relTol;
+  const maxIntervals = options.maxIntervals === undefined ? 2000 : options.maxIntervals;
   requireLimits(a, b, "integrateAdaptive");
-  if (!(absTol >= 0 && Number.isFinite(absTol))) {
-    throw new TanklightInputError([{ path: "absTol", message: "must be a finite number ≥ 0", value: absTol }], "integrateAdaptive");
+  if (!(typeof absTol === "number" && absTol >= 0 && Number.isFinite(absTol))) {
+    throw new TanklightInputError([{ path: "options.absTol", message: "must be a finite number ≥ 0", value: absTol }], "integrateAdaptive");
   }
-  if (!(relTol >= 0 && Number.isFinite(relTol))) {
-    throw new TanklightInputError([{ path: "relTol", message: "must be a finite number ≥ 0", value: relTol }], "integrateAdaptive");
+  if (!(typeof relTol === "number" && relTol >= 0 && Number.isFinite(relTol))) {
+    throw new TanklightInputError([{ path: "options.relTol", message: "must be a finite number ≥ 0", value: relTol }], "integrateAdaptive");
   }
-  if (!(Number.isInteger(maxIntervals) && maxIntervals >= 1)) {
-    throw new TanklightInputError([{ path: "maxIntervals", message: "must be an integer ≥ 1", value: maxIntervals }], "integrateAdaptive");
+  if (!(Number.isInteger(maxIntervals) && maxIntervals >= 1 && maxIntervals <= MAX_INTERVALS)) {
+    throw new TanklightInputError(
+      [{ path: "options.maxIntervals", message: `must be a whole number from 1 to ${MAX_INTERVALS} (each split searches every interval for the worst, so time grows with the square of the count)`, value: maxIntervals }],
+      "integrateAdaptive",
+    );
   }
   if (a === b) return { value: 0, error: 0, evaluations: 0, converged: true };
   const lo: number[] = [a];
@@ -275,6 +315,9 @@ export function integrateAdaptive(
   for (let i = 0; i < val.length; i++) {
     value += val[i]!;
     error += err[i]!;
+  }
+  if (!Number.isFinite(value) || !Number.isFinite(error)) {
+    throw new TanklightInputError([{ path: "f", message: `the integral on [${a}, ${b}] overflows the double range`, value }], "integrateAdaptive");
   }
   return { value, error, evaluations, converged: error <= Math.max(absTol, relTol * Math.abs(value)) };
 }

@@ -84,6 +84,7 @@ export function createRandom(seed: number): RandomSource {
  */
 export function createRandomFromState(state: readonly [number, number, number, number]): RandomSource {
   const ok =
+    Array.isArray(state) &&
     state.length === 4 && state.every((w) => Number.isInteger(w) && w >= 0 && w <= 0xffffffff) && state.some((w) => w !== 0);
   if (!ok) {
     throw new TanklightInputError(
@@ -92,6 +93,27 @@ export function createRandomFromState(state: readonly [number, number, number, n
     );
   }
   return xoshiro128ss(state[0], state[1], state[2], state[3], -1);
+}
+
+/** The largest standard deviation of normal(): a deviate is at most about 9 sd (2⁵³ samples), which must stay a finite double. */
+const SD_MAX = 1e300;
+
+function rangeError(low: unknown, high: unknown): TanklightInputError {
+  const field = typeof low === "number" && Number.isFinite(low) ? "high" : "low";
+  return new TanklightInputError(
+    [{ path: field, message: "low and high must be finite numbers with low ≤ high and a finite difference", value: field === "low" ? low : high }],
+    "uniformIn",
+  );
+}
+
+/** A deviate that left the double range (mean near ±1.8e308) is an error, not ±∞. */
+function finiteDeviate(x: number): number {
+  if (!Number.isFinite(x)) throw new TanklightInputError([{ path: "mean", message: "with sd gives a deviate beyond the double range", value: x }], "normal");
+  return x;
+}
+
+function normalError(field: string, value: unknown, rule: string): TanklightInputError {
+  return new TanklightInputError([{ path: field, message: `must be ${rule}`, value }], "normal");
 }
 
 function xoshiro128ss(w0: number, w1: number, w2: number, w3: number, seed: number): RandomSource {
@@ -129,12 +151,15 @@ function xoshiro128ss(w0: number, w1: number, w2: number, w3: number, seed: numb
     nextUint32,
     uniform,
     uniformIn(low: number, high: number): number {
+      if (!(typeof low === "number" && typeof high === "number" && Number.isFinite(high - low) && low <= high)) throw rangeError(low, high);
       return low + (high - low) * uniform();
     },
     normal(mean = 0, sd = 1): number {
+      if (!(typeof mean === "number" && Number.isFinite(mean))) throw normalError("mean", mean, "a finite number");
+      if (!(typeof sd === "number" && Number.isFinite(sd) && sd >= 0 && sd <= SD_MAX)) throw normalError("sd", sd, `a finite number from 0 to ${SD_MAX}`);
       if (hasSpare) {
         hasSpare = false;
-        return mean + sd * spare;
+        return finiteDeviate(mean + sd * spare);
       }
       let u: number;
       let v: number;
@@ -147,7 +172,7 @@ function xoshiro128ss(w0: number, w1: number, w2: number, w3: number, seed: numb
       const factor = Math.sqrt((-2 * Math.log(s)) / s);
       spare = v * factor;
       hasSpare = true;
-      return mean + sd * u * factor;
+      return finiteDeviate(mean + sd * u * factor);
     },
   };
 }

@@ -12,6 +12,18 @@ import { TanklightInputError } from "../errors.ts";
 import type { Complex } from "./complex.ts";
 import { complexLuFactorCore, complexLuSolveCore } from "./complexLu.ts";
 
+/** The largest order solved (n² entries are allocated twice). */
+const MAX_ORDER = 2000;
+
+/** A finite complex number { re, im } with no other own keys (a mistyped "img" is refused). */
+function isComplex(z: unknown): z is Complex {
+  if (typeof z !== "object" || z === null) return false;
+  const o = z as Record<string, unknown>;
+  if (!(typeof o["re"] === "number" && Number.isFinite(o["re"]) && typeof o["im"] === "number" && Number.isFinite(o["im"]))) return false;
+  for (const k of Reflect.ownKeys(o)) if (k !== "re" && k !== "im") return false;
+  return true;
+}
+
 function singular(detail: string, value: unknown): TanklightInputError {
   return new TanklightInputError(
     [{ path: "A", message: `matrix is singular (${detail})`, value, expected: "a regular (invertible) matrix" }],
@@ -31,8 +43,14 @@ function singular(detail: string, value: unknown): TanklightInputError {
  *   [{re: 1, im: 0}, {re: 0, im: 0}]) // → [{re: 0.5, im: 0}, {re: 0, im: −0.5}]
  */
 export function solveComplex(A: readonly (readonly Complex[])[], b: readonly Complex[]): Complex[] {
-  const n = Array.isArray(b) ? b.length : 0;
-  if (n < 1 || !Array.isArray(A) || A.length !== n || A.some((row) => !Array.isArray(row) || row.length !== n)) {
+  if (!Array.isArray(b) || b.length < 1) {
+    throw new TanklightInputError([{ path: "b", message: "must be a non-empty array of complex numbers { re, im }", value: b }], "solveComplex");
+  }
+  if (b.length > MAX_ORDER) {
+    throw new TanklightInputError([{ path: "b", message: `holds more than ${MAX_ORDER} entries (a dense n×n solve costs n³/3 steps and n² numbers)`, value: `${b.length} entries` }], "solveComplex");
+  }
+  const n = b.length;
+  if (!Array.isArray(A) || A.length !== n || A.some((row) => !Array.isArray(row) || row.length !== n)) {
     throw new TanklightInputError(
       [{ path: "A", message: `must be square with as many rows as b has entries (${n})`, value: Array.isArray(A) ? A.map((r) => r?.length) : A }],
       "solveComplex",
@@ -42,7 +60,7 @@ export function solveComplex(A: readonly (readonly Complex[])[], b: readonly Com
   const im = new Float64Array(n * n);
   A.forEach((row, i) =>
     row.forEach((z: Complex, j: number) => {
-      if (!Number.isFinite(z?.re) || !Number.isFinite(z?.im)) {
+      if (!isComplex(z)) {
         throw new TanklightInputError([{ path: `A[${i}][${j}]`, message: "entries must be finite complex numbers { re, im }", value: z }], "solveComplex");
       }
       re[i * n + j] = z.re;
@@ -52,7 +70,7 @@ export function solveComplex(A: readonly (readonly Complex[])[], b: readonly Com
   const br = new Float64Array(n);
   const bi = new Float64Array(n);
   b.forEach((z, i) => {
-    if (!Number.isFinite(z?.re) || !Number.isFinite(z?.im)) {
+    if (!isComplex(z)) {
       throw new TanklightInputError([{ path: `b[${i}]`, message: "entries must be finite complex numbers { re, im }", value: z }], "solveComplex");
     }
     br[i] = z.re;

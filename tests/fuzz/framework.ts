@@ -45,6 +45,8 @@ export interface FuzzCase {
   readonly allowErrors?: readonly (abstract new (...a: never[]) => Error)[];
   /** fast-check runs of random junk per argument (default 20) */
   readonly junkRuns?: number;
+  /** the function takes any value (a formatter such as describeValue): every derived input is extreme, none bad */
+  readonly anyValue?: boolean;
 }
 
 /** How one call ended. */
@@ -73,6 +75,8 @@ const BAD_NUMBER: readonly [string, unknown][] = [
   ["NaN", NaN], ["Infinity", Infinity], ["-Infinity", -Infinity], ["null", null], ["'banana'", "banana"],
   ["true", true], ["{}", {}], ["[]", []], ["'12 parsecs'", "12 parsecs"],
 ];
+/** an element of a typed array can hold only numbers: null is stored as 0 and a word as NaN */
+const BAD_TYPED: readonly [string, unknown][] = [["NaN", NaN], ["Infinity", Infinity], ["-Infinity", -Infinity]];
 const EXTREME_NUMBER: readonly [string, unknown][] = [
   ["0", 0], ["-1", -1], ["1e300", 1e300], ["-1e300", -1e300], ["1e-300", 1e-300], ["1e9", 1e9], ["2.5", 2.5],
 ];
@@ -89,7 +93,8 @@ type Path = readonly (string | number)[];
 
 /** A copy of `root` with the value at `path` replaced (or the key deleted when `del`). */
 function replaced(root: readonly unknown[], path: Path, value: unknown, del = false): unknown[] {
-  const copy = (v: unknown): unknown => (Array.isArray(v) ? [...v] : v !== null && typeof v === "object" ? { ...v } : v);
+  const copy = (v: unknown): unknown =>
+    Array.isArray(v) ? [...v] : ArrayBuffer.isView(v) ? (v as unknown as Float64Array).slice() : v !== null && typeof v === "object" ? { ...v } : v;
   const out = [...root];
   let parent: Record<string | number, unknown> = out as unknown as Record<string | number, unknown>;
   for (let i = 0; i < path.length - 1; i++) {
@@ -99,6 +104,7 @@ function replaced(root: readonly unknown[], path: Path, value: unknown, del = fa
   }
   const last = path[path.length - 1]!;
   if (del) delete parent[last];
+  else if (ArrayBuffer.isView(parent)) parent[last] = value;
   else Object.defineProperty(parent, last, { value, enumerable: true, writable: true, configurable: true });
   return out;
 }
@@ -119,12 +125,13 @@ function probes(c: FuzzCase): Probe[] {
   const skip = new Set(c.skip ?? []);
   const text = new Set(c.text ?? []);
   const argName = (i: number): string[] => (c.params?.[i] === undefined ? [] : [c.params[i]!]);
-  const walk = (value: unknown, path: Path, named: string[]): void => {
+  const walk = (value: unknown, path: Path, named: string[], typed = false): void => {
     if (skip.has(path.join("."))) return;
     const at = `${path.join(".")}`;
-    const add = (kind: Probe["kind"], label: string, args: unknown[], mustName = named) => out.push({ kind, label: `${at} = ${label}`, args, mustName: kind === "bad" ? mustName : [] });
+    const add = (kind: Probe["kind"], label: string, args: unknown[], mustName = named) =>
+      out.push({ kind: c.anyValue ? "extreme" : kind, label: `${at} = ${label}`, args, mustName: kind === "bad" && !c.anyValue ? mustName : [] });
     if (typeof value === "number") {
-      for (const [l, v] of BAD_NUMBER) add("bad", l, replaced(c.valid, path, v));
+      for (const [l, v] of typed ? BAD_TYPED : BAD_NUMBER) add("bad", l, replaced(c.valid, path, v));
       for (const [l, v] of EXTREME_NUMBER) add("extreme", l, replaced(c.valid, path, v));
     } else if (typeof value === "string") {
       for (const [l, v] of BAD_STRING) add("bad", l, replaced(c.valid, path, v));
@@ -138,7 +145,9 @@ function probes(c: FuzzCase): Probe[] {
       add("extreme", "[]", replaced(c.valid, path, []));
       const items = Array.from(value as ArrayLike<unknown>);
       const upto = items.length > 3 ? 1 : items.length;
-      for (let i = 0; i < upto; i++) walk(items[i], [...path, i], named);
+      // an integer typed array stores NaN, ±∞ and words as 0: nothing there to mutate
+      const integers = value instanceof Int32Array || value instanceof Uint32Array || value instanceof Int16Array || value instanceof Uint8Array;
+      if (!integers) for (let i = 0; i < upto; i++) walk(items[i], [...path, i], named, ArrayBuffer.isView(value));
     } else if (isPlainObject(value)) {
       for (const [l, v] of BAD_OBJECT) add("bad", l, replaced(c.valid, path, v));
       const keys = Object.keys(value);
@@ -261,6 +270,8 @@ export function fuzzSuite(area: string, cases: readonly FuzzCase[]): void {
           );
         });
         addInto(total, counts);
+        // the failures in full (vitest abbreviates arrays in its assertion message)
+        if (counts.failures.length > 0) console.log(counts.failures.slice(0, 12).join("\n"));
         expect(counts.failures.slice(0, 12), `${c.name}: ${counts.failures.length} failures`).toEqual([]);
       });
     }

@@ -51,8 +51,10 @@ describe("complexLuFactor / complexLuSolve and their cores", () => {
 
   it("the public form refuses non-finite entries and short arrays, naming the field", () => {
     const piv = new Int32Array(2);
-    expect(() => complexLuFactor(Float64Array.of(1, NaN, 0, 1), new Float64Array(4), 2, piv)).toThrow(/matrix\[0\]\[1\]: entries must be finite/);
+    expect(() => complexLuFactor(Float64Array.of(1, NaN, 0, 1), new Float64Array(4), 2, piv)).toThrow(/re\[1\], im\[1\] \(row 0, column 1\): entries must be finite/);
     expect(() => complexLuFactor(new Float64Array(3), new Float64Array(4), 2, piv)).toThrow(TanklightInputError);
-    expect(() => complexLuSolve(Float64Array.of(1, 0, 0, 1), new Float64Array(4), 2, piv, new Float64Array(1), new Float64Array(2))).toThrow(/br.length/);
+    expect(() => complexLuSolve(Float64Array.of(1, 0, 0, 1), new Float64Array(4), 2, Int32Array.of(0, 1), new Float64Array(1), new Float64Array(2))).toThrow(/br.length/);
+    // a pivot record luFactor cannot have written (row 1 swapped with row 0 at step 1)
+    expect(() => complexLuSolve(Float64Array.of(1, 0, 0, 1), new Float64Array(4), 2, piv, new Float64Array(2), new Float64Array(2))).toThrow(/piv\[1\]: must lie in \[1, 2\)/);
   });
 });
