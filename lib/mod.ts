@@ -324,7 +324,7 @@ export {
   type DesignSearch,
   type DesignResult,
 } from "./analysis/searchDesign.ts";
-export type { Candidate, DesignEvaluation } from "./analysis/designEval.ts";
+export type { Candidate, DesignEvaluation, Layout, Phasing, Constraint } from "./analysis/designEval.ts";
 
 // ── lib/report ───────────────────────────────────────────────────────────────
 /** Chart builders returning vega-lite specs: `chart.coverage(…)`, `chart.ledCurrent(…)`, … (lib/report/chart.ts). */
