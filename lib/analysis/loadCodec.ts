@@ -6,6 +6,7 @@
  */
 import { diode, led, type Diode, type Junction, type Led } from "../circuit/loads/led.ts";
 import type { TokenLoad } from "../circuit/loads/types.ts";
+import { assertNever } from "../errors.ts";
 
 /** A junction's parameters (plain numbers and text). */
 export interface JunctionData {
@@ -80,6 +81,8 @@ export function encodeLoad(load: TokenLoad): LoadData {
       return { ...load, diode: junctionData(load.diode), led: junctionData(load.led) };
     case "resistor":
       return { kind: "resistor", resistance: load.resistance };
+    default:
+      return assertNever(load, "load.kind", "encodeLoad", "is not a known token load");
   }
 }
 

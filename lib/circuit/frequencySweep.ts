@@ -2,7 +2,7 @@
  * A link solved over a range of drive frequencies: transmitter current, input power, power to
  * the loads and efficiency against frequency, with the peaks located. Strongly coupled tanks
  * show frequency splitting: two identical tanks tuned to f₀ with coupling k resonate at
- * f₀/√(1 ± k) (textbook coupled resonators; checked in tests/circuit/frequencySweep.test.ts).
+ * f₀/√(1 ± k) (textbook coupled resonators; checked in tests/circuit/linkFrequencySweep.test.ts).
  */
 import { z } from "zod";
 import { TanklightInputError, underName } from "../errors.ts";

@@ -16,6 +16,7 @@ const MUST_HANDLE = [
   "lib/circuit/link/tokenLoad.ts",
   "lib/circuit/loads/describingFunction.ts", // the input check, fundamentalConductance, averageLoadCurrent
   "lib/circuit/transient/token.ts",
+  "lib/analysis/loadCodec.ts", // encodeLoad: a load crossing a worker boundary as plain data
 ];
 
 describe("exhaustiveness: a new TokenLoad variant fails to compile where it is not handled", () => {
