@@ -294,6 +294,7 @@ export {
   type DeadZone,
 } from "./analysis/coverageMap.ts";
 export { findRange, type RangeResult, type RangeOptions, type RangePoint, type RayInput } from "./analysis/findRange.ts";
+export type { ModelStatement } from "./analysis/probe.ts";
 export { type RegionInput, type OrientationInput, type GridAxis } from "./analysis/region.ts";
 export {
   supplyBudget,

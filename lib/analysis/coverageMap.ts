@@ -32,7 +32,7 @@ import type { LinkSystem } from "../circuit/link.ts";
 import { length, parseInput, lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import { marchingSquares } from "./contours.ts";
-import { makeProbe, type Probe, type ProbeValues } from "./probe.ts";
+import { makeProbe, probeModel, type ModelStatement, type Probe, type ProbeValues } from "./probe.ts";
 import { probeSpec } from "./probeSpec.ts";
 import { parseRegion, tokenAxes, type GridAxis, type OrientationInput, type RegionInput } from "./region.ts";
 import { progressCounter, type ProgressCallback } from "./progress.ts";
@@ -114,6 +114,8 @@ export interface CoverageMap {
   readonly refinedCells: number;
   /** the highest DC supply current over every point solved, A, and the verdict against options.supply */
   readonly supply?: { readonly voltage: number; readonly maxCurrent: number; readonly verdict?: SupplyVerdict };
+  /** with `options.model` "harmonic" or "auto": how the poses were solved and the error band */
+  readonly model?: ModelStatement;
   readonly warnings: readonly string[];
 }
 
@@ -151,7 +153,9 @@ export async function coverageMap(system: LinkSystem, region: RegionInput, optio
   const evaluator = await pointEvaluator(spec, options.threads, () => makeProbe(spec));
   try {
     const map = await runMap(grid.axes, grid.fixed, spec.litThreshold, axesList, spec.supplyVoltage, evaluator, options, opts.resolution, where);
-    return spec.model === undefined ? { ...map, warnings: [...map.warnings, ...fundamentalValidity(map, makeProbe(spec))] } : map;
+    if (spec.model === undefined) return { ...map, warnings: [...map.warnings, ...fundamentalValidity(map, makeProbe(spec))] };
+    const statement = probeModel(spec);
+    return statement ? { ...map, model: statement } : map;
   } finally {
     await evaluator.close();
   }

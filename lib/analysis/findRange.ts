@@ -17,7 +17,7 @@ import type { Vec3 } from "../em/types.ts";
 import type { LinkSystem } from "../circuit/link.ts";
 import { length, parseInput, vec3, unitVector, lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
-import { makeProbe, type Probe } from "./probe.ts";
+import { makeProbe, probeModel, type ModelStatement, type Probe } from "./probe.ts";
 import { probeSpec } from "./probeSpec.ts";
 import { tokenAxes, type OrientationInput } from "./region.ts";
 
@@ -75,6 +75,8 @@ export interface RangeResult {
   readonly litThreshold: number;
   /** true when still lit at `max` (the range may be longer) */
   readonly openEnded: boolean;
+  /** with `options.model` "harmonic" or "auto": how the points were solved and the error band */
+  readonly model?: ModelStatement;
   readonly warnings: readonly string[];
 }
 
@@ -110,7 +112,10 @@ export function findRange(system: LinkSystem, direction: RayInput, options: Rang
   const probe = makeProbe(spec);
   const from = (ray.from as Vec3 | undefined) ?? [0, 0, 0];
   const r = rangeWith(probe, from, ray.along as Vec3, max, step, resolution);
-  if (spec.model !== undefined) return r;
+  if (spec.model !== undefined) {
+    const statement = probeModel(spec);
+    return statement ? { ...r, model: statement } : r;
+  }
   // the describing function's validity at the ray's start (usually its strongest coupling), each LED outside it named
   const at = from.map((c) => (1e3 * c).toFixed(1)).join(", ");
   const validity = [...new Set(axes.flatMap((a) => probe.validity(from, a)))].map((w) => `at the ray's start (${at}) mm: ${w}`);

@@ -6,9 +6,9 @@
  * whose green LED the describing function leaves dark (docs/validation-transient.md).
  */
 import { describe, expect, it } from "vitest";
-import { coverageMap, findRange, ledPreset, solveLink, type LinkSystem } from "../../lib/mod.ts";
+import { coverageMap, findRange, ledPreset, selfInductance, solveLink, type LinkSystem } from "../../lib/mod.ts";
 import { expectOutside } from "../helpers/validation.ts";
-import { drawer, LID } from "./fixtures.ts";
+import { drawer, FREQUENCY, LID, token, tx } from "./fixtures.ts";
 
 /** The drawer with a bi-colour token (red + InGaN green back to back) at a position; supply in V. */
 function bicolour(position: readonly [number, number, number] = [0, 0, LID], supply = 5): LinkSystem {
@@ -50,6 +50,36 @@ describe("analysis with a steady-state model", () => {
     const dark = findRange(bicolour(undefined, 12), ray, opts);
     expect(dark.range).toBe(0);
     expect(dark.warnings.some((w) => w.startsWith("at the ray's start (0.0, 0.0, 5.0) mm: describing function"))).toBe(true);
+  });
+
+  it("coverageMap with model 'auto' on a full bridge (token table) agrees with solveLink({ model: 'harmonic' }) within 1 % at every lit point, and states its model", async () => {
+    // the drawer's coils, the transmitter series-tuned on a 5 V full bridge: one transmitter, a
+    // sine-like coil current, so every pose comes from the token's harmonic balance tabulated
+    // against its EMF (lib/circuit/harmonic/linkTable.ts) — demo system
+    const w = 2 * Math.PI * FREQUENCY;
+    const c = (coil: typeof tx): number => 1 / (w * w * selfInductance(coil, { frequency: FREQUENCY }));
+    const at = (position: readonly [number, number, number]): LinkSystem => ({
+      frequency: FREQUENCY,
+      transmitter: { coil: tx, compensation: "series", capacitor: { capacitance: c(tx) }, drive: { kind: "fullBridge", supply: 5, onResistance: 0.05 } },
+      receivers: [{ coil: token, pose: { position }, topology: "parallel", capacitor: { capacitance: c(token) }, load: { kind: "antiParallel", a: ledPreset("red"), b: ledPreset("green-ingan") } }],
+    });
+    const xs = [0, 0.0175, 0.035, 0.0525, 0.07];
+    const zs = [LID, 0.03];
+    const map = await coverageMap(at([0, 0, LID]), { x: { from: 0, to: 0.07, points: 5 }, y: 0, z: { from: LID, to: 0.03, points: 2 } }, { refine: false, model: "auto" });
+    expect(map.model?.method).toMatch(/tabulated/);
+    expect(map.model?.errorBand.relative).toBe(0.01);
+    let lit = 0;
+    zs.forEach((zz, j) =>
+      xs.forEach((x, i) => {
+        const direct = solveLink(at([x, 0, zz]), { model: "harmonic" }).receivers[0]!.leds;
+        const dimmest = Math.max(0, Math.min(...direct.map((l) => l.averageCurrent)));
+        if (dimmest < map.litThreshold) return;
+        lit++;
+        // measured ≤ 0.1 %: the table and M to 1e-3 (the probe's coupling accuracy) against solveLink's own
+        expectOutside({ quantity: `dimmest-LED current at (${x}, 0, ${zz}) m`, source: "independent method: solveLink(system, { model: 'harmonic' }) at that pose (direct harmonic balance)", ours: map.ledCurrent[i + 5 * j]!, reference: dimmest, rtol: 0.01, unit: "A" });
+      }),
+    );
+    expect(lit).toBeGreaterThan(3);
   });
 
   it("rejects an unknown model naming the field", async () => {

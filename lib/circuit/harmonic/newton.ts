@@ -235,6 +235,15 @@ export class HarmonicSystem {
     return true;
   }
 
+  /** Solves J·dz = −r in place with the factors of the last {@link solveStep} (another right-hand side, same Jacobian). */
+  solveAgain(r: Float64Array): boolean {
+    const Z = this.size;
+    for (let i = 0; i < Z; i++) r[i] = -r[i]!;
+    luSolve(this.jac, Z, this.piv, r);
+    for (let i = 0; i < Z; i++) if (!Number.isFinite(r[i]!)) return false;
+    return true;
+  }
+
   /**
    * Damped Newton from z (updated in place) at source level λ.
    * @returns converged flag, iterations, last residual (V, max entry) and scale (V).

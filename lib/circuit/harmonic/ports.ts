@@ -163,33 +163,10 @@ export function harmonicPorts(
       set(switchNode, switchNode, -ycRe, -ycIm);
       if (h === 0) bRe[switchNode] = -ycRe * wf.supply;
     } else {
-      emf(h, tmp);
-      let vRe = tmp[0]!;
-      let vIm = tmp[1]!;
-      const zsRe = drive.resistance;
-      const zsIm = drive.reactance >= 0 ? h * drive.reactance : h === 0 ? 0 : drive.reactance / h;
-      let thRe = zsRe;
-      let thIm = zsIm;
-      if (tx.compensation === "series") {
-        const [zr, zi] = capacitorImpedance(tx.capacitance!, tx.capacitorEsr ?? 0, wh);
-        thRe += zr;
-        thIm += zi;
-      } else if (tx.compensation === "parallel") {
-        const [zcr, zci] = capacitorImpedance(tx.capacitance!, tx.capacitorEsr ?? 0, wh);
-        const dRe = zsRe + zcr;
-        const dIm = zsIm + zci;
-        const den = dRe * dRe + dIm * dIm;
-        const qRe = (zcr * dRe + zci * dIm) / den;
-        const qIm = (zci * dRe - zcr * dIm) / den;
-        const v0 = vRe;
-        vRe = v0 * qRe - vIm * qIm;
-        vIm = v0 * qIm + vIm * qRe;
-        thRe = zsRe * qRe - zsIm * qIm;
-        thIm = zsRe * qIm + zsIm * qRe;
-      }
-      set(0, 0, thRe + tx.resistance, thIm + wh * L[0]![0]!);
-      bRe[0] = vRe;
-      bIm[0] = vIm;
+      const th = transmitterThevenin(tx, drive, emf, h, wh, tmp);
+      set(0, 0, th.zRe + tx.resistance, th.zIm + wh * L[0]![0]!);
+      bRe[0] = th.eRe;
+      bIm[0] = th.eIm;
     }
     // ── receivers ──
     for (let k = 0; k < m; k++) {
@@ -265,6 +242,57 @@ export function harmonicPorts(
     xtRe,
     xtIm,
   };
+}
+
+/** A voltage drive's source as the transmitter coil sees it at one harmonic: EMF and impedance (V, Ω). */
+export interface TransmitterSource {
+  readonly eRe: number;
+  readonly eIm: number;
+  readonly zRe: number;
+  readonly zIm: number;
+}
+
+/**
+ * The Thevenin source in series with the transmitter coil at harmonic h (angular frequency wh):
+ * the drive's EMF at h behind its source impedance, plus a series capacitor, or seen through a
+ * parallel capacitor (as in the describing-function solver). Not for the single-switch drive
+ * (its switch node is a port).
+ * @param tx the transmitter; drive its voltage drive; emf the drive's EMF spectrum; tmp a 2-slot scratch.
+ * @example transmitterThevenin(tx, sineDrive(2), emfSpectrum(net), 1, w, tmp).eRe is 2 V for a sine of 2 V and no capacitor
+ */
+export function transmitterThevenin(
+  tx: LinkNetwork["transmitter"],
+  drive: Extract<LinkNetwork["transmitter"]["drive"], { kind: "voltage" }>,
+  emf: EmfSpectrum,
+  h: number,
+  wh: number,
+  tmp: Float64Array,
+): TransmitterSource {
+  emf(h, tmp);
+  let vRe = tmp[0]!;
+  let vIm = tmp[1]!;
+  const zsRe = drive.resistance;
+  const zsIm = drive.reactance >= 0 ? h * drive.reactance : h === 0 ? 0 : drive.reactance / h;
+  let thRe = zsRe;
+  let thIm = zsIm;
+  if (tx.compensation === "series") {
+    const [zr, zi] = capacitorImpedance(tx.capacitance!, tx.capacitorEsr ?? 0, wh);
+    thRe += zr;
+    thIm += zi;
+  } else if (tx.compensation === "parallel") {
+    const [zcr, zci] = capacitorImpedance(tx.capacitance!, tx.capacitorEsr ?? 0, wh);
+    const dRe = zsRe + zcr;
+    const dIm = zsIm + zci;
+    const den = dRe * dRe + dIm * dIm;
+    const qRe = (zcr * dRe + zci * dIm) / den;
+    const qIm = (zci * dRe - zcr * dIm) / den;
+    const v0 = vRe;
+    vRe = v0 * qRe - vIm * qIm;
+    vIm = v0 * qIm + vIm * qRe;
+    thRe = zsRe * qRe - zsIm * qIm;
+    thIm = zsRe * qIm + zsIm * qRe;
+  }
+  return { eRe: vRe, eIm: vIm, zRe: thRe, zIm: thIm };
 }
 
 /** Z_C = ESR + 1/(jωC) at angular frequency wh (DC: the insulation resistance), Ω. */

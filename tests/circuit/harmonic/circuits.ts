@@ -25,18 +25,18 @@ const C2 = 1 / (W * W * L2);
 const RON = 0.05;
 
 /** Transmitter numbers per drive kind (the single switch: a low-inductance tank tuned 1.3× above f for zero-voltage turn-on). */
-function txOf(kind: DriveKind): { L1: number; R1: number; C1: number } {
+function txOf(kind: DriveKind, txResistance?: number): { L1: number; R1: number; C1: number } {
   if (kind === "singleSwitch") {
     const L1 = 1.6e-6;
     return { L1, R1: 0.05, C1: 1 / ((1.3 * W) ** 2 * L1) };
   }
   const L1 = 10e-6;
-  return { L1, R1: 1.5, C1: 1 / (W * W * L1) };
+  return { L1, R1: txResistance ?? 1.5, C1: 1 / (W * W * L1) };
 }
 
-/** The link network of the circuit (SI numbers), for solveLinkNetwork / solveLinkHarmonic. */
-export function networkOf(kind: DriveKind, level: number, k: number, load: TokenLoad): LinkNetwork {
-  const { L1, R1, C1 } = txOf(kind);
+/** The link network of the circuit (SI numbers), for solveLinkNetwork / solveLinkHarmonic; `txResistance` (Ω) overrides the sine or bridge transmitter coil's 1.5 Ω. */
+export function networkOf(kind: DriveKind, level: number, k: number, load: TokenLoad, txResistance?: number): LinkNetwork {
+  const { L1, R1, C1 } = txOf(kind, txResistance);
   const M = k * Math.sqrt(L1 * L2);
   const drive = kind === "sine" ? sineDrive(level) : kind === "fullBridge" ? fullBridgeDrive(level, RON) : parallelTankDrive(level, RON);
   return {
@@ -51,8 +51,8 @@ export function networkOf(kind: DriveKind, level: number, k: number, load: Token
 }
 
 /** The transient circuit of the same link, with the token's names. */
-export function circuitOf(kind: DriveKind, level: number, k: number, load: TokenLoad) {
-  const { L1, R1, C1 } = txOf(kind);
+export function circuitOf(kind: DriveKind, level: number, k: number, load: TokenLoad, txResistance?: number) {
+  const { L1, R1, C1 } = txOf(kind, txResistance);
   let base: TransientCircuit;
   let coil: string;
   if (kind === "sine") {
@@ -79,8 +79,8 @@ export function circuitOf(kind: DriveKind, level: number, k: number, load: Token
 }
 
 /** The transient engine's steady state of that circuit: coil current fundamental, tank fundamental, each LED's average current. */
-export function transientSteady(kind: DriveKind, level: number, k: number, load: TokenLoad, stepsPerCycle = 400) {
-  const { tok, coil } = circuitOf(kind, level, k, load);
+export function transientSteady(kind: DriveKind, level: number, k: number, load: TokenLoad, stepsPerCycle = 400, txResistance?: number) {
+  const { tok, coil } = circuitOf(kind, level, k, load, txResistance);
   const r = simulate(tok.circuit, { stop: 4000 / F, stepsPerCycle, frequency: F, untilSteady: { tolerance: 1e-7 }, keepCycles: 1 });
   const avg = (name: string): number => {
     const i = r.currents[name]!;
