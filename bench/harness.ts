@@ -28,6 +28,11 @@ export interface Workload {
    * against: `ratio` = that workload's min / this one's min
    */
   readonly against?: string;
+  /**
+   * re-measure the `against` workload in rounds alternating with this one even when it is not
+   * quick (fresh-process start-ups: a change of machine load falls on both)
+   */
+  readonly interleave?: boolean;
   /** the smallest acceptable `against` ratio (e.g. 10: at least ten times faster), judged on the minima */
   readonly targetRatio?: number;
   /** the largest acceptable ratio this/against (e.g. 1.3: at most 1.3× slower than the reference) */

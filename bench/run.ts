@@ -23,8 +23,8 @@ for (const file of files) {
   const byName = new Map((mod.workloads ?? []).map((w) => [w.name, w] as const));
   for (const w of mod.workloads ?? []) {
     const ref = w.against === undefined ? undefined : done.get(w.against);
-    // a quick reference is re-run in rounds alternating with this workload (runInterleaved)
-    if (ref !== undefined && ref.median < 0.1 && byName.has(w.against!)) {
+    // a quick reference (or any, with `interleave`) is re-run in rounds alternating with this workload (runInterleaved)
+    if (ref !== undefined && (ref.median < 0.1 || w.interleave === true) && byName.has(w.against!)) {
       const pair = runInterleaved(byName.get(w.against!)!, w);
       done.set(w.name, pair.result);
       console.log(formatResult(pair.result, w, pair.ref) + "  (interleaved rounds)");

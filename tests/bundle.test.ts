@@ -1,0 +1,62 @@
+/**
+ * The bundled build (scripts/bundle.ts) into out/: importing it loads no zod (dist/zod.cjs is
+ * required when the first schema is built), and it then behaves as the sources do — the same
+ * parsed values and error messages, the same JSON Schema of design files — and its schemas
+ * compose with a user's own zod (a user schema holding RoundCoilSpec parses, and
+ * z.toJSONSchema of the user's zod reads our metadata).
+ */
+import { describe, expect, it } from "vitest";
+import { execFileSync } from "node:child_process";
+import { mkdirSync, rmSync, writeFileSync } from "node:fs";
+import { dirname, join, resolve } from "node:path";
+import { fileURLToPath } from "node:url";
+import { z } from "zod";
+import { bundle } from "../scripts/bundle.ts";
+import * as t from "../lib/mod.ts";
+
+const root = resolve(dirname(fileURLToPath(import.meta.url)), "..");
+
+/** The same calls in the bundle (printed as JSON by a plain node process) and from source. */
+const script = `
+const before = zodLoaded();
+const tx = t.roundCoil({ innerRadius: "40 mm", turns: 20, layers: 4, wire: { diameter: "0.5 mm" } });
+const after = zodLoaded();
+let message;
+try { t.roundCoil({ innerRadius: "5 kHz", turns: 20, wire: { diameter: "0.5 mm" } }); } catch (e) { message = e.message; }
+const user = z.object({ coil: t.RoundCoilSpec, label: z.string() });
+const parsed = user.parse({ coil: { innerRadius: "6 mm", turns: 30, wire: { diameter: "0.1 mm" } }, label: "token" });
+const userSchema = z.toJSONSchema(z.object({ design: t.DesignFile }), { io: "input", unrepresentable: "any" });
+const result = { before, after, message, innerRadius: parsed.coil.innerRadius, inductance: t.selfInductance(tx), designSchema: t.designJsonSchema(), userSchema };
+`;
+
+describe("bundled build", () => {
+  it("imports without zod, loads it on the first schema, and agrees with the sources", async () => {
+    const out = join(root, "out", "bundle-test", String(process.pid));
+    rmSync(out, { recursive: true, force: true });
+    mkdirSync(out, { recursive: true });
+    await bundle(out);
+    writeFileSync(
+      join(out, "run.mjs"),
+      `import * as t from "./mod.js";
+import { createRequire } from "node:module";
+import { z } from "zod";
+const require = createRequire(import.meta.url);
+const zodLoaded = () => require.resolve("./zod.cjs") in require.cache;
+${script}
+console.log(JSON.stringify(result));
+`,
+    );
+    const fromBundle = JSON.parse(execFileSync(process.execPath, [join(out, "run.mjs")], { encoding: "utf8" })) as Record<string, unknown>;
+    rmSync(out, { recursive: true, force: true });
+
+    const zodLoaded = () => true;
+    const fromSource = new Function("t", "z", "zodLoaded", `${script}; return result;`)(t, z, zodLoaded) as Record<string, unknown>;
+
+    expect(fromBundle.before).toBe(false);
+    expect(fromBundle.after).toBe(true);
+    expect(fromBundle.message).toBe("roundCoil: innerRadius: expected a length like '12 mm', got '5 kHz' (a frequency)");
+    for (const key of ["message", "innerRadius", "inductance", "designSchema", "userSchema"]) expect(fromBundle[key], key).toEqual(fromSource[key]);
+    // our metadata reaches the user's zod: the design file's coil description is in the user's JSON Schema
+    expect(JSON.stringify(fromBundle.userSchema)).toContain("a coil: shape 'roundCoil'");
+  }, 120_000);
+});
