@@ -11,6 +11,7 @@ import {
 } from "./network.ts";
 import { networkTransmitters } from "./network.ts";
 import { receiverLabel, type LinkWorkspace } from "./operatingPoint.ts";
+import type { DriveEquivalent } from "../drive.ts";
 import type { DriveState, LedState, LinkResult, Phasor, ReceiverState, TankState, TransmitterState } from "./result.ts";
 
 const LITTHRESHOLD_SOURCE =
@@ -157,10 +158,9 @@ interface TransmitterTank extends TransmitterTerminals {
 
 /**
  * Transmitter i: coil voltage RᵢIᵢ + jωLᵢIᵢ + Σ jωMᵢⱼIⱼ (every other coil), its capacitor (series:
- * same current; parallel: same voltage), its terminals, the reflected impedance Σ jωMᵢⱼIⱼ/Iᵢ,
- * and its part warnings and cautions.
+ * same current; parallel: same voltage), its terminals and the reflected impedance Σ jωMᵢⱼIⱼ/Iᵢ.
  */
-function transmitterTank(ws: LinkWorkspace, i: number, coil: { re: Float64Array; im: Float64Array }, v: Verdicts): TransmitterTank {
+function tankPhasors(ws: LinkWorkspace, i: number, coil: { re: Float64Array; im: Float64Array }): TransmitterTank {
   const { w, t, m } = ws;
   const L = ws.network.inductance;
   const tx = networkTransmitters(ws.network)[i]!;
@@ -180,13 +180,6 @@ function transmitterTank(ws: LinkWorkspace, i: number, coil: { re: Float64Array;
   const i0a2 = i0Re * i0Re + i0Im * i0Im;
   const refl: Phasor = i0a2 > 0 ? { re: (mRe * i0Re + mIm * i0Im) / i0a2, im: (mIm * i0Re - mRe * i0Im) / i0a2 } : { re: 0, im: 0 };
   const terminals = compensation(tx.compensation, ws.base.zcRe[i]!, ws.base.zcIm[i]!, i0Re, i0Im, coilVRe, coilVIm);
-  const label = transmitterLabel(ws, i);
-  const coilV = Math.hypot(coilVRe, coilVIm);
-  const capV = Math.hypot(terminals.capVRe, terminals.capVIm);
-  checkPartVoltage(label + " capacitor", capV, tx.capacitorRating, v.warnings);
-  checkSelfResonance(label + " coil", w / (2 * Math.PI), tx.selfResonance, v.warnings);
-  caution(label + " coil", coilV, v.cautionV, v.cautions);
-  if (tx.compensation !== "none") caution(label + " capacitor", capV, v.cautionV, v.cautions);
   // written out field by field: an object spread here made the whole solve about twice as slow (V8)
   return {
     capVRe: terminals.capVRe,
@@ -197,13 +190,57 @@ function transmitterTank(ws: LinkWorkspace, i: number, coil: { re: Float64Array;
     srcIIm: terminals.srcIIm,
     termVRe: terminals.termVRe,
     termVIm: terminals.termVIm,
-    label,
+    label: transmitterLabel(ws, i),
     iRe: i0Re,
     iIm: i0Im,
     coilVRe,
     coilVIm,
     refl,
   };
+}
+
+/** {@link tankPhasors} plus transmitter i's part warnings and cautions. */
+function transmitterTank(ws: LinkWorkspace, i: number, coil: { re: Float64Array; im: Float64Array }, v: Verdicts): TransmitterTank {
+  const k = tankPhasors(ws, i, coil);
+  const tx = networkTransmitters(ws.network)[i]!;
+  const coilV = Math.hypot(k.coilVRe, k.coilVIm);
+  const capV = Math.hypot(k.capVRe, k.capVIm);
+  checkPartVoltage(k.label + " capacitor", capV, tx.capacitorRating, v.warnings);
+  checkSelfResonance(k.label + " coil", ws.w / (2 * Math.PI), tx.selfResonance, v.warnings);
+  caution(k.label + " coil", coilV, v.cautionV, v.cautions);
+  if (tx.compensation !== "none") caution(k.label + " capacitor", capV, v.cautionV, v.cautions);
+  return k;
+}
+
+/**
+ * The power a drive delivers, W: ½Re(V·I*) of its ideal source (V = amplitude·e^{jφ}) with
+ * source current iRe + j·iIm, or of its terminals (vRe + j·vIm) for a held current.
+ */
+function sourcePower(drive: DriveEquivalent, phase: number, iRe: number, iIm: number, vRe: number, vIm: number): number {
+  if (drive.kind !== "voltage") return 0.5 * (vRe * iRe + vIm * iIm);
+  return phase === 0 ? 0.5 * drive.amplitude * iRe : 0.5 * drive.amplitude * (Math.cos(phase) * iRe + Math.sin(phase) * iIm);
+}
+
+/**
+ * The drives' total input power, W — the result's `power.input` (the same sum in the same
+ * order) without the rest of the record, for batch runs that need only the supply's draw.
+ * @example inputPower(solveLinkOperatingPoint(network).ws) // → solveLinkNetwork(network).power.input
+ */
+export function inputPower(ws: LinkWorkspace): number {
+  const coil = coilCurrents(ws);
+  const txs = networkTransmitters(ws.network);
+  const tanks = txs.map((_, i) => tankPhasors(ws, i, coil));
+  let input = 0;
+  txs.forEach((tx, i) => {
+    if (tx.feed === undefined) input += sourcePower(tx.drive, tx.phase ?? 0, tanks[i]!.srcIRe, tanks[i]!.srcIIm, tanks[i]!.termVRe, tanks[i]!.termVIm);
+  });
+  (ws.network.sharedDrives ?? []).forEach((sd, g) => {
+    const members = txs.flatMap((tx, i) => (tx.feed?.drive === g ? [i] : []));
+    if (members.length === 0) return;
+    const src = sharedSource(ws, g, members, tanks);
+    input += sourcePower(sd.drive, sd.phase ?? 0, src.iRe, src.iIm, src.vRe, src.vIm);
+  });
+  return input;
 }
 
 /**
@@ -240,14 +277,7 @@ function ownDrive(ws: LinkWorkspace, i: number, k: TransmitterTank): { state: Tr
   const tx = networkTransmitters(ws.network)[i]!;
   const drive = tx.drive;
   const srcIa2 = k.srcIRe * k.srcIRe + k.srcIIm * k.srcIIm;
-  // ½Re(V·I*) of the ideal source (V = amplitude·e^{jφ}), or of the terminals for a current drive
-  const phase = tx.phase ?? 0;
-  const input =
-    drive.kind === "voltage"
-      ? phase === 0
-        ? 0.5 * drive.amplitude * k.srcIRe
-        : 0.5 * drive.amplitude * (Math.cos(phase) * k.srcIRe + Math.sin(phase) * k.srcIIm)
-      : 0.5 * (k.termVRe * k.srcIRe + k.termVIm * k.srcIIm);
+  const input = sourcePower(drive, tx.phase ?? 0, k.srcIRe, k.srcIIm, k.termVRe, k.termVIm);
   const driverLoss = drive.kind === "voltage" ? 0.5 * srcIa2 * drive.resistance : 0;
   const inZ = terminalImpedance(k.termVRe, k.termVIm, k.srcIRe, k.srcIIm);
   const state = transmitterState(ws, i, k, inZ, driverLoss, input - driverLoss);
@@ -274,13 +304,37 @@ function ownDrive(ws: LinkWorkspace, i: number, k: TransmitterTank): { state: Tr
  * series, the sum of the branches' in parallel), terminal voltage, power and driver loss.
  */
 function sharedDrive(ws: LinkWorkspace, g: number, members: readonly number[], tanks: readonly TransmitterTank[], transmitters: readonly TransmitterState[]): DriveState {
-  const txs = networkTransmitters(ws.network);
   const sd = ws.network.sharedDrives![g]!;
+  const { iRe, iIm, vRe, vIm } = sharedSource(ws, g, members, tanks);
+  const drive = sd.drive;
+  const ia2 = iRe * iRe + iIm * iIm;
+  const input = sourcePower(drive, sd.phase ?? 0, iRe, iIm, vRe, vIm);
+  const driverLoss = drive.kind === "voltage" ? 0.5 * ia2 * drive.resistance : 0;
+  const srcI = Math.sqrt(ia2);
+  const termV = Math.hypot(vRe, vIm);
+  return {
+    label: sd.label,
+    description: drive.label,
+    wiring: sd.wiring,
+    transmitters: members.map((i) => transmitters[i]!.label),
+    sourceCurrent: srcI,
+    sourceCurrentRms: srcI * SQRT1_2,
+    sourceVoltage: termV,
+    sourceVoltageRms: termV * SQRT1_2,
+    inputImpedance: terminalImpedance(vRe, vIm, iRe, iIm),
+    inputPower: input,
+    driverLoss,
+  };
+}
+
+/** Shared drive g's source current (the string current in series, the sum of the branches' in parallel) and terminal voltage, as phasors. */
+function sharedSource(ws: LinkWorkspace, g: number, members: readonly number[], tanks: readonly TransmitterTank[]): { iRe: number; iIm: number; vRe: number; vIm: number } {
+  const txs = networkTransmitters(ws.network);
   let iRe = 0;
   let iIm = 0;
   let vRe = 0;
   let vIm = 0;
-  if (sd.wiring === "series") {
+  if (ws.network.sharedDrives![g]!.wiring === "series") {
     const u = ws.base.stringUnknown[g]!;
     iRe = ws.iRe[u]!;
     iIm = ws.iIm[u]!;
@@ -300,29 +354,7 @@ function sharedDrive(ws: LinkWorkspace, g: number, members: readonly number[], t
     vRe = s0 * tanks[first]!.termVRe;
     vIm = s0 * tanks[first]!.termVIm;
   }
-  const drive = sd.drive;
-  const phase = sd.phase ?? 0;
-  const ia2 = iRe * iRe + iIm * iIm;
-  const input =
-    drive.kind === "voltage"
-      ? 0.5 * drive.amplitude * (Math.cos(phase) * iRe + Math.sin(phase) * iIm)
-      : 0.5 * (vRe * iRe + vIm * iIm);
-  const driverLoss = drive.kind === "voltage" ? 0.5 * ia2 * drive.resistance : 0;
-  const srcI = Math.sqrt(ia2);
-  const termV = Math.hypot(vRe, vIm);
-  return {
-    label: sd.label,
-    description: drive.label,
-    wiring: sd.wiring,
-    transmitters: members.map((i) => transmitters[i]!.label),
-    sourceCurrent: srcI,
-    sourceCurrentRms: srcI * SQRT1_2,
-    sourceVoltage: termV,
-    sourceVoltageRms: termV * SQRT1_2,
-    inputImpedance: terminalImpedance(vRe, vIm, iRe, iIm),
-    inputPower: input,
-    driverLoss,
-  };
+  return { iRe, iIm, vRe, vIm };
 }
 
 /** V/I at a pair of terminals, Ω (0 + 0j when no current flows). */

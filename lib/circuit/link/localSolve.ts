@@ -63,6 +63,21 @@ export interface LocalSolution {
   b: number;
 }
 
+/** |S(v)| = |s₀ + B·Y(v)|, with S into out[0], out[1] and Y = G + jB into out[2], out[3]. */
+function sAbs(p: LocalProblem, v: number, where: string, out: Float64Array): number {
+  loadAdmittance(p.load, p.k, v, where, out);
+  const g = out[2]!;
+  const b = out[3]!;
+  out[0] = p.s0Re + p.bRe * g - p.bIm * b;
+  out[1] = p.s0Im + p.bRe * b + p.bIm * g;
+  return Math.hypot(out[0]!, out[1]!);
+}
+
+/** φ(v) = ln v + ln|S(v)| − ln|E| (S, G, B at v left in tmp). */
+function phi(p: LocalProblem, v: number, lnE: number, where: string, tmp: Float64Array): number {
+  return Math.log(v) + Math.log(sAbs(p, v, where, tmp)) - lnE;
+}
+
 /**
  * Solves ln x + ln|S(x)| − ln|E| = 0 for the load amplitude x by bracketed Newton.
  * `tmp` and `tmp2` are 4-element scratch arrays ([S re, S im, G, B]).
@@ -71,22 +86,13 @@ export interface LocalSolution {
 export function solveLocal(p: LocalProblem, where: string, tmp: Float64Array, tmp2: Float64Array): LocalSolution {
   if (!(p.eAbs > 0)) return { amplitude: 0, iterations: 0, g: OPEN_LOAD_CONDUCTANCE, b: 0 };
   const lnE = Math.log(p.eAbs);
-  const sAbs = (v: number, out: Float64Array): number => {
-    loadAdmittance(p.load, p.k, v, where, out);
-    const g = out[2]!;
-    const b = out[3]!;
-    out[0] = p.s0Re + p.bRe * g - p.bIm * b;
-    out[1] = p.s0Im + p.bRe * b + p.bIm * g;
-    return Math.hypot(out[0]!, out[1]!);
-  };
-  const phi = (v: number): number => Math.log(v) + Math.log(sAbs(v, tmp)) - lnE;
   // upper bracket: the amplitude if the load stayed as small as at v → 0, then doubled until φ ≥ 0
-  let hi = p.eAbs / sAbs(0, tmp);
+  let hi = p.eAbs / sAbs(p, 0, where, tmp);
   let its = 0;
-  let fhi = phi(hi);
+  let fhi = phi(p, hi, lnE, where, tmp);
   while (!(fhi >= 0)) {
     hi *= 2;
-    fhi = phi(hi);
+    fhi = phi(p, hi, lnE, where, tmp);
     if (++its > 200) throw new LinkConvergenceError(`solveLinkNetwork: receiver ${p.label}: no upper bound for the tank amplitude found`, its, []);
   }
   let lo = 0;
@@ -100,7 +106,7 @@ export function solveLocal(p: LocalProblem, where: string, tmp: Float64Array, tm
     const sIm = tmp[1]!;
     const s2 = sRe * sRe + sIm * sIm;
     const h = 1e-7 * v;
-    sAbs(v + h, tmp2);
+    sAbs(p, v + h, where, tmp2);
     const dgRe = (tmp2[2]! - tmp[2]!) / h;
     const dgIm = (tmp2[3]! - tmp[3]!) / h;
     const dsRe = p.bRe * dgRe - p.bIm * dgIm;
@@ -112,7 +118,7 @@ export function solveLocal(p: LocalProblem, where: string, tmp: Float64Array, tm
     if (!(dphi > 0) || !(vn > lo && vn < hi)) vn = lo > 0 ? Math.sqrt(lo * hi) : hi / 8;
     const step = Math.abs(vn - v);
     v = vn;
-    fv = phi(v);
+    fv = phi(p, v, lnE, where, tmp);
     if (step <= 1e-12 * v || Math.abs(fv) <= 1e-14 || hi - lo <= 1e-14 * hi) break;
   }
   return { amplitude: v, iterations: its, g: tmp[2]!, b: tmp[3]! };

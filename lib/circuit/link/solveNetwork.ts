@@ -30,10 +30,10 @@
  * iteration on an explicit workspace), ./assembleResult.ts (the result from the solved state).
  */
 import { requirePositive } from "../../errors.ts";
-import { assembleResult } from "./assembleResult.ts";
+import { assembleResult, type SolvedLink } from "./assembleResult.ts";
 import { LinkConvergenceError } from "./localSolve.ts";
 import type { LinkNetwork, LinkOptions } from "./network.ts";
-import { createWorkspace, receiverLabel, solveOperatingPoint } from "./operatingPoint.ts";
+import { createWorkspace, receiverLabel, solveOperatingPoint, type LinkWorkspace } from "./operatingPoint.ts";
 import type { LinkResult } from "./result.ts";
 import { baseMatrix, receiverTanks } from "./tankImpedance.ts";
 import { validateNetwork } from "./validateNetwork.ts";
@@ -54,11 +54,29 @@ export { LinkConvergenceError } from "./localSolve.ts";
  * @example one series-tuned 10 µH pair, k = 0.1, 1 V sine, 10 Ω load → power.efficiency ≈ 0.97
  */
 export function solveLinkNetwork(network: LinkNetwork, options: LinkOptions = {}): LinkResult {
+  requirePositive(network.frequency, "frequency", "Hz", "solveLinkNetwork");
+  validateNetwork(network, "solveLinkNetwork");
+  return assembleResult(solveLinkOperatingPoint(network, options), options);
+}
+
+/**
+ * The operating point of {@link solveLinkNetwork} without its result record, for batch runs
+ * (toleranceYield) that read a few numbers from many networks of one layout: the same
+ * iteration and the same numbers, without the input check — the caller checks one network of
+ * the layout with `validateNetwork` and varies only part values. Read each LED's current from
+ * the load's `ledCurrents(|V_k|)` (|V_k| = hypot(ws.vRe[k], ws.vIm[k])) and the drives' power
+ * from `inputPower(ws)` (./assembleResult.ts).
+ * @param reuse the workspace of an earlier call on a network of the same layout: its arrays are
+ *   taken over (no allocation per solve); that earlier result's workspace is then overwritten.
+ * @returns the solved workspace, whether it converged, the iterations, and the non-convergence
+ *   warning if any (options.onNonConvergence "warn"; "throw" throws LinkConvergenceError).
+ * @example inputPower(solveLinkOperatingPoint(net).ws) // → solveLinkNetwork(net).power.input
+ */
+export function solveLinkOperatingPoint(network: LinkNetwork, options: LinkOptions = {}, reuse?: LinkWorkspace): SolvedLink {
   const where = "solveLinkNetwork";
   const f = requirePositive(network.frequency, "frequency", "Hz", where);
   const w = 2 * Math.PI * f;
-  validateNetwork(network, where);
-  const ws = createWorkspace(network, w, baseMatrix(network, w), receiverTanks(network.receivers, w), where);
+  const ws = createWorkspace(network, w, baseMatrix(network, w), receiverTanks(network.receivers, w), where, reuse);
   const { converged, iterations } = solveOperatingPoint(ws, options.tolerance ?? 1e-10, options.maxIterations ?? 80);
   const warnings: string[] = [];
   if (!converged) {
@@ -67,5 +85,5 @@ export function solveLinkNetwork(network: LinkNetwork, options: LinkOptions = {}
     if ((options.onNonConvergence ?? "throw") === "throw") throw new LinkConvergenceError(msg, iterations, Array.from(ws.resid));
     warnings.push(msg);
   }
-  return assembleResult({ ws, converged, iterations, warnings }, options);
+  return { ws, converged, iterations, warnings };
 }

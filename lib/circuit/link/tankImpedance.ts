@@ -83,7 +83,8 @@ export function baseMatrix(network: LinkNetwork, w: number): BaseMatrix {
   const coilSign = new Float64Array(t);
   const stringUnknown = new Int32Array(shared.length).fill(-1);
   const capBranch = new Int32Array(t).fill(-1);
-  const groupUnknowns: number[][] = shared.map(() => []);
+  const groupUnknowns: number[][] = [];
+  for (let g = 0; g < shared.length; g++) groupUnknowns.push([]);
   let p = 0;
   for (let i = 0; i < t; i++) {
     const tx = txs[i]!;
@@ -120,21 +121,23 @@ export function baseMatrix(network: LinkNetwork, w: number): BaseMatrix {
   const zcRe = new Float64Array(t);
   const zcIm = new Float64Array(t);
   const L = network.inductance;
-  const unknownOf = (c: number): number => (c < t ? coilUnknown[c]! : p + c - t);
-  const signOf = (c: number): number => (c < t ? coilSign[c]! : 1);
   // ── mutual inductances between the meshes carrying coils c and d ──
+  // (coil c's unknown: coilUnknown[c] for a transmitter, p + c − t for a receiver; its sign coilSign[c] or 1;
+  // loops rather than closures: this runs once per solve, and batch runs solve many)
   for (let c = 0; c < t + m; c++) {
-    const uc = unknownOf(c);
+    const uc = c < t ? coilUnknown[c]! : p + c - t;
+    const sc = c < t ? coilSign[c]! : 1;
     for (let d = 0; d < t + m; d++) {
       if (c === d) continue;
       const x = w * L[c]![d]!;
-      acc(im, uc * n + unknownOf(d), signOf(c) === signOf(d) ? x : -x);
+      const sd = d < t ? coilSign[d]! : 1;
+      acc(im, uc * n + (d < t ? coilUnknown[d]! : p + d - t), sc === sd ? x : -x);
     }
   }
-  rx.forEach((r, k) => {
-    re[(p + k) * n + p + k] = r.resistance;
+  for (let k = 0; k < m; k++) {
+    re[(p + k) * n + p + k] = rx[k]!.resistance;
     im[(p + k) * n + p + k] = w * L[t + k]![t + k]!;
-  });
+  }
   const e = new Float64Array(2);
   const held: { u: number; re: number; im: number }[] = [];
   // ── transmitters ──

@@ -3,10 +3,11 @@
  * {@link LinkLoadModel}: the describing function is `fundamentalConductance(load, amplitude)` and
  * the LED currents `averageLoadCurrent(load, amplitude)` (lib/circuit/loads/describingFunction.ts).
  *
- * For sweeps, `tokenLoadModel(load, { tabulate: true })` builds once (per load object) a table of
- * the describing function G(A) = I₁/A on a uniform amplitude grid and interpolates ln G by cubic
- * Hermite with the exact slopes from dI₁/dA (fundamentalCurrentSlope) — a few tens of nanoseconds per
- * call instead of a cycle integral; the relative error is checked in tests/circuit/linkLoads.test.ts.
+ * For sweeps, `tokenLoadModel(load, { tabulate: true })` keeps (per load object) a table of
+ * the describing function G(A) = I₁/A on a uniform amplitude grid — each node evaluated on first
+ * use, so a sweep pays for the amplitudes it visits and gets a full build's values — and
+ * interpolates ln G by cubic Hermite with the exact slopes from dI₁/dA (fundamentalCurrentSlope),
+ * a few tens of nanoseconds per call instead of a cycle integral; the relative error is checked in tests/circuit/linkLoads.test.ts.
  * Above the uniform grid a geometric tail (32 nodes per doubling, ten doublings: up to 1024 times
  * the grid's top) interpolates ln G against ln A the same way — the first amplitudes a nonlinear
  * solve tries are those of an unclamped tank, often tens to hundreds of volts. Amplitudes outside
@@ -27,19 +28,33 @@ export interface TokenLoadModelOptions {
   readonly step?: number;
 }
 
+/** One tabulated grid: ln G, its slope, and each LED's average current and brightness at the nodes. */
+interface Grid {
+  readonly n: number;
+  /** ln G = ln(I₁/A) at the nodes */
+  readonly y: Float64Array;
+  /** slope of ln G: d ln G/dA (uniform grid), d ln G/d ln A (tail) */
+  readonly d: Float64Array;
+  /** average current of each LED at the nodes: avg[led][j] */
+  readonly avg: Float64Array[];
+  readonly brightness: Float64Array[];
+  /** 1 where node j has been evaluated */
+  readonly filled: Uint8Array;
+  /** the amplitude of node j, V */
+  readonly amplitude: (j: number) => number;
+  /** true for the tail (slope per ln A) */
+  readonly logSlope: boolean;
+}
+
 interface Table {
+  readonly load: TokenLoad;
   readonly h: number;
   readonly n: number;
-  /** ln G = ln(I₁/A) at A = (j+1)·h */
-  readonly y: Float64Array;
-  /** d ln G / dA there */
-  readonly d: Float64Array;
-  /** average current of each LED at the nodes: ledAvg[led][j] */
-  readonly avg: Float64Array[];
   readonly labels: string[];
-  readonly brightness: Float64Array[];
-  /** the geometric tail: node i at top·e^{i·du}; ln G, d ln G/d ln A, LED currents and brightness there */
-  readonly tail: { readonly du: number; readonly n: number; readonly y: Float64Array; readonly d: Float64Array; readonly avg: Float64Array[]; readonly brightness: Float64Array[] };
+  /** the uniform grid: node j at A = (j+1)·h */
+  readonly grid: Grid;
+  /** the geometric tail: node i at top·e^{i·du} */
+  readonly tail: Grid & { readonly du: number };
 }
 
 /** Tail nodes per doubling of the amplitude, and doublings. */
@@ -48,48 +63,58 @@ const TAIL_DOUBLINGS = 10;
 
 const tables = new WeakMap<TokenLoad, Map<string, Table>>();
 
+function emptyGrid(n: number, leds: number, amplitude: (j: number) => number, logSlope: boolean): Grid {
+  const f = (): Float64Array => new Float64Array(n);
+  return { n, y: f(), d: f(), avg: Array.from({ length: leds }, f), brightness: Array.from({ length: leds }, f), filled: new Uint8Array(n), amplitude, logSlope };
+}
+
+/**
+ * The table's shell: nodes are evaluated on first use ({@link node}), so a sweep that visits a
+ * narrow band of amplitudes pays for that band only; every node's values are those a full build
+ * would give.
+ */
 function buildTable(load: TokenLoad, maxA: number, h: number): Table {
   const n = Math.ceil(maxA / h);
-  const y = new Float64Array(n);
-  const d = new Float64Array(n);
   const first = averageLoadCurrent(load, h);
-  const avg = first.map(() => new Float64Array(n));
-  const brightness = first.map(() => new Float64Array(n));
-  for (let j = 0; j < n; j++) {
-    const a = (j + 1) * h;
-    const i1 = fundamentalConductance(load, a) * a;
-    const s = fundamentalCurrentSlope(load, a);
-    y[j] = Math.log(i1 / a); // ln G: smooth down to A → 0, unlike ln I₁
-    d[j] = s / i1 - 1 / a;
-    averageLoadCurrent(load, a).forEach((e, k) => {
-      avg[k]![j] = e.current;
-      brightness[k]![j] = e.relativeBrightness;
-    });
-  }
   const top = n * h;
   const du = Math.LN2 / TAIL_PER_DOUBLING;
   const nt = TAIL_PER_DOUBLING * TAIL_DOUBLINGS + 1;
-  const ty = new Float64Array(nt);
-  const td = new Float64Array(nt);
-  const tavg = first.map(() => new Float64Array(nt));
-  const tbr = first.map(() => new Float64Array(nt));
-  for (let i = 0; i < nt; i++) {
-    const a = top * Math.exp(i * du);
-    const i1 = fundamentalConductance(load, a) * a;
-    ty[i] = Math.log(i1 / a);
-    td[i] = (a * fundamentalCurrentSlope(load, a)) / i1 - 1; // d ln G / d ln A
-    averageLoadCurrent(load, a).forEach((e, k) => {
-      tavg[k]![i] = e.current;
-      tbr[k]![i] = e.relativeBrightness;
-    });
-  }
-  return { h, n, y, d, avg, labels: first.map((e) => e.label), brightness, tail: { du, n: nt, y: ty, d: td, avg: tavg, brightness: tbr } };
+  return {
+    load,
+    h,
+    n,
+    labels: first.map((e) => e.label),
+    grid: emptyGrid(n, first.length, (j) => (j + 1) * h, false),
+    tail: { ...emptyGrid(nt, first.length, (i) => top * Math.exp(i * du), true), du },
+  };
+}
+
+/** Evaluates node j of a grid if it has not been (the describing function, its slope, the LED currents). */
+function node(load: TokenLoad, g: Grid, j: number): void {
+  if (g.filled[j] === 1) return;
+  const a = g.amplitude(j);
+  const i1 = fundamentalConductance(load, a) * a;
+  const s = fundamentalCurrentSlope(load, a);
+  g.y[j] = Math.log(i1 / a); // ln G: smooth down to A → 0, unlike ln I₁
+  g.d[j] = g.logSlope ? (a * s) / i1 - 1 : s / i1 - 1 / a;
+  averageLoadCurrent(load, a).forEach((e, k) => {
+    g.avg[k]![j] = e.current;
+    g.brightness[k]![j] = e.relativeBrightness;
+  });
+  g.filled[j] = 1;
+}
+
+/** Evaluates nodes j and j+1 of a grid (the interval an interpolation needs). */
+function nodes(load: TokenLoad, g: Grid, j: number): void {
+  node(load, g, j);
+  node(load, g, j + 1);
 }
 
 /** Node j and the fraction s along [j, j+1] of an amplitude in the tail (u = ln(a/top)/du). */
 function tailPosition(tab: Table, top: number, a: number): { j: number; s: number } {
   const u = Math.log(a / top) / tab.tail.du;
   const j = Math.min(Math.floor(u), tab.tail.n - 2);
+  nodes(tab.load, tab.tail, j);
   return { j, s: u - j };
 }
 
@@ -150,6 +175,7 @@ export function tokenLoadModel(load: TokenLoad, options: TokenLoadModelOptions =
     byKey.set(key, t);
   }
   const tab = t;
+  const grid = tab.grid;
   const top = tab.n * h;
   const tailTop = top * Math.exp((tab.tail.n - 1) * tab.tail.du);
   return {
@@ -164,13 +190,14 @@ export function tokenLoadModel(load: TokenLoad, options: TokenLoadModelOptions =
       // cubic Hermite on ln G between nodes j and j+1 (node j at (j+1)·h)
       const u = a / h - 1;
       const j = Math.min(Math.floor(u), tab.n - 2);
+      nodes(load, grid, j);
       const s = u - j;
       const s2 = s * s;
       const s3 = s2 * s;
-      const y0 = tab.y[j]!;
-      const y1 = tab.y[j + 1]!;
+      const y0 = grid.y[j]!;
+      const y1 = grid.y[j + 1]!;
       const lnG =
-        (2 * s3 - 3 * s2 + 1) * y0 + (s3 - 2 * s2 + s) * h * tab.d[j]! + (-2 * s3 + 3 * s2) * y1 + (s3 - s2) * h * tab.d[j + 1]!;
+        (2 * s3 - 3 * s2 + 1) * y0 + (s3 - 2 * s2 + s) * h * grid.d[j]! + (-2 * s3 + 3 * s2) * y1 + (s3 - s2) * h * grid.d[j + 1]!;
       return Math.exp(lnG);
     },
     ledCurrents(a: number) {
@@ -181,11 +208,12 @@ export function tokenLoadModel(load: TokenLoad, options: TokenLoadModelOptions =
       if (!(a >= h && a < top)) return exact.ledCurrents!(a);
       const u = a / h - 1;
       const j = Math.min(Math.floor(u), tab.n - 2);
+      nodes(load, grid, j);
       const s = u - j;
       // linear between nodes in ln (average current) where both are positive, else linear
       return tab.labels.map((lab, k) => {
-        const p = tab.avg[k]!;
-        const b = tab.brightness[k]!;
+        const p = grid.avg[k]!;
+        const b = grid.brightness[k]!;
         const c0 = p[j]!;
         const c1 = p[j + 1]!;
         const cur = c0 > 0 && c1 > 0 ? Math.exp((1 - s) * Math.log(c0) + s * Math.log(c1)) : (1 - s) * c0 + s * c1;
