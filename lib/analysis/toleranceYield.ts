@@ -2,7 +2,10 @@
  * toleranceYield(system, variations, options): what fraction of a production batch lights —
  * Monte Carlo through the whole link with parts, windings, LEDs, placement, tilt and supply
  * drawn from their spreads (./yieldSpec.ts), every sample a full nonlinear link solve
- * (./yieldModel.ts).
+ * (./yieldModel.ts) by the model asked for (the describing function by default; harmonic balance
+ * or solveLink's "auto" choice per sample). Over a transmitter array every transmitter's capacitor
+ * and winding is its own part, drawn independently; placement and tilt move the token relative
+ * to the array.
  *
  * Summaries: the lit fraction with its Wilson score interval (./confidence.ts); percentiles of
  * the LED current and the supply current (simple-statistics quantileSorted, R-7 / Hyndman & Fan
@@ -17,8 +20,9 @@ import { mean, quantileSorted, sampleRankCorrelation } from "simple-statistics";
 import type { LinkSystem } from "../circuit/link.ts";
 import { TanklightInputError } from "../errors.ts";
 import { wilsonInterval, type ProportionInterval } from "./confidence.ts";
-import { DRAWS, DRAW_NAMES, makeYieldModel, type YieldSpec, type YieldValues } from "./yieldModel.ts";
-import { nominalDraws, sampleDrawer, yieldSpec, type VariationsInput } from "./yieldSpec.ts";
+import { drawsPerSample, makeYieldModel, nominalDraws, type YieldSpec, type YieldValues } from "./yieldModel.ts";
+import { sampleDrawer, yieldSpec, type VariationsInput } from "./yieldSpec.ts";
+import { solveLinkModel, type LinkModel } from "../circuit/harmonic/modelChoice.ts";
 import { progressCounter, type ProgressCallback } from "./progress.ts";
 import { checkThreads, contentId, taskPool, type TaskPool, type ThreadsOption } from "./pool.ts";
 
@@ -38,6 +42,13 @@ export interface YieldOptions {
   readonly sensitivity?: "rank" | "one-at-a-time";
   /** forward-voltage grid of the LED tables, V (default 20 mV; interpolated between) */
   readonly vfStep?: number;
+  /**
+   * steady-state model of every sample, as solveLink's `model`: "fundamental" (default, the
+   * describing function), "harmonic" (harmonic balance) or "auto" (the describing function where
+   * its estimated error is small, harmonic balance elsewhere — per sample). Several transmitters
+   * or a shared drive: the describing function ("harmonic" is refused), as solveLink.
+   */
+  readonly model?: LinkModel;
   readonly threads?: ThreadsOption;
   readonly onProgress?: ProgressCallback;
 }
@@ -82,6 +93,8 @@ export interface YieldResult {
   /** variations ranked by |rank correlation| (or by yield loss when one-at-a-time was run) */
   readonly sensitivity: readonly SensitivityEntry[];
   readonly sensitivityMethod: string;
+  /** the model asked for and the samples each model solved */
+  readonly model: { readonly requested: LinkModel; readonly fundamentalSamples: number; readonly harmonicSamples: number };
   readonly litThreshold: number;
   readonly warnings: readonly string[];
 }
@@ -91,13 +104,18 @@ const CHUNK = 500;
 /**
  * Monte Carlo yield of a token design through the whole link (see the module comment).
  *
- * @param system a link system; `options.token` is the token (the others are left out).
+ * @param system a link system, one transmitter or several (`transmitters`, `sharedDrives`);
+ *   `options.token` is the token (the others are left out).
  * @param variations `{ tokenCapacitor?: 0.05, transmitterCapacitor?, tokenTurns?: { spread, build },
  *   transmitterTurns?, ledForwardVoltage?: "preset" | "0.1 V", ledBrightness?: "preset" | 0.3,
  *   placement?: "2 mm", height?: "1 mm", tilt?: "10 deg", supply?: 0.05 }` — each ±tolerance,
- *   uniform unless `{ tolerance, distribution: "normal" }` (tolerance = 3σ, truncated).
- * @param options samples (2000), seed (1), confidence (0.95), sensitivity, threads, onProgress.
- * @returns {@link YieldResult}: lit fraction with a Wilson interval, percentiles (A), ranking.
+ *   uniform unless `{ tolerance, distribution: "normal" }` (tolerance = 3σ, truncated). Over an
+ *   array each transmitter draws its own capacitor and winding (`build(turns, transmitter)`), and
+ *   the ranking lists them as `transmitterCapacitor[i]`, `transmitterTurns[i]`.
+ * @param options samples (2000), seed (1), confidence (0.95), sensitivity, model ("fundamental",
+ *   "harmonic", "auto"), threads, onProgress.
+ * @returns {@link YieldResult}: lit fraction with a Wilson interval, percentiles (A), ranking, and
+ *   the model used (how many samples each model solved).
  * @example (await toleranceYield(system, { tokenCapacitor: 0.1 }, { samples: 100, seed: 7 })).interval.method // → "Wilson score interval (Wilson 1927)"
  */
 export async function toleranceYield(system: LinkSystem, variations: VariationsInput, options: YieldOptions = {}): Promise<YieldResult> {
@@ -107,9 +125,15 @@ export async function toleranceYield(system: LinkSystem, variations: VariationsI
   if (!(Number.isInteger(n) && n >= 10)) throw new TanklightInputError([{ path: "samples", message: "must be an integer ≥ 10", value: n }], where);
   if (!(Number.isSafeInteger(seed) && seed >= 0)) throw new TanklightInputError([{ path: "seed", message: "must be an integer ≥ 0", value: seed }], where);
   checkThreads(options.threads, where);
+  const requested = options.model ?? "fundamental";
+  if (requested !== "fundamental" && requested !== "harmonic" && requested !== "auto") {
+    throw new TanklightInputError([{ path: "model", message: "must be 'fundamental', 'harmonic' or 'auto'", value: requested }], where);
+  }
   const { spec, parsed, active } = yieldSpec(system, variations, { ...options }, where);
+  const stride = drawsPerSample(spec.transmitters.length);
   const model = makeYieldModel(spec);
-  const nominal = model.evaluate(nominalDraws(spec));
+  const nominal0 = nominalDraws(spec);
+  const nominal = model.evaluate(nominal0);
   const threads = typeof options.threads === "object" ? options.threads.threads : (options.threads ?? 1);
   const pool: TaskPool | undefined = threads > 1 ? (typeof options.threads === "object" ? options.threads : await taskPool(threads)) : undefined;
   const owned = pool !== undefined && typeof options.threads !== "object";
@@ -124,19 +148,21 @@ export async function toleranceYield(system: LinkSystem, variations: VariationsI
     const current = new Float64Array(n);
     const lit = new Uint8Array(n);
     const supply = new Float64Array(n);
-    const drawn = new Float64Array(n * DRAWS);
+    const drawn = new Float64Array(n * stride);
     let unconverged = 0;
+    let harmonic = 0;
     const pending: Promise<void>[] = [];
     for (let s = 0; s < n; s += CHUNK) {
       const count = Math.min(CHUNK, n - s);
       const draws = next(count);
-      drawn.set(draws, s * DRAWS);
+      drawn.set(draws, s * stride);
       pending.push(
         run(draws).then((v) => {
           current.set(v.current, s);
           lit.set(v.lit, s);
           supply.set(v.supply, s);
           unconverged += v.unconverged;
+          harmonic += v.harmonic;
           progress.done(count);
         }),
       );
@@ -145,24 +171,25 @@ export async function toleranceYield(system: LinkSystem, variations: VariationsI
     let litCount = 0;
     for (let i = 0; i < n; i++) litCount += lit[i]!;
     // sensitivity
-    const margin = Array.from(current, (c, i) => Math.log(Math.max(c * drawn[i * DRAWS + 5]!, 1e-12) / spec.litThreshold));
+    const brightness = 5; // the brightness draw's column (DRAW_NAMES)
+    const margin = Array.from(current, (c, i) => Math.log(Math.max(c * drawn[i * stride + brightness]!, 1e-12) / spec.litThreshold));
     const entries: SensitivityEntry[] = [];
-    for (const name of active) {
-      const col = DRAW_NAMES.indexOf(name as (typeof DRAW_NAMES)[number]);
-      const xs = Array.from({ length: n }, (_, i) => (name === "tilt" ? Math.abs(drawn[i * DRAWS + col]!) : drawn[i * DRAWS + col]!));
+    const nom = nominalDraws(spec);
+    for (const { variation, columns } of active) {
+      const col = columns[0]!;
+      // a tilt is ranked by its size (its direction is the azimuth draw)
+      const xs = Array.from({ length: n }, (_, i) => (variation === "tilt" ? Math.abs(drawn[i * stride + col]!) : drawn[i * stride + col]!));
       const rho = constant(xs) || constant(margin) ? 0 : sampleRankCorrelation(xs, margin);
       let alone: number | undefined;
       if (oat) {
         const masked = new Float64Array(drawn);
-        const nom = nominalDraws(spec);
-        const keep = name === "placementX" ? [6, 7] : name === "tilt" ? [9, 10] : [col];
-        for (let i = 0; i < n; i++) for (let d = 0; d < DRAWS; d++) if (!keep.includes(d)) masked[i * DRAWS + d] = nom[d]!;
+        for (let i = 0; i < n; i++) for (let d = 0; d < stride; d++) if (!columns.includes(d)) masked[i * stride + d] = nom[d]!;
         let litAlone = 0;
         const parts: Promise<void>[] = [];
         for (let s = 0; s < n; s += CHUNK) {
           const count = Math.min(CHUNK, n - s);
           parts.push(
-            run(masked.slice(s * DRAWS, (s + count) * DRAWS)).then((v) => {
+            run(masked.slice(s * stride, (s + count) * stride)).then((v) => {
               for (let i = 0; i < count; i++) litAlone += v.lit[i]!;
               progress.done(count);
             }),
@@ -171,14 +198,15 @@ export async function toleranceYield(system: LinkSystem, variations: VariationsI
         await Promise.all(parts);
         alone = litAlone / n;
       }
-      entries.push({
-        variation: name === "placementX" ? "placement" : name,
-        rankCorrelation: rho,
-        ...(alone !== undefined ? { yieldAlone: alone, yieldLoss: 1 - alone } : {}),
-      });
+      entries.push({ variation, rankCorrelation: rho, ...(alone !== undefined ? { yieldAlone: alone, yieldLoss: 1 - alone } : {}) });
     }
     entries.sort((a, b) => (oat ? b.yieldLoss! - a.yieldLoss! : Math.abs(b.rankCorrelation) - Math.abs(a.rankCorrelation)));
     const warnings: string[] = [];
+    // the describing function's own validity at the nominal design (solveLink's warnings)
+    if (requested === "fundamental" && spec.transmitters.length === 1 && spec.sharedDrives === undefined) {
+      const check = solveLinkModel(model.network(nominal0), { litThreshold: spec.litThreshold, onNonConvergence: "warn", model: "fundamental" });
+      warnings.push(...check.warnings.filter((w) => w.startsWith("describing function")).map((w) => `at the nominal design: ${w}`));
+    }
     if (unconverged > 0) warnings.push(`${unconverged} of ${n} samples did not converge; their LED currents are the solver's last iterate`);
     if (litCount === n || litCount === 0) warnings.push(`every sample ${litCount === n ? "lit" : "dark"}: the interval is one-sided; more samples narrow it`);
     return {
@@ -194,6 +222,7 @@ export async function toleranceYield(system: LinkSystem, variations: VariationsI
       sensitivityMethod: oat
         ? "one-at-a-time yield: the same draws with only that variation active (ranked by yield loss); rankCorrelation: Spearman's ρ of the draw with ln(I·b/I_lit)"
         : "Spearman rank correlation of each variation's draw with the LED margin ln(I·b/I_lit) over the run (ranked by |ρ|)",
+      model: { requested, fundamentalSamples: n - harmonic, harmonicSamples: harmonic },
       litThreshold: spec.litThreshold,
       warnings,
     };

@@ -11,21 +11,28 @@
  * - the LED: a forward-voltage shift ΔV is the same junction with I_s·e^(−ΔV/(nV_T)) (the whole
  *   forward curve moves by ΔV); the describing function is tabulated once per level of a ΔV grid
  *   (`vfStep`) and interpolated linearly in ΔV between levels (in ln G and ln I);
- * - placement and tilt: the pose changes and M follows from couplingEvaluator;
- * - supply: the drive's equivalent source scales with the supply voltage.
+ * - placement and tilt: the pose changes and M follows from couplingEvaluator (to every
+ *   transmitter of an array);
+ * - supply: every drive's equivalent source scales with the supply voltage.
+ * Each transmitter of an array has its own capacitor and winding draws; the M between two
+ * transmitters follows their winding variants.
  */
 import { couplingEvaluator, type CouplingEvaluator } from "../em/couplingEvaluator.ts";
 import type { Coil, Pose, Vec3 } from "../em/types.ts";
-import type { LinkLoadModel, ReceiverNetwork, TransmitterNetwork } from "../circuit/link/network.ts";
-import { solveLinkNetwork } from "../circuit/link/solveNetwork.ts";
+import type { LinkLoadModel, LinkNetwork, ReceiverNetwork, SharedDriveNetwork, TransmitterNetwork } from "../circuit/link/network.ts";
+import { solveLinkOperatingPoint } from "../circuit/link/solveNetwork.ts";
+import type { LinkWorkspace } from "../circuit/link/operatingPoint.ts";
+import { inputPower } from "../circuit/link/assembleResult.ts";
+import { validateNetwork } from "../circuit/link/validateNetwork.ts";
+import { solveLinkModel, type LinkModel } from "../circuit/harmonic/modelChoice.ts";
 import { tokenLoadModel } from "../circuit/link/tokenLoad.ts";
 import { decodeLoad, type JunctionData, type LoadData } from "./loadCodec.ts";
 import { PROBE_MUTUAL_RTOL } from "./probe.ts";
 import { thermalVoltage } from "../constants.ts";
 
-/** Draws per sample, in this order (see DRAW_NAMES). */
+/** Draws per sample of a one-transmitter system, in this order (see DRAW_NAMES). */
 export const DRAWS = 12;
-/** What each draw of a sample is. */
+/** What each draw of a sample is (each further transmitter adds its capacitor and winding after these). */
 export const DRAW_NAMES = [
   "tokenCapacitor",
   "transmitterCapacitor",
@@ -41,6 +48,25 @@ export const DRAW_NAMES = [
   "supply",
 ] as const;
 
+/**
+ * Draws per sample with t transmitters: the 12 of DRAW_NAMES, then a capacitor and a winding draw
+ * for each transmitter after the first.
+ * @example drawsPerSample(1) // → 12
+ */
+export function drawsPerSample(t: number): number {
+  return DRAWS + 2 * (t - 1);
+}
+
+/** The draw column of transmitter i's capacitor (relative deviation). */
+export function capacitorColumn(i: number): number {
+  return i === 0 ? 1 : DRAWS + 2 * (i - 1);
+}
+
+/** The draw column of transmitter i's winding variant (index into its levels). */
+export function turnsColumn(i: number): number {
+  return i === 0 ? 2 : DRAWS + 2 * (i - 1) + 1;
+}
+
 /** One winding variant: its coil, inductance (H) and resistance (Ω) at the drive frequency. */
 export interface WindingLevel {
   readonly turns: number;
@@ -49,22 +75,35 @@ export interface WindingLevel {
   readonly resistance: number;
 }
 
+/** One transmitter of the yield model: its nominal network part, winding variants and pose. */
+export interface YieldTransmitter {
+  readonly network: TransmitterNetwork;
+  /** the capacitor's dissipation factor when its ESR came from one */
+  readonly dissipation?: number;
+  /** winding variants, the nominal one at index (length − 1)/2 */
+  readonly levels: readonly WindingLevel[];
+  readonly pose: Pose;
+}
+
 /** Plain-data description of the yield model. */
 export interface YieldSpec {
   readonly frequency: number;
-  readonly transmitter: TransmitterNetwork;
-  /** the transmitter capacitor's dissipation factor when its ESR came from one */
-  readonly transmitterDissipation?: number;
+  readonly transmitters: readonly YieldTransmitter[];
+  /** true when the system listed `transmitters` (the network then lists them too) */
+  readonly listed?: boolean;
+  readonly sharedDrives?: readonly SharedDriveNetwork[];
+  /**
+   * M between transmitters i < j (pairs in order (0,1), (0,2), …, (1,2), …) for every pair of their
+   * winding variants, H: pairMutual[pair][a·levels_j + b]
+   */
+  readonly pairMutual: readonly (readonly number[])[];
   readonly receiver: Omit<ReceiverNetwork, "load">;
   readonly receiverDissipation?: number;
   readonly load: LoadData;
-  /** winding variants, the nominal one at index (length − 1)/2 */
-  readonly transmitterLevels: readonly WindingLevel[];
   readonly tokenLevels: readonly WindingLevel[];
-  readonly txPose: Pose;
   readonly tokenPose: { readonly position: Vec3; readonly axis: Vec3 };
-  /** M at the nominal pose for each (transmitter level, token level), H: mutualTable[i·tokenLevels + j] */
-  readonly mutualTable: readonly number[];
+  /** M of transmitter i's variants with the token's at the nominal pose, H: tokenMutual[i][a·tokenLevels + b] */
+  readonly tokenMutual: readonly (readonly number[])[];
   /** true when placement or tilt vary (M per sample) */
   readonly posed: boolean;
   /** forward-voltage grid, V */
@@ -73,6 +112,8 @@ export interface YieldSpec {
   readonly supplyVoltage?: number;
   /** tabulation of the load's describing function (highest amplitude V, step V) */
   readonly table: { readonly maxAmplitude: number; readonly step: number };
+  /** the steady-state model per sample, as solveLink's */
+  readonly model: LinkModel;
 }
 
 /** Results for a batch of samples. */
@@ -84,6 +125,8 @@ export interface YieldValues {
   /** DC supply current, A (0 without a DC supply) */
   readonly supply: Float64Array;
   readonly unconverged: number;
+  /** samples solved by harmonic balance (the others by the describing function) */
+  readonly harmonic: number;
 }
 
 function shifted(j: JunctionData, dv: number): JunctionData {
@@ -125,12 +168,35 @@ function shiftLoad(load: LoadData, dv: number): LoadData {
   }
 }
 
-/** A ready yield model: evaluates batches of samples (draws laid out DRAWS per sample). */
+/** A ready yield model: evaluates batches of samples (draws laid out drawsPerSample(t) per sample). */
 export interface YieldModel {
   evaluate(draws: Float64Array): YieldValues;
+  /** the link network of one sample's draws (as solved) */
+  network(draws: Float64Array): LinkNetwork;
 }
 
-/** Builds the model: load tables per forward-voltage level and coupling evaluators per winding pair, on demand. */
+/** A drive's equivalent on a supply changed by the relative deviation `supply` (its source scales with it). */
+function scaledDrive(drive: TransmitterNetwork["drive"], supply: number): TransmitterNetwork["drive"] {
+  return supply === 0 ? drive : { ...drive, amplitude: drive.amplitude * (1 + supply) };
+}
+
+/** Tilts the unit axis a by θ about the horizontal direction at azimuth φ (Rodrigues' rotation). */
+function tilted(a: Vec3, th: number, ph: number): Vec3 {
+  const [ax, ay, az] = a;
+  const kx = Math.cos(ph);
+  const ky = Math.sin(ph);
+  const c = Math.cos(th);
+  const sn = Math.sin(th);
+  const kdot = kx * ax + ky * ay;
+  return [ax * c + ky * az * sn + kx * kdot * (1 - c), ay * c - kx * az * sn + ky * kdot * (1 - c), az * c + (kx * ay - ky * ax) * sn];
+}
+
+/**
+ * Builds the model: load tables per forward-voltage level and coupling evaluators per winding
+ * pair, on demand. Each sample is a network of the system's layout with changed part values,
+ * solved as solveLink solves it (the describing function: solveLinkNetwork's iteration, checked
+ * once here for the layout; "harmonic"/"auto": solveLinkModel).
+ */
 export function makeYieldModel(spec: YieldSpec): YieldModel {
   const w = 2 * Math.PI * spec.frequency;
   const loads = new Map<number, LinkLoadModel>();
@@ -142,89 +208,141 @@ export function makeYieldModel(spec: YieldSpec): YieldModel {
     }
     return m;
   };
+  const fundamental = spec.model === "fundamental";
   const loadFor = (dv: number): LinkLoadModel => {
     const u = dv / spec.vfStep;
     const q = Math.floor(u);
     const t = u - q;
-    return t === 0 ? loadAt(q) : between(loadAt(q), loadAt(q + 1), t);
+    if (t === 0) return loadAt(q);
+    const m = between(loadAt(q), loadAt(q + 1), t);
+    // harmonic balance evaluates the load in time: the exact shifted junction
+    return fundamental ? m : { ...m, token: decodeLoad(shiftLoad(spec.load, dv)) };
   };
-  const evs = new Map<number, CouplingEvaluator>();
+  const txs = spec.transmitters;
+  const t = txs.length;
+  const stride = drawsPerSample(t);
   const nTok = spec.tokenLevels.length;
-  const evFor = (i: number, j: number): CouplingEvaluator => {
-    let e = evs.get(i * nTok + j);
+  const evs = new Map<string, CouplingEvaluator>();
+  const evFor = (i: number, a: number, b: number): CouplingEvaluator => {
+    const key = `${i}|${a}|${b}`;
+    let e = evs.get(key);
     if (!e) {
-      e = couplingEvaluator(spec.transmitterLevels[i]!.coil, spec.tokenLevels[j]!.coil, { relTol: PROBE_MUTUAL_RTOL });
-      evs.set(i * nTok + j, e);
+      e = couplingEvaluator(txs[i]!.levels[a]!.coil, spec.tokenLevels[b]!.coil, { relTol: PROBE_MUTUAL_RTOL });
+      evs.set(key, e);
     }
     return e;
   };
   const options = { litThreshold: spec.litThreshold, onNonConvergence: "warn" as const };
-  const tx0 = spec.transmitter;
   const rx0 = spec.receiver;
+  const posed = (i: number, li: number, ri: number, d: Float64Array, axis: Vec3): number => {
+    const p = spec.tokenPose.position;
+    return evFor(i, li, ri).mutual(txs[i]!.pose, { position: [p[0] + d[6]!, p[1] + d[7]!, p[2] + d[8]!], axis });
+  };
+  // (no closures made per sample: under keepNames each costs a defineProperty)
+  const networkOf = (d: Float64Array): LinkNetwork => {
+    const ri = d[3]!;
+    const rxl = spec.tokenLevels[ri]!;
+    const supply = d[11]!;
+    const L: number[][] = [];
+    for (let i = 0; i <= t; i++) L.push(new Array<number>(t + 1));
+    const transmitters: TransmitterNetwork[] = [];
+    const axis = spec.posed ? tilted(spec.tokenPose.axis, d[9]!, d[10]!) : undefined;
+    for (let i = 0; i < t; i++) {
+      const x = txs[i]!;
+      const li = d[turnsColumn(i)]!;
+      const lv = x.levels[li]!;
+      const tx0 = x.network;
+      const c1 = tx0.capacitance !== undefined ? tx0.capacitance * (1 + d[capacitorColumn(i)]!) : undefined;
+      transmitters.push({
+        ...tx0,
+        resistance: lv.resistance,
+        drive: scaledDrive(tx0.drive, supply),
+        ...(c1 !== undefined ? { capacitance: c1 } : {}),
+        ...(c1 !== undefined && x.dissipation !== undefined ? { capacitorEsr: x.dissipation / (w * c1) } : {}),
+      });
+      L[i]![i] = lv.inductance;
+      const m = axis !== undefined ? posed(i, li, ri, d, axis) : spec.tokenMutual[i]![li * nTok + ri]!;
+      L[i]![t] = m;
+      L[t]![i] = m;
+    }
+    let pair = 0;
+    for (let i = 0; i < t; i++) {
+      for (let j = i + 1; j < t; j++) {
+        const m = spec.pairMutual[pair++]![d[turnsColumn(i)]! * txs[j]!.levels.length + d[turnsColumn(j)]!]!;
+        L[i]![j] = m;
+        L[j]![i] = m;
+      }
+    }
+    L[t]![t] = rxl.inductance;
+    const c2 = rx0.capacitance * (1 + d[0]!);
+    const receiver: ReceiverNetwork = {
+      ...rx0,
+      resistance: rxl.resistance,
+      capacitance: c2,
+      ...(spec.receiverDissipation !== undefined ? { capacitorEsr: spec.receiverDissipation / (w * c2) } : {}),
+      load: loadFor(d[4]!),
+    };
+    let shared: SharedDriveNetwork[] | undefined;
+    if (spec.sharedDrives) {
+      shared = [];
+      for (const sd of spec.sharedDrives) shared.push({ ...sd, drive: scaledDrive(sd.drive, supply) });
+    }
+    return {
+      frequency: spec.frequency,
+      inductance: L,
+      transmitter: transmitters[0]!,
+      ...(spec.listed ? { transmitters } : {}),
+      ...(shared ? { sharedDrives: shared } : {}),
+      receivers: [receiver],
+    };
+  };
+  // the layout (and the nominal part values) checked once; samples change values only
+  validateNetwork(networkOf(nominalDraws(spec)), "toleranceYield");
   return {
+    network: networkOf,
     evaluate(draws: Float64Array): YieldValues {
-      const count = draws.length / DRAWS;
+      const count = draws.length / stride;
       const current = new Float64Array(count);
       const lit = new Uint8Array(count);
       const supply = new Float64Array(count);
       let unconverged = 0;
+      let harmonic = 0;
+      let ws: LinkWorkspace | undefined;
       for (let s = 0; s < count; s++) {
-        const d = draws.subarray(s * DRAWS, (s + 1) * DRAWS);
-        const ti = d[2]!;
-        const ri = d[3]!;
-        const txl = spec.transmitterLevels[ti]!;
-        const rxl = spec.tokenLevels[ri]!;
-        let m: number;
-        if (spec.posed) {
-          const p = spec.tokenPose.position;
-          const [ax, ay, az] = spec.tokenPose.axis;
-          // tilt θ about the horizontal direction at azimuth φ (Rodrigues' rotation of the nominal axis)
-          const th = d[9]!;
-          const ph = d[10]!;
-          const kx = Math.cos(ph);
-          const ky = Math.sin(ph);
-          const c = Math.cos(th);
-          const sn = Math.sin(th);
-          const kdot = kx * ax + ky * ay;
-          const axis: Vec3 = [
-            ax * c + ky * az * sn + kx * kdot * (1 - c),
-            ay * c - kx * az * sn + ky * kdot * (1 - c),
-            az * c + (kx * ay - ky * ax) * sn,
-          ];
-          m = evFor(ti, ri).mutual(spec.txPose, { position: [p[0] + d[6]!, p[1] + d[7]!, p[2] + d[8]!], axis });
-        } else {
-          m = spec.mutualTable[ti * nTok + ri]!;
-        }
-        const c1 = tx0.capacitance !== undefined ? tx0.capacitance * (1 + d[1]!) : undefined;
-        const c2 = rx0.capacitance * (1 + d[0]!);
-        const drive = d[11] === 0 ? tx0.drive : { ...tx0.drive, amplitude: tx0.drive.amplitude * (1 + d[11]!) };
-        const transmitter: TransmitterNetwork = {
-          ...tx0,
-          resistance: txl.resistance,
-          drive,
-          ...(c1 !== undefined ? { capacitance: c1 } : {}),
-          ...(c1 !== undefined && spec.transmitterDissipation !== undefined ? { capacitorEsr: spec.transmitterDissipation / (w * c1) } : {}),
-        };
-        const receiver: ReceiverNetwork = {
-          ...rx0,
-          resistance: rxl.resistance,
-          capacitance: c2,
-          ...(spec.receiverDissipation !== undefined ? { capacitorEsr: spec.receiverDissipation / (w * c2) } : {}),
-          load: loadFor(d[4]!),
-        };
-        const r = solveLinkNetwork(
-          { frequency: spec.frequency, inductance: [[txl.inductance, m], [m, rxl.inductance]], transmitter, receivers: [receiver] },
-          options,
-        );
+        const d = draws.subarray(s * stride, (s + 1) * stride);
+        const net = networkOf(d);
         let cur = Infinity;
-        for (const led of r.receivers[0]!.leds) cur = Math.min(cur, led.averageCurrent);
+        let power: number;
+        let converged: boolean;
+        if (fundamental) {
+          const solved = solveLinkOperatingPoint(net, options, ws);
+          ws = solved.ws;
+          for (const led of net.receivers[0]!.load.ledCurrents!(Math.hypot(ws.vRe[0]!, ws.vIm[0]!))) cur = Math.min(cur, led.current);
+          power = inputPower(ws);
+          converged = solved.converged;
+        } else {
+          const r = solveLinkModel(net, { ...options, model: spec.model });
+          for (const led of r.receivers[0]!.leds) cur = Math.min(cur, led.averageCurrent);
+          power = r.power.input;
+          converged = r.converged;
+          if (r.model === "harmonic") harmonic++;
+        }
         cur = Math.max(0, cur);
         current[s] = cur;
         lit[s] = cur * d[5]! >= spec.litThreshold ? 1 : 0;
-        supply[s] = spec.supplyVoltage !== undefined ? Math.max(0, r.power.input) / (spec.supplyVoltage * (1 + d[11]!)) : 0;
-        if (!r.converged) unconverged++;
+        supply[s] = spec.supplyVoltage !== undefined ? Math.max(0, power) / (spec.supplyVoltage * (1 + d[11]!)) : 0;
+        if (!converged) unconverged++;
       }
-      return { current, lit, supply, unconverged };
+      return { current, lit, supply, unconverged, harmonic };
     },
   };
+}
+
+/** The nominal draws of a spec (no variation): every deviation 0, every winding its nominal variant, brightness 1. */
+export function nominalDraws(spec: YieldSpec): Float64Array {
+  const d = new Float64Array(drawsPerSample(spec.transmitters.length));
+  spec.transmitters.forEach((x, i) => (d[turnsColumn(i)] = (x.levels.length - 1) / 2));
+  d[3] = (spec.tokenLevels.length - 1) / 2;
+  d[5] = 1;
+  return d;
 }

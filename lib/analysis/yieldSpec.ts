@@ -12,12 +12,15 @@ import { couplingEvaluator } from "../em/couplingEvaluator.ts";
 import { selfInductance } from "../em/selfInductance.ts";
 import { coilResistance } from "../em/losses/coilResistance.ts";
 import { linkNetwork, type LinkSystem } from "../circuit/link.ts";
-import { LinkSystemInput, soleTransmitter } from "../circuit/link/schema.ts";
-import { DEFAULT_LIT_THRESHOLD } from "../circuit/link/network.ts";
+import { LinkSystemInput, systemTransmitters } from "../circuit/link/schema.ts";
+import { DEFAULT_LIT_THRESHOLD, networkTransmitters } from "../circuit/link/network.ts";
+import type { LinkModel } from "../circuit/harmonic/modelChoice.ts";
 import { encodeLoad, isTokenLoad, type LoadData } from "./loadCodec.ts";
 import { supplyVoltageOf } from "./supplyBudget.ts";
 import { PROBE_MUTUAL_RTOL } from "./probe.ts";
-import { DRAWS, DRAW_NAMES, type WindingLevel, type YieldSpec } from "./yieldModel.ts";
+import { DRAW_NAMES, capacitorColumn, drawsPerSample, turnsColumn, type WindingLevel, type YieldSpec } from "./yieldModel.ts";
+
+const ORIGIN: Pose = { position: [0, 0, 0] };
 
 const distribution = lazySchema(() => z.enum(["uniform", "normal"]));
 /** A spread: ±tolerance (a number or quantity), uniform by default ("normal": tolerance = 3σ, truncated there). */
@@ -28,8 +31,11 @@ function spread(dim: "dimensionless" | "voltage" | "length" | "angle") {
 const winding = lazySchema(() => z.strictObject({
   /** ± turns, integer; every count in between equally likely */
   spread: z.number().int().min(0).max(50),
-  /** builds the coil with a given number of turns (the nominal coil's own builder and spec) */
-  build: z.custom<(turns: number) => Coil>((f) => typeof f === "function", { message: "expected a function turns → Coil" }),
+  /**
+   * builds the coil with a given number of turns (the nominal coil's own builder and spec); for
+   * the transmitters of an array it also gets the transmitter's index (−1 for the token)
+   */
+  build: z.custom<(turns: number, transmitter: number) => Coil>((f) => typeof f === "function", { message: "expected a function turns → Coil" }),
 }));
 
 /** The variations of a batch (all optional; relative tolerances as fractions, e.g. 0.05 for ±5 %). */
@@ -79,8 +85,8 @@ const asSpread = (s: number | { tolerance: number; distribution?: "uniform" | "n
 /** The parsed variations, each a spread or undefined, plus the winding builders. */
 export interface ParsedVariations {
   readonly spreads: Readonly<Record<(typeof DRAW_NAMES)[number], Spread>>;
-  readonly tokenTurns?: { spread: number; build: (turns: number) => Coil };
-  readonly transmitterTurns?: { spread: number; build: (turns: number) => Coil };
+  readonly tokenTurns?: Winding;
+  readonly transmitterTurns?: Winding;
 }
 
 /** Options of the spec build. */
@@ -89,16 +95,22 @@ export interface YieldSpecOptions {
   readonly litThreshold?: number;
   /** forward-voltage grid of the load tables, V (default 20 mV) */
   readonly vfStep?: number;
+  /** steady-state model, as solveLink's (default "fundamental") */
+  readonly model?: LinkModel;
 }
 
+type Winding = { spread: number; build: (turns: number, transmitter: number) => Coil };
+
 /**
- * Parses the variations and builds the yield model's spec for the system's token.
- * @returns the spec, the parsed variations and the list of active variation names.
+ * Parses the variations and builds the yield model's spec for the system's token: every
+ * transmitter with its own winding variants (and the M between each pair of variants), the
+ * token's, and the M of every transmitter variant with every token variant at the nominal pose.
+ * @returns the spec, the parsed variations and the list of active variations with their draw columns.
  */
-export function yieldSpec(system: LinkSystem, variations: VariationsInput, options: YieldSpecOptions, where: string): { spec: YieldSpec; parsed: ParsedVariations; active: string[] } {
+export function yieldSpec(system: LinkSystem, variations: VariationsInput, options: YieldSpecOptions, where: string): { spec: YieldSpec; parsed: ParsedVariations; active: ActiveVariation[] } {
   const v = parseInput(VariationsInput, variations, where);
   const sys = parseInput(LinkSystemInput, system, where);
-  const tx = soleTransmitter(sys, where);
+  const txs = systemTransmitters(sys);
   const k = options.token ?? 0;
   const rx = sys.receivers[k];
   if (rx === undefined) {
@@ -106,6 +118,13 @@ export function yieldSpec(system: LinkSystem, variations: VariationsInput, optio
   }
   if (!isTokenLoad(rx.load)) {
     throw new TanklightInputError([{ path: `receivers[${k}].load`, message: "toleranceYield needs the load as a TokenLoad ({ kind: 'led', led }, …) so its LED can be varied", value: "a load model" }], where);
+  }
+  const array = txs.length > 1 || sys.sharedDrives !== undefined;
+  if (array && options.model === "harmonic") {
+    throw new TanklightInputError(
+      [{ path: "model", message: "harmonic balance solves one transmitter on its own drive; run an array (or a shared drive) with 'fundamental' or 'auto' (which then keeps the describing function, as solveLink does)", value: options.model }],
+      where,
+    );
   }
   const load: LoadData = encodeLoad(rx.load);
   const colour = ledColour(load);
@@ -133,10 +152,16 @@ export function yieldSpec(system: LinkSystem, variations: VariationsInput, optio
   const single = { ...(system as object), receivers: [(system as { receivers: readonly unknown[] }).receivers[k]] } as LinkSystem;
   const net = linkNetwork(single).network;
   const f = net.frequency;
-  const w = 2 * Math.PI * f;
+  const t = txs.length;
   const temperature = sys.temperature !== undefined ? { temperature: sys.temperature } : {};
-  const levels = (coil: Coil, nominalL: number, nominalR: number, wv: { spread: number; build: (turns: number) => Coil } | undefined, field: string): WindingLevel[] => {
+  // winding variants: a coil's own L and R from its rebuilt coil; an override of the nominal
+  // resistance carries over as the same ratio to the model's value. Transmitters with one coil
+  // object share their variants.
+  const built = new Map<Coil, WindingLevel[]>();
+  const levels = (coil: Coil, nominalL: number, nominalR: number, wv: Winding | undefined, field: string, index: number): WindingLevel[] => {
     if (!wv || wv.spread === 0) return [{ turns: coil.turns, coil, inductance: nominalL, resistance: nominalR }];
+    const known = built.get(coil);
+    if (known && known[wv.spread]!.inductance === nominalL && known[wv.spread]!.resistance === nominalR) return known;
     const r0 = coilResistance(coil, f, temperature);
     const out: WindingLevel[] = [];
     for (let dt = -wv.spread; dt <= wv.spread; dt++) {
@@ -146,52 +171,93 @@ export function yieldSpec(system: LinkSystem, variations: VariationsInput, optio
         out.push({ turns, coil, inductance: nominalL, resistance: nominalR });
         continue;
       }
-      const c = wv.build(turns);
-      // an override of the nominal resistance carries over as the same ratio to the model's value
+      const c = wv.build(turns, index);
       out.push({ turns, coil: c, inductance: selfInductance(c, { frequency: f }), resistance: (nominalR / r0) * coilResistance(c, f, temperature) });
     }
+    built.set(coil, out);
     return out;
   };
-  const txLevels = levels(tx.coil, net.inductance[0]![0]!, net.transmitter.resistance, v.transmitterTurns, "transmitterTurns");
-  const tokLevels = levels(rx.coil, net.inductance[1]![1]!, net.receivers[0]!.resistance, v.tokenTurns, "tokenTurns");
-  const txPose = (tx.pose as Pose | undefined) ?? { position: [0, 0, 0] };
+  const txNets = networkTransmitters(net);
+  const txLevels = txs.map((tx, i) => levels(tx.coil, net.inductance[i]![i]!, txNets[i]!.resistance, v.transmitterTurns, "transmitterTurns", i));
+  const tokLevels = levels(rx.coil, net.inductance[t]![t]!, net.receivers[0]!.resistance, v.tokenTurns, "tokenTurns", -1);
+  const txPoses = txs.map((tx) => (tx.pose as Pose | undefined) ?? ORIGIN);
   const tokenPose = { position: rx.pose.position as Vec3, axis: ((rx.pose as Pose).axis ?? [0, 0, 1]) as Vec3 };
   const posed = [spreads.placementX, spreads.height, spreads.tilt].some((s) => s !== undefined && s.tolerance > 0);
-  const mutualTable: number[] = [];
-  txLevels.forEach((a, i) =>
-    tokLevels.forEach((b, j) => {
-      const nominal = i === (txLevels.length - 1) / 2 && j === (tokLevels.length - 1) / 2;
-      mutualTable.push(nominal && !posed ? net.inductance[0]![1]! : couplingEvaluator(a.coil, b.coil, { relTol: PROBE_MUTUAL_RTOL }).mutual(txPose, rx.pose as Pose));
-    }),
-  );
+  const middle = (n: number): number => (n - 1) / 2;
+  const mutual = (a: WindingLevel, pa: Pose, b: WindingLevel, pb: Pose): number => couplingEvaluator(a.coil, b.coil, { relTol: PROBE_MUTUAL_RTOL }).mutual(pa, pb);
+  // transmitter pairs i < j: M for every pair of their variants (the nominal pair: the link's own)
+  const pairMutual: number[][] = [];
+  for (let i = 0; i < t; i++) {
+    for (let j = i + 1; j < t; j++) {
+      const table: number[] = [];
+      txLevels[i]!.forEach((a, ai) =>
+        txLevels[j]!.forEach((b, bj) => {
+          table.push(ai === middle(txLevels[i]!.length) && bj === middle(txLevels[j]!.length) ? net.inductance[i]![j]! : mutual(a, txPoses[i]!, b, txPoses[j]!));
+        }),
+      );
+      pairMutual.push(table);
+    }
+  }
+  // each transmitter's variants with the token's at the nominal pose
+  const tokenMutual = txLevels.map((lv, i) => {
+    const table: number[] = [];
+    lv.forEach((a, ai) =>
+      tokLevels.forEach((b, bj) => {
+        const nominal = ai === middle(lv.length) && bj === middle(tokLevels.length);
+        table.push(nominal && !posed ? net.inductance[i]![t]! : mutual(a, txPoses[i]!, b, rx.pose as Pose));
+      }),
+    );
+    return table;
+  });
   const { load: _l, ...receiver } = net.receivers[0]!;
-  const supplyVoltage = supplyVoltageOf(tx.drive);
+  // one DC supply voltage over every drive in use (else none: no supply current)
+  const driveSpecs = [...txs.flatMap((x) => (typeof x.drive === "string" ? [] : [x.drive])), ...(sys.sharedDrives ?? []).filter((d) => txs.some((x) => x.drive === d.name)).map((d) => d.drive)];
+  const volts = driveSpecs.map(supplyVoltageOf);
+  const supplyVoltage = volts.length > 0 && volts.every((x) => x !== undefined && x === volts[0]) ? volts[0] : undefined;
   const dissipation = (c: { esr?: number | undefined; dissipationFactor?: number | undefined } | undefined): number | undefined =>
     c && c.esr === undefined && c.dissipationFactor !== undefined ? c.dissipationFactor : undefined;
-  const txD = dissipation(tx.capacitor);
   const rxD = dissipation(rx.capacitor);
-  void w;
   const spec: YieldSpec = {
     frequency: f,
-    transmitter: net.transmitter,
-    ...(txD !== undefined ? { transmitterDissipation: txD } : {}),
+    transmitters: txs.map((tx, i) => {
+      const d = dissipation(tx.capacitor);
+      return { network: txNets[i]!, ...(d !== undefined ? { dissipation: d } : {}), levels: txLevels[i]!, pose: txPoses[i]! };
+    }),
+    ...(net.transmitters !== undefined ? { listed: true } : {}),
+    ...(net.sharedDrives !== undefined ? { sharedDrives: net.sharedDrives } : {}),
+    pairMutual,
     receiver,
     ...(rxD !== undefined ? { receiverDissipation: rxD } : {}),
     load,
-    transmitterLevels: txLevels,
     tokenLevels: tokLevels,
-    txPose,
     tokenPose,
-    mutualTable,
+    tokenMutual,
     posed,
     vfStep: options.vfStep ?? 0.02,
     litThreshold: options.litThreshold ?? DEFAULT_LIT_THRESHOLD,
     ...(supplyVoltage !== undefined ? { supplyVoltage } : {}),
     table: { maxAmplitude: 8, step: 5e-3 },
+    // several transmitters: the describing function, as solveLink ("auto" keeps it there)
+    model: array ? "fundamental" : (options.model ?? "fundamental"),
   };
-  const active = DRAW_NAMES.filter((n) => spreads[n] !== undefined && spreads[n]!.tolerance > 0 && n !== "placementY") as string[];
-  if (txLevels.length > 1) active.push("transmitterTurns");
-  if (tokLevels.length > 1) active.push("tokenTurns");
+  const active: ActiveVariation[] = [];
+  const column = (name: (typeof DRAW_NAMES)[number]): number => DRAW_NAMES.indexOf(name);
+  const on = (s: Spread): boolean => s !== undefined && s.tolerance > 0;
+  if (on(spreads.tokenCapacitor)) active.push({ variation: "tokenCapacitor", columns: [column("tokenCapacitor")] });
+  if (on(spreads.transmitterCapacitor)) {
+    txs.forEach((tx, i) => {
+      if (tx.compensation !== "none") active.push({ variation: t === 1 ? "transmitterCapacitor" : `transmitterCapacitor[${i}]`, columns: [capacitorColumn(i)] });
+    });
+  }
+  for (const name of ["ledForwardVoltage", "ledBrightness"] as const) if (on(spreads[name])) active.push({ variation: name, columns: [column(name)] });
+  if (on(spreads.placementX)) active.push({ variation: "placement", columns: [column("placementX"), column("placementY")] });
+  if (on(spreads.height)) active.push({ variation: "height", columns: [column("height")] });
+  if (on(spreads.tilt)) active.push({ variation: "tilt", columns: [column("tilt"), column("tiltAzimuth")] });
+  if (on(spreads.supply)) active.push({ variation: "supply", columns: [column("supply")] });
+  txLevels.forEach((lv, i) => {
+    if (lv.length > 1) active.push({ variation: t === 1 ? "transmitterTurns" : `transmitterTurns[${i}]`, columns: [turnsColumn(i)] });
+  });
+  if (tokLevels.length > 1) active.push({ variation: "tokenTurns", columns: [column("tokenTurns")] });
   return {
     spec,
     parsed: {
@@ -201,6 +267,12 @@ export function yieldSpec(system: LinkSystem, variations: VariationsInput, optio
     },
     active,
   };
+}
+
+/** An active variation: its name in results and the draw columns it owns (the first is ranked). */
+export interface ActiveVariation {
+  readonly variation: string;
+  readonly columns: readonly number[];
 }
 
 function ledColour(load: LoadData): string | undefined {
@@ -218,14 +290,16 @@ function ledColour(load: LoadData): string | undefined {
 }
 
 /**
- * A drawer of samples: `next(count)` returns the draws of the next `count` samples — every
- * dimension drawn for every sample in a fixed order from one xoshiro128** stream
+ * A drawer of samples: `next(count)` returns the draws of the next `count` samples
+ * (drawsPerSample(transmitters) each) — every dimension drawn for every sample in a fixed order
+ * from one xoshiro128** stream
  * (lib/math/random.ts), so a sample's draws do not depend on how the batch is split.
  */
 export function sampleDrawer(spec: YieldSpec, parsed: ParsedVariations, seed: number): (count: number) => Float64Array {
   const rng = createRandom(seed);
-  const nTx = spec.transmitterLevels.length;
   const nTok = spec.tokenLevels.length;
+  const t = spec.transmitters.length;
+  const stride = drawsPerSample(t);
   const deviate = (s: Spread): number => {
     // always consume the same stream: one uniform for a uniform spread, a normal draw otherwise
     if (s === undefined) {
@@ -238,15 +312,16 @@ export function sampleDrawer(spec: YieldSpec, parsed: ParsedVariations, seed: nu
       if (Math.abs(x) <= s.tolerance) return x;
     }
   };
+  const level = (n: number): number => Math.min(n - 1, Math.floor(rng.uniform() * n));
   const sp = parsed.spreads;
   return (count: number): Float64Array => {
-    const out = new Float64Array(count * DRAWS);
+    const out = new Float64Array(count * stride);
     for (let i = 0; i < count; i++) {
-      const d = out.subarray(i * DRAWS, (i + 1) * DRAWS);
+      const d = out.subarray(i * stride, (i + 1) * stride);
       d[0] = deviate(sp.tokenCapacitor);
       d[1] = deviate(sp.transmitterCapacitor);
-      d[2] = Math.min(nTx - 1, Math.floor(rng.uniform() * nTx));
-      d[3] = Math.min(nTok - 1, Math.floor(rng.uniform() * nTok));
+      d[2] = level(spec.transmitters[0]!.levels.length);
+      d[3] = level(nTok);
       d[4] = deviate(sp.ledForwardVoltage);
       d[5] = 1 + deviate(sp.ledBrightness);
       d[6] = deviate(sp.placementX);
@@ -255,16 +330,12 @@ export function sampleDrawer(spec: YieldSpec, parsed: ParsedVariations, seed: nu
       d[9] = deviate(sp.tilt);
       d[10] = 2 * Math.PI * rng.uniform();
       d[11] = deviate(sp.supply);
+      // further transmitters: their own capacitor and winding (after the first's, so one transmitter draws as before)
+      for (let x = 1; x < t; x++) {
+        d[capacitorColumn(x)] = deviate(sp.transmitterCapacitor);
+        d[turnsColumn(x)] = level(spec.transmitters[x]!.levels.length);
+      }
     }
     return out;
   };
-}
-
-/** The nominal value of each draw (what a sample without that variation has). */
-export function nominalDraws(spec: YieldSpec): Float64Array {
-  const d = new Float64Array(DRAWS);
-  d[2] = (spec.transmitterLevels.length - 1) / 2;
-  d[3] = (spec.tokenLevels.length - 1) / 2;
-  d[5] = 1;
-  return d;
 }

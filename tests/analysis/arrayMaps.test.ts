@@ -103,8 +103,8 @@ describe("coverageMap and findRange over several transmitters", () => {
     expect(ledAt([0.045, 0, 0.005 + r.range + 4e-4])).toBeLessThan(r.litThreshold);
   });
 
-  it("refuses harmonic balance over several transmitters, and toleranceYield still handles one transmitter only", async () => {
+  it("refuses harmonic balance over several transmitters (coverageMap and toleranceYield)", async () => {
     await expect(coverageMap(pair(), { x: { from: 0, to: 0.01, points: 2 }, y: 0, z: Z }, { model: "harmonic" })).rejects.toThrow(/harmonic balance solves one transmitter/);
-    await expect(toleranceYield(pair([0.02, 0, Z]), {}, { samples: 10, seed: 1 })).rejects.toThrow(TanklightInputError);
+    await expect(toleranceYield(pair([0.02, 0, Z]), {}, { samples: 10, seed: 1, model: "harmonic" })).rejects.toThrow(TanklightInputError);
   });
 });

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { roundCoil, solveLink, taskPool, toleranceYield, TanklightInputError, type TaskPool } from "../../lib/mod.ts";
+import { ledPreset, roundCoil, solveLink, taskPool, toleranceYield, TanklightInputError, type LinkSystem, type TaskPool } from "../../lib/mod.ts";
 import { expectOutside } from "../helpers/validation.ts";
 import { drawer } from "./fixtures.ts";
 
@@ -73,5 +73,47 @@ describe("toleranceYield", () => {
   it("rejects bad input naming the field", async () => {
     await expect(toleranceYield(sys, { tokenCapacitor: -0.1 })).rejects.toThrow(TanklightInputError);
     await expect(toleranceYield(sys, {}, { samples: 3 })).rejects.toThrowErrorMatchingInlineSnapshot(`[TanklightInputError: toleranceYield: samples: must be an integer ≥ 10, got 3]`);
+  });
+});
+
+describe("toleranceYield with a steady-state model", () => {
+  // a red + InGaN green pair back to back (demo token): the describing function leaves the green
+  // LED dark at a drive where harmonic balance lights it (issue 14, docs/validation-transient.md)
+  const bicolour = (position: readonly [number, number, number]): LinkSystem => {
+    const s = drawer({ position }) as { receivers: readonly Record<string, unknown>[] } & LinkSystem;
+    return { ...s, receivers: [{ ...s.receivers[0]!, load: { kind: "antiParallel", a: ledPreset("red"), b: ledPreset("green-ingan") } }] } as LinkSystem;
+  };
+  const dimmest = (s: LinkSystem, model: "fundamental" | "auto"): number => Math.max(0, Math.min(...solveLink(s, { model }).receivers[0]!.leds.map((l) => l.averageCurrent)));
+
+  it("model 'auto' follows solveLink({ model: 'auto' }) sample by sample; the describing function calls the batch dark", async () => {
+    const sys = bicolour([0, 0, 0.02]);
+    // harmonic balance gives the green LED ≈ 0.17 mA here (the red ≈ 1.4 mA): lit at a 0.1 mA threshold
+    const litThreshold = 1e-4;
+    const auto = await toleranceYield(sys, { tokenCapacitor: 0 }, { samples: 10, seed: 1, model: "auto", litThreshold });
+    // the same network solved by the same model choice; harmonic balance converges from another
+    // start (a tabulated against an exact describing function) to the same point: measured within 1e-12
+    expectOutside({ quantity: "bi-colour token, dimmest LED (auto)", source: "independent method: solveLink(system, { model: 'auto' })", ours: auto.nominal.ledCurrent, reference: dimmest(sys, "auto"), rtol: 1e-9, unit: "A" });
+    expect(auto.model).toEqual({ requested: "auto", fundamentalSamples: 0, harmonicSamples: 10 });
+    expect(auto.litFraction).toBe(1);
+    const fundamental = await toleranceYield(sys, { tokenCapacitor: 0 }, { samples: 10, seed: 1, litThreshold });
+    expect(fundamental.litFraction).toBe(0); // the green LED at nanoamperes
+    expect(fundamental.nominal.ledCurrent).toBeLessThan(1e-3 * auto.nominal.ledCurrent);
+    expect(fundamental.model.requested).toBe("fundamental");
+    expect(fundamental.warnings.some((w) => w.startsWith("at the nominal design: describing function"))).toBe(true);
+  });
+
+  it("varied samples under model 'harmonic' lie between solveLink's at the capacitor's tolerance limits", async () => {
+    const sys = bicolour([0, 0, 0.02]);
+    const y = await toleranceYield(sys, { tokenCapacitor: 0.05 }, { samples: 10, seed: 4, model: "harmonic" });
+    expect(y.model.harmonicSamples).toBe(10);
+    // the extremes of the batch: capacitor −5 % and +5 % bracket every sample's current
+    const at = (dc: number): number => {
+      const s = sys as { receivers: readonly Record<string, unknown>[] } & LinkSystem;
+      return dimmest({ ...s, receivers: [{ ...s.receivers[0]!, capacitor: { capacitance: 2.2e-9 * (1 + dc), dissipationFactor: 1e-3 } }] } as LinkSystem, "auto");
+    };
+    const [lo, hi] = [at(-0.05), at(0.05)].sort((a, b) => a - b) as [number, number];
+    expect(y.ledCurrent.min).toBeGreaterThanOrEqual(lo * (1 - 1e-6));
+    expect(y.ledCurrent.max).toBeLessThanOrEqual(hi * (1 + 1e-6));
+    await expect(toleranceYield(sys, {}, { samples: 10, model: "exact" as never })).rejects.toThrow(/model/);
   });
 });
