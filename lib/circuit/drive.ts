@@ -25,10 +25,27 @@ import { TanklightInputError } from "../errors.ts";
 import { current, frequency, inductance, parseArgs, parseInput, power, resistance, voltage, lazySchema } from "../schema.ts";
 import type { QuantityInput } from "../units.ts";
 
-// Argument schemas: SI numbers or quantity strings ("12 V", "0.1 ohm"); messages name the argument.
-const SineArgs = lazySchema(() => z.strictObject({ amplitude: voltage({ nonNegative: true }), outputResistance: resistance().optional() }));
-const SupplyArgs = lazySchema(() => z.strictObject({ supply: voltage({ positive: true }), onResistance: resistance().optional() }));
-const CurrentArgs = lazySchema(() => z.strictObject({ amplitude: current({ nonNegative: true }) }));
+/**
+ * The fields of each kind of drive, defined once (SI numbers or quantity strings, "12 V",
+ * "0.1 ohm"): the drive functions' arguments below (sineDrive(amplitude, outputResistance),
+ * halfBridgeDrive(supply, onResistance), …) and the link's drive specs (`DriveInput`,
+ * lib/circuit/link/schema.ts) are made of them. `classE` is the link spec's (classEDesign sizes it).
+ */
+export const DRIVE_FIELDS = lazySchema(() => {
+  const supply = voltage({ positive: true });
+  const onResistance = resistance().optional();
+  return {
+    sine: { amplitude: voltage({ nonNegative: true }), outputResistance: resistance().optional() },
+    switched: { supply, onResistance },
+    current: { amplitude: current({ nonNegative: true }) },
+    classE: { supply, power: power({ positive: true }), onResistance },
+  };
+});
+
+// Argument schemas: messages name the argument.
+const SineArgs = lazySchema(() => z.strictObject(DRIVE_FIELDS.sine));
+const SupplyArgs = lazySchema(() => z.strictObject(DRIVE_FIELDS.switched));
+const CurrentArgs = lazySchema(() => z.strictObject(DRIVE_FIELDS.current));
 
 /** Equivalent fundamental source of a drive, as the link solver sees it (SI, peak). */
 export type DriveEquivalent =

@@ -3,10 +3,10 @@
  * loads. Quantities accept SI numbers or strings with units ("200 kHz", "2.2 nF", "5 V").
  */
 import { z } from "zod";
-import { angle, capacitance, current, frequency, power, quantity, resistance, temperature, unitVector, vec3, voltage, lazySchema } from "../../schema.ts";
+import { angle, capacitance, frequency, quantity, resistance, temperature, unitVector, vec3, voltage, lazySchema } from "../../schema.ts";
 import type { Coil } from "../../em/types.ts";
 import { TanklightInputError } from "../../errors.ts";
-import type { DriveEquivalent } from "../drive.ts";
+import { DRIVE_FIELDS, type DriveEquivalent } from "../drive.ts";
 import type { TokenLoad } from "../loads/types.ts";
 import type { LinkLoadModel } from "./network.ts";
 
@@ -38,14 +38,14 @@ export const CapacitorInput = lazySchema(() => z.strictObject({
   rating: voltage({ positive: true }).optional(),
 }));
 
-/** Drive specs with units; or pass a ready DriveEquivalent (sineDrive(…), classEDrive(…), …). */
+/** Drive specs with units (the fields of DRIVE_FIELDS, lib/circuit/drive.ts); or pass a ready DriveEquivalent (sineDrive(…), classEDrive(…), …). */
 export const DriveInput = lazySchema(() => z.union([
-  z.strictObject({ kind: z.literal("sine"), amplitude: voltage({ nonNegative: true }), outputResistance: resistance().optional() }),
-  z.strictObject({ kind: z.literal("halfBridge"), supply: voltage({ positive: true }), onResistance: resistance().optional() }),
-  z.strictObject({ kind: z.literal("fullBridge"), supply: voltage({ positive: true }), onResistance: resistance().optional() }),
-  z.strictObject({ kind: z.literal("currentRegulated"), amplitude: current({ nonNegative: true }) }),
-  z.strictObject({ kind: z.literal("parallelTank"), supply: voltage({ positive: true }), onResistance: resistance().optional() }),
-  z.strictObject({ kind: z.literal("classE"), supply: voltage({ positive: true }), power: power({ positive: true }), onResistance: resistance().optional() }),
+  z.strictObject({ kind: z.literal("sine"), ...DRIVE_FIELDS.sine }),
+  z.strictObject({ kind: z.literal("halfBridge"), ...DRIVE_FIELDS.switched }),
+  z.strictObject({ kind: z.literal("fullBridge"), ...DRIVE_FIELDS.switched }),
+  z.strictObject({ kind: z.literal("currentRegulated"), ...DRIVE_FIELDS.current }),
+  z.strictObject({ kind: z.literal("parallelTank"), ...DRIVE_FIELDS.switched }),
+  z.strictObject({ kind: z.literal("classE"), ...DRIVE_FIELDS.classE }),
   z.custom<DriveEquivalent>(
     (d) =>
       typeof d === "object" &&

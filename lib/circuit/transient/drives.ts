@@ -74,6 +74,22 @@ export type SingleSwitchDriveSpec = z.input<typeof SingleSwitchDriveSpec>;
 /** The fields every drive circuit shares, parsed (SI), with the defaults applied. */
 type TransmitterFields = Pick<z.output<typeof SingleSwitchDriveSpec>, "supply" | "frequency" | "coilInductance" | "tankCapacitance" | "coilResistance" | "loadResistance" | "onResistance" | "offResistance">;
 
+/**
+ * The transmitter coil "Ltx" (L, H; its resistance R, Ω) from node "coilTop" to `end`, through
+ * the extra load resistance "Rload" (rLoad, Ω; node "load") when there is one.
+ */
+function pushCoilBranch(elements: CircuitElement[], nodes: Record<string, string>, end: string, L: number, R: number, rLoad: number): void {
+  if (rLoad > 0) {
+    elements.push(
+      { kind: "inductor", name: "Ltx", a: "coilTop", b: "load", inductance: L, resistance: R },
+      { kind: "resistor", name: "Rload", a: "load", b: end, resistance: rLoad },
+    );
+    nodes.load = "load";
+  } else {
+    elements.push({ kind: "inductor", name: "Ltx", a: "coilTop", b: end, inductance: L, resistance: R });
+  }
+}
+
 /** The shared values with their defaults; the switch's off-resistance must exceed its on-resistance (else it never opens). */
 function transmitterValues(spec: TransmitterFields, where: string) {
   const ron = spec.onResistance ?? DEFAULT_ON_RESISTANCE;
@@ -124,15 +140,7 @@ export function singleSwitchDrive(input: SingleSwitchDriveSpec): DriveCircuit {
       sw,
       { kind: "capacitor", name: "Cseries", a: "switch", b: "coilTop", capacitance: C },
     );
-    if (rLoad > 0) {
-      elements.push(
-        { kind: "inductor", name: "Ltx", a: "coilTop", b: "load", inductance: L, resistance: R },
-        { kind: "resistor", name: "Rload", a: "load", b: GROUND, resistance: rLoad },
-      );
-      nodes.load = "load";
-    } else {
-      elements.push({ kind: "inductor", name: "Ltx", a: "coilTop", b: GROUND, inductance: L, resistance: R });
-    }
+    pushCoilBranch(elements, nodes, GROUND, L, R, rLoad);
     if (R + rLoad === 0) warnings.push("singleSwitchDrive: the class-E coil branch has no resistance; the drive will not settle");
     nodes.coilTop = "coilTop";
   } else {
@@ -196,14 +204,6 @@ export function bridgeDrive(input: BridgeDriveSpec): DriveCircuit {
     );
     nodes.midB = "midB";
   }
-  if (rLoad > 0) {
-    elements.push(
-      { kind: "inductor", name: "Ltx", a: "coilTop", b: "load", inductance: L, resistance: R },
-      { kind: "resistor", name: "Rload", a: "load", b: end, resistance: rLoad },
-    );
-    nodes.load = "load";
-  } else {
-    elements.push({ kind: "inductor", name: "Ltx", a: "coilTop", b: end, inductance: L, resistance: R });
-  }
+  pushCoilBranch(elements, nodes, end, L, R, rLoad);
   return { circuit: { elements }, frequency: f, coil: "Ltx", nodes, warnings: [] };
 }
