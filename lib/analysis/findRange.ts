@@ -122,6 +122,16 @@ export function findRange(system: LinkSystem, direction: RayInput, options: Rang
   return validity.length > 0 ? { ...r, warnings: [...r.warnings, ...validity] } : r;
 }
 
+/** Where a coupling M(s) changes sign between lo and hi (`negativeAtLo`: M(lo) < 0), by bisection on M alone to `tol`, m. */
+function signChange(mutualAt: (s: number) => number, lo: number, hi: number, negativeAtLo: boolean, tol: number): number {
+  while (hi - lo > tol) {
+    const m = 0.5 * (lo + hi);
+    if (mutualAt(m) < 0 === negativeAtLo) lo = m;
+    else hi = m;
+  }
+  return 0.5 * (lo + hi);
+}
+
 /** findRange's bracketing and bisection with a ready probe (also used by searchDesign). */
 export function rangeWith(probe: Probe, from: Vec3, along: Vec3, max: number, step: number, resolution: number): RangeResult {
   const th = probe.spec.litThreshold;
@@ -172,15 +182,7 @@ export function rangeWith(probe: Probe, from: Vec3, along: Vec3, max: number, st
       // both lit: a sign change of M between them hides a dark line
       const k = cur.mutual.findIndex((m, j) => m < 0 !== prev.mutual[j]! < 0);
       if (k >= 0) {
-        let lo = prev.s;
-        let hi = cur.s;
-        const mLo = prev.mutual[k]!;
-        while (hi - lo > resolution / 4) {
-          const m = 0.5 * (lo + hi);
-          if (mutualOnly(m, k) < 0 === mLo < 0) lo = m;
-          else hi = m;
-        }
-        const zero = 0.5 * (lo + hi);
+        const zero = signChange((m) => mutualOnly(m, k), prev.s, cur.s, prev.mutual[k]! < 0, resolution / 4);
         const atZero = solve(zero);
         if (atZero.current < th) {
           const e1 = bisect(prev.s, zero, true);

@@ -63,6 +63,8 @@ export function ringSegmentsIntegral(
   cx: number, cy: number, cz: number, nx: number, ny: number, nz: number, r: number,
   relTol: number, absTol: number, out: RingResult, maxNodes = RING_MAX_NODES,
 ): RingResult {
+  // One function on purpose (≈ 100 lines): a hot kernel writing into `out` without allocation; the near/far split
+  // of the segments and the level doubling share the node loop and its running sums.
   // in-plane orthonormal u, v = n × u
   let ux: number, uy: number, uz: number;
   if (Math.abs(nx) < 0.9) { ux = 1 - nx * nx; uy = -nx * ny; uz = -nx * nz; } else { ux = -ny * nx; uy = 1 - ny * ny; uz = -ny * nz; }

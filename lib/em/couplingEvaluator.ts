@@ -247,6 +247,8 @@ function checkCoil(c: Coil, field: string): void {
  * @see mutualInductance (one pose, exact), couplingFactor
  */
 export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluatorOptions = {}): CouplingEvaluator {
+  // One function on purpose (≈ 300 lines): a factory whose closures share the coils' lump levels, Gauss tables and per-pose scratch
+  // (levels A–C below); split into modules they would pass a dozen arrays on every pose of a coverage map.
   checkCoil(tx, "tx");
   checkCoil(rx, "rx");
   const relTol = options.relTol ?? 1e-3;
@@ -391,6 +393,7 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
   };
 
   const mutual = (poseTx: Pose, poseRx: Pose): number => {
+    // one piece on purpose: the per-pose choice among levels A, B and C, cheapest first, reads in order
     const fTx = frameOf(poseTx, "poseTx");
     const fRx = frameOf(poseRx, "poseRx");
     if (!fast) {

@@ -113,6 +113,8 @@ export function circleMutualCore(
   cbx: number, cby: number, cbz: number, nbx: number, nby: number, nbz: number, rb: number,
   tol: number, stats: CircleMutualStats,
 ): number {
+  // One function on purpose (≈ 110 lines): the hot kernel of every inclined-circle pair, on flat scalar arguments with no
+  // allocation; each level of the nested trapezoid updates the same running sums, error and closest-approach bound.
   // in-plane orthonormal basis (u_b, v_b) of b: u_b ⟂ n_b, v_b = n_b × u_b
   let ux: number, uy: number, uz: number;
   if (Math.abs(nbx) < 0.9) {

@@ -91,6 +91,8 @@ function segmentDistance2(a: Float64Array, i: number, b: Float64Array, j: number
  *   absolute floor, H (undefined: 1e-2·relTol·|M| with the receiver at the transmitter's centre).
  */
 export function polygonCoupling(tx: Coil, rx: Coil, relTol: number, absTol: number | undefined): PolygonCoupling | undefined {
+  // One function on purpose (≈ 140 lines): a factory whose closures share the carried segments, the lump tables and the
+  // scratch of every pose, as couplingEvaluator's do.
   const txPaths = tx.filaments.every(isPath);
   const rxPaths = rx.filaments.every(isPath);
   const rot = new Float64Array(9), off = new Float64Array(3);

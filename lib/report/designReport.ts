@@ -112,6 +112,8 @@ function edge(lit: (s: number) => boolean, lo: number, hi: number, resolution = 
  * @example designReport(parseDesignText(readFileSync("casebook/designs/through-the-books.json", "utf8"))).notebook // the same report as the through-the-books scenario
  */
 export function designReport(design: Design, options: { readonly log?: (line: string) => void } = {}): { notebook: Notebook; results: DesignResults } {
+  // One function on purpose (≈ 200 lines): a notebook written top to bottom like the casebook scenarios — each section is a
+  // few lines of calls and reads in the order of the report.
   const nb = notebook(design.title, { subtitle: design.question, note: design.dataNote, log: options.log });
   for (const p of design.story ?? []) nb.text(p);
   const threshold = design.litThreshold ?? DEFAULT_LIT_THRESHOLD;

@@ -10,7 +10,7 @@ import { TanklightInputError } from "../errors.ts";
 import { MU0 } from "../constants.ts";
 import type { Pose, Vec3 } from "../em/types.ts";
 import { parseSafetyDesign, type SafetyDesign, type SafetyDesignParsed } from "./design.ts";
-import { fieldPhasors, type FieldSource } from "./fieldGrid.ts";
+import { fieldPhasors, type FieldPhasors, type FieldSource } from "./fieldGrid.ts";
 import { coilReach, windingTop } from "./geometry.ts";
 import { RMS_CONVENTION, decibels, rmsFromPeak, rmsOfPhasorVector } from "./rms.ts";
 import {
@@ -251,7 +251,30 @@ export function exposureCheck(design: SafetyDesign, options: ExposureOptions = {
   const zs = g.heights.map((h) => d.surfaceHeight + h);
   const B = fieldPhasors(sources, { xs: g.xs, ys: g.ys, zs });
 
-  // RMS magnitude at every point; the worst point and the per-level maxima
+  const { profile, worst } = fieldScan(B, g, zs);
+  const referenceLevels = referenceLevelVerdicts(worst.flux, profile, f, g.heights);
+  const nd = o.discGrid ?? 11;
+  const basic = basicRestrictionVerdicts(sources, g, d.surfaceHeight, f, nd, o.discs ?? DEFAULT_DISCS);
+
+  const governs = (["public", "occupational"] as const).map((pop) => governsSentence(pop, referenceLevels, basic, f));
+  return {
+    frequency: f,
+    worst,
+    profile,
+    referenceLevels,
+    basicRestriction: basic,
+    governs,
+    grid: `${g.nx} × ${g.ny} × ${g.heights.length} points: x ${fmtM(g.xs[0]!)}…${fmtM(g.xs[g.nx - 1]!)}, y ${fmtM(g.ys[0]!)}…${fmtM(g.ys[n - 1]!)}, ${fmtM(g.heights[0]!)}…${fmtM(g.heights[g.heights.length - 1]!)} above the surface; discs centred on a ${nd} × ${nd} grid on the surface`,
+    convention: RMS_CONVENTION,
+    model: `field: lib/em (loop closed form, Simpson et al. 2001; segments by Biot–Savart) at each transmitter's operating current, summed as phasors; internal field: ${DISC_MODEL}`,
+    warnings,
+    disclaimer: EXPOSURE_DISCLAIMER,
+  };
+}
+
+/** The RMS flux density at every grid point: the largest per height (the profile) and the worst point. */
+function fieldScan(B: FieldPhasors, g: Grid, zs: ArrayLike<number>): { profile: { height: number; flux: number }[]; worst: ExposureCheck["worst"] } {
+  const n = g.nx * g.ny;
   const profile: { height: number; flux: number }[] = [];
   let worstIdx = 0, worstB = -1;
   for (let k = 0; k < g.heights.length; k++) {
@@ -269,6 +292,11 @@ export function exposureCheck(design: SafetyDesign, options: ExposureOptions = {
   const wk = Math.floor(worstIdx / n), wi = worstIdx % n;
   const worst = { point: [g.xs[wi]!, g.ys[wi]!, zs[wk]!] as Vec3, height: g.heights[wk]!, flux: worstB, fieldStrength: worstB / MU0 };
 
+  return { profile, worst };
+}
+
+/** One verdict per carried standard and population: the worst point against its reference level, and the height above which it is met. */
+function referenceLevelVerdicts(worstB: number, profile: readonly { height: number; flux: number }[], f: number, heights: ArrayLike<number>): ReferenceLevelVerdict[] {
   const referenceLevels: ReferenceLevelVerdict[] = [];
   for (const s of EXPOSURE_STANDARDS) {
     for (const pop of ["public", "occupational"] as const) {
@@ -280,7 +308,7 @@ export function exposureCheck(design: SafetyDesign, options: ExposureOptions = {
       const ratio = worstB / lv.flux;
       const v = verdictText(ratio, `${lv.row} (${fmtT(lv.flux)} RMS)`);
       const above = compliantAbove(profile, lv.flux);
-      const where2 = above === undefined ? `; not met anywhere up to ${fmtM(g.heights[g.heights.length - 1]!)} above the surface` : above > 0 ? `; met from ${fmtM(above)} above the surface (grid level; the one below fails)` : "";
+      const where2 = above === undefined ? `; not met anywhere up to ${fmtM(heights[heights.length - 1]!)} above the surface` : above > 0 ? `; met from ${fmtM(above)} above the surface (grid level; the one below fails)` : "";
       referenceLevels.push({
         standard: s.id, population: pop, verdict: v.verdict, limit: lv.flux, limitH: lv.fieldStrength, row: lv.row, status: lv.status,
         ratio, marginDb: v.marginDb, ...(above !== undefined ? { compliantAbove: above } : {}),
@@ -289,15 +317,19 @@ export function exposureCheck(design: SafetyDesign, options: ExposureOptions = {
     }
   }
 
-  // basic restriction: discs lying on the surface, centres on a discGrid × discGrid sub-grid of the accessible plane
-  const nd = o.discGrid ?? 11;
+  return referenceLevels;
+}
+
+/** Basic restriction: discs lying on the surface, centres on an nd × nd sub-grid of the accessible plane; one verdict per disc and population. */
+function basicRestrictionVerdicts(sources: readonly FieldSource[], g: Grid, surfaceHeight: number, f: number, nd: number, discs: readonly { readonly label: string; readonly radius: number }[]): BasicRestrictionVerdict[] {
+  const n = g.nx * g.ny;
   const gx = linspace(g.xs[0]!, g.xs[g.nx - 1]!, nd), gy = linspace(g.ys[0]!, g.ys[n - 1]!, nd);
   const cx = new Float64Array(nd * nd), cy = new Float64Array(nd * nd);
   for (let j = 0; j < nd; j++) for (let i = 0; i < nd; i++) { cx[j * nd + i] = gx[i]!; cy[j * nd + i] = gy[j]!; }
   const basic: BasicRestrictionVerdict[] = [];
   const w = 2 * Math.PI * f;
-  for (const disc of o.discs ?? DEFAULT_DISCS) {
-    const phi = discFluxes(sources, cx, cy, d.surfaceHeight + g.heights[0]!, disc.radius);
+  for (const disc of discs) {
+    const phi = discFluxes(sources, cx, cy, surfaceHeight + g.heights[0]!, disc.radius);
     let best = 0, bi = 0;
     for (let c = 0; c < cx.length; c++) {
       const a = Math.hypot(phi.re[c]!, phi.im[c]!);
@@ -305,7 +337,7 @@ export function exposureCheck(design: SafetyDesign, options: ExposureOptions = {
     }
     const fluxRms = rmsFromPeak(best);
     const e = (w * fluxRms) / (2 * Math.PI * disc.radius);
-    const at: Vec3 = [cx[bi]!, cy[bi]!, d.surfaceHeight + g.heights[0]!];
+    const at: Vec3 = [cx[bi]!, cy[bi]!, surfaceHeight + g.heights[0]!];
     for (const pop of ["public", "occupational"] as const) {
       const br = basicRestriction(pop, f);
       if (!br) {
@@ -321,20 +353,7 @@ export function exposureCheck(design: SafetyDesign, options: ExposureOptions = {
     }
   }
 
-  const governs = (["public", "occupational"] as const).map((pop) => governsSentence(pop, referenceLevels, basic, f));
-  return {
-    frequency: f,
-    worst,
-    profile,
-    referenceLevels,
-    basicRestriction: basic,
-    governs,
-    grid: `${g.nx} × ${g.ny} × ${g.heights.length} points: x ${fmtM(g.xs[0]!)}…${fmtM(g.xs[g.nx - 1]!)}, y ${fmtM(g.ys[0]!)}…${fmtM(g.ys[n - 1]!)}, ${fmtM(g.heights[0]!)}…${fmtM(g.heights[g.heights.length - 1]!)} above the surface; discs centred on a ${nd} × ${nd} grid on the surface`,
-    convention: RMS_CONVENTION,
-    model: `field: lib/em (loop closed form, Simpson et al. 2001; segments by Biot–Savart) at each transmitter's operating current, summed as phasors; internal field: ${DISC_MODEL}`,
-    warnings,
-    disclaimer: EXPOSURE_DISCLAIMER,
-  };
+  return basic;
 }
 
 function governsSentence(pop: Population, levels: readonly ReferenceLevelVerdict[], basic: readonly BasicRestrictionVerdict[], f: number): string {

@@ -73,6 +73,8 @@ function rotated(amplitude: number, phase: number | undefined, out: Float64Array
  * @example baseMatrix(net, 2π·200e3).re[0] // → R_s + R₀ (+ ESR) of a series-tuned transmitter
  */
 export function baseMatrix(network: LinkNetwork, w: number): BaseMatrix {
+  // One function on purpose (≈ 180 lines): one mesh-equation assembly — the unknowns' layout, the mutual terms, each
+  // transmitter's mesh, the shared drives and the held currents all index the same matrix and mesh numbering.
   const rx = network.receivers;
   const txs = networkTransmitters(network);
   const shared = network.sharedDrives ?? [];
