@@ -12,7 +12,7 @@
 import { createRequire } from "node:module";
 import { pathToFileURL } from "node:url";
 import type { ProbeSpec, ProbeValues, Probe } from "./probe.ts";
-import { transferable, portableSpec } from "./probe.ts";
+import { transferable, portableSpec, MISSING_PROBE } from "./probe.ts";
 import type { WorkerTask } from "./worker.ts";
 import { TanklightInputError } from "../errors.ts";
 
@@ -117,9 +117,16 @@ export async function pointEvaluator(spec: ProbeSpec, threads: ThreadsOption, lo
   const pool = typeof threads === "object" ? threads : await taskPool(count);
   const portable = portableSpec(spec);
   const id = contentId(portable);
+  // the spec (≈ 14 kB of coils and parts: a few ms to clone each way) goes to a worker only when it
+  // has not built this probe yet — at most once per worker and design, nothing for a warm pool
+  const withSpec = (positions: Float64Array): Promise<ProbeValues> => pool.run<ProbeValues>({ kind: "probe", id, spec: portable, positions });
   return {
     threads: count,
-    evaluate: (positions) => pool.run<ProbeValues>({ kind: "probe", id, spec: portable, positions }),
+    evaluate: (positions) =>
+      pool.run<ProbeValues>({ kind: "probe", id, positions }).catch((e: unknown) => {
+        if (e instanceof Error && e.message.includes(MISSING_PROBE)) return withSpec(positions);
+        throw e;
+      }),
     close: () => (owned ? pool.close() : Promise.resolve()),
   };
 }

@@ -85,6 +85,9 @@ export interface ProbeValues {
   readonly unconverged: number;
 }
 
+/** What a worker answers to a probe task that carries no spec for a probe it has not built (./worker.ts); the sender then sends the spec (./pool.ts). */
+export const MISSING_PROBE = "tanklight worker: no probe built for";
+
 /** True when the spec can be sent to worker threads (every load given as data). */
 export function transferable(spec: ProbeSpec): boolean {
   return spec.loads.every((l) => l !== null);

@@ -3,13 +3,13 @@
  * Each worker keeps the probes it has built, by the spec id the main thread gave them, so a
  * probe (coupling evaluators, tabulated loads) is built once per worker and run.
  */
-import { makeProbe, type Probe, type ProbeSpec, type ProbeValues } from "./probe.ts";
+import { makeProbe, MISSING_PROBE, type Probe, type ProbeSpec, type ProbeValues } from "./probe.ts";
 import { makeYieldModel, type YieldModel, type YieldSpec, type YieldValues } from "./yieldModel.ts";
 import type { Candidate, DesignEvaluation, DesignProblem } from "./designEval.ts";
 
 /** A task for a worker: token positions of a probe, or samples of a yield model. */
 export type WorkerTask =
-  | { readonly kind: "probe"; readonly id: string; readonly spec: ProbeSpec; readonly positions: Float64Array }
+  | { readonly kind: "probe"; readonly id: string; readonly spec?: ProbeSpec; readonly positions: Float64Array }
   | { readonly kind: "yield"; readonly id: string; readonly spec: YieldSpec; readonly draws: Float64Array }
   | { readonly kind: "design"; readonly candidate: Candidate; readonly problem: DesignProblem };
 
@@ -35,8 +35,13 @@ export default async function runTask(task: WorkerTask): Promise<ProbeValues | Y
       const { evaluateDesign } = await import("./designEval.ts");
       return evaluateDesign(task.candidate, task.problem);
     }
-    case "probe":
-      return cached(task.id, () => makeProbe(task.spec)).evaluate(task.positions);
+    case "probe": {
+      // the spec travels only when this worker has not built the probe yet (see pointEvaluator)
+      const spec = task.spec;
+      const probe = spec ? cached(task.id, () => makeProbe(spec)) : (models.get(task.id) as Probe | undefined);
+      if (!probe) throw new Error(`${MISSING_PROBE} ${task.id}`);
+      return probe.evaluate(task.positions);
+    }
     case "yield":
       return cached(task.id, () => makeYieldModel(task.spec)).evaluate(task.draws);
   }
