@@ -16,7 +16,7 @@
  * loss says directly which variation costs the most. Reproducible: one seeded xoshiro128**
  * stream; the same seed gives the same result on any number of threads.
  */
-import { mean, quantileSorted, sampleRankCorrelation } from "simple-statistics";
+import { mean, quantileSorted, sampleCorrelation } from "simple-statistics";
 import type { LinkSystem } from "../circuit/link.ts";
 import { TanklightInputError } from "../errors.ts";
 import { wilsonInterval, type ProportionInterval } from "./confidence.ts";
@@ -172,14 +172,16 @@ export async function toleranceYield(system: LinkSystem, variations: VariationsI
     for (let i = 0; i < n; i++) litCount += lit[i]!;
     // sensitivity
     const brightness = 5; // the brightness draw's column (DRAW_NAMES)
-    const margin = Array.from(current, (c, i) => Math.log(Math.max(c * drawn[i * stride + brightness]!, 1e-12) / spec.litThreshold));
+    const margin = Float64Array.from(current, (c, i) => Math.log(Math.max(c * drawn[i * stride + brightness]!, 1e-12) / spec.litThreshold));
+    const marginRanks = midranks(margin);
     const entries: SensitivityEntry[] = [];
     const nom = nominalDraws(spec);
     for (const { variation, columns } of active) {
       const col = columns[0]!;
       // a tilt is ranked by its size (its direction is the azimuth draw)
-      const xs = Array.from({ length: n }, (_, i) => (variation === "tilt" ? Math.abs(drawn[i * stride + col]!) : drawn[i * stride + col]!));
-      const rho = constant(xs) || constant(margin) ? 0 : sampleRankCorrelation(xs, margin);
+      const xs = Float64Array.from({ length: n }, (_, i) => (variation === "tilt" ? Math.abs(drawn[i * stride + col]!) : drawn[i * stride + col]!));
+      // Spearman's ρ: Pearson's r of the midranks (as simple-statistics' sampleRankCorrelation, with the margin ranked once)
+      const rho = constant(xs) || constant(margin) ? 0 : sampleCorrelation(midranks(xs), marginRanks);
       let alone: number | undefined;
       if (oat) {
         const masked = new Float64Array(drawn);
@@ -231,8 +233,26 @@ export async function toleranceYield(system: LinkSystem, variations: VariationsI
   }
 }
 
-function constant(xs: readonly number[]): boolean {
+function constant(xs: Float64Array): boolean {
   return xs.every((x) => x === xs[0]);
+}
+
+/**
+ * Midranks (0-based; tied values share the mean of the ranks they span), in the order of the
+ * input — the ranks on which Spearman's ρ is defined (the same numbers simple-statistics ranks by).
+ */
+function midranks(values: Float64Array): number[] {
+  const order = Uint32Array.from({ length: values.length }, (_, i) => i).sort((a, b) => values[a]! - values[b]!);
+  const ranks = new Array<number>(values.length);
+  let i = 0;
+  while (i < order.length) {
+    let j = i;
+    while (j + 1 < order.length && values[order[j + 1]!] === values[order[i]!]) j++;
+    const rank = (i + j) / 2;
+    for (let k = i; k <= j; k++) ranks[order[k]!] = rank;
+    i = j + 1;
+  }
+  return ranks;
 }
 
 function percentiles(values: Float64Array): Percentiles {

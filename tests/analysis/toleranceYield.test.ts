@@ -54,6 +54,23 @@ describe("toleranceYield", () => {
     expect(ratio).toBeLessThan(4.4);
   });
 
+  it("its Wilson interval covers the known truth at about the stated rate over many seeds", async () => {
+    // the brightness-only batch of the test above (truth exactly 1/3) run with 300 seeds of 100
+    // samples: 95 % intervals should cover the truth in ≈ 285 of 300 runs (binomial sd ≈ 3.8);
+    // Wilson's coverage at this n stays close to nominal (from memory (unverified): Brown, Cai &
+    // DasGupta, Statistical Science 16(2), 2001)
+    const i0 = (await toleranceYield(sys, {}, { samples: 10 })).nominal.ledCurrent;
+    const litThreshold = 1.1 * i0;
+    const truth = (1.3 - litThreshold / i0) / 0.6;
+    const reps = 300;
+    let covered = 0;
+    for (let seed = 1; seed <= reps; seed++) {
+      const y = await toleranceYield(sys, { ledBrightness: 0.3 }, { samples: 100, seed, litThreshold });
+      if (y.interval.lower <= truth && truth <= y.interval.upper) covered++;
+    }
+    expect(Math.abs(covered / reps - 0.95)).toBeLessThan(0.035); // ≈ 2.8 sd (measured: 282 of 300)
+  });
+
   it("ranks the variation that costs the most yield first", async () => {
     const build = (turns: number) => roundCoil({ innerRadius: 0.0065, turns, layers: 6, wire: { diameter: 0.1e-3, insulation: 0.01e-3 } });
     // threshold at 0.8·I₀: the brightness spread alone loses (0.8 − 0.7)/0.6 ≈ 17 % of the batch
