@@ -8,17 +8,18 @@
  * by the async functions that need them.
  *
  * zod is loaded on demand: `import { z } from "zod"` in lib/ becomes scripts/zodOnDemand.ts
- * (dist/zod.js), which requires dist/zod.cjs — zod bundled into one CommonJS file — when the
- * first schema is built. Measured with bench/startup.bench.ts and CPU time of fresh processes
- * on this 2-core machine (2026-12-02, load ≈ 11): bare node 110 ms; import with zod outside as
- * an ESM package (its ~50 files loaded at import) 300 ms; with zod bundled into our chunks
- * (evaluated at import, ~590 kB) 230 ms; with zod on demand 160 ms. zod is not tree-shaken in
- * zod.cjs (CommonJS), which costs nothing until a schema is used. The copy of zod in dist/ is
- * not a user's zod: zod keeps its registry and configuration on globalThis, so our schemas
- * and a user's compose (tests/bundle.test.ts).
+ * (dist/zod.js), which requires dist/zod.cjs — the part of zod lib/ uses, bundled into one
+ * CommonJS file of ≈ 118 kB instead of zod's 106 ES modules — when the first schema is built.
+ * Measured as CPU time of fresh processes on this 2-core machine (2026-12-02, load ≈ 11, one
+ * run): bare node 110 ms; import with zod outside as an ESM package 300 ms; with all of zod
+ * bundled into our chunks (evaluated at import, ≈ 590 kB) 230 ms; with zod on demand 160 ms.
+ * Requiring zod.cjs then takes 65–120 ms wall at load ≈ 14 (all of zod's CommonJS build, with
+ * its 40 locales, 120–210 ms). The copy of zod in dist/ is not a user's zod: zod keeps its
+ * registry and configuration on globalThis, so our schemas and a user's compose
+ * (tests/bundle.test.ts).
  */
 import { build, type Plugin } from "esbuild";
-import { readdirSync, rmSync } from "node:fs";
+import { readdirSync, readFileSync, rmSync } from "node:fs";
 import { createRequire } from "node:module";
 import { dirname, join, resolve } from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
@@ -38,6 +39,25 @@ const zodOnDemand: Plugin = {
   },
 };
 
+/**
+ * The members of zod's `z` that lib/ names (`z.strictObject`, `z.NEVER`, …: every `z.<name>` in
+ * its sources that zod has; `z.core` is only used for types). dist/zod.cjs exports just these,
+ * so esbuild leaves out the rest of zod (its 40 other locales, JSON Schema import, …).
+ */
+function zodMembers(): string[] {
+  const named = new Set<string>();
+  const walk = (dir: string): void => {
+    for (const e of readdirSync(dir, { withFileTypes: true })) {
+      const p = join(dir, e.name);
+      if (e.isDirectory()) walk(p);
+      else if (p.endsWith(".ts")) for (const m of readFileSync(p, "utf8").matchAll(/\bz\.([A-Za-z_$][\w$]*)/g)) named.add(m[1]!);
+    }
+  };
+  walk(join(root, "lib"));
+  const { z } = createRequire(import.meta.url)("zod") as { z: Record<string, unknown> };
+  return [...named].filter((k) => k in z && k !== "core").sort();
+}
+
 /** Builds dist/ (or another folder: tests bundle into out/). */
 export async function bundle(outdir: string): Promise<void> {
   // chunk names change with their content: remove the previous build's JS (tsc's .d.ts stay)
@@ -50,8 +70,9 @@ export async function bundle(outdir: string): Promise<void> {
   };
   clean(outdir);
   const common = { bundle: true, platform: "node", target: "node20", minify: true, keepNames: true, sourcemap: true, logLevel: "warning" } as const;
-  // zod's CommonJS build as one file, required by dist/zod.js on first use
-  await build({ ...common, entryPoints: [createRequire(import.meta.url).resolve("zod")], outfile: join(outdir, "zod.cjs"), format: "cjs" });
+  // the members of zod's z that lib/ uses, and only what they need, as one CommonJS file
+  const members = zodMembers();
+  await build({ ...common, stdin: { contents: `export { ${members.join(", ")} } from "zod";\n`, resolveDir: root, loader: "js" }, outfile: join(outdir, "zod.cjs"), format: "cjs" });
   await build({
     ...common,
     // the analysis worker is its own entry (dist/analysis/worker.js): worker threads load it by URL

@@ -23,10 +23,12 @@ const tx = t.roundCoil({ innerRadius: "40 mm", turns: 20, layers: 4, wire: { dia
 const after = zodLoaded();
 let message;
 try { t.roundCoil({ innerRadius: "5 kHz", turns: 20, wire: { diameter: "0.5 mm" } }); } catch (e) { message = e.message; }
+let zodMessage; // zod's own wording (its English locale)
+try { t.parseDesign({ name: 5, title: ["x"], colour: 1 }); } catch (e) { zodMessage = e.message; }
 const user = z.object({ coil: t.RoundCoilSpec, label: z.string() });
 const parsed = user.parse({ coil: { innerRadius: "6 mm", turns: 30, wire: { diameter: "0.1 mm" } }, label: "token" });
 const userSchema = z.toJSONSchema(z.object({ design: t.DesignFile }), { io: "input", unrepresentable: "any" });
-const result = { before, after, message, innerRadius: parsed.coil.innerRadius, inductance: t.selfInductance(tx), designSchema: t.designJsonSchema(), userSchema };
+const result = { before, after, message, zodMessage, innerRadius: parsed.coil.innerRadius, inductance: t.selfInductance(tx), designSchema: t.designJsonSchema(), userSchema };
 `;
 
 describe("bundled build", () => {
@@ -55,7 +57,8 @@ console.log(JSON.stringify(result));
     expect(fromBundle.before).toBe(false);
     expect(fromBundle.after).toBe(true);
     expect(fromBundle.message).toBe("roundCoil: innerRadius: expected a length like '12 mm', got '5 kHz' (a frequency)");
-    for (const key of ["message", "innerRadius", "inductance", "designSchema", "userSchema"]) expect(fromBundle[key], key).toEqual(fromSource[key]);
+    expect(fromBundle.zodMessage).toContain("name: expected string");
+    for (const key of ["message", "zodMessage", "innerRadius", "inductance", "designSchema", "userSchema"]) expect(fromBundle[key], key).toEqual(fromSource[key]);
     // our metadata reaches the user's zod: the design file's coil description is in the user's JSON Schema
     expect(JSON.stringify(fromBundle.userSchema)).toContain("a coil: shape 'roundCoil'");
   }, 120_000);
