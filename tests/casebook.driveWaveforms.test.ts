@@ -24,6 +24,13 @@ describe("casebook: drive-waveforms (single switch from 5 V, fast model vs time 
     expectOutside({ quantity: "drive-waveforms: LED current, describing function vs transient at 1.3×", source: "independent method: transient engine periodic steady state", ours: design.ledFast, reference: design.ledTransient, rtol: 0.1, unit: "A" });
     expectOutside({ quantity: "drive-waveforms: LED current, harmonic balance vs transient at 1.3×", source: "independent method: transient engine periodic steady state", ours: design.ledHarmonic, reference: design.ledTransient, rtol: 0.01, unit: "A" });
     expect(r.trusted).toContain(r.design.ratio);
+    // model "auto": harmonic balance under zero-voltage switching, the periodic steady state under
+    // hard switching — within 1 % of the time-domain run at every tuning of the sweep
+    for (const x of r.rows) {
+      expectOutside({ quantity: `drive-waveforms: LED current, model auto (${x.autoModel}) vs transient at ${x.ratio}×`, source: "independent method: transient engine periodic steady state, 200 steps a cycle", ours: x.ledAuto, reference: x.ledTransient, rtol: 0.01, unit: "A" });
+    }
+    expect(r.rows.find((x) => x.ratio === 1.6)!.autoModel).toBe("periodic");
+    expect(design.autoModel).toBe("harmonic");
     // away from it, the fast model's error grows monotonically and its supply estimate falls far short
     const beyond = r.rows.filter((x) => x.ratio > r.design.ratio);
     for (const x of beyond) expect(x.ledFast / x.ledTransient - 1).toBeLessThan(-0.1);

@@ -51,8 +51,12 @@ export interface LinkNetworkBuild {
  * the coupling factors and the network it solved (harmonic balance adds `harmonic`).
  */
 export interface LinkSolution extends LinkResult {
-  /** "fundamental" (describing function) or "harmonic" (harmonic balance) */
-  readonly model: "fundamental" | "harmonic";
+  /**
+   * "fundamental" (describing function), "harmonic" (harmonic balance) or "periodic" (the
+   * transient engine's periodic steady state for the LED currents, coil currents and input
+   * power: model "auto" with a hard-switched single switch; docs/methods/harmonic-balance.md)
+   */
+  readonly model: "fundamental" | "harmonic" | "periodic";
   /** relative error band on LED average currents and coil currents, and where it comes from */
   readonly errorBand: ModelBand;
   /** every harmonic, waveform peaks and the truncation indicator (harmonic balance only) */

@@ -36,6 +36,8 @@ export interface HarmonicDetail {
     readonly distortion: number;
     /** the truncation indicator of the switch port (large, ≳ 0.25, under hard switching) */
     readonly truncation: number;
+    /** the switch closes on a charged tank (hard switching; set by solveLinkHarmonic's order check) */
+    readonly hardSwitching?: boolean;
   };
   readonly receivers: readonly {
     /** load (tank) voltage, V, harmonics 0…H */
