@@ -93,7 +93,7 @@ export interface YieldResult {
   /** variations ranked by |rank correlation| (or by yield loss when one-at-a-time was run) */
   readonly sensitivity: readonly SensitivityEntry[];
   readonly sensitivityMethod: string;
-  /** the model asked for and the samples each model solved */
+  /** the model asked for and the samples each model solved (harmonicSamples: beyond the describing function — harmonic balance, or for a hard-switched single switch the periodic steady state) */
   readonly model: { readonly requested: LinkModel; readonly fundamentalSamples: number; readonly harmonicSamples: number };
   readonly litThreshold: number;
   readonly warnings: readonly string[];

@@ -325,7 +325,7 @@ export function makeYieldModel(spec: YieldSpec): YieldModel {
           for (const led of r.receivers[0]!.leds) cur = Math.min(cur, led.averageCurrent);
           power = r.power.input;
           converged = r.converged;
-          if (r.model === "harmonic") harmonic++;
+          if (r.model !== "fundamental") harmonic++; // harmonic balance, or the periodic steady state of a hard-switched single switch
         }
         cur = Math.max(0, cur);
         current[s] = cur;
