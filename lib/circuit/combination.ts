@@ -141,9 +141,15 @@ export function bestCombination(target: number, seriesName: ESeries, opts: Combi
       }
     }
   }
-  const tol = options.tolerance;
-  out = few.concat(out);
-  const kept = (tol === undefined ? out : out.filter((c) => Math.abs(c.error) <= tol * (1 + 1e-12)));
+  return ranked(few.concat(out), options.tolerance, options.prefer, count);
+}
+
+/**
+ * The combinations within the tolerance (if any), each set of parts and topology once, ranked by
+ * |error| then part count (prefer "fewestParts": the reverse), the first `count`.
+ */
+function ranked(all: readonly Combination[], tol: number | undefined, prefer: CombinationOptions["prefer"], count: number): Combination[] {
+  const kept = (tol === undefined ? all : all.filter((c) => Math.abs(c.error) <= tol * (1 + 1e-12)));
   const unique = new Map<string, Combination>();
   for (const c of kept) {
     const key = `${c.topology}|${c.parts.map((p) => p.toPrecision(4)).join(",")}`;
@@ -154,7 +160,7 @@ export function bestCombination(target: number, seriesName: ESeries, opts: Combi
   list.sort((a, b) => {
     const e = byErr(a, b);
     const p = a.parts.length - b.parts.length;
-    if (options.prefer === "fewestParts") return p !== 0 ? p : e;
+    if (prefer === "fewestParts") return p !== 0 ? p : e;
     return Math.abs(e) > 1e-12 * (Math.abs(a.error) + Math.abs(b.error)) ? e : p;
   });
   return list.slice(0, count);

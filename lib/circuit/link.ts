@@ -316,44 +316,7 @@ export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoad
     wiring: d.wiring,
     ...(d.phase !== undefined ? { phase: d.phase } : {}),
   }));
-  const transmitters: TransmitterNetwork[] = txs.map((tx, i) => {
-    const cap0 = tx.capacitor;
-    if (tx.compensation !== "none" && cap0 === undefined) {
-      throw new TanklightInputError(
-        [{ path: `${at(i)}.capacitor`, message: `a ${tx.compensation}-compensated transmitter needs its capacitor`, value: undefined, expected: "{ capacitance: '100 nF', … }" }],
-        "solveLink",
-      );
-    }
-    let drive: DriveEquivalent;
-    let feed: TransmitterNetwork["feed"];
-    if (typeof tx.drive === "string") {
-      const g = names.indexOf(tx.drive);
-      if (g < 0) {
-        const near = nearestKey(tx.drive, names);
-        const hint = near !== undefined ? `; did you mean '${near}'?` : names.length > 0 ? ` (shared drives: ${names.join(", ")})` : " (the system has no sharedDrives)";
-        throw new TanklightInputError([{ path: `${at(i)}.drive`, message: `names no shared drive${hint}`, value: tx.drive }], "solveLink");
-      }
-      drive = sharedDrives[g]!.drive;
-      feed = { drive: g, polarity: polarityOf(tx.phase, at(i)) };
-    } else {
-      drive = driveOf(tx.drive, f, txNums[i]!.inductance, tx.compensation, warnings, txLabels[i]!, `${at(i)}.drive`);
-    }
-    return {
-      label: txLabels[i]!,
-      resistance: tx.resistance ?? txNums[i]!.resistance,
-      compensation: tx.compensation,
-      ...(cap0 !== undefined
-        ? {
-            capacitance: cap0.capacitance,
-            capacitorEsr: esrOf(cap0, w),
-            ...(cap0.rating !== undefined ? { capacitorRating: cap0.rating } : {}),
-          }
-        : {}),
-      ...(txNums[i]!.selfResonance !== undefined ? { selfResonance: txNums[i]!.selfResonance } : {}),
-      drive,
-      ...(feed !== undefined ? { feed } : tx.phase !== undefined && tx.phase !== 0 ? { phase: tx.phase } : {}),
-    };
-  });
+  const transmitters = txs.map((tx, i) => transmitterNetwork(tx, { at: at(i), label: txLabels[i]!, num: txNums[i]!, f, names, sharedDrives, warnings }));
   sharedSpecs.forEach((d, g) => {
     if (!transmitters.some((t) => t.feed?.drive === g)) warnings.push(`sharedDrives[${g}] '${d.name}' feeds no transmitter`);
   });
@@ -375,6 +338,60 @@ export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoad
     })),
   };
   return { network, coupling, warnings };
+}
+
+/** What {@link transmitterNetwork} needs besides the transmitter: its path and label, its coil's numbers, the shared drives. */
+interface TransmitterContext {
+  /** the transmitter's path in the system, for errors: "transmitter" or "transmitters[i]" */
+  readonly at: string;
+  readonly label: string;
+  readonly num: CoilNumbers;
+  /** drive frequency, Hz */
+  readonly f: number;
+  /** the shared drives' names and networks, in the system's order */
+  readonly names: readonly string[];
+  readonly sharedDrives: readonly SharedDriveNetwork[];
+  readonly warnings: string[];
+}
+
+/** A transmitter's network entry: its resistance, capacitor and self-resonance, and its own drive's equivalent or its feed from a shared drive. */
+function transmitterNetwork(tx: ReturnType<typeof systemTransmitters>[number], c: TransmitterContext): TransmitterNetwork {
+  const cap0 = tx.capacitor;
+  if (tx.compensation !== "none" && cap0 === undefined) {
+    throw new TanklightInputError(
+      [{ path: `${c.at}.capacitor`, message: `a ${tx.compensation}-compensated transmitter needs its capacitor`, value: undefined, expected: "{ capacitance: '100 nF', … }" }],
+      "solveLink",
+    );
+  }
+  let drive: DriveEquivalent;
+  let feed: TransmitterNetwork["feed"];
+  if (typeof tx.drive === "string") {
+    const g = c.names.indexOf(tx.drive);
+    if (g < 0) {
+      const near = nearestKey(tx.drive, c.names);
+      const hint = near !== undefined ? `; did you mean '${near}'?` : c.names.length > 0 ? ` (shared drives: ${c.names.join(", ")})` : " (the system has no sharedDrives)";
+      throw new TanklightInputError([{ path: `${c.at}.drive`, message: `names no shared drive${hint}`, value: tx.drive }], "solveLink");
+    }
+    drive = c.sharedDrives[g]!.drive;
+    feed = { drive: g, polarity: polarityOf(tx.phase, c.at) };
+  } else {
+    drive = driveOf(tx.drive, c.f, c.num.inductance, tx.compensation, c.warnings, c.label, `${c.at}.drive`);
+  }
+  return {
+    label: c.label,
+    resistance: tx.resistance ?? c.num.resistance,
+    compensation: tx.compensation,
+    ...(cap0 !== undefined
+      ? {
+          capacitance: cap0.capacitance,
+          capacitorEsr: esrOf(cap0, 2 * Math.PI * c.f),
+          ...(cap0.rating !== undefined ? { capacitorRating: cap0.rating } : {}),
+        }
+      : {}),
+    ...(c.num.selfResonance !== undefined ? { selfResonance: c.num.selfResonance } : {}),
+    drive,
+    ...(feed !== undefined ? { feed } : tx.phase !== undefined && tx.phase !== 0 ? { phase: tx.phase } : {}),
+  };
 }
 
 /**
