@@ -93,7 +93,7 @@ export interface ParsedVariations {
 export interface YieldSpecOptions {
   readonly token?: number;
   readonly litThreshold?: number;
-  /** forward-voltage grid of the load tables, V (default 20 mV) */
+  /** forward-voltage grid of the load tables, V (default 50 mV) */
   readonly vfStep?: number;
   /** steady-state model, as solveLink's (default "fundamental") */
   readonly model?: LinkModel;
@@ -233,7 +233,7 @@ export function yieldSpec(system: LinkSystem, variations: VariationsInput, optio
     tokenPose,
     tokenMutual,
     posed,
-    vfStep: options.vfStep ?? 0.02,
+    vfStep: options.vfStep ?? 0.05,
     litThreshold: options.litThreshold ?? DEFAULT_LIT_THRESHOLD,
     ...(supplyVoltage !== undefined ? { supplyVoltage } : {}),
     table: { maxAmplitude: 8, step: 5e-3 },
