@@ -1,6 +1,6 @@
 /**
- * Worker threads from the bundled build: bundles lib/ as scripts/bundle.ts does (its own worker
- * entry, zod and tinypool outside) into out/, then runs a two-thread coverage map in a plain
+ * Worker threads from the bundled build: bundles lib/ with scripts/bundle.ts (its own worker
+ * entry, zod loaded on demand, tinypool outside) into out/, then runs a two-thread coverage map in a plain
  * `node` process and compares it with the one-thread map. The .ts sources under vitest and tsx
  * are covered by parallel.test.ts, toleranceYield.test.ts and the benchmarks.
  */
@@ -9,7 +9,7 @@ import { execFileSync } from "node:child_process";
 import { mkdirSync, rmSync, writeFileSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
-import { build } from "esbuild";
+import { bundle } from "../../scripts/bundle.ts";
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), "..", "..");
 
@@ -18,17 +18,7 @@ describe("worker threads from dist/", () => {
     const out = join(root, "out", "dist-workers", String(process.pid));
     rmSync(out, { recursive: true, force: true });
     mkdirSync(out, { recursive: true });
-    await build({
-      entryPoints: { mod: join(root, "lib/mod.ts"), advanced: join(root, "lib/advanced.ts"), "analysis/worker": join(root, "lib/analysis/worker.ts") },
-      outdir: out,
-      bundle: true,
-      splitting: true,
-      format: "esm",
-      platform: "node",
-      target: "node20",
-      external: ["zod", "tinypool"],
-      logLevel: "warning",
-    });
+    await bundle(out);
     writeFileSync(
       join(out, "run.mjs"),
       `import * as t from "./mod.js";
