@@ -80,6 +80,9 @@ describe("analysis with a steady-state model", () => {
       }),
     );
     expect(lit).toBeGreaterThan(3);
+    // the table grows in fixed chunks, so two worker threads (each with its own table) give the same bits
+    const threaded = await coverageMap(at([0, 0, LID]), { x: { from: 0, to: 0.07, points: 5 }, y: 0, z: { from: LID, to: 0.03, points: 2 } }, { refine: false, model: "auto", threads: 2 });
+    expect(Array.from(threaded.ledCurrent)).toEqual(Array.from(map.ledCurrent));
   });
 
   it("rejects an unknown model naming the field", async () => {
