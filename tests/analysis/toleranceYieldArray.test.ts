@@ -96,4 +96,10 @@ describe("toleranceYield over a transmitter array", () => {
     expect(one.sensitivity.map((e) => e.variation).sort()).toEqual(["ledBrightness", "placement", "transmitterCapacitor[0]", "transmitterCapacitor[1]"]);
     expect(one.supplyCurrent).toBeUndefined(); // sine drives name no DC supply
   });
+
+  it("keeps the describing function over an array with model 'auto' and says so, as solveLink does", async () => {
+    const y = await toleranceYield(array(), { tokenCapacitor: 0.05 }, { samples: 10, seed: 2, model: "auto" });
+    expect(y.model).toEqual({ requested: "auto", fundamentalSamples: 10, harmonicSamples: 0 });
+    expect(solveLink(array(), { model: "auto" }).model).toBe("fundamental");
+  });
 });
