@@ -24,12 +24,14 @@ import {
   rectSpiral,
   roundCoil,
   safetyReport,
+  searchDesign,
   selfInductance,
   solveLink,
   solveLinkSequence,
   supplyVerdict,
   tuneWithStandardParts,
   wilsonInterval,
+  type DesignSearch,
   type LinkSystem,
   type Notebook,
   type Vec3,
@@ -60,6 +62,8 @@ export interface GameBoardResults {
   /** the batch at the board's weakest point */
   readonly batch: { readonly lit: number; readonly count: number; readonly lower: number; readonly upper: number };
   readonly supply: { readonly current: number; readonly verdict: string };
+  /** "what should I build instead": searchDesign over round coils and arrays of them */
+  readonly search: DesignSearch;
 }
 
 const SUPPLY = 5;
@@ -67,6 +71,9 @@ const BOARD = 0.4; // m, square
 const PIECE_Z = 0.012; // m: a standing piece's coil centre above the tiles (8 mm board, 4 mm into the piece)
 const TILE_CENTRES: readonly (readonly [number, number])[] = [[-0.1, -0.1], [0.1, -0.1], [-0.1, 0.1], [0.1, 0.1]];
 const q = formatQuantity;
+/** share of the playing area the searched design must light, and the search's evaluation budget */
+const SEARCH_SHARE = 0.95;
+const SEARCH_BUDGET = 40;
 const pct = (x: number, digits = 1): string => `${(100 * x).toFixed(digits)} %`;
 
 /** Runs the scenario: returns the worked notebook and its numbers. */
@@ -330,9 +337,65 @@ export async function run(options: ScenarioOptions = {}): Promise<{ notebook: No
       supply: { item: "supply", voltage: SUPPLY, current: verdict.current, rating: verdict.rating },
     }),
   );
+
+  // ── 6. What to build instead ─────────────────────────────────────────────────
+  nb.heading("6. What should I build instead?");
+  nb.step("searchDesign: round coils and arrays of them, with the safety verdicts as requirements");
+  const search = await searchDesign(
+    {
+      cover: { width: 2 * PLAY, depth: 2 * PLAY },
+      barrier: "8 mm",
+      token: { innerRadius: "10 mm", layers: 4, wire: "0.1 mm", size: "35 mm" },
+      colours: ["red"],
+      supply: { kind: "bench", voltage: SUPPLY, current: 3, label: "5 V 3 A adapter" },
+      frequency: { min: "100 kHz", max: "250 kHz" },
+      litShare: SEARCH_SHARE,
+      exposure: { population: "public", assess: "basic restriction", margin: 6 },
+      emission: { rules: ["47 CFR 15.209"], margin: 6 },
+    },
+    {
+      radius: { min: "40 mm", max: "170 mm" },
+      turns: { min: 6, max: 40 },
+      wire: ["1 mm"],
+      tokenTurns: { min: 40, max: 100 },
+      layout: { rows: { min: 2, max: 3 }, columns: { min: 2, max: 3 }, phasing: ["quadrature", "alternate"] },
+    },
+    { maxEvaluations: SEARCH_BUDGET, onResistance, threads: 2 },
+  );
+  const best = search.designs[0]!;
+  const layoutOf = (d: (typeof search.designs)[number]): string => {
+    const l = d.candidate.layout;
+    return l.rows * l.columns === 1 ? "one coil" : `${l.rows} × ${l.columns}, ${q(l.pitchX, "m")} pitch, ${l.phasing}`;
+  };
+  const db = (neper: number): string => (Number.isFinite(neper) ? `${(neper / (Math.LN10 / 20)).toFixed(1)} dB` : "not assessed");
+  nb.table(
+    ["rank", "coils", "each coil", "frequency", "piece turns", "lit on the required share", "supply", "exposure margin", "emission margin", "binds", "why it lost"],
+    search.designs.map((d, i) => [
+      String(i + 1),
+      layoutOf(d),
+      `r ${q(d.candidate.radius, "m")}, ${d.candidate.turns} turns`,
+      { value: d.candidate.frequency, unit: "Hz" },
+      String(d.candidate.tokenTurns),
+      { value: d.coveredCurrent, unit: "A" },
+      { value: d.supplyCurrent, unit: "A" },
+      db(d.margins.exposure),
+      db(d.margins.emission),
+      d.binding,
+      i === 0 ? "—" : d.lostBecause.split(":")[0]!,
+    ]),
+    `searchDesign (${search.evaluations} designs: coarse grid, then compass search; finalists re-mapped with coverageMap's refinement). Requirements: ${pct(SEARCH_SHARE, 0)} of the playing area lit, the 5 V 3 A adapter within 80 %, ICNIRP 2010's basic restriction for the public and the US emission rule (47 CFR 15.209: a game sold in the US) each with 6 dB to spare; space: 2 × 2 to 3 × 3 round coils tiling the board, in quadrature or alternating, 6–40 turns of 1 mm wire, 100–250 kHz, pieces of 40–100 turns. Exposure and emission margins are beyond the required 6 dB.`,
+  );
+  nb.text(
+    search.feasible
+      ? `Build instead: **${best.summary}**.`
+      : `Nothing in the searched space meets every requirement: ${search.shortfall!.message}. The closest: ${best.summary}.`,
+    `The four square tiles of this board light ${pct(chosenScheme.litShare)} of the grid in ${chosenScheme.label} from ${q(worstDraw, "A")}; emission and exposure were not part of their choice.`,
+    `Exposure: ${best.exposure}. Emission: ${best.emission}.`,
+    "The search's field and emission figures are estimates on coarse grids, not compliance tests; the design it recommends still needs its own map, yield and safety report (sections 1–5 for the tiles) and measurement.",
+  );
   nb.cautions([
     "Game pieces of 35 mm pass the small-parts cylinder but their LEDs and capacitors must stay sealed inside: a broken piece is a small-parts hazard for young children.",
-    ...new Set([...centre.cautions, ...safetyCautions]),
+    ...new Set([...centre.cautions, ...safetyCautions, ...search.cautions]),
   ]);
 
   return {
@@ -345,6 +408,7 @@ export async function run(options: ScenarioOptions = {}): Promise<{ notebook: No
       tilt: tiltRows,
       batch: { lit: litCount, count: BATCH, lower: interval.lower, upper: interval.upper },
       supply: { current: verdict.current, verdict: verdict.verdict },
+      search,
     },
   };
 }
