@@ -3,7 +3,9 @@
  * coverage map of a transmitter array needs — through one cached couplingEvaluator per distinct
  * transmitter coil.
  */
-import { TanklightInputError } from "../errors.ts";
+import { TanklightInputError, underName } from "../errors.ts";
+import { unknownKeyMessage } from "../schema.ts";
+import { checkCoil, checkPose } from "./inputs.ts";
 import { couplingEvaluator, type CouplingEvaluator, type CouplingEvaluatorOptions } from "./couplingEvaluator.ts";
 import { poseFrame } from "./frames.ts";
 import type { Coil, Pose } from "./types.ts";
@@ -25,6 +27,9 @@ export interface ArrayCoupling {
   readonly evaluators: readonly CouplingEvaluator[];
 }
 
+/** The most transmitters of one array (each costs one coupling evaluation per token pose). */
+const MAX_TRANSMITTERS = 10000;
+
 /**
  * Fast M of each transmitter of an array to a token at any pose — the building block of an
  * array's coverage map (docs/methods/em.md, "Arrays"). Transmitters that share a coil object
@@ -44,17 +49,29 @@ export function arrayCoupling(transmitters: readonly ArrayTransmitter[], token: 
   if (!Array.isArray(transmitters) || transmitters.length === 0) {
     throw new TanklightInputError([{ path: "transmitters", message: "must be a list of at least one { coil, pose }", value: transmitters }], where);
   }
-  transmitters.forEach((t, i) => poseFrame(t?.pose, where, `transmitters[${i}].pose`));
+  if (transmitters.length > MAX_TRANSMITTERS) {
+    throw new TanklightInputError([{ path: "transmitters", message: `lists more than ${MAX_TRANSMITTERS} transmitters (each is one evaluation per token pose)`, value: `${transmitters.length} transmitters` }], where);
+  }
+  const poses = transmitters.map((t, i) => {
+    const at = `transmitters[${i}]`;
+    if (typeof t !== "object" || t === null || Array.isArray(t)) throw new TanklightInputError([{ path: at, message: "must be { coil, pose }", value: t }], where);
+    for (const key of Reflect.ownKeys(t)) {
+      if (key !== "coil" && key !== "pose") throw new TanklightInputError([{ path: `${at}.${String(key)}`, message: unknownKeyMessage(String(key), ["coil", "pose"]), value: (t as unknown as Record<PropertyKey, unknown>)[key] }], where);
+    }
+    checkCoil(t.coil, `${at}.coil`, where);
+    poseFrame(t.pose, where, `${at}.pose`);
+    return checkPose(t.pose, `${at}.pose`, where);
+  });
+  checkCoil(token, "token", where);
   const byCoil = new Map<Coil, CouplingEvaluator>();
   const evaluators = transmitters.map((t) => {
     let ev = byCoil.get(t.coil);
     if (ev === undefined) {
-      ev = couplingEvaluator(t.coil, token, options);
+      ev = underName(where, () => couplingEvaluator(t.coil, token, options));
       byCoil.set(t.coil, ev);
     }
     return ev;
   });
-  const poses = transmitters.map((t) => t.pose);
   return {
     mutual(tokenPose, out = new Float64Array(poses.length)) {
       for (let i = 0; i < poses.length; i++) out[i] = evaluators[i]!.mutual(poses[i]!, tokenPose);

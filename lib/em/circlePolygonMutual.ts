@@ -8,6 +8,8 @@ import { TanklightInputError, type InputIssue } from "../errors.ts";
 import { segmentLog } from "./segmentPotential.ts";
 import { packPolygons, SEG_STRIDE } from "./straightMutual.ts";
 import type { Vec3 } from "./types.ts";
+import { checkLoop } from "./inputs.ts";
+import { SIZE_LIMITS } from "./builders/common.ts";
 
 const MU0_OVER_4PI = MU0 / (4 * Math.PI);
 /** The doubling stops at this many nodes; a ring that needs more grazes a wire (caller falls back). */
@@ -193,14 +195,22 @@ export function circlePolygonMutual(
   options: { readonly relTol?: number } = {},
 ): number {
   const where = "circlePolygonMutual";
+  // strict keys: { center, axis, radius } (a coil's circle filament, with kind and turns, also fits)
+  circle = checkLoop(circle, "circle", where);
+  if (options === null || typeof options !== "object" || Array.isArray(options) || Reflect.ownKeys(options).some((k) => k !== "relTol")) {
+    throw new TanklightInputError([{ path: "options", message: "must be an object { relTol? }", value: options }], where);
+  }
+  if (Array.isArray(polygon) && polygon.length > SIZE_LIMITS.points.max) {
+    throw new TanklightInputError([{ path: "polygon", message: `holds more than ${SIZE_LIMITS.points.max} vertices: ${SIZE_LIMITS.points.why}`, value: `${polygon.length} vertices` }], where);
+  }
   const fin = (v: unknown) => Array.isArray(v) && v.length === 3 && v.every((x) => typeof x === "number" && Number.isFinite(x));
   const issues: InputIssue[] = [];
   if (!circle || !fin(circle.center)) issues.push({ path: "circle.center", message: "must be three finite coordinates in m", value: circle?.center });
   if (!circle || !fin(circle.axis) || Math.hypot(...circle.axis) === 0) issues.push({ path: "circle.axis", message: "must be a non-zero direction", value: circle?.axis });
   if (!circle || !(typeof circle.radius === "number" && Number.isFinite(circle.radius) && circle.radius > 0)) issues.push({ path: "circle.radius", message: "must be a finite length > 0 m", value: circle?.radius });
   if (!Array.isArray(polygon) || polygon.length < 2 || !polygon.every(fin)) issues.push({ path: "polygon", message: "must be at least 2 vertices [x, y, z] in m", value: polygon });
-  const relTol = options.relTol ?? 1e-10;
-  if (!(relTol > 0 && relTol < 1)) issues.push({ path: "options.relTol", message: "must be in (0, 1)", value: relTol });
+  const relTol = options.relTol === undefined ? 1e-10 : options.relTol;
+  if (!(typeof relTol === "number" && relTol >= 1e-15 && relTol < 1)) issues.push({ path: "options.relTol", message: "must be in [1e-15, 1)", value: relTol });
   if (issues.length > 0) throw new TanklightInputError(issues, where);
   const segs = packPolygons([{ points: polygon, turns: 1 }]);
   const [ax, ay, az] = circle.axis;

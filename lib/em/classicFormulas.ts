@@ -19,7 +19,15 @@ function check(where: string, path: string, x: number, rule: "positive" | "nonNe
     const expected = rule === "positive" ? "a finite number > 0" : "a finite number ≥ 0";
     throw new TanklightInputError([{ path, message: `must be ${expected}`, value: x, expected }], where);
   }
+  // lengths in m and turn counts: beyond these the formulas' products (n²·a, a²/ℓ) leave double precision
+  if (x > FORMULA_MAX || (x > 0 && x < FORMULA_MIN)) {
+    throw new TanklightInputError([{ path, message: `must lie in [${FORMULA_MIN}, ${FORMULA_MAX}] (lengths in m, turn counts): beyond, the formula's products leave double precision`, value: x }], where);
+  }
 }
+
+/** Sane magnitudes of a formula's lengths (m) and turn counts. */
+const FORMULA_MIN = 1e-9;
+const FORMULA_MAX = 1e6;
 
 /** {@link check} of every argument in `args` (its key is the field name), in order: each a finite number > 0. */
 function checkPositive(where: string, args: Readonly<Record<string, number>>): void {
@@ -146,7 +154,7 @@ export function lundinNagaokaCoefficient(radius: number, length: number): number
  * @example currentSheetInductance(0.01, 0.02, 20) // → 5.4356e-6 (5.44 µH)
  */
 export function currentSheetInductance(radius: number, length: number, turns: number): number {
-  check("currentSheetInductance", "turns", turns);
+  checkPositive("currentSheetInductance", { radius, length, turns });
   return (nagaokaCoefficient(radius, length) * MU0 * Math.PI * radius * radius * turns * turns) / length;
 }
 
@@ -269,7 +277,7 @@ export function mohanModifiedWheelerInductance(
   outline: Exclude<SpiralOutline, "circle">,
 ): number {
   const { dAvg, rho } = spiralMeans("mohanModifiedWheelerInductance", turns, outerDiameter, innerDiameter);
-  const coef = MOHAN_WHEELER[outline];
+  const coef = typeof outline === "string" && Object.hasOwn(MOHAN_WHEELER, outline) ? MOHAN_WHEELER[outline] : undefined;
   if (coef === undefined) {
     throw new TanklightInputError(
       [{ path: "outline", message: "must be 'square', 'hexagonal' or 'octagonal'", value: outline }],
@@ -294,7 +302,7 @@ export function mohanCurrentSheetInductance(
   outline: SpiralOutline,
 ): number {
   const { dAvg, rho } = spiralMeans("mohanCurrentSheetInductance", turns, outerDiameter, innerDiameter);
-  const c = MOHAN_SHEET[outline];
+  const c = typeof outline === "string" && Object.hasOwn(MOHAN_SHEET, outline) ? MOHAN_SHEET[outline] : undefined;
   if (c === undefined) {
     throw new TanklightInputError(
       [{ path: "outline", message: "must be 'square', 'hexagonal', 'octagonal' or 'circle'", value: outline }],
@@ -326,7 +334,13 @@ export function groverRectangleInductance(
 ): number {
   const where = "groverRectangleInductance";
   checkPositive(where, { width, height, wireRadius });
-  const y = opts.internal ?? 0.25;
+  if (typeof opts !== "object" || opts === null || Array.isArray(opts)) {
+    throw new TanklightInputError([{ path: "opts", message: "must be an object { internal? }", value: opts }], where);
+  }
+  for (const key of Reflect.ownKeys(opts)) {
+    if (key !== "internal") throw new TanklightInputError([{ path: `opts.${String(key)}`, message: "unknown option (accepted: internal)", value: (opts as Record<PropertyKey, unknown>)[key] }], where);
+  }
+  const y = opts.internal === undefined ? 0.25 : opts.internal;
   check(where, "internal", y, "nonNegative");
   const a = width;
   const b = height;
@@ -353,8 +367,15 @@ export function groverRectangleInductance(
  * @example rosaB(10) // → 0.2664
  */
 export function rosaB(turns: number): number {
-  if (!(Number.isInteger(turns) && turns >= 1)) {
-    throw new TanklightInputError([{ path: "turns", message: "must be an integer ≥ 1", value: turns }], "rosaB");
+  return rosaBOf(turns, "rosaB");
+}
+
+/** The largest turn count of Rosa's B: the sum has one term per turn (1e9 turns ran for minutes; 1e300 never ended). */
+const ROSA_MAX_TURNS = 100000;
+
+function rosaBOf(turns: number, where: string): number {
+  if (!(Number.isInteger(turns) && turns >= 1 && turns <= ROSA_MAX_TURNS)) {
+    throw new TanklightInputError([{ path: "turns", message: `must be a whole number from 1 to ${ROSA_MAX_TURNS} (Rosa's sum has one term per turn)`, value: turns }], where);
   }
   let sum = 0;
   for (let k = 1; k < turns; k++) {
@@ -381,6 +402,7 @@ export function rosaB(turns: number): number {
 export function rosaRoundWireCorrection(radius: number, turns: number, pitch: number, wireDiameter: number): number {
   const where = "rosaRoundWireCorrection";
   checkPositive(where, { radius, pitch, wireDiameter });
+  const B = rosaBOf(turns, where);
   const A = 1.25 - Math.log((2 * pitch) / wireDiameter);
-  return MU0 * radius * turns * (A + rosaB(turns));
+  return MU0 * radius * turns * (A + B);
 }

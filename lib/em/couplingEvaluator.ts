@@ -3,7 +3,9 @@
  * coverage maps): both coils' turns lumped into a few representative loops, with an error
  * estimate from two lumping orders and a fall-back to the exact filament sum.
  */
-import { TanklightInputError } from "../errors.ts";
+import { z } from "zod";
+import { dimensionless, frequency, inductance, lazySchema } from "../schema.ts";
+import { GEOMETRY_LIMITS, checkCoil as checkCoilArg, optionsArg } from "./inputs.ts";
 import { aOverRhoKernel } from "./loopKernel.ts";
 import { filamentMutual, filamentProbe } from "./filamentMutual.ts";
 import { conductorRadius } from "./mutualInductance.ts";
@@ -201,16 +203,30 @@ function frameOf(pose: Pose, field: string): Frame {
     const a = pose.axis;
     if (a !== undefined && !(Array.isArray(a) && a.length === 3 && a[0] === 0 && a[1] === 0 && a[2] > 0 && a[2] < Infinity)) return poseFrame(pose, "couplingEvaluator", field);
     const p = pose.position;
-    if (Array.isArray(p) && p.length === 3 && Number.isFinite(p[0]) && Number.isFinite(p[1]) && Number.isFinite(p[2])) return { R: IDENTITY, position: p };
+    const L = GEOMETRY_LIMITS.maxLength;
+    const inRange = (x: unknown): boolean => typeof x === "number" && x >= -L && x <= L;
+    let known = true;
+    for (const k in pose) if (k !== "position" && k !== "axis" && k !== "spin") known = false;
+    if (known && Array.isArray(p) && p.length === 3 && inRange(p[0]) && inRange(p[1]) && inRange(p[2])) return { R: IDENTITY, position: p };
   }
+  // everything else (a typo, a quantity string, a tilt) through the full check
   return poseFrame(pose, "couplingEvaluator", field);
 }
 
-function checkCoil(c: Coil, field: string): void {
-  if (!c || !Array.isArray(c.filaments) || c.filaments.length === 0 || !c.conductor) {
-    throw new TanklightInputError([{ path: field, message: "must be a Coil with at least one filament and a conductor", value: c }], "couplingEvaluator");
-  }
-}
+/** The options: strict keys (a typo names the nearest one), quantity strings ("200 kHz", "1 nH"). */
+const CouplingOptionsSpec = lazySchema(() =>
+  z.strictObject({
+    relTol: dimensionless({ positive: true, max: 0.5 }).optional(),
+    absTol: inductance({ nonNegative: true, max: 1 }).optional(),
+    frequency: frequency({ nonNegative: true, max: 1e12 }).optional(),
+  }),
+);
+/** options already in SI: known keys, numbers in range (the fast path of optionsArg) */
+const siOptions = (o: Record<string, unknown>): boolean => {
+  for (const k in o) if (k !== "relTol" && k !== "absTol" && k !== "frequency") return false;
+  const r = o["relTol"], a = o["absTol"], f = o["frequency"];
+  return (r === undefined || (typeof r === "number" && r > 0 && r <= 0.5)) && (a === undefined || (typeof a === "number" && a >= 0 && a <= 1)) && (f === undefined || (typeof f === "number" && f >= 0 && f <= 1e12));
+};
 
 /**
  * A coupling evaluator for one transmitter–receiver pair, built once and evaluated at many
@@ -249,15 +265,10 @@ function checkCoil(c: Coil, field: string): void {
 export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluatorOptions = {}): CouplingEvaluator {
   // One function on purpose (≈ 300 lines): a factory whose closures share the coils' lump levels, Gauss tables and per-pose scratch
   // (levels A–C below); split into modules they would pass a dozen arrays on every pose of a coverage map.
-  checkCoil(tx, "tx");
-  checkCoil(rx, "rx");
+  checkCoilArg(tx, "tx", "couplingEvaluator");
+  checkCoilArg(rx, "rx", "couplingEvaluator");
+  options = optionsArg(CouplingOptionsSpec, options, "options", "couplingEvaluator", siOptions) as CouplingEvaluatorOptions;
   const relTol = options.relTol ?? 1e-3;
-  if (!(relTol > 0 && relTol < 1)) {
-    throw new TanklightInputError([{ path: "options.relTol", message: "must be in (0, 1)", value: relTol }], "couplingEvaluator");
-  }
-  if (options.absTol !== undefined && !(Number.isFinite(options.absTol) && options.absTol >= 0)) {
-    throw new TanklightInputError([{ path: "options.absTol", message: "must be a finite inductance ≥ 0 H", value: options.absTol }], "couplingEvaluator");
-  }
   // the self-inductances only when coupling() or selfTx/selfRx is first asked for (a 120-turn
   // token's costs more than a thousand poses; mutual-only users such as solveLink never need them)
   const fOpt = options.frequency === undefined ? {} : { frequency: options.frequency };

@@ -3,6 +3,7 @@
  * the world positions of its filaments.
  */
 import { TanklightInputError } from "../errors.ts";
+import { checkCoil, checkPose } from "./inputs.ts";
 import type { Coil, Filament, Pose, Vec3 } from "./types.ts";
 
 /** A validated pose as a 3×3 rotation (row-major, coil → world) and a translation. */
@@ -27,7 +28,8 @@ function finiteVec(v: unknown, path: string, where: string): Vec3 {
  * with the in-plane direction normalised first, so nothing cancels or underflows near n = −z
  * (there the in-plane orientation, i.e. the reference of `spin`, depends on the direction of approach).
  *
- * @param pose `{ position (m), axis? (any non-zero vector, normalised; default [0,0,1]), spin? (rad, default 0) }`.
+ * @param pose `{ position (m), axis? (any non-zero vector, normalised; default [0,0,1]), spin? (rad, default 0) }`;
+ *   strict keys, lengths and angles may be quantity strings (`["12 mm", 0, "2 cm"]`, `"30 deg"`).
  * @param where function name for error messages.  @param field field name for error messages.
  * @returns the frame (R row-major, position). Throws TanklightInputError on NaN/∞ or a zero axis.
  * @example poseFrame({ position: [0, 0, 0.01], axis: [1, 0, 0] }).R // → [0,0,1, 0,1,0, −1,0,0]
@@ -36,6 +38,8 @@ export function poseFrame(pose: Pose, where = "poseFrame", field = "pose"): Fram
   if (!pose || typeof pose !== "object") {
     throw new TanklightInputError([{ path: field, message: "must be a pose { position, axis?, spin? }", value: pose }], where);
   }
+  // strict keys (a mistyped 'axsi' names 'axis'), quantity strings ("12 mm", "30 deg") to SI
+  pose = checkPose(pose, field, where);
   const position = finiteVec(pose.position, `${field}.position`, where);
   let nx = 0, ny = 0, nz = 1;
   if (pose.axis !== undefined) {
@@ -123,6 +127,7 @@ export function filamentToWorld(f: Filament, frame: Frame): Filament {
  * @example worldFilaments(coil, { position: [0, 0, 0.02] }) // each circle's centre raised by 20 mm
  */
 export function worldFilaments(coil: Coil, pose: Pose, where = "worldFilaments", field = "pose"): Filament[] {
+  checkCoil(coil, "coil", where);
   const frame = poseFrame(pose, where, field);
   return coil.filaments.map((f) => filamentToWorld(f, frame));
 }

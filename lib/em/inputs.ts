@@ -13,7 +13,7 @@ import { TanklightInputError, type InputIssue } from "../errors.ts";
 import { angle, parseInput, unitVector, vec3, type QuantitySchema, lazySchema } from "../schema.ts";
 import { MATERIALS } from "./materials.ts";
 import { SIZE_LIMITS } from "./builders/common.ts";
-import type { Coil, Filament, Pose, Vec3 } from "./types.ts";
+import type { Coil, Conductor, Filament, Pose, Vec3 } from "./types.ts";
 
 // ── building blocks (SI numbers: coils and filaments are plain data in metres) ─────────────
 
@@ -246,4 +246,32 @@ export function optionsArg<T extends object>(schema: z.ZodType<T>, value: unknow
   if (value === undefined) return {} as T;
   if (fast !== undefined && plain(value) && Object.getOwnPropertySymbols(value).length === 0 && fast(value)) return value as T;
   return parseArg(schema, value, field, where);
+}
+
+/**
+ * Scalar arguments of the loss and formula internals: each a finite number, > 0 (or ≥ 0 for
+ * "nonNegative"), at most 1e15 in magnitude and, when not zero, at least 1e-15 (SI: lengths in m,
+ * frequencies in Hz, resistivities in Ω·m all lie well inside); an error names the argument and
+ * `where`.
+ * @example checkNumbers("slabSkinFactor", [["Delta", 1.5, "nonNegative"]]) // → undefined (no error)
+ */
+export function checkNumbers(where: string, args: readonly (readonly [string, unknown, "positive" | "nonNegative"])[]): void {
+  for (const [name, x, rule] of args) {
+    const ok = typeof x === "number" && Number.isFinite(x) && (rule === "positive" ? x > 0 : x >= 0) && x <= 1e15 && (x === 0 || x >= 1e-15);
+    if (!ok) {
+      throw new TanklightInputError([{ path: name, message: `must be a finite number ${rule === "positive" ? "> 0" : "≥ 0"} in [1e-15, 1e15] (SI units)`, value: x }], where);
+    }
+  }
+}
+
+/** A conductor argument (as roundWire, litzWire, pcbTrace return it): strict keys, finite SI sizes. */
+export function checkConductor(c: unknown, field: string, where: string): Conductor {
+  if (conductorOk(c)) return c as Conductor;
+  return parseArg(ConductorSpec, c, field, where) as Conductor;
+}
+
+/** A result that must be finite (the arguments were checked, but their combination left the double range). */
+export function finiteResult<T extends number>(x: T, what: string, where: string): T {
+  if (!Number.isFinite(x)) throw new TanklightInputError([{ path: "result", message: `${what} is not a finite double for these arguments`, value: x }], where);
+  return x;
 }

@@ -55,6 +55,31 @@ export const MATERIALS: Readonly<Record<string, Material>> = {
 /** 20 °C in kelvin, the reference temperature of ρ₂₀ and α₂₀. */
 export const REFERENCE_TEMPERATURE = 293.15;
 
+const MATERIAL_KEYS = ["name", "resistivity20", "temperatureCoefficient20", "relativePermeability", "source"];
+
+/**
+ * A hand-made Material: exactly the keys of {@link Material}, a name, a resistivity > 0 Ω·m,
+ * a temperature coefficient within ±0.1 /K and a relative permeability ≥ 1 (finite numbers).
+ */
+function checkMaterial(m: unknown, field: string, where: string): Material {
+  const o = m as Record<string, unknown>;
+  const bad = (path: string, message: string, value: unknown): never => {
+    throw new TanklightInputError([{ path, message, value }], where);
+  };
+  if (typeof m !== "object" || m === null || Array.isArray(m)) return bad(field, "must be a material name or a Material { name, resistivity20, temperatureCoefficient20, relativePermeability, source }", m);
+  for (const key of Reflect.ownKeys(o)) if (!MATERIAL_KEYS.includes(key as string)) bad(`${field}.${String(key)}`, `unknown field (accepted: ${MATERIAL_KEYS.join(", ")})`, o[key as string]);
+  const num = (k: string, lo: number, hi: number): void => {
+    const x = o[k];
+    if (!(typeof x === "number" && x >= lo && x <= hi)) bad(`${field}.${k}`, `must be a finite number in [${lo}, ${hi}]`, x);
+  };
+  if (typeof o["name"] !== "string") bad(`${field}.name`, "must be a string", o["name"]);
+  if (typeof o["source"] !== "string") bad(`${field}.source`, "must be a string", o["source"]);
+  num("resistivity20", 1e-12, 1e6);
+  num("temperatureCoefficient20", -0.1, 0.1);
+  num("relativePermeability", 1, 1e6);
+  return m as Material;
+}
+
 /**
  * Resolves a material by name (default copper), or passes a Material through.
  * @param material a name from MATERIALS ("copper", "aluminium"), a Material, or undefined (→ copper).
@@ -63,7 +88,7 @@ export const REFERENCE_TEMPERATURE = 293.15;
  */
 export function material(material?: string | Material): Material {
   if (material === undefined) return COPPER;
-  if (typeof material !== "string") return material;
+  if (typeof material !== "string") return checkMaterial(material, "material", "material");
   const key = material.toLowerCase();
   // own keys only: "__proto__", "constructor" are not materials
   const m = Object.hasOwn(MATERIALS, key) ? MATERIALS[key] : undefined;
@@ -88,6 +113,7 @@ export function material(material?: string | Material): Material {
  * @example resistivityAt(COPPER, 353.15) // → 2.1306e-8 (80 °C)
  */
 export function resistivityAt(m: Material, temperature: number = REFERENCE_TEMPERATURE): number {
+  if (m !== COPPER && m !== ALUMINIUM) checkMaterial(m, "m", "resistivityAt");
   if (!(typeof temperature === "number" && Number.isFinite(temperature) && temperature >= 150 && temperature <= 700)) {
     throw new TanklightInputError(
       [{

@@ -46,8 +46,8 @@ export const FR4_PERMITTIVITY = 4.4;
  */
 export function medhurstCoefficient(lengthOverDiameter: number): { H: number; extrapolated: boolean } {
   const x = lengthOverDiameter;
-  if (!(Number.isFinite(x) && x > 0)) {
-    throw new TanklightInputError([{ path: "lengthOverDiameter", message: "must be a finite number > 0", value: x }], "medhurstCoefficient");
+  if (!(typeof x === "number" && Number.isFinite(x) && x >= 1e-6 && x <= 1e6)) {
+    throw new TanklightInputError([{ path: "lengthOverDiameter", message: "must be a finite number from 1e-6 to 1e6 (the table's power law extrapolated beyond leaves double precision)", value: x }], "medhurstCoefficient");
   }
   const T = MEDHURST_TABLE;
   const n = T.length;

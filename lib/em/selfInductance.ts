@@ -47,6 +47,14 @@ const Y_BLEND_POWER = 4.8;
  * @example internalInductanceFactor(0) // → 0.25
  */
 export function internalInductanceFactor(x: number): number {
+  if (!(typeof x === "number" && Number.isFinite(x) && x >= 0)) {
+    throw new TanklightInputError([{ path: "x", message: "must be a finite number ≥ 0 (wire radius over skin depth)", value: x }], "internalInductanceFactor");
+  }
+  return internalInductanceFactorCore(x);
+}
+
+/** The unchecked core of {@link internalInductanceFactor} (the own-wire term of every turn). */
+function internalInductanceFactorCore(x: number): number {
   return 0.25 / Math.pow(1 + Math.pow(x / 2, Y_BLEND_POWER), 1 / Y_BLEND_POWER);
 }
 
@@ -64,7 +72,7 @@ export function ownWireGeometry(c: Conductor, frequency?: number): { r: number; 
       const r = c.diameter / 2;
       if (frequency === undefined || frequency === 0) return { r, Y: 0.25 };
       const delta = skinDepthCore(frequency, resistivityAt(material(c.material)));
-      return { r, Y: internalInductanceFactor(r / delta) };
+      return { r, Y: internalInductanceFactorCore(r / delta) };
     }
     case "litz":
       return { r: c.outerDiameter / 2, Y: 0.25 };

@@ -79,7 +79,7 @@ describe("couplingEvaluator", () => {
   });
 
   it("rejects bad options and coils", () => {
-    expect(() => couplingEvaluator(tx, token, { relTol: 0 })).toThrowErrorMatchingInlineSnapshot(`[TanklightInputError: couplingEvaluator: options.relTol: must be in (0, 1), got 0]`);
+    expect(() => couplingEvaluator(tx, token, { relTol: 0 })).toThrowErrorMatchingInlineSnapshot(`[TanklightInputError: couplingEvaluator: options.relTol: must be > 0 and ≤ 0.5000, got 0]`);
     expect(() => couplingEvaluator(tx, { ...token, filaments: [] } as Coil)).toThrow(/rx/);
   });
 

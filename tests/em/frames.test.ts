@@ -48,7 +48,7 @@ describe("poseFrame", () => {
   });
 
   it("rejects a zero or non-finite axis, NaN positions and spins", () => {
-    expect(() => poseFrame({ position: [0, 0, 0], axis: [0, 0, 0] })).toThrowErrorMatchingInlineSnapshot(`[TanklightInputError: poseFrame: pose.axis: must be a non-zero direction, got [0,0,0]]`);
+    expect(() => poseFrame({ position: [0, 0, 0], axis: [0, 0, 0] })).toThrowErrorMatchingInlineSnapshot(`[TanklightInputError: poseFrame: pose.axis: expected a direction (not all zero), got [0,0,0]]`);
     expect(() => poseFrame({ position: [0, Number.NaN, 0] })).toThrow(/position/);
     expect(() => poseFrame({ position: [0, 0, 0], spin: Infinity })).toThrow(/spin/);
   });

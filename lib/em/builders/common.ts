@@ -101,6 +101,11 @@ export function polygonPerimeter(points: readonly Vec3[]): number {
  * @example archimedeanArcLength(0.01, 0.02, 0.001) // → 0.94248… (≈ 10 turns of mean circumference 2π·0.015 m)
  */
 export function archimedeanArcLength(r0: number, r1: number, pitch: number): number {
+  const ok = (x: unknown, min: number): boolean => typeof x === "number" && x >= min && x <= 1e6;
+  const bad = !ok(r0, 0) ? ["r0", r0, "≥ 0 m"] : !ok(r1, 0) || r1 < r0 ? ["r1", r1, "≥ r0 m"] : !ok(pitch, 1e-12) ? ["pitch", pitch, "> 0 m"] : undefined;
+  if (bad !== undefined) {
+    throw new TanklightInputError([{ path: bad[0] as string, message: `must be a finite length ${bad[2] as string} and ≤ 1e6 m (pitch ≥ 1e-12 m)`, value: bad[1] }], "archimedeanArcLength");
+  }
   const b = pitch / (2 * Math.PI);
   const f = (r: number): number => {
     const h = Math.hypot(r, b);

@@ -10,6 +10,7 @@ import { awgDiameter } from "../classicFormulas.ts";
 import { MATERIALS } from "../materials.ts";
 import type { Conductor } from "../types.ts";
 import { IssueList, SIZE_LIMITS, count, isPositiveInteger, metres } from "./common.ts";
+import { checkConductor } from "../inputs.ts";
 
 /** A round solid wire. */
 export type RoundWire = Extract<Conductor, { kind: "round" }>;
@@ -238,6 +239,7 @@ export function pcbTrace(width: LengthInput, thickness: LengthInput, options?: {
  * @example conductorFootprint(roundWire("0.5 mm")) // → 0.0005 (m)
  */
 export function conductorFootprint(c: Conductor): number {
+  checkConductor(c, "c", "conductorFootprint");
   return c.kind === "trace" ? c.width : c.outerDiameter;
 }
 

@@ -5,6 +5,7 @@
 
 import { TanklightInputError, requirePositive, requireNonNegative } from "../../errors.ts";
 import { skinDepthCore } from "./skinDepth.ts";
+import { checkNumbers } from "../inputs.ts";
 
 /**
  * Dowell's AC resistance factor of a winding of m layers (averaged over the winding).
@@ -21,8 +22,8 @@ import { skinDepthCore } from "./skinDepth.ts";
  */
 export function dowellFactor(Delta: number, layers: number): number {
   requireNonNegative(Delta, "Delta", "", "dowellFactor");
-  if (!(Number.isFinite(layers) && layers >= 1)) {
-    throw new TanklightInputError([{ path: "layers", message: "must be a finite number ≥ 1", value: layers }], "dowellFactor");
+  if (!(typeof layers === "number" && Number.isFinite(layers) && layers >= 1 && layers <= 1e4)) {
+    throw new TanklightInputError([{ path: "layers", message: "must be a finite number from 1 to 10000 (the factor grows with layers²; no winding has more)", value: layers }], "dowellFactor");
   }
   if (Delta === 0) return 1;
   const k = (2 * (layers * layers - 1)) / 3;
@@ -58,6 +59,7 @@ export function dowellDelta(diameter: number, pitch: number, f: number, resistiv
   requirePositive(pitch, "pitch", "m", "dowellDelta");
   requirePositive(f, "f", "Hz", "dowellDelta");
   requirePositive(resistivity, "resistivity", "Ω·m", "dowellDelta");
+  checkNumbers("dowellDelta", [["diameter", diameter, "positive"], ["pitch", pitch, "positive"], ["f", f, "positive"], ["resistivity", resistivity, "positive"]]);
   const h = (Math.sqrt(Math.PI) / 2) * diameter;
   const delta = skinDepthCore(f, resistivity);
   return (h / delta) * Math.sqrt(h / pitch);

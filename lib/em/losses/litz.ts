@@ -14,6 +14,9 @@
 import { acFactorFromQ } from "./roundWireAcFactor.ts";
 import { proximityG } from "./proximity.ts";
 import { skinDepthCore } from "./skinDepth.ts";
+import { TanklightInputError } from "../../errors.ts";
+import { SIZE_LIMITS } from "../builders/common.ts";
+import { checkNumbers } from "../inputs.ts";
 
 /** Per-unit-length resistances of a litz bundle at one frequency, Ω/m. */
 export interface LitzResistance {
@@ -42,6 +45,11 @@ export interface LitzResistance {
  * @example litzResistancePerLength(100, 0.1e-3, 1.3e-3, 200e3, 1.7241e-8).dc // → 2.1952e-2 Ω/m
  */
 export function litzResistancePerLength(strands: number, strandDiameter: number, bundleDiameter: number, f: number, resistivity: number): LitzResistance {
+  const where = "litzResistancePerLength";
+  if (!(Number.isInteger(strands) && strands >= 1 && strands <= SIZE_LIMITS.strands.max)) {
+    throw new TanklightInputError([{ path: "strands", message: `must be a whole number from 1 to ${SIZE_LIMITS.strands.max} (${SIZE_LIMITS.strands.why})`, value: strands }], where);
+  }
+  checkNumbers(where, [["strandDiameter", strandDiameter, "positive"], ["bundleDiameter", bundleDiameter, "positive"], ["f", f, "nonNegative"], ["resistivity", resistivity, "positive"]]);
   const rs = strandDiameter / 2;
   const dc = resistivity / (strands * Math.PI * rs * rs);
   if (f === 0) return { dc, skin: 0, internalProximity: 0, externalFactor: 0 };

@@ -17,6 +17,7 @@ import { loopField } from "../loopField.ts";
 import type { Coil, Filament } from "../types.ts";
 import { checkRoundWire } from "./roundWireAcFactor.ts";
 import { skinDepthCore } from "./skinDepth.ts";
+import { checkCoil } from "../inputs.ts";
 
 /**
  * g(γ) = P′·σ/Ĥ² of a round wire in a uniform transverse field (hot path, no checks), γ ≥ 0.
@@ -95,6 +96,7 @@ const RING_SAMPLES = 24;
  * @example turnFieldsPerAmpere(tx).length.length // → 20 (one entry per filament)
  */
 export function turnFieldsPerAmpere(coil: Coil): TurnFields {
+  checkCoil(coil, "coil", "turnFieldsPerAmpere");
   const fs = coil.filaments;
   const n = fs.length;
   const h2 = new Float64Array(n);

@@ -4,6 +4,7 @@
 
 import { requirePositive, requireNonNegative } from "../../errors.ts";
 import { kelvinScaledInto } from "../../math/kelvin.ts";
+import { checkNumbers } from "../inputs.ts";
 import { skinDepthCore } from "./skinDepth.ts";
 
 
@@ -34,6 +35,7 @@ export function checkRoundWire(where: string, sizeField: string, size: number, f
   requirePositive(size, sizeField, "m", where);
   requirePositive(resistivity, "resistivity", "Ω·m", where);
   requireNonNegative(f, "f", "Hz", where);
+  checkNumbers(where, [[sizeField, size, "positive"], ["f", f, "nonNegative"], ["resistivity", resistivity, "positive"]]);
 }
 
 /**

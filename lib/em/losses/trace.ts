@@ -16,6 +16,7 @@
 
 import { MU0 } from "../../constants.ts";
 import { skinDepthCore } from "./skinDepth.ts";
+import { checkNumbers } from "../inputs.ts";
 
 /** Per-unit-length trace resistances at one frequency. */
 export interface TraceResistance {
@@ -36,6 +37,7 @@ export interface TraceResistance {
  * @example slabSkinFactor(0.5) // → 1.0055
  */
 export function slabSkinFactor(Delta: number): number {
+  checkNumbers("slabSkinFactor", [["Delta", Delta, "nonNegative"]]);
   if (Delta < 0.01) return 1 + (4 * Delta ** 4) / 45;
   if (Delta > 20) return Delta;
   return (Delta * (Math.sinh(2 * Delta) + Math.sin(2 * Delta))) / (Math.cosh(2 * Delta) - Math.cos(2 * Delta));
@@ -50,6 +52,7 @@ export function slabSkinFactor(Delta: number): number {
  * @example traceResistancePerLength(1e-3, 35e-6, 200e3, 1.7241e-8).dc // → 0.49260 Ω/m
  */
 export function traceResistancePerLength(width: number, thickness: number, f: number, resistivity: number): TraceResistance {
+  checkNumbers("traceResistancePerLength", [["width", width, "positive"], ["thickness", thickness, "positive"], ["f", f, "nonNegative"], ["resistivity", resistivity, "positive"]]);
   const dc = resistivity / (width * thickness);
   if (f === 0) return { dc, skin: 0, normalFactor: 0, tangentialFactor: 0, beyondThinStrip: false };
   const delta = skinDepthCore(f, resistivity);
