@@ -141,7 +141,7 @@ export async function toleranceYield(system: LinkSystem, variations: VariationsI
   const threads = typeof options.threads === "object" ? options.threads.threads : (options.threads ?? 1);
   const pool: TaskPool | undefined = threads > 1 ? (typeof options.threads === "object" ? options.threads : await taskPool(threads)) : undefined;
   const owned = pool !== undefined && typeof options.threads !== "object";
-  const id = contentId(spec);
+  const id = pool ? contentId(spec) : "";
   const run = (draws: Float64Array): Promise<YieldValues> =>
     pool ? pool.run<YieldValues>({ kind: "yield", id, spec, draws }) : Promise.resolve(model.evaluate(draws));
   const oat = options.sensitivity === "one-at-a-time";
@@ -246,15 +246,27 @@ function constant(xs: Float64Array): boolean {
  * input — the ranks on which Spearman's ρ is defined (the same numbers simple-statistics ranks by).
  */
 function midranks(values: Float64Array): number[] {
-  const order = Uint32Array.from({ length: values.length }, (_, i) => i).sort((a, b) => values[a]! - values[b]!);
-  const ranks = new Array<number>(values.length);
-  let i = 0;
-  while (i < order.length) {
-    let j = i;
-    while (j + 1 < order.length && values[order[j + 1]!] === values[order[i]!]) j++;
-    const rank = (i + j) / 2;
-    for (let k = i; k <= j; k++) ranks[order[k]!] = rank;
-    i = j + 1;
+  // the sorted copy by the engine's native sort; each value's tied run [first, last] by binary search
+  const sorted = Float64Array.from(values).sort();
+  const n = sorted.length;
+  const ranks = new Array<number>(n);
+  for (let i = 0; i < n; i++) {
+    const v = values[i]!;
+    let lo = 0;
+    let hi = n;
+    while (lo < hi) {
+      const mid = (lo + hi) >>> 1;
+      if (sorted[mid]! < v) lo = mid + 1;
+      else hi = mid;
+    }
+    let end = lo;
+    hi = n;
+    while (end < hi) {
+      const mid = (end + hi) >>> 1;
+      if (sorted[mid]! <= v) end = mid + 1;
+      else hi = mid;
+    }
+    ranks[i] = (lo + end - 1) / 2;
   }
   return ranks;
 }
