@@ -100,16 +100,19 @@ export function waveformHarmonics(
   // the last N intervals: samples j = end − N … end − 1 (the end sample repeats the first)
   const start = samples.length - 1 - N;
   const w = 2 * Math.PI * f;
+  let peak = 0;
+  for (let j = start; j < start + N; j++) if (Math.abs(samples[j]!) > peak) peak = Math.abs(samples[j]!);
+  // values beyond 1e150 would overflow the sums of squares and products: those waveforms are
+  // summed divided by their peak (ordinary ones unscaled, so their results keep every bit)
+  const scale = peak > 1e150 ? peak : 1;
   let dc = 0;
   let sq = 0;
-  let peak = 0;
   for (let j = start; j < start + N; j++) {
-    const v = samples[j]!;
+    const v = samples[j]! / scale;
     dc += v;
     sq += v * v;
-    if (Math.abs(v) > peak) peak = Math.abs(v);
   }
-  dc /= N;
+  dc = (dc / N) * scale;
   const amplitude = new Float64Array(count + 1);
   const phase = new Float64Array(count + 1);
   const re = new Float64Array(count + 1);
@@ -124,12 +127,12 @@ export function waveformHarmonics(
     let si = 0;
     for (let j = 0; j < N; j++) {
       const a = (2 * Math.PI * k * j) / spc;
-      const v = samples[start + j]!;
+      const v = samples[start + j]! / scale;
       sr += v * Math.cos(a);
       si -= v * Math.sin(a);
     }
-    sr *= 2 / N;
-    si *= 2 / N;
+    sr *= (2 / N) * scale;
+    si *= (2 / N) * scale;
     // shift reference from t0 to t = 0: multiply by e^{−jkωt0}
     const c = Math.cos(k * w * t0);
     const s = Math.sin(k * w * t0);
@@ -141,7 +144,7 @@ export function waveformHarmonics(
     phase[k] = Math.atan2(i, r);
   }
   let hsum = 0;
-  for (let k = 2; k <= count; k++) hsum += amplitude[k]! * amplitude[k]!;
+  for (let k = 2; k <= count; k++) hsum += (amplitude[k]! / scale) * (amplitude[k]! / scale);
   const a1 = amplitude[1]!;
-  return { dc, amplitude, phase, re, im, distortion: a1 > 0 ? Math.sqrt(hsum) / a1 : Infinity, rms: Math.sqrt(sq / N), peak };
+  return { dc, amplitude, phase, re, im, distortion: a1 > 0 ? (Math.sqrt(hsum) * scale) / a1 : Infinity, rms: Math.sqrt(sq / N) * scale, peak };
 }
