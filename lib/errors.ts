@@ -101,6 +101,19 @@ export function requireFinite(x: number, field: string, unit: string, where: str
 }
 
 /**
+ * Guard for an entry's record argument: throws TanklightInputError unless `value` is a non-null,
+ * non-array object (a network, a result, an options record), so a null or a number gives a
+ * clear error naming the argument instead of a TypeError from inside. `optional`: undefined passes.
+ * @example requireObject(null, "network", "solveLinkNetwork") // → throws TanklightInputError
+ */
+export function requireObject(value: unknown, field: string, where: string, optional = false): void {
+  if (optional && value === undefined) return;
+  if (typeof value !== "object" || value === null || Array.isArray(value)) {
+    throw new TanklightInputError([{ path: field, message: "must be an object", value }], where);
+  }
+}
+
+/**
  * Runs `fn`; a TanklightInputError thrown inside (by a helper the public function calls) is
  * re-thrown under the public function's name, its issues kept, each path prefixed with
  * `pathPrefix` (e.g. "options.").

@@ -17,7 +17,7 @@ import { solveLinkNetwork } from "../link/solveNetwork.ts";
 import type { LinkNetwork } from "../link/network.ts";
 import { DEFAULT_LIT_THRESHOLD } from "../link/network.ts";
 import type { LinkResult } from "../link/result.ts";
-import { TanklightInputError } from "../../errors.ts";
+import { TanklightInputError, requireObject } from "../../errors.ts";
 import { harmonicPorts } from "./ports.ts";
 import { spectrumTables } from "./spectrum.ts";
 import { timeLoad } from "./timeLoad.ts";
@@ -82,6 +82,8 @@ export interface FundamentalCheck {
  * @example fundamentalCheck(net, solveLinkNetwork(net)).estimate // ≈ 1e-16 for a resistor token and a sine drive
  */
 export function fundamentalCheck(network: LinkNetwork, df: LinkResult, litThreshold = DEFAULT_LIT_THRESHOLD): FundamentalCheck {
+  requireObject(network, "network", "fundamentalCheck");
+  requireObject(df, "df", "fundamentalCheck");
   const rx = network.receivers;
   const drive = network.transmitter.drive;
   if (drive.kind === "voltage" && drive.waveform?.kind === "singleSwitch") {
@@ -236,6 +238,8 @@ function gauss(a: Float64Array, b: Float64Array, n: number): void {
  *   "harmonic"; a resistor token: "fundamental" with errorBand.relative 0.001
  */
 export function solveLinkModel(network: LinkNetwork, options: ModelOptions = {}): ModelledLinkResult {
+  requireObject(network, "network", "solveLinkModel");
+  requireObject(options, "options", "solveLinkModel");
   const model = options.model ?? "fundamental";
   if (model !== "fundamental" && model !== "harmonic" && model !== "auto") {
     throw new TanklightInputError([{ path: "model", message: "must be 'fundamental', 'harmonic' or 'auto'", value: model }], "solveLink");

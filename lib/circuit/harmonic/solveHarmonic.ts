@@ -19,7 +19,7 @@
 import { solveLinkNetwork, LinkConvergenceError } from "../link/solveNetwork.ts";
 import type { LinkNetwork, LinkOptions } from "../link/network.ts";
 import type { LinkResult } from "../link/result.ts";
-import { TanklightInputError } from "../../errors.ts";
+import { TanklightInputError, requireObject } from "../../errors.ts";
 import { harmonicPorts, type EmfSpectrum, type HarmonicPorts } from "./ports.ts";
 import { spectrumTables } from "./spectrum.ts";
 import { timeLoad, type TimeLoad } from "./timeLoad.ts";
@@ -75,6 +75,8 @@ export function defaultSamples(order: number): number {
  */
 export function solveLinkHarmonic(network: LinkNetwork, options: HarmonicOptions = {}): HarmonicLinkResult {
   const where = "solveLinkHarmonic";
+  requireObject(network, "network", where);
+  requireObject(options, "options", where);
   const H = options.order ?? DEFAULT_HARMONIC_ORDER;
   if (!(Number.isInteger(H) && H >= 1 && H <= 200)) {
     throw new TanklightInputError([{ path: "order", message: "must be an integer from 1 to 200", value: H, expected: "1…200" }], where);

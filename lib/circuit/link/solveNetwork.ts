@@ -29,7 +29,7 @@
  * tank impedances), ./localSolve.ts (step 1's scalar solve), ./operatingPoint.ts (the
  * iteration on an explicit workspace), ./assembleResult.ts (the result from the solved state).
  */
-import { requirePositive } from "../../errors.ts";
+import { requireObject, requirePositive } from "../../errors.ts";
 import { assembleResult, type SolvedLink } from "./assembleResult.ts";
 import { LinkConvergenceError } from "./localSolve.ts";
 import type { LinkNetwork, LinkOptions } from "./network.ts";
@@ -54,6 +54,8 @@ export { LinkConvergenceError } from "./localSolve.ts";
  * @example one series-tuned 10 µH pair, k = 0.1, 1 V sine, 10 Ω load → power.efficiency ≈ 0.97
  */
 export function solveLinkNetwork(network: LinkNetwork, options: LinkOptions = {}): LinkResult {
+  requireObject(network, "network", "solveLinkNetwork");
+  requireObject(options, "options", "solveLinkNetwork", true);
   requirePositive(network.frequency, "frequency", "Hz", "solveLinkNetwork");
   validateNetwork(network, "solveLinkNetwork");
   return assembleResult(solveLinkOperatingPoint(network, options), options);

@@ -4,6 +4,7 @@
  * these tokens, here", answered with units.
  */
 import { formatQuantity } from "../../units.ts";
+import { requireObject } from "../../errors.ts";
 import type { LinkResult } from "./result.ts";
 
 /** One reported quantity. */
@@ -36,6 +37,7 @@ export interface LinkSummary {
  * @example summarizeLink(solveLink(system)).verdicts[0] // → "receiver 1 · red LED (preset): lit (1.16 mA ≥ 500 µA)" (system: solveLink's example)
  */
 export function summarizeLink(result: LinkResult, digits = 3): LinkSummary {
+  requireObject(result, "result", "summarizeLink");
   const rows: LinkSummaryRow[] = [];
   const add = (quantity: string, value: number, unit: string): void => {
     rows.push({ quantity, value, unit, text: formatQuantity(value, unit, digits) });

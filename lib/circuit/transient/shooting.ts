@@ -12,7 +12,7 @@
  * period that meets the tolerance is the one returned.
  */
 import { solveLinear } from "../../math/lu.ts";
-import { requirePositive, TanklightInputError } from "../../errors.ts";
+import { requireObject, requirePositive, TanklightInputError } from "../../errors.ts";
 import type { TransientCircuit } from "./circuit.ts";
 import { compileCircuit } from "./compile.ts";
 import { Engine } from "./engine.ts";
@@ -55,6 +55,8 @@ export interface ShootingResult extends TransientResult {
  */
 export function periodicSteadyState(circuit: TransientCircuit, opts: ShootingOptions): ShootingResult {
   const where = "periodicSteadyState";
+  requireObject(circuit, "circuit", where);
+  requireObject(opts, "opts", where);
   const f = requirePositive(opts.frequency, "frequency", "Hz", where);
   const spc = opts.stepsPerCycle;
   if (!(Number.isInteger(spc) && spc >= 8)) throw new TanklightInputError([{ path: "stepsPerCycle", message: "must be an integer ≥ 8", value: spc }], where);
