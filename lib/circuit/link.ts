@@ -340,18 +340,14 @@ export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoad
   return { network, coupling, warnings };
 }
 
-/** What {@link transmitterNetwork} needs besides the transmitter: its path and label, its coil's numbers, the shared drives. */
+/**
+ * What {@link transmitterNetwork} needs besides the transmitter: `at` its path in the system for
+ * errors ("transmitter" or "transmitters[i]"), its label, its coil's numbers, the drive frequency
+ * `f` (Hz), the shared drives' names and networks in the system's order, the warnings to add to.
+ */
 interface TransmitterContext {
-  /** the transmitter's path in the system, for errors: "transmitter" or "transmitters[i]" */
-  readonly at: string;
-  readonly label: string;
-  readonly num: CoilNumbers;
-  /** drive frequency, Hz */
-  readonly f: number;
-  /** the shared drives' names and networks, in the system's order */
-  readonly names: readonly string[];
-  readonly sharedDrives: readonly SharedDriveNetwork[];
-  readonly warnings: string[];
+  readonly at: string; readonly label: string; readonly num: CoilNumbers; readonly f: number;
+  readonly names: readonly string[]; readonly sharedDrives: readonly SharedDriveNetwork[]; readonly warnings: string[];
 }
 
 /** A transmitter's network entry: its resistance, capacitor and self-resonance, and its own drive's equivalent or its feed from a shared drive. */
