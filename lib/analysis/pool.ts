@@ -62,7 +62,9 @@ export async function taskPool(threads: number): Promise<TaskPool> {
     throw new TanklightInputError([{ path: "threads", message: "must be an integer from 1 to 256", value: threads }], "taskPool");
   }
   const { Tinypool } = await import("tinypool");
-  const pool = new Tinypool({ filename: workerModule(), minThreads: threads, maxThreads: threads, idleTimeout: 60_000 });
+  // Under Deno tinypool's Atomics.wait loop never sees a task (Deno's worker_threads do not
+  // deliver receiveMessageOnPort there): every run waited forever. Plain messages work.
+  const pool = new Tinypool({ filename: workerModule(), minThreads: threads, maxThreads: threads, idleTimeout: 60_000, useAtomics: typeof Deno === "undefined" });
   return {
     threads,
     run: <T>(task: WorkerTask): Promise<T> => pool.run(task) as Promise<T>,
