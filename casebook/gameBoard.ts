@@ -231,7 +231,8 @@ export async function run(options: ScenarioOptions = {}): Promise<{ notebook: No
     ["square", "alone on the board", "among the 24", "change"],
     neighbours
       .map((n, i) => ({ n, c: change[i]! }))
-      .sort((a, b) => Math.abs(b.c) - Math.abs(a.c))
+      // changes equal to 1e-9 (mirror-image squares) keep board order, the same under Node and Deno
+      .sort((a, b) => Math.round(Math.abs(b.c) * 1e9) - Math.round(Math.abs(a.c) * 1e9))
       .slice(0, 6)
       .map(({ n, c }) => [n.square, { value: n.alone, unit: "A" }, { value: n.together, unit: "A" }, `${c >= 0 ? "+" : "−"}${pct(Math.abs(c))}`]),
     "the six pieces of the starting position (5 cm squares, dark squares of rows 1–3 and 6–8) that change most when all 24 stand together",

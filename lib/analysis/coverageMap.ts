@@ -39,6 +39,9 @@ import { progressCounter, type ProgressCallback } from "./progress.ts";
 import { supplyVerdict, type SupplyInput, type SupplyVerdict } from "./supplyBudget.ts";
 import { checkThreads, pointEvaluator, type PointEvaluator, type ThreadsOption } from "./pool.ts";
 
+/** Relative closeness within which two LED currents count as a tie for the weakest point. */
+const WEAKEST_TIE = 1e-9;
+
 /** Options of {@link coverageMap}. */
 export interface CoverageOptions {
   /** which receiver of the system is the token that moves (default 0) */
@@ -101,7 +104,7 @@ export interface CoverageMap {
   readonly litThreshold: number;
   /** lit share of the region's length, area or volume (from the refined dead zones) */
   readonly litFraction: number;
-  /** the lowest LED current found (coarse and refined points) and where */
+  /** the lowest LED current found (coarse and refined points) and where: among points within 1e-9 of it, the first evaluated */
   readonly weakest: { readonly position: Vec3; readonly current: number };
   readonly deadZones: readonly DeadZone[];
   /** the fine step used, m (the coarse step when not refined) */
@@ -229,7 +232,10 @@ async function evaluateChunks(ctx: Ctx, positions: Float64Array): Promise<ProbeV
   ctx.solves += count * ctx.na;
   ctx.unconverged += unconverged;
   for (let p = 0; p < count; p++) {
-    if (current[p]! < ctx.weakest.current) ctx.weakest = { position: [positions[3 * p]!, positions[3 * p + 1]!, positions[3 * p + 2]!], current: current[p]! };
+    // ties (symmetric points, equal but for the last bits, which differ between JavaScript
+    // engines) keep the first point in evaluation order: Node and Deno report the same place
+    if (current[p]! < ctx.weakest.current * (1 - WEAKEST_TIE)) ctx.weakest = { position: [positions[3 * p]!, positions[3 * p + 1]!, positions[3 * p + 2]!], current: current[p]! };
+    else if (current[p]! < ctx.weakest.current) ctx.weakest = { position: ctx.weakest.position, current: current[p]! };
     if (supply[p]! > ctx.maxSupply) ctx.maxSupply = supply[p]!;
   }
   return { current, mutual, supply, unconverged };
