@@ -264,16 +264,12 @@ export function tokenTable(
     return n;
   };
 
+  const hw = new Float64Array(4); // the four Hermite weights of the last lookup (scratch)
+
   /** The harmonic coefficients at x by cubic Hermite interpolation between nodes a and b. */
   const between = (a: Node, b: Node, x: number): Float64Array => {
-    const hx = b.x - a.x;
-    const t = (x - a.x) / hx;
-    const t2 = t * t;
-    const t3 = t2 * t;
-    const h00 = 2 * t3 - 3 * t2 + 1;
-    const h10 = (t3 - 2 * t2 + t) * hx;
-    const h01 = -2 * t3 + 3 * t2;
-    const h11 = (t3 - t2) * hx;
+    hermiteBasis(a.x, b.x, x, hw);
+    const h00 = hw[0]!, h10 = hw[1]!, h01 = hw[2]!, h11 = hw[3]!;
     const z = new Float64Array(B);
     for (let j = 0; j < B; j++) z[j] = h00 * a.z[j]! + h10 * a.dz[j]! + h01 * b.z[j]! + h11 * b.dz[j]!;
     return z;
@@ -284,14 +280,11 @@ export function tokenTable(
 
   /** Hermite interpolation between nodes a and b at x. */
   const hermite = (a: Node, b: Node, x: number, out: TokenPoint): void => {
+    hermiteBasis(a.x, b.x, x, hw);
+    const h00 = hw[0]!, h10 = hw[1]!, h01 = hw[2]!, h11 = hw[3]!;
     const hx = b.x - a.x;
     const t = (x - a.x) / hx;
     const t2 = t * t;
-    const t3 = t2 * t;
-    const h00 = 2 * t3 - 3 * t2 + 1;
-    const h10 = (t3 - 2 * t2 + t) * hx;
-    const h01 = -2 * t3 + 3 * t2;
-    const h11 = (t3 - t2) * hx;
     const d00 = (6 * t2 - 6 * t) / hx;
     const d10 = 3 * t2 - 4 * t + 1;
     const d01 = (-6 * t2 + 6 * t) / hx;
@@ -385,4 +378,19 @@ export function tokenTable(
     nodes: () => nodes.length,
     deviation: () => ({ admittance: devY, led: devI }),
   };
+}
+
+/**
+ * The cubic Hermite weights at x between nodes x0 and x1, written into w: values h00 (at x0),
+ * h01 (at x1) and slopes h10, h11 (scaled by x1 − x0), in the order [h00, h10, h01, h11].
+ */
+function hermiteBasis(x0: number, x1: number, x: number, w: Float64Array): void {
+  const hx = x1 - x0;
+  const t = (x - x0) / hx;
+  const t2 = t * t;
+  const t3 = t2 * t;
+  w[0] = 2 * t3 - 3 * t2 + 1;
+  w[1] = (t3 - 2 * t2 + t) * hx;
+  w[2] = -2 * t3 + 3 * t2;
+  w[3] = (t3 - t2) * hx;
 }
