@@ -4,7 +4,7 @@
  * (framework: tests/fuzz/framework.ts).
  */
 import { fuzzSuite } from "./framework.ts";
-import { roundCoil } from "../../lib/em/builders/roundCoil.ts";
+import { tx, tok, hand } from "./emFixtures.ts";
 import { mutualInductance, mutualInductanceChecked, couplingFactor } from "../../lib/em/mutualInductance.ts";
 import { selfInductance, selfInductanceDetail } from "../../lib/em/selfInductance.ts";
 import { magneticField } from "../../lib/em/magneticField.ts";
@@ -15,15 +15,6 @@ import { qualityFactor } from "../../lib/em/losses/qualityFactor.ts";
 import { skinDepth } from "../../lib/em/losses/skinDepth.ts";
 import { selfCapacitance, selfResonance } from "../../lib/em/selfCapacitance.ts";
 
-const tx = roundCoil({ innerRadius: "20 mm", turns: 4, wire: { diameter: "0.5 mm" } });
-const tok = roundCoil({ innerRadius: "6 mm", turns: 3, wire: { diameter: "0.2 mm" } });
-/** a hand-made coil: its fields are mutated one by one (builders' coils are frozen and checked by identity) */
-const hand = () => ({
-  filaments: [{ kind: "circle", center: [0, 0, 0], axis: [0, 0, 1], radius: 0.02, turns: 1 }],
-  conductor: { kind: "round", diameter: 5e-4, outerDiameter: 5.5e-4 },
-  turns: 1,
-  wireLength: 0.126,
-});
 const loopA = { center: [0, 0, 0], axis: [0, 0, 1], radius: 0.03 };
 const loopB = { center: [0.01, 0, 0.02], axis: [0, 0.3, 1], radius: 0.01 };
 

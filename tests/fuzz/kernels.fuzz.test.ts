@@ -8,11 +8,12 @@
  * mutated (`skip`); a hand-made coil is mutated field by field.
  */
 import { fuzzSuite } from "./framework.ts";
+import { tx, tok, hand } from "./emFixtures.ts";
 import {
   loopField, arrayCoupling, couplingEvaluator, straightFilamentMutual, polygonPairMutual, circlePolygonMutual,
   resistivityAt, material, COPPER, awgDiameter, currentSheetInductance, wheeler1982Inductance, wheelerSingleLayerInductance,
   wheelerMultilayerInductance, wheelerFlatSpiralInductance, mohanModifiedWheelerInductance, mohanCurrentSheetInductance,
-  groverRectangleInductance, conductorFootprint, roundWire, roundWireAcFactor, qualityFactorDetail, selfCapacitanceDetail, roundCoil,
+  groverRectangleInductance, conductorFootprint, roundWire, roundWireAcFactor, qualityFactorDetail, selfCapacitanceDetail,
 } from "../../lib/mod.ts";
 import {
   loopVectorPotential, segmentVectorPotential, poseFrame, worldFilaments, archimedeanArcLength, internalInductanceFactor,
@@ -21,14 +22,6 @@ import {
   slabSkinFactor, medhurstCoefficient,
 } from "../../lib/advanced.ts";
 
-const tx = roundCoil({ innerRadius: "20 mm", turns: 4, wire: { diameter: "0.5 mm" } });
-const tok = roundCoil({ innerRadius: "6 mm", turns: 3, wire: { diameter: "0.2 mm" } });
-const hand = () => ({
-  filaments: [{ kind: "circle", center: [0, 0, 0], axis: [0, 0, 1], radius: 0.02, turns: 1 }],
-  conductor: { kind: "round", diameter: 5e-4, outerDiameter: 5.5e-4 },
-  turns: 1,
-  wireLength: 0.126,
-});
 const square = (h: number, z: number) => [[-h, -h, z], [h, -h, z], [h, h, z], [-h, h, z]];
 const ev = couplingEvaluator(tx, tok);
 const rho = 1.7241e-8;
