@@ -14,8 +14,21 @@ import type { TokenLoad } from "../../../lib/circuit/loads/types.ts";
 import type { LinkNetwork } from "../../../lib/circuit/link/network.ts";
 import { tokenLoadModel } from "../../../lib/circuit/link/tokenLoad.ts";
 import { fullBridgeDrive, parallelTankDrive, sineDrive } from "../../../lib/circuit/drive.ts";
+import { ledPreset, diodePreset } from "../../../lib/circuit/loads/ledPresets.ts";
 
 export type DriveKind = "sine" | "fullBridge" | "singleSwitch";
+
+/** The token loads the harmonic-balance checks run over, by name. */
+const red = ledPreset("red");
+const green = ledPreset("green-ingan");
+const schottky = diodePreset("schottky");
+export const LOADS: Record<string, TokenLoad> = {
+  "red LED": { kind: "led", led: red },
+  "red + InGaN green back to back": { kind: "antiParallel", a: red, b: green },
+  "red + GaP green, same direction": { kind: "parallelSameDirection", a: red, b: ledPreset("green-gap") },
+  "Schottky bridge + red LED": { kind: "bridge", diode: schottky, led: red },
+  "half-wave reservoir 10 µF + red LED": { kind: "halfWaveReservoir", diode: schottky, led: red, capacitance: 10e-6 },
+};
 
 export const F = 200e3;
 const W = 2 * Math.PI * F;

@@ -11,21 +11,11 @@ import { solveLinkHarmonic } from "../../../lib/circuit/harmonic/solveHarmonic.t
 import { EMF_HARMONICS_LIMIT, linkTable, linkTableRefusal } from "../../../lib/circuit/harmonic/linkTable.ts";
 import type { LinkNetwork } from "../../../lib/circuit/link/network.ts";
 import { ADMITTANCE_TOLERANCE, LED_TOLERANCE } from "../../../lib/circuit/harmonic/tokenTable.ts";
-import { ledPreset, diodePreset } from "../../../lib/circuit/loads/ledPresets.ts";
 import type { TokenLoad } from "../../../lib/circuit/loads/types.ts";
 import { TanklightInputError } from "../../../lib/errors.ts";
 import { expectOutside } from "../../helpers/validation.ts";
-import { networkOf, transientSteady, type DriveKind } from "./circuits.ts";
+import { LOADS, networkOf, transientSteady, type DriveKind } from "./circuits.ts";
 
-const red = ledPreset("red");
-const green = ledPreset("green-ingan");
-const schottky = diodePreset("schottky");
-const LOADS: Record<string, TokenLoad> = {
-  "red LED": { kind: "led", led: red },
-  "red + InGaN green back to back": { kind: "antiParallel", a: red, b: green },
-  "Schottky bridge + red LED": { kind: "bridge", diode: schottky, led: red },
-  "half-wave reservoir 10 µF + red LED": { kind: "halfWaveReservoir", diode: schottky, led: red, capacitance: 10e-6 },
-};
 const L1 = 10e-6;
 const L2 = 30e-6;
 const OPTS = { order: 15, samples: 120, litThreshold: 5e-4 };

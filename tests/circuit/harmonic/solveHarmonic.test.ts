@@ -9,23 +9,11 @@ import { describe, expect, expectTypeOf, it } from "vitest";
 import { solveLinkHarmonic, DEFAULT_HARMONIC_ORDER, type HarmonicLinkResult } from "../../../lib/circuit/harmonic/solveHarmonic.ts";
 import { solveLinkNetwork, LinkConvergenceError } from "../../../lib/circuit/link/solveNetwork.ts";
 import type { LinkNetwork } from "../../../lib/circuit/link/network.ts";
-import { ledPreset, diodePreset } from "../../../lib/circuit/loads/ledPresets.ts";
-import type { TokenLoad } from "../../../lib/circuit/loads/types.ts";
 import { TanklightInputError } from "../../../lib/errors.ts";
 import { expectOutside } from "../../helpers/validation.ts";
 import { expectRelClose } from "../../helpers/expectRelClose.ts";
-import { networkOf, transientSteady, type DriveKind } from "./circuits.ts";
+import { LOADS, networkOf, transientSteady, type DriveKind } from "./circuits.ts";
 
-const red = ledPreset("red");
-const green = ledPreset("green-ingan");
-const schottky = diodePreset("schottky");
-const LOADS: Record<string, TokenLoad> = {
-  "red LED": { kind: "led", led: red },
-  "red + InGaN green back to back": { kind: "antiParallel", a: red, b: green },
-  "red + GaP green, same direction": { kind: "parallelSameDirection", a: red, b: ledPreset("green-gap") },
-  "Schottky bridge + red LED": { kind: "bridge", diode: schottky, led: red },
-  "half-wave reservoir 10 µF + red LED": { kind: "halfWaveReservoir", diode: schottky, led: red, capacitance: 10e-6 },
-};
 
 // drive kind, level (sine: peak V; bridge and switch: supply V), coupling factor, load
 const GRID: readonly [DriveKind, number, number, string][] = [
@@ -170,7 +158,7 @@ describe("solveLinkHarmonic: hard switching", () => {
     const R1 = coilResistance(tx, f);
     const R2 = coilResistance(tok, f);
     const M = mutualInductance(tx, { position: [0, 0, 0] }, tok, { position: [0, 0, 0.03] });
-    const load = { kind: "led" as const, led: red };
+    const load = LOADS["red LED"]!;
     const d = singleSwitchDrive({ supply: 5, frequency: f, coilInductance: L1, coilResistance: R1, tankCapacitance: 56e-9, onResistance: 1e-3 });
     const t = addToken(d.circuit, { coupledTo: d.coil, mutualInductance: M, inductance: L2, resistance: R2, capacitance: 2.2e-9, load });
     const spc = 800;
