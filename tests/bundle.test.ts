@@ -6,15 +6,10 @@
  * z.toJSONSchema of the user's zod reads our metadata).
  */
 import { describe, expect, it } from "vitest";
-import { execFileSync } from "node:child_process";
-import { mkdirSync, rmSync, writeFileSync } from "node:fs";
-import { dirname, join, resolve } from "node:path";
-import { fileURLToPath } from "node:url";
 import { z } from "zod";
-import { bundle } from "../scripts/bundle.ts";
+import { runInBundle } from "./helpers/bundledRun.ts";
 import * as t from "../lib/mod.ts";
 
-const root = resolve(dirname(fileURLToPath(import.meta.url)), "..");
 
 /** The same calls in the bundle (printed as JSON by a plain node process) and from source. */
 const script = `
@@ -33,13 +28,10 @@ const result = { before, after, message, zodMessage, innerRadius: parsed.coil.in
 
 describe("bundled build", () => {
   it("imports without zod, loads it on the first schema, and agrees with the sources", async () => {
-    const out = join(root, "out", "bundle-test", String(process.pid));
-    rmSync(out, { recursive: true, force: true });
-    mkdirSync(out, { recursive: true });
-    await bundle(out);
-    writeFileSync(
-      join(out, "run.mjs"),
-      `import * as t from "./mod.js";
+    const fromBundle = JSON.parse(
+      await runInBundle(
+        "bundle-test",
+        `import * as t from "./mod.js";
 import { createRequire } from "node:module";
 import { z } from "zod";
 const require = createRequire(import.meta.url);
@@ -47,9 +39,8 @@ const zodLoaded = () => require.resolve("./zod.cjs") in require.cache;
 ${script}
 console.log(JSON.stringify(result));
 `,
-    );
-    const fromBundle = JSON.parse(execFileSync(process.execPath, [join(out, "run.mjs")], { encoding: "utf8" })) as Record<string, unknown>;
-    rmSync(out, { recursive: true, force: true });
+      ),
+    ) as Record<string, unknown>;
 
     const zodLoaded = () => true;
     const fromSource = new Function("t", "z", "zodLoaded", `${script}; return result;`)(t, z, zodLoaded) as Record<string, unknown>;

@@ -5,22 +5,12 @@
  * are covered by parallel.test.ts, toleranceYield.test.ts and the benchmarks.
  */
 import { describe, expect, it } from "vitest";
-import { execFileSync } from "node:child_process";
-import { mkdirSync, rmSync, writeFileSync } from "node:fs";
-import { dirname, join, resolve } from "node:path";
-import { fileURLToPath } from "node:url";
-import { bundle } from "../../scripts/bundle.ts";
-
-const root = resolve(dirname(fileURLToPath(import.meta.url)), "..", "..");
+import { runInBundle } from "../helpers/bundledRun.ts";
 
 describe("worker threads from dist/", () => {
   it("a bundled build runs a two-thread coverage map identical to one thread", async () => {
-    const out = join(root, "out", "dist-workers", String(process.pid));
-    rmSync(out, { recursive: true, force: true });
-    mkdirSync(out, { recursive: true });
-    await bundle(out);
-    writeFileSync(
-      join(out, "run.mjs"),
+    const last = await runInBundle(
+      "dist-workers",
       `import * as t from "./mod.js";
 const tx = t.roundCoil({ meanRadius: "50 mm", turns: 5, wire: { diameter: "0.8 mm" } });
 const tok = t.roundCoil({ innerRadius: "6.5 mm", turns: 120, layers: 6, wire: { diameter: "0.1 mm" } });
@@ -32,11 +22,9 @@ const b = await t.coverageMap(sys, region, { threads: 2 });
 console.log(JSON.stringify({ same: a.ledCurrent.every((v, i) => v === b.ledCurrent[i]) && a.solves === b.solves, solves: a.solves, zones: a.deadZones.length }));
 `,
     );
-    const stdout = execFileSync(process.execPath, [join(out, "run.mjs")], { cwd: root, encoding: "utf8", timeout: 240_000 });
-    const r = JSON.parse(stdout.trim().split("\n").pop()!) as { same: boolean; solves: number; zones: number };
+    const r = JSON.parse(last) as { same: boolean; solves: number; zones: number };
     expect(r.same).toBe(true);
     expect(r.zones).toBe(1);
     expect(r.solves).toBeGreaterThan(10);
-    rmSync(out, { recursive: true, force: true });
   }, 300_000);
 });
