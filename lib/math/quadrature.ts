@@ -1,5 +1,5 @@
 /**
- * Numerical quadrature: Gauss–Legendre rules of any order (cached) and globally adaptive
+ * Numerical quadrature: Gauss–Legendre rules of any order (the small ones kept) and globally adaptive
  * Gauss–Kronrod 7/15 with absolute and relative tolerance.
  *
  * Methods:
@@ -27,15 +27,23 @@ export interface GaussRule {
   readonly weights: Float64Array;
 }
 
-const ruleCache = new Map<number, GaussRule>();
+/** Largest n whose rule is kept after its first use: the kept rules take at most Σ 16n B ≈ 130 kB. */
+const KEPT_MAX = 128;
+/**
+ * The rules for n ≤ KEPT_MAX, index n: a table over a fixed domain whose entries are each built
+ * on first use and never changed after (sealed: it cannot grow). Larger rules are built on each
+ * call, so no input can make the module hold more memory (n = 10000 alone is 160 kB).
+ */
+const keptRules: (GaussRule | undefined)[] = Object.seal(new Array<GaussRule | undefined>(KEPT_MAX + 1).fill(undefined));
 /** Newton stop for the Gauss–Legendre nodes: absolute step below this. */
 const NODE_TOLERANCE = 1e-15;
 
 /**
  * Gauss–Legendre nodes and weights on [−1, 1], exact for polynomials of degree ≤ 2n − 1.
  *
- * @param n number of points, integer 1 ≤ n ≤ 10000 (building n = 10000 takes about a second, once). Results are cached per n (the arrays
- *   are shared: do not modify them).
+ * @param n number of points, integer 1 ≤ n ≤ 10000. The rules for n ≤ 128 are kept after their first use (the arrays
+ *   are shared: do not modify them); a larger rule is built on each call, in O(n²) (n = 10000 takes about a second):
+ *   a caller that needs one often keeps it.
  * @returns `{ nodes, weights }`, ascending nodes, dimensionless.
  * Method: Newton on P_n (A&S 22.7.10), weights A&S 25.4.29.
  * @example gaussLegendre(2).nodes // → [−0.5773502691896257, 0.5773502691896257], weights [1, 1]
@@ -47,8 +55,8 @@ export function gaussLegendre(n: number): GaussRule {
       "gaussLegendre",
     );
   }
-  const cached = ruleCache.get(n);
-  if (cached) return cached;
+  const kept = n <= KEPT_MAX ? keptRules[n] : undefined;
+  if (kept !== undefined) return kept;
   const nodes = new Float64Array(n);
   const weights = new Float64Array(n);
   if (n === 1) {
@@ -89,7 +97,7 @@ export function gaussLegendre(n: number): GaussRule {
     if (n % 2 === 1) nodes[(n - 1) / 2] = 0;
   }
   const rule = { nodes, weights };
-  ruleCache.set(n, rule);
+  if (n <= KEPT_MAX) keptRules[n] = rule;
   return rule;
 }
 
