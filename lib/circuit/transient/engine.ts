@@ -6,7 +6,7 @@
  * Nothing is allocated per step.
  */
 import { TanklightInputError } from "../../errors.ts";
-import { luFactor, luSolve, SingularMatrixError } from "../../math/lu.ts";
+import { luFactorCore, luSolveCore } from "../../math/lu.ts";
 import type { CompiledCircuit } from "./compile.ts";
 import { TransientConvergenceError } from "./errors.ts";
 import { stampDiodes, stampHistory, stampLinear, stampRhs, updateHistory, type ReactiveHistory } from "./stamps.ts";
@@ -29,6 +29,42 @@ function history(cc: CompiledCircuit, initial: boolean): ReactiveHistory {
     indI: initial ? Float64Array.from(cc.inductors, (l) => l.i0) : new Float64Array(cc.inductors.length),
     indW: new Float64Array(cc.inductors.length),
   };
+}
+
+/** `columns` zeroed histories side by side in one set of arrays (column j of the capacitors at [j·nC, (j + 1)·nC), likewise the inductors). */
+function historyBlock(cc: CompiledCircuit, columns: number): ReactiveHistory {
+  const nC = cc.capacitors.length;
+  const nL = cc.inductors.length;
+  return { capV: new Float64Array(columns * nC), capI: new Float64Array(columns * nC), indI: new Float64Array(columns * nL), indW: new Float64Array(columns * nL) };
+}
+
+/** Column j of a {@link historyBlock}, as views on its arrays (writes go to the block). */
+function historyColumn(block: ReactiveHistory, nC: number, nL: number, j: number): ReactiveHistory {
+  return {
+    capV: block.capV.subarray(j * nC, (j + 1) * nC),
+    capI: block.capI.subarray(j * nC, (j + 1) * nC),
+    indI: block.indI.subarray(j * nL, (j + 1) * nL),
+    indW: block.indW.subarray(j * nL, (j + 1) * nL),
+  };
+}
+
+/**
+ * The sensitivities of the history to the state written by {@link Engine.writeState}: one
+ * history per state variable j (∂history/∂state₀[j]), all held in one block so that saving,
+ * restoring and the TR-BDF2 stage copy are a few array copies a step.
+ */
+interface Sensitivities {
+  /** the columns side by side (historyBlock) */
+  readonly block: ReactiveHistory;
+  /** column j as views on `block` */
+  readonly columns: readonly ReactiveHistory[];
+  /** `block` saved before a step that may be rejected */
+  readonly saved: ReactiveHistory;
+  /** capacitor voltages and inductor currents of every column at the start of a TR-BDF2 step */
+  readonly stageCapV: Float64Array;
+  readonly stageIndI: Float64Array;
+  /** workspace: one column's right-hand side and solution */
+  readonly dx: Float64Array;
 }
 
 /** Copies one history into another of the same circuit. */
@@ -76,7 +112,7 @@ export class Engine {
    * state variable: column j is ∂(history)/∂state₀[j]), present once {@link trackSensitivities}
    * was called, propagated only while `sensitivities` is true.
    */
-  private sens: { hist: ReactiveHistory[]; saved: ReactiveHistory[]; stageCapV: Float64Array[]; stageIndI: Float64Array[]; dx: Float64Array } | undefined;
+  private sens: Sensitivities | undefined;
   /** propagate the sensitivities in each step (set by {@link trackSensitivities}) */
   private sensitivities = false;
   /** capacitor voltages and inductor currents at the start of a TR-BDF2 step */
@@ -191,14 +227,16 @@ export class Engine {
     this.subStep = subStep;
     this.stableSteps = stableSteps;
     if (this.sens) {
-      this.sens.hist.forEach((sh, j) => {
-        sh.capV.fill(0);
-        sh.indI.fill(0);
-        sh.capI.fill(0);
-        sh.indW.fill(0);
-        if (j < nC) sh.capV[j] = 1;
-        else sh.indI[j - nC] = 1;
-      });
+      const { block } = this.sens;
+      const nL = this.hist.indI.length;
+      block.capV.fill(0);
+      block.capI.fill(0);
+      block.indI.fill(0);
+      block.indW.fill(0);
+      for (let j = 0; j < nC + nL; j++) {
+        if (j < nC) block.capV[j * nC + j] = 1;
+        else block.indI[j * nL + j - nC] = 1;
+      }
     }
   }
 
@@ -212,12 +250,16 @@ export class Engine {
   trackSensitivities(on: boolean): void {
     this.sensitivities = on;
     if (!on || this.sens) return;
-    const nS = this.cc.capacitors.length + this.cc.inductors.length;
+    const nC = this.cc.capacitors.length;
+    const nL = this.cc.inductors.length;
+    const nS = nC + nL;
+    const block = historyBlock(this.cc, nS);
     this.sens = {
-      hist: Array.from({ length: nS }, () => history(this.cc, false)),
-      saved: Array.from({ length: nS }, () => history(this.cc, false)),
-      stageCapV: Array.from({ length: nS }, () => new Float64Array(this.cc.capacitors.length)),
-      stageIndI: Array.from({ length: nS }, () => new Float64Array(this.cc.inductors.length)),
+      block,
+      columns: Array.from({ length: nS }, (_, j) => historyColumn(block, nC, nL, j)),
+      saved: historyBlock(this.cc, nS),
+      stageCapV: new Float64Array(nS * nC),
+      stageIndI: new Float64Array(nS * nL),
       dx: new Float64Array(this.n),
     };
   }
@@ -230,9 +272,9 @@ export class Engine {
     const sens = this.sens;
     if (!sens) throw new Error("Engine.readSensitivities: trackSensitivities was not called");
     const nC = this.hist.capV.length;
-    const nS = sens.hist.length;
+    const nS = sens.columns.length;
     for (let j = 0; j < nS; j++) {
-      const sh = sens.hist[j]!;
+      const sh = sens.columns[j]!;
       for (let k = 0; k < nS; k++) out[k * nS + j] = k < nC ? sh.capV[k]! : sh.indI[k - nC]!;
     }
   }
@@ -244,7 +286,7 @@ export class Engine {
     this.saved.indI.set(this.hist.indI);
     this.saved.indW.set(this.hist.indW);
     this.xSaved.set(this.x);
-    if (this.sensitivities) this.sens!.hist.forEach((sh, j) => copyHistory(sh, this.sens!.saved[j]!));
+    if (this.sensitivities) copyHistory(this.sens!.block, this.sens!.saved);
   }
 
   /** Restores the history saved by {@link saveHistory} (not the solution). */
@@ -253,7 +295,7 @@ export class Engine {
     this.hist.capI.set(this.saved.capI);
     this.hist.indI.set(this.saved.indI);
     this.hist.indW.set(this.saved.indW);
-    if (this.sensitivities) this.sens!.saved.forEach((sv, j) => copyHistory(sv, this.sens!.hist[j]!));
+    if (this.sensitivities) copyHistory(this.sens!.saved, this.sens!.block);
   }
 
   /** Restores the solution saved by {@link saveHistory}. */
@@ -261,15 +303,16 @@ export class Engine {
     this.x.set(this.xSaved);
   }
 
-  /** LU-factorises `m` in place (lib/math/lu.ts); a zero pivot becomes an error naming the elements. */
+  /**
+   * LU-factorises `m` in place (lib/math/lu.ts, the unchecked core: the engine's matrices are
+   * its own); a zero pivot becomes an error naming the elements. A non-finite entry (a diode
+   * driven far beyond its range) leaves non-finite factors, so the solution is non-finite and
+   * the step is halved.
+   */
   private factor(m: Float64Array): void {
     this.factorizations++;
-    try {
-      luFactor(m, this.n, this.pivots);
-    } catch (e) {
-      if (e instanceof SingularMatrixError) this.singular(e.pivotIndex);
-      throw e;
-    }
+    const bad = luFactorCore(m, this.n, this.pivots);
+    if (bad >= 0) this.singular(bad);
   }
 
   /** Throws a TanklightInputError naming the unknown (and its elements) at a zero pivot. */
@@ -305,16 +348,16 @@ export class Engine {
       const sens = this.sensitivities ? this.sens! : undefined;
       this.stageCapV.set(this.hist.capV);
       this.stageIndI.set(this.hist.indI);
-      sens?.hist.forEach((sh, j) => {
-        sens.stageCapV[j]!.set(sh.capV);
-        sens.stageIndI[j]!.set(sh.indI);
-      });
+      if (sens) {
+        sens.stageCapV.set(sens.block.capV);
+        sens.stageIndI.set(sens.block.indI);
+      }
       const alpha = 2 / (TRBDF2_GAMMA * hs); // = 1/(β·hs), β = (1 − γ)/(2 − γ) = γ/2
       if (!this.solveStage(tNew - (1 - TRBDF2_GAMMA) * hs, alpha, 1)) return false;
       // BDF2 through (t, t + γh, t + h): x₊ − a₁x_γ + a₀x = β·h·x′₊ is a backward-Euler
       // step of length β·h from the point a₁x_γ − a₀x (a₁ − a₀ = 1)
       bdf2Point(this.hist, this.stageCapV, this.stageIndI);
-      sens?.hist.forEach((sh, j) => bdf2Point(sh, sens.stageCapV[j]!, sens.stageIndI[j]!));
+      if (sens) bdf2Point(sens.block, sens.stageCapV, sens.stageIndI);
       return this.solveStage(tNew, alpha, 0);
     }
     return method === "euler" ? this.solveStage(tNew, 1 / hs, 0) : this.solveStage(tNew, 2 / hs, 1);
@@ -334,11 +377,12 @@ export class Engine {
     if (this.sensitivities) {
       // the step's result depends on the history through the right-hand side only: the same
       // factors (this.work) carry each sensitivity column through the step
-      const { hist, dx } = this.sens!;
-      for (const sh of hist) {
+      const { columns, dx } = this.sens!;
+      for (let j = 0; j < columns.length; j++) {
+        const sh = columns[j]!;
         dx.fill(0);
         stampHistory(this.cc, dx, alpha, theta, sh);
-        luSolve(this.work, this.n, this.pivots, dx);
+        luSolveCore(this.work, this.n, this.pivots, dx);
         updateHistory(this.cc, dx, alpha, theta, sh);
       }
     }
@@ -356,7 +400,7 @@ export class Engine {
     }
     const x = this.x;
     x.set(this.rhsBase);
-    luSolve(this.work, n, this.pivots, x);
+    luSolveCore(this.work, n, this.pivots, x);
     for (let i = 0; i < n; i++) if (!Number.isFinite(x[i]!)) return false;
     return true;
   }
@@ -384,7 +428,7 @@ export class Engine {
       xt.set(this.rhsBase);
       stampDiodes(this.cc, W, xt, n, this.diodeV, this.diodeG, this.diodeI0);
       this.factor(W);
-      luSolve(W, n, this.pivots, xt);
+      luSolveCore(W, n, this.pivots, xt);
       let ok = true;
       for (let i = 0; i < n; i++) {
         const xi = xt[i]!;
