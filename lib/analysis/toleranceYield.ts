@@ -21,7 +21,7 @@ import type { LinkSystem } from "../circuit/link.ts";
 import { TanklightInputError } from "../errors.ts";
 import { wilsonInterval, type ProportionInterval } from "./confidence.ts";
 import { drawsPerSample, makeYieldModel, nominalDraws, type YieldSpec, type YieldValues } from "./yieldModel.ts";
-import { sampleDrawer, yieldSpec, type VariationsInput } from "./yieldSpec.ts";
+import { sampleDrawer, yieldSpec, type ActiveVariation, type VariationsInput } from "./yieldSpec.ts";
 import { solveLinkModel, type LinkModel } from "../circuit/harmonic/modelChoice.ts";
 import { progressCounter, type ProgressCallback } from "./progress.ts";
 import { checkThreads, contentId, taskPool, type TaskPool, type ThreadsOption } from "./pool.ts";
@@ -134,7 +134,6 @@ export async function toleranceYield(system: LinkSystem, variations: VariationsI
     throw new TanklightInputError([{ path: "model", message: "must be 'fundamental', 'harmonic' or 'auto'", value: requested }], where);
   }
   const { spec, parsed, active } = yieldSpec(system, variations, { ...options }, where);
-  const stride = drawsPerSample(spec.transmitters.length);
   const model = makeYieldModel(spec);
   const nominal0 = nominalDraws(spec);
   const nominal = model.evaluate(nominal0);
@@ -148,65 +147,11 @@ export async function toleranceYield(system: LinkSystem, variations: VariationsI
   const progress = progressCounter(options.onProgress);
   progress.add(n * (oat ? 1 + active.length : 1));
   try {
-    const next = sampleDrawer(spec, parsed, seed);
-    const current = new Float64Array(n);
-    const lit = new Uint8Array(n);
-    const supply = new Float64Array(n);
-    const drawn = new Float64Array(n * stride);
-    let unconverged = 0;
-    let harmonic = 0;
-    const pending: Promise<void>[] = [];
-    for (let s = 0; s < n; s += CHUNK) {
-      const count = Math.min(CHUNK, n - s);
-      const draws = next(count);
-      drawn.set(draws, s * stride);
-      pending.push(
-        run(draws).then((v) => {
-          current.set(v.current, s);
-          lit.set(v.lit, s);
-          supply.set(v.supply, s);
-          unconverged += v.unconverged;
-          harmonic += v.harmonic;
-          progress.done(count);
-        }),
-      );
-    }
-    await Promise.all(pending);
+    const batch = await runBatch(spec, sampleDrawer(spec, parsed, seed), n, run, progress);
+    const { current, lit, supply, unconverged, harmonic } = batch;
     let litCount = 0;
     for (let i = 0; i < n; i++) litCount += lit[i]!;
-    // sensitivity
-    const brightness = 5; // the brightness draw's column (DRAW_NAMES)
-    const margin = Float64Array.from(current, (c, i) => Math.log(Math.max(c * drawn[i * stride + brightness]!, 1e-12) / spec.litThreshold));
-    const marginRanks = midranks(margin);
-    const entries: SensitivityEntry[] = [];
-    const nom = nominalDraws(spec);
-    for (const { variation, columns } of active) {
-      const col = columns[0]!;
-      // a tilt is ranked by its size (its direction is the azimuth draw)
-      const xs = Float64Array.from({ length: n }, (_, i) => (variation === "tilt" ? Math.abs(drawn[i * stride + col]!) : drawn[i * stride + col]!));
-      // Spearman's ρ: Pearson's r of the midranks (as simple-statistics' sampleRankCorrelation, with the margin ranked once)
-      const rho = constant(xs) || constant(margin) ? 0 : sampleCorrelation(midranks(xs), marginRanks);
-      let alone: number | undefined;
-      if (oat) {
-        const masked = new Float64Array(drawn);
-        for (let i = 0; i < n; i++) for (let d = 0; d < stride; d++) if (!columns.includes(d)) masked[i * stride + d] = nom[d]!;
-        let litAlone = 0;
-        const parts: Promise<void>[] = [];
-        for (let s = 0; s < n; s += CHUNK) {
-          const count = Math.min(CHUNK, n - s);
-          parts.push(
-            run(masked.slice(s * stride, (s + count) * stride)).then((v) => {
-              for (let i = 0; i < count; i++) litAlone += v.lit[i]!;
-              progress.done(count);
-            }),
-          );
-        }
-        await Promise.all(parts);
-        alone = litAlone / n;
-      }
-      entries.push({ variation, rankCorrelation: rho, ...(alone !== undefined ? { yieldAlone: alone, yieldLoss: 1 - alone } : {}) });
-    }
-    entries.sort((a, b) => (oat ? b.yieldLoss! - a.yieldLoss! : Math.abs(b.rankCorrelation) - Math.abs(a.rankCorrelation)));
+    const entries = await sensitivity(spec, active, batch, oat ? { run, progress } : undefined);
     const warnings: string[] = [];
     // the describing function's own validity at the nominal design (solveLink's warnings)
     if (requested === "fundamental" && spec.transmitters.length === 1 && spec.sharedDrives === undefined) {
@@ -235,6 +180,86 @@ export async function toleranceYield(system: LinkSystem, variations: VariationsI
   } finally {
     if (owned) await pool!.close();
   }
+}
+
+/** A batch's draws (row per sample) and its per-sample results. */
+interface Batch extends YieldValues {
+  readonly drawn: Float64Array;
+}
+
+type Run = (draws: Float64Array) => Promise<YieldValues>;
+type ProgressCounter = ReturnType<typeof progressCounter>;
+
+/** Draws n samples in chunks of CHUNK (in order, from one stream) and solves each chunk by `run`. */
+async function runBatch(spec: YieldSpec, next: (count: number) => Float64Array, n: number, run: Run, progress: ProgressCounter): Promise<Batch> {
+  const stride = drawsPerSample(spec.transmitters.length);
+  const current = new Float64Array(n);
+  const lit = new Uint8Array(n);
+  const supply = new Float64Array(n);
+  const drawn = new Float64Array(n * stride);
+  let unconverged = 0;
+  let harmonic = 0;
+  const pending: Promise<void>[] = [];
+  for (let s = 0; s < n; s += CHUNK) {
+    const count = Math.min(CHUNK, n - s);
+    const draws = next(count);
+    drawn.set(draws, s * stride);
+    pending.push(
+      run(draws).then((v) => {
+        current.set(v.current, s);
+        lit.set(v.lit, s);
+        supply.set(v.supply, s);
+        unconverged += v.unconverged;
+        harmonic += v.harmonic;
+        progress.done(count);
+      }),
+    );
+  }
+  await Promise.all(pending);
+  return { current, lit, supply, drawn, unconverged, harmonic };
+}
+
+/**
+ * The sensitivity ranking: each active variation's Spearman ρ with the LED margin, and with
+ * `oneAtATime` its yield over the same draws with every other column at its nominal value.
+ */
+async function sensitivity(spec: YieldSpec, active: readonly ActiveVariation[], batch: Batch, oneAtATime: { run: Run; progress: ProgressCounter } | undefined): Promise<SensitivityEntry[]> {
+  const { current, drawn } = batch;
+  const n = current.length;
+  const stride = drawsPerSample(spec.transmitters.length);
+  const brightness = 5; // the brightness draw's column (DRAW_NAMES)
+  const margin = Float64Array.from(current, (c, i) => Math.log(Math.max(c * drawn[i * stride + brightness]!, 1e-12) / spec.litThreshold));
+  const marginRanks = midranks(margin);
+  const entries: SensitivityEntry[] = [];
+  const nom = nominalDraws(spec);
+  for (const { variation, columns } of active) {
+    const col = columns[0]!;
+    // a tilt is ranked by its size (its direction is the azimuth draw)
+    const xs = Float64Array.from({ length: n }, (_, i) => (variation === "tilt" ? Math.abs(drawn[i * stride + col]!) : drawn[i * stride + col]!));
+    // Spearman's ρ: Pearson's r of the midranks (as simple-statistics' sampleRankCorrelation, with the margin ranked once)
+    const rho = constant(xs) || constant(margin) ? 0 : sampleCorrelation(midranks(xs), marginRanks);
+    let alone: number | undefined;
+    if (oneAtATime) {
+      const masked = new Float64Array(drawn);
+      for (let i = 0; i < n; i++) for (let d = 0; d < stride; d++) if (!columns.includes(d)) masked[i * stride + d] = nom[d]!;
+      let litAlone = 0;
+      const parts: Promise<void>[] = [];
+      for (let s = 0; s < n; s += CHUNK) {
+        const count = Math.min(CHUNK, n - s);
+        parts.push(
+          oneAtATime.run(masked.slice(s * stride, (s + count) * stride)).then((v) => {
+            for (let i = 0; i < count; i++) litAlone += v.lit[i]!;
+            oneAtATime.progress.done(count);
+          }),
+        );
+      }
+      await Promise.all(parts);
+      alone = litAlone / n;
+    }
+    entries.push({ variation, rankCorrelation: rho, ...(alone !== undefined ? { yieldAlone: alone, yieldLoss: 1 - alone } : {}) });
+  }
+  entries.sort((a, b) => (oneAtATime ? b.yieldLoss! - a.yieldLoss! : Math.abs(b.rankCorrelation) - Math.abs(a.rankCorrelation)));
+  return entries;
 }
 
 function constant(xs: Float64Array): boolean {

@@ -198,7 +198,17 @@ function tilted(a: Vec3, th: number, ph: number): Vec3 {
  * once here for the layout; "harmonic"/"auto": solveLinkModel).
  */
 export function makeYieldModel(spec: YieldSpec): YieldModel {
-  const w = 2 * Math.PI * spec.frequency;
+  const networkOf = sampleNetworks(spec, sampleLoads(spec));
+  // the layout (and the nominal part values) checked once; samples change values only
+  validateNetwork(networkOf(nominalDraws(spec)), "toleranceYield");
+  return { network: networkOf, evaluate: (draws) => evaluateSamples(spec, networkOf, draws) };
+}
+
+/**
+ * The token load at a forward-voltage shift dv, V: a tabulated load per grid level vfStep (built
+ * on first use), linear in between; for harmonic balance with the exact shifted junction too.
+ */
+function sampleLoads(spec: YieldSpec): (dv: number) => LinkLoadModel {
   const loads = new Map<number, LinkLoadModel>();
   const loadAt = (level: number): LinkLoadModel => {
     let m = loads.get(level);
@@ -209,7 +219,7 @@ export function makeYieldModel(spec: YieldSpec): YieldModel {
     return m;
   };
   const fundamental = spec.model === "fundamental";
-  const loadFor = (dv: number): LinkLoadModel => {
+  return (dv: number): LinkLoadModel => {
     const u = dv / spec.vfStep;
     const q = Math.floor(u);
     const t = u - q;
@@ -218,9 +228,18 @@ export function makeYieldModel(spec: YieldSpec): YieldModel {
     // harmonic balance evaluates the load in time: the exact shifted junction
     return fundamental ? m : { ...m, token: decodeLoad(shiftLoad(spec.load, dv)) };
   };
+}
+
+/**
+ * One sample's network from its draws: the system's layout with the drawn capacitors, windings,
+ * supply, LED shift and (when the pose varies) the token's mutual inductances, from coupling
+ * evaluators per winding pair made on first use. Called once per sample: no closures made per
+ * sample (under keepNames each costs a defineProperty).
+ */
+function sampleNetworks(spec: YieldSpec, loadFor: (dv: number) => LinkLoadModel): (d: Float64Array) => LinkNetwork {
+  const w = 2 * Math.PI * spec.frequency;
   const txs = spec.transmitters;
   const t = txs.length;
-  const stride = drawsPerSample(t);
   const nTok = spec.tokenLevels.length;
   const evs = new Map<string, CouplingEvaluator>();
   const evFor = (i: number, a: number, b: number): CouplingEvaluator => {
@@ -232,14 +251,12 @@ export function makeYieldModel(spec: YieldSpec): YieldModel {
     }
     return e;
   };
-  const options = { litThreshold: spec.litThreshold, onNonConvergence: "warn" as const };
   const rx0 = spec.receiver;
   const posed = (i: number, li: number, ri: number, d: Float64Array, axis: Vec3): number => {
     const p = spec.tokenPose.position;
     return evFor(i, li, ri).mutual(txs[i]!.pose, { position: [p[0] + d[6]!, p[1] + d[7]!, p[2] + d[8]!], axis });
   };
-  // (no closures made per sample: under keepNames each costs a defineProperty)
-  const networkOf = (d: Float64Array): LinkNetwork => {
+  return (d: Float64Array): LinkNetwork => {
     const ri = d[3]!;
     const rxl = spec.tokenLevels[ri]!;
     const supply = d[11]!;
@@ -296,46 +313,46 @@ export function makeYieldModel(spec: YieldSpec): YieldModel {
       receivers: [receiver],
     };
   };
-  // the layout (and the nominal part values) checked once; samples change values only
-  validateNetwork(networkOf(nominalDraws(spec)), "toleranceYield");
-  return {
-    network: networkOf,
-    evaluate(draws: Float64Array): YieldValues {
-      const count = draws.length / stride;
-      const current = new Float64Array(count);
-      const lit = new Uint8Array(count);
-      const supply = new Float64Array(count);
-      let unconverged = 0;
-      let harmonic = 0;
-      let ws: LinkWorkspace | undefined;
-      for (let s = 0; s < count; s++) {
-        const d = draws.subarray(s * stride, (s + 1) * stride);
-        const net = networkOf(d);
-        let cur = Infinity;
-        let power: number;
-        let converged: boolean;
-        if (fundamental) {
-          const solved = solveLinkOperatingPoint(net, options, ws);
-          ws = solved.ws;
-          for (const led of net.receivers[0]!.load.ledCurrents!(Math.hypot(ws.vRe[0]!, ws.vIm[0]!))) cur = Math.min(cur, led.current);
-          power = inputPower(ws);
-          converged = solved.converged;
-        } else {
-          const r = solveLinkModel(net, { ...options, model: spec.model });
-          for (const led of r.receivers[0]!.leds) cur = Math.min(cur, led.averageCurrent);
-          power = r.power.input;
-          converged = r.converged;
-          if (r.model !== "fundamental") harmonic++; // harmonic balance, or the periodic steady state of a hard-switched single switch
-        }
-        cur = Math.max(0, cur);
-        current[s] = cur;
-        lit[s] = cur * d[5]! >= spec.litThreshold ? 1 : 0;
-        supply[s] = spec.supplyVoltage !== undefined ? Math.max(0, power) / (spec.supplyVoltage * (1 + d[11]!)) : 0;
-        if (!converged) unconverged++;
-      }
-      return { current, lit, supply, unconverged, harmonic };
-    },
-  };
+}
+
+/** Solves each sample's network as solveLink would and returns its weakest LED current, lit flag and supply current. */
+function evaluateSamples(spec: YieldSpec, networkOf: (d: Float64Array) => LinkNetwork, draws: Float64Array): YieldValues {
+  const fundamental = spec.model === "fundamental";
+  const options = { litThreshold: spec.litThreshold, onNonConvergence: "warn" as const };
+  const stride = drawsPerSample(spec.transmitters.length);
+  const count = draws.length / stride;
+  const current = new Float64Array(count);
+  const lit = new Uint8Array(count);
+  const supply = new Float64Array(count);
+  let unconverged = 0;
+  let harmonic = 0;
+  let ws: LinkWorkspace | undefined;
+  for (let s = 0; s < count; s++) {
+    const d = draws.subarray(s * stride, (s + 1) * stride);
+    const net = networkOf(d);
+    let cur = Infinity;
+    let power: number;
+    let converged: boolean;
+    if (fundamental) {
+      const solved = solveLinkOperatingPoint(net, options, ws);
+      ws = solved.ws;
+      for (const led of net.receivers[0]!.load.ledCurrents!(Math.hypot(ws.vRe[0]!, ws.vIm[0]!))) cur = Math.min(cur, led.current);
+      power = inputPower(ws);
+      converged = solved.converged;
+    } else {
+      const r = solveLinkModel(net, { ...options, model: spec.model });
+      for (const led of r.receivers[0]!.leds) cur = Math.min(cur, led.averageCurrent);
+      power = r.power.input;
+      converged = r.converged;
+      if (r.model !== "fundamental") harmonic++; // harmonic balance, or the periodic steady state of a hard-switched single switch
+    }
+    cur = Math.max(0, cur);
+    current[s] = cur;
+    lit[s] = cur * d[5]! >= spec.litThreshold ? 1 : 0;
+    supply[s] = spec.supplyVoltage !== undefined ? Math.max(0, power) / (spec.supplyVoltage * (1 + d[11]!)) : 0;
+    if (!converged) unconverged++;
+  }
+  return { current, lit, supply, unconverged, harmonic };
 }
 
 /** The nominal draws of a spec (no variation): every deviation 0, every winding its nominal variant, brightness 1. */

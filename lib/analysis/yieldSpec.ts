@@ -12,7 +12,7 @@ import { couplingEvaluator } from "../em/couplingEvaluator.ts";
 import { selfInductance } from "../em/selfInductance.ts";
 import { coilResistance } from "../em/losses/coilResistance.ts";
 import { linkNetwork, type LinkSystem } from "../circuit/link.ts";
-import { LinkSystemInput, systemTransmitters } from "../circuit/link/schema.ts";
+import { LinkSystemInput, systemTransmitters, type LinkSystemParsed, type TransmitterParsed } from "../circuit/link/schema.ts";
 import { DEFAULT_LIT_THRESHOLD, networkTransmitters } from "../circuit/link/network.ts";
 import type { LinkModel } from "../circuit/harmonic/modelChoice.ts";
 import { encodeLoad, isTokenLoad, type LoadData } from "./loadCodec.ts";
@@ -127,6 +127,57 @@ export function yieldSpec(system: LinkSystem, variations: VariationsInput, optio
     );
   }
   const load: LoadData = encodeLoad(rx.load);
+  const spreads = parseSpreads(v, load, where);
+  const single = { ...(system as object), receivers: [(system as { receivers: readonly unknown[] }).receivers[k]] } as LinkSystem;
+  const net = linkNetwork(single).network;
+  const f = net.frequency;
+  const t = txs.length;
+  const levels = windingLevels(f, sys.temperature, where);
+  const txNets = networkTransmitters(net);
+  const txLevels = txs.map((tx, i) => levels(tx.coil, net.inductance[i]![i]!, txNets[i]!.resistance, v.transmitterTurns, "transmitterTurns", i));
+  const tokLevels = levels(rx.coil, net.inductance[t]![t]!, net.receivers[0]!.resistance, v.tokenTurns, "tokenTurns", -1);
+  const txPoses = txs.map((tx) => (tx.pose as Pose | undefined) ?? ORIGIN);
+  const tokenPose = { position: rx.pose.position as Vec3, axis: ((rx.pose as Pose).axis ?? [0, 0, 1]) as Vec3 };
+  const posed = [spreads.placementX, spreads.height, spreads.tilt].some((s) => s !== undefined && s.tolerance > 0);
+  const { load: _l, ...receiver } = net.receivers[0]!;
+  const supplyVoltage = commonSupplyVoltage(txs, sys.sharedDrives);
+  const rxD = dissipation(rx.capacitor);
+  const spec: YieldSpec = {
+    frequency: f,
+    transmitters: txs.map((tx, i) => {
+      const d = dissipation(tx.capacitor);
+      return { network: txNets[i]!, ...(d !== undefined ? { dissipation: d } : {}), levels: txLevels[i]!, pose: txPoses[i]! };
+    }),
+    ...(net.transmitters !== undefined ? { listed: true } : {}),
+    ...(net.sharedDrives !== undefined ? { sharedDrives: net.sharedDrives } : {}),
+    pairMutual: pairMutualTables(txLevels, txPoses, net.inductance),
+    receiver,
+    ...(rxD !== undefined ? { receiverDissipation: rxD } : {}),
+    load,
+    tokenLevels: tokLevels,
+    tokenPose,
+    tokenMutual: tokenMutualTables(txLevels, txPoses, tokLevels, rx.pose as Pose, posed ? undefined : net.inductance),
+    posed,
+    vfStep: options.vfStep ?? 0.05,
+    litThreshold: options.litThreshold ?? DEFAULT_LIT_THRESHOLD,
+    ...(supplyVoltage !== undefined ? { supplyVoltage } : {}),
+    table: { maxAmplitude: 8, step: 5e-3 },
+    // several transmitters: the describing function, as solveLink ("auto" keeps it there)
+    model: array ? "fundamental" : (options.model ?? "fundamental"),
+  };
+  return {
+    spec,
+    parsed: {
+      spreads,
+      ...(v.tokenTurns ? { tokenTurns: v.tokenTurns } : {}),
+      ...(v.transmitterTurns ? { transmitterTurns: v.transmitterTurns } : {}),
+    },
+    active: activeVariations(spreads, txs, txLevels, tokLevels),
+  };
+}
+
+/** Each variation as a spread (or undefined); "preset" LED spreads looked up by the load's LED colour. */
+function parseSpreads(v: z.output<typeof VariationsInput>, load: LoadData, where: string): Record<(typeof DRAW_NAMES)[number], Spread> {
   const colour = ledColour(load);
   const preset = colour !== undefined ? LED_SPREAD_PRESETS[colour] : undefined;
   const presetOf = (key: "forwardVoltage" | "brightness", field: string): Spread => {
@@ -135,7 +186,7 @@ export function yieldSpec(system: LinkSystem, variations: VariationsInput, optio
     }
     return { tolerance: preset[key], distribution: "uniform" };
   };
-  const spreads: Record<(typeof DRAW_NAMES)[number], Spread> = {
+  return {
     tokenCapacitor: asSpread(v.tokenCapacitor),
     transmitterCapacitor: asSpread(v.transmitterCapacitor),
     transmitterTurns: undefined,
@@ -149,16 +200,17 @@ export function yieldSpec(system: LinkSystem, variations: VariationsInput, optio
     tiltAzimuth: undefined,
     supply: asSpread(v.supply),
   };
-  const single = { ...(system as object), receivers: [(system as { receivers: readonly unknown[] }).receivers[k]] } as LinkSystem;
-  const net = linkNetwork(single).network;
-  const f = net.frequency;
-  const t = txs.length;
-  const temperature = sys.temperature !== undefined ? { temperature: sys.temperature } : {};
-  // winding variants: a coil's own L and R from its rebuilt coil; an override of the nominal
-  // resistance carries over as the same ratio to the model's value. Transmitters with one coil
-  // object share their variants.
+}
+
+/**
+ * The winding variants of a coil at frequency f: a coil's own L and R from its rebuilt coil; an
+ * override of the nominal resistance carries over as the same ratio to the model's value.
+ * Transmitters with one coil object share their variants (remembered by the returned function).
+ */
+function windingLevels(f: number, temperatureK: number | undefined, where: string) {
+  const temperature = temperatureK !== undefined ? { temperature: temperatureK } : {};
   const built = new Map<Coil, WindingLevel[]>();
-  const levels = (coil: Coil, nominalL: number, nominalR: number, wv: Winding | undefined, field: string, index: number): WindingLevel[] => {
+  return (coil: Coil, nominalL: number, nominalR: number, wv: Winding | undefined, field: string, index: number): WindingLevel[] => {
     if (!wv || wv.spread === 0) return [{ turns: coil.turns, coil, inductance: nominalL, resistance: nominalR }];
     const known = built.get(coil);
     if (known && known[wv.spread]!.inductance === nominalL && known[wv.spread]!.resistance === nominalR) return known;
@@ -177,69 +229,62 @@ export function yieldSpec(system: LinkSystem, variations: VariationsInput, optio
     built.set(coil, out);
     return out;
   };
-  const txNets = networkTransmitters(net);
-  const txLevels = txs.map((tx, i) => levels(tx.coil, net.inductance[i]![i]!, txNets[i]!.resistance, v.transmitterTurns, "transmitterTurns", i));
-  const tokLevels = levels(rx.coil, net.inductance[t]![t]!, net.receivers[0]!.resistance, v.tokenTurns, "tokenTurns", -1);
-  const txPoses = txs.map((tx) => (tx.pose as Pose | undefined) ?? ORIGIN);
-  const tokenPose = { position: rx.pose.position as Vec3, axis: ((rx.pose as Pose).axis ?? [0, 0, 1]) as Vec3 };
-  const posed = [spreads.placementX, spreads.height, spreads.tilt].some((s) => s !== undefined && s.tolerance > 0);
-  const middle = (n: number): number => (n - 1) / 2;
-  const mutual = (a: WindingLevel, pa: Pose, b: WindingLevel, pb: Pose): number => couplingEvaluator(a.coil, b.coil, { relTol: PROBE_MUTUAL_RTOL }).mutual(pa, pb);
-  // transmitter pairs i < j: M for every pair of their variants (the nominal pair: the link's own)
+}
+
+const middle = (n: number): number => (n - 1) / 2;
+const variantMutual = (a: WindingLevel, pa: Pose, b: WindingLevel, pb: Pose): number =>
+  couplingEvaluator(a.coil, b.coil, { relTol: PROBE_MUTUAL_RTOL }).mutual(pa, pb);
+
+/** Transmitter pairs i < j: M for every pair of their variants (the nominal pair: the link's own, from `inductance`). */
+function pairMutualTables(txLevels: readonly WindingLevel[][], txPoses: readonly Pose[], inductance: readonly (readonly number[])[]): number[][] {
   const pairMutual: number[][] = [];
+  const t = txLevels.length;
   for (let i = 0; i < t; i++) {
     for (let j = i + 1; j < t; j++) {
       const table: number[] = [];
       txLevels[i]!.forEach((a, ai) =>
         txLevels[j]!.forEach((b, bj) => {
-          table.push(ai === middle(txLevels[i]!.length) && bj === middle(txLevels[j]!.length) ? net.inductance[i]![j]! : mutual(a, txPoses[i]!, b, txPoses[j]!));
+          table.push(ai === middle(txLevels[i]!.length) && bj === middle(txLevels[j]!.length) ? inductance[i]![j]! : variantMutual(a, txPoses[i]!, b, txPoses[j]!));
         }),
       );
       pairMutual.push(table);
     }
   }
-  // each transmitter's variants with the token's at the nominal pose
-  const tokenMutual = txLevels.map((lv, i) => {
+  return pairMutual;
+}
+
+/**
+ * Each transmitter's variants with the token's at the nominal pose; the nominal pair takes the
+ * link's own M from `inductance` (undefined when the pose varies: then every pair is evaluated).
+ */
+function tokenMutualTables(txLevels: readonly WindingLevel[][], txPoses: readonly Pose[], tokLevels: readonly WindingLevel[], tokenPose: Pose, inductance: readonly (readonly number[])[] | undefined): number[][] {
+  const t = txLevels.length;
+  return txLevels.map((lv, i) => {
     const table: number[] = [];
     lv.forEach((a, ai) =>
       tokLevels.forEach((b, bj) => {
         const nominal = ai === middle(lv.length) && bj === middle(tokLevels.length);
-        table.push(nominal && !posed ? net.inductance[i]![t]! : mutual(a, txPoses[i]!, b, rx.pose as Pose));
+        table.push(nominal && inductance !== undefined ? inductance[i]![t]! : variantMutual(a, txPoses[i]!, b, tokenPose));
       }),
     );
     return table;
   });
-  const { load: _l, ...receiver } = net.receivers[0]!;
-  // one DC supply voltage over every drive in use (else none: no supply current)
-  const driveSpecs = [...txs.flatMap((x) => (typeof x.drive === "string" ? [] : [x.drive])), ...(sys.sharedDrives ?? []).filter((d) => txs.some((x) => x.drive === d.name)).map((d) => d.drive)];
+}
+
+/** One DC supply voltage over every drive in use (else undefined: no supply current). */
+function commonSupplyVoltage(txs: readonly TransmitterParsed[], sharedDrives: LinkSystemParsed["sharedDrives"]): number | undefined {
+  const driveSpecs = [...txs.flatMap((x) => (typeof x.drive === "string" ? [] : [x.drive])), ...(sharedDrives ?? []).filter((d) => txs.some((x) => x.drive === d.name)).map((d) => d.drive)];
   const volts = driveSpecs.map(supplyVoltageOf);
-  const supplyVoltage = volts.length > 0 && volts.every((x) => x !== undefined && x === volts[0]) ? volts[0] : undefined;
-  const dissipation = (c: { esr?: number | undefined; dissipationFactor?: number | undefined } | undefined): number | undefined =>
-    c && c.esr === undefined && c.dissipationFactor !== undefined ? c.dissipationFactor : undefined;
-  const rxD = dissipation(rx.capacitor);
-  const spec: YieldSpec = {
-    frequency: f,
-    transmitters: txs.map((tx, i) => {
-      const d = dissipation(tx.capacitor);
-      return { network: txNets[i]!, ...(d !== undefined ? { dissipation: d } : {}), levels: txLevels[i]!, pose: txPoses[i]! };
-    }),
-    ...(net.transmitters !== undefined ? { listed: true } : {}),
-    ...(net.sharedDrives !== undefined ? { sharedDrives: net.sharedDrives } : {}),
-    pairMutual,
-    receiver,
-    ...(rxD !== undefined ? { receiverDissipation: rxD } : {}),
-    load,
-    tokenLevels: tokLevels,
-    tokenPose,
-    tokenMutual,
-    posed,
-    vfStep: options.vfStep ?? 0.05,
-    litThreshold: options.litThreshold ?? DEFAULT_LIT_THRESHOLD,
-    ...(supplyVoltage !== undefined ? { supplyVoltage } : {}),
-    table: { maxAmplitude: 8, step: 5e-3 },
-    // several transmitters: the describing function, as solveLink ("auto" keeps it there)
-    model: array ? "fundamental" : (options.model ?? "fundamental"),
-  };
+  return volts.length > 0 && volts.every((x) => x !== undefined && x === volts[0]) ? volts[0] : undefined;
+}
+
+/** A capacitor's tan δ when it is given without an ESR (then the model varies the ESR with C). */
+const dissipation = (c: { esr?: number | undefined; dissipationFactor?: number | undefined } | undefined): number | undefined =>
+  c && c.esr === undefined && c.dissipationFactor !== undefined ? c.dissipationFactor : undefined;
+
+/** The variations that are switched on, each with the draw columns it owns. */
+function activeVariations(spreads: Readonly<Record<(typeof DRAW_NAMES)[number], Spread>>, txs: readonly TransmitterParsed[], txLevels: readonly WindingLevel[][], tokLevels: readonly WindingLevel[]): ActiveVariation[] {
+  const t = txs.length;
   const active: ActiveVariation[] = [];
   const column = (name: (typeof DRAW_NAMES)[number]): number => DRAW_NAMES.indexOf(name);
   const on = (s: Spread): boolean => s !== undefined && s.tolerance > 0;
@@ -258,15 +303,7 @@ export function yieldSpec(system: LinkSystem, variations: VariationsInput, optio
     if (lv.length > 1) active.push({ variation: t === 1 ? "transmitterTurns" : `transmitterTurns[${i}]`, columns: [turnsColumn(i)] });
   });
   if (tokLevels.length > 1) active.push({ variation: "tokenTurns", columns: [column("tokenTurns")] });
-  return {
-    spec,
-    parsed: {
-      spreads,
-      ...(v.tokenTurns ? { tokenTurns: v.tokenTurns } : {}),
-      ...(v.transmitterTurns ? { transmitterTurns: v.transmitterTurns } : {}),
-    },
-    active,
-  };
+  return active;
 }
 
 /** An active variation: its name in results and the draw columns it owns (the first is ranked). */
