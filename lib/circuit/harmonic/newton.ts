@@ -18,7 +18,8 @@
  * (Armijo) test took steps of 1/128 for ≈ 35 iterations on a hard-clipping InGaN LED, whose
  * exponential current dominates ‖r‖; λ scales the sources for continuation (source stepping).
  */
-import { luFactor, luSolve } from "../../math/lu.ts";
+import { luFactorCore, luSolve } from "../../math/lu.ts";
+import { complexLuFactorCore, complexLuSolveCore } from "../../math/complexLu.ts";
 import type { HarmonicPorts } from "./ports.ts";
 import { analyze, project, synthesize, twoSided, type SpectrumTables } from "./spectrum.ts";
 import type { TimeLoad } from "./timeLoad.ts";
@@ -57,9 +58,17 @@ export class HarmonicSystem {
   private readonly wzt: Float64Array;
   private readonly wrt: Float64Array;
   private readonly wnat: Float64Array;
+  /** the unknowns and source level of the last {@link residual} call (the state v, i, g, cur hold) */
+  private readonly zAt: Float64Array;
+  private lambdaAt = NaN;
+  private frozenAt = false;
   newtonIterations = 0;
   factorizations = 0;
 
+  /**
+   * @param ports the reduced network; tables transforms with N samples (rows up to 2·order make
+   *   them fastest); loads one per port.
+   */
   constructor(ports: HarmonicPorts, tables: SpectrumTables, loads: TimeLoad[]) {
     this.ports = ports;
     this.tables = tables;
@@ -69,27 +78,45 @@ export class HarmonicSystem {
     this.B = 2 * this.H + 1;
     this.loads = loads;
     const { P, N, B, H } = this;
-    this.frozen = new Float64Array(P);
+    // one allocation for the whole workspace (typed arrays beyond 64 bytes each cost a backing store)
+    const Z = P * B;
+    const ws = new Float64Array(P + 3 * P * N + Z * Z + 2 * (4 * H + 1) + 2 * (H + 1) + B + 7 * Z);
+    let at = 0;
+    const take = (n: number): Float64Array => ws.subarray(at, (at += n));
+    this.frozen = take(P);
     this.isFrozen = new Uint8Array(P);
-    this.v = new Float64Array(P * N);
-    this.i = new Float64Array(P * N);
-    this.g = new Float64Array(P * N);
-    this.vs = Array.from({ length: P }, (_, p) => this.v.subarray(p * N, (p + 1) * N));
-    this.is = Array.from({ length: P }, (_, p) => this.i.subarray(p * N, (p + 1) * N));
-    this.gs = Array.from({ length: P }, (_, p) => this.g.subarray(p * N, (p + 1) * N));
-    this.cur = new Float64Array(P * B);
-    this.jac = new Float64Array(P * B * P * B);
-    this.piv = new Int32Array(P * B);
-    this.gRe = new Float64Array(4 * H + 1);
-    this.gIm = new Float64Array(4 * H + 1);
-    this.dRe = new Float64Array(H + 1);
-    this.dIm = new Float64Array(H + 1);
-    this.uCoef = new Float64Array(B);
-    this.wr = new Float64Array(P * B);
-    this.wdz = new Float64Array(P * B);
-    this.wzt = new Float64Array(P * B);
-    this.wrt = new Float64Array(P * B);
-    this.wnat = new Float64Array(P * B);
+    this.v = take(P * N);
+    this.i = take(P * N);
+    this.g = take(P * N);
+    this.vs = [];
+    this.is = [];
+    this.gs = [];
+    for (let p = 0; p < P; p++) {
+      this.vs.push(this.v.subarray(p * N, (p + 1) * N));
+      this.is.push(this.i.subarray(p * N, (p + 1) * N));
+      this.gs.push(this.g.subarray(p * N, (p + 1) * N));
+    }
+    this.cur = take(Z);
+    this.jac = take(Z * Z);
+    this.piv = new Int32Array(Z);
+    this.gRe = take(4 * H + 1);
+    this.gIm = take(4 * H + 1);
+    this.dRe = take(H + 1);
+    this.dIm = take(H + 1);
+    this.uCoef = take(B);
+    this.wr = take(Z);
+    this.wdz = take(Z);
+    this.wzt = take(Z);
+    this.wrt = take(Z);
+    this.wnat = take(Z);
+    this.zAt = take(Z);
+  }
+
+  /** Whether the port waveforms and currents held are those of z at source level λ with the true loads (the last {@link residual} call). */
+  holds(z: Float64Array, lambda: number): boolean {
+    if (lambda !== this.lambdaAt || this.frozenAt || this.isFrozen.includes(1)) return false;
+    for (let j = 0; j < z.length; j++) if (z[j] !== this.zAt[j]) return false;
+    return true;
   }
 
   /** Number of real unknowns. */
@@ -101,6 +128,9 @@ export class HarmonicSystem {
   residual(z: Float64Array, lambda: number, r: Float64Array): number {
     const { P, B, H, tables } = this;
     const pt = this.ports;
+    this.zAt.set(z);
+    this.lambdaAt = lambda;
+    this.frozenAt = this.isFrozen.includes(1);
     for (let p = 0; p < P; p++) {
       const v = this.vs[p]!;
       synthesize(tables, H, z, p * B, v);
@@ -224,11 +254,8 @@ export class HarmonicSystem {
       }
     }
     for (let i = 0; i < Z; i++) r[i] = -r[i]!;
-    try {
-      luFactor(J, Z, this.piv);
-    } catch {
-      return false;
-    }
+    for (let i = 0; i < Z * Z; i++) if (!Number.isFinite(J[i]!)) return false;
+    if (luFactorCore(J, Z, this.piv) >= 0) return false;
     this.factorizations++;
     luSolve(J, Z, this.piv, r);
     for (let i = 0; i < Z; i++) if (!Number.isFinite(r[i]!)) return false;
@@ -242,6 +269,44 @@ export class HarmonicSystem {
     luSolve(this.jac, Z, this.piv, r);
     for (let i = 0; i < Z; i++) if (!Number.isFinite(r[i]!)) return false;
     return true;
+  }
+
+  /**
+   * The solution with every port frozen at a constant conductance G_p (`frozen`), which is
+   * linear and harmonic by harmonic: (1 − T_h·G)·V_h = λ·E_h, one P×P complex solve per
+   * harmonic, written into z. Only for time-invariant ports (no switch): a switch couples the
+   * harmonics.
+   */
+  solveFrozen(z: Float64Array, lambda: number): void {
+    const { P, B, H } = this;
+    const pt = this.ports;
+    const aRe = new Float64Array(P * P);
+    const aIm = new Float64Array(P * P);
+    const bRe = new Float64Array(P);
+    const bIm = new Float64Array(P);
+    const piv = new Int32Array(P);
+    for (let h = 0; h <= H; h++) {
+      for (let p = 0; p < P; p++) {
+        bRe[p] = lambda * pt.eRe[h * P + p]!;
+        bIm[p] = h === 0 ? 0 : lambda * pt.eIm[h * P + p]!;
+        for (let q = 0; q < P; q++) {
+          const g = this.frozen[q]!;
+          aRe[p * P + q] = (p === q ? 1 : 0) - pt.tRe[(h * P + p) * P + q]! * g;
+          aIm[p * P + q] = h === 0 ? 0 : -pt.tIm[(h * P + p) * P + q]! * g;
+        }
+      }
+      if (complexLuFactorCore(aRe, aIm, P, piv) >= 0) {
+        bRe.fill(0);
+        bIm.fill(0);
+      } else complexLuSolveCore(aRe, aIm, P, piv, bRe, bIm);
+      for (let p = 0; p < P; p++) {
+        if (h === 0) z[p * B] = bRe[p]!;
+        else {
+          z[p * B + 2 * h - 1] = bRe[p]!;
+          z[p * B + 2 * h] = bIm[p]!;
+        }
+      }
+    }
   }
 
   /**
@@ -262,6 +327,8 @@ export class HarmonicSystem {
       if (!this.solveStep(dz)) return { converged: false, iterations: it, residual: res };
       let alpha = 1;
       let accepted = false;
+      let natMax = Infinity;
+      let theta = Infinity;
       let stepMax = 0;
       for (let j = 0; j < Z; j++) stepMax = Math.max(stepMax, Math.abs(dz[j]!));
       const dzNorm = l2(dz);
@@ -282,6 +349,9 @@ export class HarmonicSystem {
           res = resT;
           norm = normT;
           accepted = true;
+          natMax = 0;
+          for (let j = 0; j < Z; j++) natMax = Math.max(natMax, Math.abs(nat[j]!));
+          theta = natNorm / dzNorm;
           break;
         }
         alpha /= 2;
@@ -293,6 +363,10 @@ export class HarmonicSystem {
         return { converged: res <= tol * scale * 10, iterations: it, residual: res };
       }
       if (alpha * stepMax <= tol * scale && res <= Math.sqrt(tol) * scale) return { converged: true, iterations: it, residual: res };
+      // Deuflhard's termination (Newton Methods for Nonlinear Problems, §2.1.2): after a full
+      // step that contracted quadratically (Θ = ‖simplified correction‖/‖step‖ ≤ 0.1), the
+      // simplified Newton correction at the new point estimates its remaining error
+      if (alpha === 1 && theta <= 0.1 && natMax <= tol * scale && res <= Math.sqrt(tol) * scale) return { converged: true, iterations: it, residual: res };
       if (res <= tol * scale * 1e-3) return { converged: true, iterations: it, residual: res };
     }
     return { converged: false, iterations: maxIter, residual: res };

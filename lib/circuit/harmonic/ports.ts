@@ -113,22 +113,30 @@ export function harmonicPorts(
   const portIndex = portReceiver.map((k) => (k >= 0 ? voltage(k) : switchNode));
 
   const H = order;
-  const eRe = new Float64Array((H + 1) * P);
-  const eIm = new Float64Array((H + 1) * P);
-  const tRe = new Float64Array((H + 1) * P * P);
-  const tIm = new Float64Array((H + 1) * P * P);
-  const xRe = new Float64Array((H + 1) * size);
-  const xIm = new Float64Array((H + 1) * size);
-  const xtRe = new Float64Array((H + 1) * size * P);
-  const xtIm = new Float64Array((H + 1) * size * P);
+  // one backing store for every table and the work arrays
+  const all = new Float64Array((H + 1) * (2 * P + 2 * P * P + 2 * size + 2 * size * P) + 2 * size * size + 2 * size + 2);
+  let at = 0;
+  const take = (n: number): Float64Array => all.subarray(at, (at += n));
+  const eRe = take((H + 1) * P);
+  const eIm = take((H + 1) * P);
+  const tRe = take((H + 1) * P * P);
+  const tIm = take((H + 1) * P * P);
+  const xRe = take((H + 1) * size);
+  const xIm = take((H + 1) * size);
+  const xtRe = take((H + 1) * size * P);
+  const xtIm = take((H + 1) * size * P);
 
-  const aRe = new Float64Array(size * size);
-  const aIm = new Float64Array(size * size);
+  const aRe = take(size * size);
+  const aIm = take(size * size);
   const piv = new Int32Array(size);
-  const bRe = new Float64Array(size);
-  const bIm = new Float64Array(size);
-  const tmp = new Float64Array(2);
+  const bRe = take(size);
+  const bIm = take(size);
+  const tmp = take(2);
   const L = net.inductance;
+  const set = (i: number, j: number, re: number, im: number): void => {
+    aRe[i * size + j] = aRe[i * size + j]! + re;
+    aIm[i * size + j] = aIm[i * size + j]! + im;
+  };
 
   for (let h = 0; h <= H; h++) {
     const wh = h * w;
@@ -136,10 +144,6 @@ export function harmonicPorts(
     aIm.fill(0);
     bRe.fill(0);
     bIm.fill(0);
-    const set = (i: number, j: number, re: number, im: number): void => {
-      aRe[i * size + j] = aRe[i * size + j]! + re;
-      aIm[i * size + j] = aIm[i * size + j]! + im;
-    };
     // mutual inductances in every loop row
     for (let i = 0; i < n; i++) {
       for (let j = 0; j < n; j++) if (i !== j) set(loop(i), loop(j), 0, wh * L[i]![j]!);

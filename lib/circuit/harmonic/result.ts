@@ -94,7 +94,7 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
   const rx = net.receivers;
   const m = rx.length;
   const n = m + 1;
-  if (P > 0) sys.residual(z, 1, new Float64Array(sys.size)); // loads and port currents at z
+  if (P > 0 && !sys.holds(z, 1)) sys.residual(z, 1, new Float64Array(sys.size)); // loads and port currents at z
   // every unknown at every harmonic: x_h = x_oc,h + X_T,h·I_port,h
   const xRe = new Float64Array((H + 1) * size);
   const xIm = new Float64Array((H + 1) * size);

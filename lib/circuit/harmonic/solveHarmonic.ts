@@ -243,7 +243,9 @@ function solveWithContinuation(
     sys.isFrozen[p] = 1;
     sys.frozen[p] = Number.isFinite(amp) ? load : 0;
   }
-  sys.newton(z, 1, tol, 3);
+  // without a switch the frozen problem is harmonic by harmonic: solved directly
+  if (ports.switchPort < 0) sys.solveFrozen(z, 1);
+  else sys.newton(z, 1, tol, 3);
   sys.isFrozen.fill(0);
   const start = z.slice();
   // 2. the true loads from there

@@ -22,8 +22,9 @@ export interface SpectrumTables {
  */
 export function spectrumTables(samples: number): SpectrumTables {
   const N = samples;
-  const cos = new Float64Array(N);
-  const sin = new Float64Array(N);
+  const both = new Float64Array(2 * N); // one backing store
+  const cos = both.subarray(0, N);
+  const sin = both.subarray(N);
   for (let r = 0; r < N; r++) {
     const th = (2 * Math.PI * r) / N;
     cos[r] = Math.cos(th);
