@@ -3,6 +3,8 @@
  * CODATA 2018 values (NIST, https://physics.nist.gov/constants), unchanged in CODATA 2022
  * for these entries.
  */
+import { TanklightInputError, underName } from "./errors.ts";
+import { parseQuantity } from "./units.ts";
 
 /** A constant with its provenance. */
 export interface Constant {
@@ -47,9 +49,18 @@ export const EPS0 = VACUUM_PERMITTIVITY.value;
 
 /**
  * Thermal voltage kT/q at a temperature, V.
- * @param kelvin absolute temperature, K, > 0.
+ * @param temperature absolute temperature > 0: K, or a quantity string ("300 K", "25 degC").
  * @example thermalVoltage(298.15) // → 0.025693 V
+ * @example thermalVoltage("25 degC") // → 0.025693 V
  */
-export function thermalVoltage(kelvin: number): number {
-  return (BOLTZMANN.value * kelvin) / ELEMENTARY_CHARGE.value;
+export function thermalVoltage(temperature: number | string): number {
+  const t = typeof temperature === "number" && temperature > 0 && temperature < Infinity ? temperature : kelvinOf(temperature);
+  return (BOLTZMANN.value * t) / ELEMENTARY_CHARGE.value;
+}
+
+/** thermalVoltage's slow path: a quantity string or a bad value, checked by name. */
+function kelvinOf(temperature: unknown): number {
+  const t = underName("thermalVoltage", () => parseQuantity(temperature as number | string, "temperature", "temperature"));
+  if (!(t > 0)) throw new TanklightInputError([{ path: "temperature", message: "must be > 0 K (absolute temperature)", value: temperature }], "thermalVoltage");
+  return t;
 }

@@ -22,7 +22,7 @@ export class TanklightInputError extends Error {
   readonly issues: readonly InputIssue[];
   constructor(issues: readonly InputIssue[], where?: string) {
     const text = issues
-      .map((i) => formatIssue(i))
+      .map((i) => issueText(i))
       .join("; ");
     super(where ? `${where}: ${text}` : text);
     this.name = "TanklightInputError";
@@ -35,6 +35,27 @@ export class TanklightInputError extends Error {
  * @example formatIssue({ path: "coil.radius", message: "must be > 0 m", value: -0.01 }) // → "coil.radius: must be > 0 m, got -0.01"
  */
 export function formatIssue(issue: InputIssue): string {
+  checkIssue(issue);
+  return issueText(issue);
+}
+
+/** The keys an InputIssue may carry (formatIssue refuses others, naming the nearest). */
+const ISSUE_KEYS: readonly string[] = Object.freeze(["path", "message", "value", "expected", "detail"]);
+
+/** formatIssue's input check: an object with string path and message, optional string expected/detail, no other key. */
+function checkIssue(issue: unknown): void {
+  const fail = (path: string, message: string, value: unknown): never => {
+    throw new TanklightInputError([{ path, message, value }], "formatIssue");
+  };
+  if (typeof issue !== "object" || issue === null || Array.isArray(issue)) return fail("issue", "must be an object { path, message, value, expected?, detail? }", issue);
+  const record = issue as Record<string, unknown>;
+  for (const key of Object.keys(record)) if (!ISSUE_KEYS.includes(key)) fail(`issue.${key}`, unknownKeyMessage(key, ISSUE_KEYS), record[key]);
+  for (const key of ["path", "message"]) if (typeof record[key] !== "string") fail(`issue.${key}`, "must be a string", record[key]);
+  for (const key of ["expected", "detail"]) if (record[key] !== undefined && typeof record[key] !== "string") fail(`issue.${key}`, "must be a string or absent", record[key]);
+}
+
+/** One issue as text, unchecked (the error constructor's issues are built by library code). */
+function issueText(issue: InputIssue): string {
   const detail = issue.detail ? ` (${issue.detail})` : "";
   return `${issue.path ? issue.path + ": " : ""}${issue.message}, got ${describeValue(issue.value)}${detail}`;
 }
@@ -145,4 +166,58 @@ export function assertNever(value: never, field: string, where: string, message 
   const v = value as unknown;
   const shown = v !== null && typeof v === "object" && "kind" in v ? (v as { kind: unknown }).kind : v;
   throw new TanklightInputError([{ path: field, message, value: shown }], where);
+}
+
+// ── unknown keys: "did you mean" ─────────────────────────────────────────────
+
+/**
+ * Edit distance of two strings (optimal string alignment: insert, delete, substitute, or swap
+ * two neighbouring characters, each costing 1), case-insensitive.
+ * @example editDistance("axsi", "axis") // → 1
+ */
+export function editDistance(a: string, b: string): number {
+  const s = a.toLowerCase();
+  const t = b.toLowerCase();
+  const rows: number[][] = [];
+  for (let i = 0; i <= s.length; i++) {
+    const row = [i];
+    for (let j = 1; j <= t.length; j++) {
+      if (i === 0) { row.push(j); continue; }
+      const prev = rows[i - 1]!;
+      let d = Math.min(prev[j]! + 1, row[j - 1]! + 1, prev[j - 1]! + (s[i - 1] === t[j - 1] ? 0 : 1));
+      if (i > 1 && j > 1 && s[i - 1] === t[j - 2] && s[i - 2] === t[j - 1]) d = Math.min(d, rows[i - 2]![j - 2]! + 1);
+      row.push(d);
+    }
+    rows.push(row);
+  }
+  return rows[s.length]![t.length]!;
+}
+
+/**
+ * The valid key nearest to a mistyped one, or undefined when none is close: at most 1 edit
+ * for keys of up to 4 characters, 2 up to 8, 3 beyond (or a match ignoring case).
+ * @param key the key the user wrote, e.g. "axsi".
+ * @param valid the keys the object accepts.
+ * @example nearestKey("axsi", ["position", "axis", "spin"]) // → "axis"
+ * @example nearestKey("colour", ["position", "axis"]) // → undefined
+ */
+export function nearestKey(key: string, valid: readonly string[]): string | undefined {
+  const limit = key.length <= 4 ? 1 : key.length <= 8 ? 2 : 3;
+  let best: string | undefined;
+  let bestD = Infinity;
+  for (const v of valid) {
+    const d = editDistance(key, v);
+    if (d < bestD) { bestD = d; best = v; }
+  }
+  return bestD <= limit ? best : undefined;
+}
+
+/**
+ * The message for an unknown key: "unknown field; did you mean 'axis'?" or, with no close
+ * key, "unknown field (accepted: position, axis, spin)".
+ */
+export function unknownKeyMessage(key: string, valid: readonly string[]): string {
+  const near = nearestKey(key, valid);
+  if (near !== undefined) return `unknown field; did you mean '${near}'?`;
+  return valid.length > 0 ? `unknown field (accepted: ${valid.join(", ")})` : "unknown field";
 }

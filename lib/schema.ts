@@ -8,7 +8,9 @@
  * numbers they return.
  */
 import { z } from "zod";
-import { TanklightInputError, type InputIssue } from "./errors.ts";
+import { TanklightInputError, editDistance, nearestKey, unknownKeyMessage, type InputIssue } from "./errors.ts";
+
+export { editDistance, nearestKey, unknownKeyMessage };
 import { DIMENSIONS, formatQuantity, parseQuantity, type Dimension } from "./units.ts";
 
 /** Range rules of a quantity field, in SI units of its dimension. */
@@ -66,8 +68,9 @@ function ruleText(dimension: Dimension, opts: QuantityOptions): string {
  * @example parseInput(quantity("length", { positive: true }), "12 mm", "f") // → 0.012
  */
 export function quantity(dimension: Dimension, opts: QuantityOptions = {}): QuantitySchema {
+  checkDimension(dimension);
+  checkOptions(opts, "quantity");
   const info = DIMENSIONS[dimension];
-  checkOptions(opts);
   const example = opts.example ?? info.example;
   const rule = ruleText(dimension, opts);
   const unit = info.unit;
@@ -112,19 +115,41 @@ export function quantity(dimension: Dimension, opts: QuantityOptions = {}): Quan
   return schema.meta({ ...meta }) as unknown as QuantitySchema;
 }
 
-/** Range options must be finite SI numbers with min ≤ max (a programming error otherwise). */
-function checkOptions(opts: QuantityOptions): void {
-  const issues: { path: string; message: string; value: unknown }[] = [];
-  for (const key of ["min", "max"] as const) {
-    const v = opts[key];
+/** quantity()'s dimension: an own key of DIMENSIONS ("toString" is none). */
+function checkDimension(dimension: unknown): void {
+  if (typeof dimension !== "string" || !Object.hasOwn(DIMENSIONS, dimension)) {
+    throw new TanklightInputError([{ path: "dimension", message: `must be one of ${Object.keys(DIMENSIONS).join(", ")}`, value: dimension }], "quantity");
+  }
+}
+
+/** The keys of QuantityOptions (others are refused, naming the nearest). */
+const OPTION_KEYS: readonly string[] = Object.freeze(["positive", "nonNegative", "min", "max", "example"]);
+
+/**
+ * The options of a schema builder (a programming error otherwise): a record of the QuantityOptions keys only,
+ * booleans for the sign rules, finite SI numbers with min ≤ max, a string example.
+ */
+function checkOptions(opts: unknown, where: string): void {
+  const issues: InputIssue[] = [];
+  if (opts === null || typeof opts !== "object" || Array.isArray(opts)) {
+    throw new TanklightInputError([{ path: "opts", message: "must be an object { positive?, nonNegative?, min?, max?, example? }", value: opts }], where);
+  }
+  const o = opts as Record<string, unknown>;
+  for (const key of Object.keys(o)) if (!OPTION_KEYS.includes(key)) issues.push({ path: `opts.${key}`, message: unknownKeyMessage(key, OPTION_KEYS), value: o[key] });
+  for (const key of ["positive", "nonNegative"]) {
+    if (o[key] !== undefined && typeof o[key] !== "boolean") issues.push({ path: `opts.${key}`, message: "must be true, false or absent", value: o[key] });
+  }
+  if (o["example"] !== undefined && typeof o["example"] !== "string") issues.push({ path: "opts.example", message: "must be a string like '12 mm' or absent", value: o["example"] });
+  for (const key of ["min", "max"]) {
+    const v = o[key];
     if (v !== undefined && !(typeof v === "number" && Number.isFinite(v))) {
-      issues.push({ path: key, message: "must be a finite number in SI units", value: v });
+      issues.push({ path: `opts.${key}`, message: "must be a finite number in SI units", value: v });
     }
   }
-  if (issues.length === 0 && opts.min !== undefined && opts.max !== undefined && opts.min > opts.max) {
-    issues.push({ path: "min", message: `must be ≤ max (${opts.max})`, value: opts.min });
+  if (issues.length === 0 && typeof o["min"] === "number" && typeof o["max"] === "number" && o["min"] > o["max"]) {
+    issues.push({ path: "opts.min", message: `must be ≤ opts.max (${o["max"]})`, value: o["min"] });
   }
-  if (issues.length > 0) throw new TanklightInputError(issues, "quantity");
+  if (issues.length > 0) throw new TanklightInputError(issues, where);
 }
 
 /**
@@ -132,6 +157,7 @@ function checkOptions(opts: QuantityOptions): void {
  * @example quantityMeta(schema.length()).unit // → "m"
  */
 export function quantityMeta(schema: z.ZodType): QuantityMeta | undefined {
+  checkSchema(schema, "quantityMeta");
   const m = schema.meta() as Partial<QuantityMeta> | undefined;
   if (m === undefined || typeof m.dimension !== "string" || typeof m.unit !== "string") return undefined;
   return m as QuantityMeta;
@@ -189,7 +215,8 @@ export function lazySchema<T extends object>(build: () => T): T {
 
 /** The shorthand's default sign rule, unless the options give their own. */
 function withDefaultSign(sign: "positive" | "nonNegative" | "any", opts: QuantityOptions): QuantityOptions {
-  if (opts.positive !== undefined || opts.nonNegative !== undefined || sign === "any") return opts;
+  // a non-object opts is passed on for quantity() to refuse by name
+  if (opts === null || typeof opts !== "object" || opts.positive !== undefined || opts.nonNegative !== undefined || sign === "any") return opts;
   return sign === "positive" ? { ...opts, positive: true } : { ...opts, nonNegative: true };
 }
 
@@ -242,6 +269,7 @@ export type Vec3Schema = z.ZodType<readonly [number, number, number], readonly [
  * @example parseInput(vec3(), ["1 mm", 0, "-2 cm"], "pose.position") // → [0.001, 0, -0.02]
  */
 export function vec3(opts: QuantityOptions = {}): Vec3Schema {
+  checkOptions(opts, "vec3");
   const c = quantity("length", opts);
   return z.tuple([c, c, c]).readonly() as unknown as Vec3Schema;
 }
@@ -379,59 +407,7 @@ function cleanMessage(issue: z.core.$ZodIssue): string {
   return issue.message.replace(/^(Invalid input|Invalid option|Too small|Too big): /, "").replace(/, received \w+$/, "");
 }
 
-// ── unknown keys: "did you mean" ─────────────────────────────────────────────
-
-/**
- * Edit distance of two strings (optimal string alignment: insert, delete, substitute, or swap
- * two neighbouring characters, each costing 1), case-insensitive.
- * @example editDistance("axsi", "axis") // → 1
- */
-export function editDistance(a: string, b: string): number {
-  const s = a.toLowerCase();
-  const t = b.toLowerCase();
-  const rows: number[][] = [];
-  for (let i = 0; i <= s.length; i++) {
-    const row = [i];
-    for (let j = 1; j <= t.length; j++) {
-      if (i === 0) { row.push(j); continue; }
-      const prev = rows[i - 1]!;
-      let d = Math.min(prev[j]! + 1, row[j - 1]! + 1, prev[j - 1]! + (s[i - 1] === t[j - 1] ? 0 : 1));
-      if (i > 1 && j > 1 && s[i - 1] === t[j - 2] && s[i - 2] === t[j - 1]) d = Math.min(d, rows[i - 2]![j - 2]! + 1);
-      row.push(d);
-    }
-    rows.push(row);
-  }
-  return rows[s.length]![t.length]!;
-}
-
-/**
- * The valid key nearest to a mistyped one, or undefined when none is close: at most 1 edit
- * for keys of up to 4 characters, 2 up to 8, 3 beyond (or a match ignoring case).
- * @param key the key the user wrote, e.g. "axsi".
- * @param valid the keys the object accepts.
- * @example nearestKey("axsi", ["position", "axis", "spin"]) // → "axis"
- * @example nearestKey("colour", ["position", "axis"]) // → undefined
- */
-export function nearestKey(key: string, valid: readonly string[]): string | undefined {
-  const limit = key.length <= 4 ? 1 : key.length <= 8 ? 2 : 3;
-  let best: string | undefined;
-  let bestD = Infinity;
-  for (const v of valid) {
-    const d = editDistance(key, v);
-    if (d < bestD) { bestD = d; best = v; }
-  }
-  return bestD <= limit ? best : undefined;
-}
-
-/**
- * The message for an unknown key: "unknown field; did you mean 'axis'?" or, with no close
- * key, "unknown field (accepted: position, axis, spin)".
- */
-export function unknownKeyMessage(key: string, valid: readonly string[]): string {
-  const near = nearestKey(key, valid);
-  if (near !== undefined) return `unknown field; did you mean '${near}'?`;
-  return valid.length > 0 ? `unknown field (accepted: ${valid.join(", ")})` : "unknown field";
-}
+// ── unknown keys: "did you mean" (editDistance, nearestKey, unknownKeyMessage live in lib/errors.ts) ──
 
 type SchemaDef = { type: string; [k: string]: unknown };
 const defOf = (s: unknown): SchemaDef | undefined => (s as { _zod?: { def?: SchemaDef } } | undefined)?._zod?.def;
@@ -529,6 +505,8 @@ function toInputIssues(issue: z.core.$ZodIssue, input: unknown, schema: unknown,
  * @example parseInput(z.object({ radius: schema.length() }), { radius: "12 mm" }, "roundCoil") // → { radius: 0.012 }
  */
 export function parseInput<T>(schema: z.ZodType<T>, input: unknown, where: string): T {
+  checkSchema(schema, "parseInput");
+  if (typeof where !== "string") throw new TanklightInputError([{ path: "where", message: "must be the public function's name (a string)", value: where }], "parseInput");
   let result: z.ZodSafeParseResult<T>;
   try {
     result = schema.safeParse(input, { reportInput: true });
@@ -544,3 +522,10 @@ export function parseInput<T>(schema: z.ZodType<T>, input: unknown, where: strin
   throw new TanklightInputError(issues, where);
 }
 
+/** A zod schema (the `schema` argument of parseInput and quantityMeta), else a TanklightInputError naming `where`. */
+function checkSchema(schema: unknown, where: string): void {
+  const s = schema as { safeParse?: unknown; meta?: unknown } | null | undefined;
+  if (typeof s !== "object" || s === null || typeof s.safeParse !== "function" || typeof s.meta !== "function") {
+    throw new TanklightInputError([{ path: "schema", message: "must be a zod schema (built with z.… or the helpers of tanklight/advanced)", value: schema }], where);
+  }
+}

@@ -8,7 +8,7 @@
  * The rules (which strings are accepted, what a bare number means) are documented in
  * docs/methods/units.md.
  */
-import { TanklightInputError } from "./errors.ts";
+import { TanklightInputError, unknownKeyMessage } from "./errors.ts";
 import { reduceUnit, sameDims, UnitSyntaxError, type BaseDims, type ReducedUnit } from "./unitAlgebra.ts";
 
 /** Physical dimension of an input quantity; decides the SI unit it is converted to. */
@@ -459,8 +459,7 @@ function formatOptions(digits: unknown): FormatOptions {
   }
   for (const key of Reflect.ownKeys(digits)) {
     if (key !== "digits" && key !== "floor") {
-      const near = typeof key === "string" && /^(dig|flo)/i.test(key) ? `; did you mean '${/^dig/i.test(key) ? "digits" : "floor"}'?` : " (accepted: digits, floor)";
-      throw new TanklightInputError([{ path: `options.${String(key)}`, message: `unknown option${near}`, value: (digits as Record<PropertyKey, unknown>)[key] }], "formatQuantity");
+      throw new TanklightInputError([{ path: `options.${String(key)}`, message: unknownKeyMessage(String(key), ["digits", "floor"]).replace("field", "option"), value: (digits as Record<PropertyKey, unknown>)[key] }], "formatQuantity");
     }
   }
   return digits as FormatOptions;

@@ -65,10 +65,10 @@ describe("quantity schemas", () => {
 
   it("rejects non-finite or crossed range options when the schema is built", () => {
     expect(() => quantity("length", { min: NaN })).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: quantity: min: must be a finite number in SI units, got NaN]`,
+      `[TanklightInputError: quantity: opts.min: must be a finite number in SI units, got NaN]`,
     );
     expect(() => quantity("length", { min: 2, max: 1 })).toThrowErrorMatchingInlineSnapshot(
-      `[TanklightInputError: quantity: min: must be ≤ max (1), got 2]`,
+      `[TanklightInputError: quantity: opts.min: must be ≤ opts.max (1), got 2]`,
     );
   });
 

@@ -4,7 +4,7 @@
  * (Stokes: M = ∮ A·dl per unit current), by the periodic trapezoidal rule.
  */
 import { MU0 } from "../constants.ts";
-import { TanklightInputError, type InputIssue } from "../errors.ts";
+import { TanklightInputError, unknownKeyMessage, type InputIssue } from "../errors.ts";
 import { segmentLog } from "./segmentPotential.ts";
 import { packPolygons, SEG_STRIDE } from "./straightMutual.ts";
 import type { Vec3 } from "./types.ts";
@@ -200,8 +200,12 @@ export function circlePolygonMutual(
   const where = "circlePolygonMutual";
   // strict keys: { center, axis, radius } (a coil's circle filament, with kind and turns, also fits)
   circle = checkLoop(circle, "circle", where);
-  if (options === null || typeof options !== "object" || Array.isArray(options) || Reflect.ownKeys(options).some((k) => k !== "relTol")) {
+  if (options === null || typeof options !== "object" || Array.isArray(options)) {
     throw new TanklightInputError([{ path: "options", message: "must be an object { relTol? }", value: options }], where);
+  }
+  const extra = Reflect.ownKeys(options).find((k) => k !== "relTol");
+  if (extra !== undefined) {
+    throw new TanklightInputError([{ path: `options.${String(extra)}`, message: unknownKeyMessage(String(extra), ["relTol"]), value: (options as Record<PropertyKey, unknown>)[extra] }], where);
   }
   if (Array.isArray(polygon) && polygon.length > SIZE_LIMITS.points.max) {
     throw new TanklightInputError([{ path: "polygon", message: `holds more than ${SIZE_LIMITS.points.max} vertices: ${SIZE_LIMITS.points.why}`, value: `${polygon.length} vertices` }], where);

@@ -5,7 +5,7 @@
  * once here (INCH, MICROHENRY) and tested. Sources and validity are in each doc comment and in
  * docs/methods/coils.md.
  */
-import { TanklightInputError } from "../errors.ts";
+import { TanklightInputError, unknownKeyMessage } from "../errors.ts";
 import { MU0 } from "../constants.ts";
 
 /** One inch, m (exact since the 1959 international yard and pound agreement). */
@@ -338,7 +338,7 @@ export function groverRectangleInductance(
     throw new TanklightInputError([{ path: "opts", message: "must be an object { internal? }", value: opts }], where);
   }
   for (const key of Reflect.ownKeys(opts)) {
-    if (key !== "internal") throw new TanklightInputError([{ path: `opts.${String(key)}`, message: "unknown option (accepted: internal)", value: (opts as Record<PropertyKey, unknown>)[key] }], where);
+    if (key !== "internal") throw new TanklightInputError([{ path: `opts.${String(key)}`, message: unknownKeyMessage(String(key), ["internal"]), value: (opts as Record<PropertyKey, unknown>)[key] }], where);
   }
   const y = opts.internal === undefined ? 0.25 : opts.internal;
   check(where, "internal", y, "nonNegative");

@@ -6,7 +6,7 @@
  * resistance to 20 °C. Temperatures are in kelvin (SI), like everything inside the library.
  */
 
-import { TanklightInputError } from "../errors.ts";
+import { TanklightInputError, unknownKeyMessage } from "../errors.ts";
 
 /** A conductor material (plain data). */
 export interface Material {
@@ -67,7 +67,7 @@ function checkMaterial(m: unknown, field: string, where: string): Material {
     throw new TanklightInputError([{ path, message, value }], where);
   };
   if (typeof m !== "object" || m === null || Array.isArray(m)) return bad(field, "must be a material name or a Material { name, resistivity20, temperatureCoefficient20, relativePermeability, source }", m);
-  for (const key of Reflect.ownKeys(o)) if (!MATERIAL_KEYS.includes(key as string)) bad(`${field}.${String(key)}`, `unknown field (accepted: ${MATERIAL_KEYS.join(", ")})`, o[key as string]);
+  for (const key of Reflect.ownKeys(o)) if (!MATERIAL_KEYS.includes(key as string)) bad(`${field}.${String(key)}`, unknownKeyMessage(String(key), MATERIAL_KEYS), o[key as string]);
   const num = (k: string, lo: number, hi: number): void => {
     const x = o[k];
     if (!(typeof x === "number" && x >= lo && x <= hi)) bad(`${field}.${k}`, `must be a finite number in [${lo}, ${hi}]`, x);

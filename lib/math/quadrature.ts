@@ -19,7 +19,7 @@
  * n ≤ 500; weights ≤ 3e-15 relative for n ≤ 20 and ≤ 3e-13 for n ≤ 500 (worst at the
  * outermost nodes, whose weights are ~1e-4 of the total, so integrals move by < 1e-16).
  */
-import { TanklightInputError } from "../errors.ts";
+import { TanklightInputError, unknownKeyMessage } from "../errors.ts";
 
 /** Nodes and weights of an n-point Gauss–Legendre rule on [−1, 1] (ascending nodes). */
 export interface GaussRule {
@@ -198,7 +198,7 @@ function checkAdaptiveOptions(options: unknown): void {
   }
   for (const key of Reflect.ownKeys(options)) {
     if (typeof key !== "string" || !ADAPTIVE_KEYS.includes(key)) {
-      throw new TanklightInputError([{ path: `options.${String(key)}`, message: `unknown option (accepted: ${ADAPTIVE_KEYS.join(", ")})`, value: (options as Record<PropertyKey, unknown>)[key] }], "integrateAdaptive");
+      throw new TanklightInputError([{ path: `options.${String(key)}`, message: unknownKeyMessage(String(key), ADAPTIVE_KEYS), value: (options as Record<PropertyKey, unknown>)[key] }], "integrateAdaptive");
     }
   }
 }

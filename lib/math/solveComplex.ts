@@ -8,7 +8,7 @@
  * 2013, Algorithm 3.4.1); checked against mathjs's lusolve (reference library: mathjs) in
  * tests/math/solveComplex.test.ts.
  */
-import { TanklightInputError } from "../errors.ts";
+import { TanklightInputError, unknownKeyMessage } from "../errors.ts";
 import type { Complex } from "./complex.ts";
 import { complexLuFactorCore, complexLuSolveCore } from "./complexLu.ts";
 
@@ -22,6 +22,15 @@ function isComplex(z: unknown): z is Complex {
   if (!(typeof o["re"] === "number" && Number.isFinite(o["re"]) && typeof o["im"] === "number" && Number.isFinite(o["im"]))) return false;
   for (const k of Reflect.ownKeys(o)) if (k !== "re" && k !== "im") return false;
   return true;
+}
+
+/** The error for an entry that is no finite { re, im }: an extra key is named with the nearest valid one. */
+function entryError(path: string, z: unknown): TanklightInputError {
+  const extra = typeof z === "object" && z !== null ? Reflect.ownKeys(z).find((k) => k !== "re" && k !== "im") : undefined;
+  if (extra !== undefined) {
+    return new TanklightInputError([{ path: `${path}.${String(extra)}`, message: unknownKeyMessage(String(extra), ["re", "im"]), value: (z as Record<PropertyKey, unknown>)[extra] }], "solveComplex");
+  }
+  return new TanklightInputError([{ path, message: "entries must be finite complex numbers { re, im }", value: z }], "solveComplex");
 }
 
 function singular(detail: string, value: unknown): TanklightInputError {
@@ -61,7 +70,7 @@ export function solveComplex(A: readonly (readonly Complex[])[], b: readonly Com
   A.forEach((row, i) =>
     row.forEach((z: Complex, j: number) => {
       if (!isComplex(z)) {
-        throw new TanklightInputError([{ path: `A[${i}][${j}]`, message: "entries must be finite complex numbers { re, im }", value: z }], "solveComplex");
+        throw entryError(`A[${i}][${j}]`, z);
       }
       re[i * n + j] = z.re;
       im[i * n + j] = z.im;
@@ -71,7 +80,7 @@ export function solveComplex(A: readonly (readonly Complex[])[], b: readonly Com
   const bi = new Float64Array(n);
   b.forEach((z, i) => {
     if (!isComplex(z)) {
-      throw new TanklightInputError([{ path: `b[${i}]`, message: "entries must be finite complex numbers { re, im }", value: z }], "solveComplex");
+      throw entryError(`b[${i}]`, z);
     }
     br[i] = z.re;
     bi[i] = z.im;

@@ -21,9 +21,6 @@ const NOT_YET_FUZZED: Readonly<Record<string, readonly string[]>> = {
   "link (harmonic balance, shooting, network internals)": [
     "solveLinkHarmonic", "solveLinkModel", "fundamentalCheck", "periodicSteadyState", "linkNetwork", "solveLinkNetwork", "summarizeLink", "tokenLoadModel",
   ],
-  "guards (errors and schema building blocks of tanklight/advanced)": [
-    "requirePositive", "requireNonNegative", "requireFinite", "describeValue", "formatIssue", "quantity", "quantityMeta", "parseInput", "vec3", "unitVector", "thermalVoltage",
-  ],
   "safety": [
     "designFromLink", "referenceLevel", "basicRestriction", "exposureCheck", "emissionEstimate", "dipoleField", "emissionRows", "metalHeating",
     "componentStress", "checkRating", "cautions", "safetyReport", "supplyBudget", "supplyVerdict",

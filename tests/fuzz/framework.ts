@@ -4,7 +4,8 @@
  *
  * - **bad** inputs (NaN, ±∞, null, wrong types, unknown or prototype keys, typos of a valid key)
  *   must give a *clear* error: a TanklightInputError whose message names the public function
- *   and the user's field (the mutated key, or the argument's name from `params`).
+ *   and the user's field (the mutated key, or the argument's name from `params`); a typo's
+ *   message also names the key meant, quoted ("did you mean 'axis'?").
  * - **extreme** inputs (0, −1, huge and tiny numbers, a missing key, an empty list, random junk
  *   from fast-check) may be legal: they must give a clear error or a finite result (no NaN
  *   anywhere in it), within the time budget.
@@ -27,8 +28,8 @@ export interface FuzzCase {
   readonly valid: readonly unknown[];
   /** the user's names of the positional arguments; an error about argument i must name params[i] */
   readonly params?: readonly string[];
-  /** the prefix the error message carries when it is not `name` (e.g. the builder a wrapper calls) */
-  readonly where?: string;
+  /** the prefix the error message carries when it is not `name` (e.g. the builder a wrapper calls); a list when errors about different arguments come from different names */
+  readonly where?: string | readonly string[];
   /** hand-written bad argument lists; each must give a clear error */
   readonly bad?: readonly (readonly unknown[])[];
   /** hand-written extreme argument lists (huge sizes …); each must give a clear error or a finite result */
@@ -153,7 +154,7 @@ function probes(c: FuzzCase): Probe[] {
       const keys = Object.keys(value);
       for (const key of keys) {
         const typo = typoOf(key);
-        if (!keys.includes(typo)) add("bad", `typo '${typo}' of '${key}'`, replaced(c.valid, [...path, typo], value[key]), [typo]);
+        if (!keys.includes(typo)) add("bad", `typo '${typo}' of '${key}'`, replaced(c.valid, [...path, typo], value[key]), [typo, `'${key}'`]);
         add("extreme", `without '${key}'`, replaced(c.valid, [...path, key], undefined, true));
       }
       add("bad", "extra key 'toString'", replaced(c.valid, [...path, "toString"], 1), ["toString"]);
@@ -166,8 +167,8 @@ function probes(c: FuzzCase): Probe[] {
     walk(v, [i], argName(i));
     out.push({ kind: "extreme", label: `argument ${i} missing`, args: replaced(c.valid, [i], undefined), mustName: [] });
   });
-  for (const args of c.bad ?? []) out.push({ kind: "bad", label: `hand-written ${JSON.stringify(args).slice(0, 60)}`, args, mustName: [] });
-  for (const args of c.extreme ?? []) out.push({ kind: "extreme", label: `hand-written ${JSON.stringify(args).slice(0, 60)}`, args, mustName: [] });
+  for (const args of c.bad ?? []) out.push({ kind: "bad", label: `hand-written ${fc.stringify(args).slice(0, 60)}`, args, mustName: [] });
+  for (const args of c.extreme ?? []) out.push({ kind: "extreme", label: `hand-written ${fc.stringify(args).slice(0, 60)}`, args, mustName: [] });
   return out;
 }
 
@@ -204,8 +205,8 @@ export function classify(c: FuzzCase, args: readonly unknown[], kind: "bad" | "e
   if (threw) {
     if (error instanceof TanklightInputError) {
       const msg = error.message;
-      const where = c.where ?? c.name;
-      if (!msg.includes(where)) return { outcome: "unclear error", why: `message does not name ${where}: ${msg}` };
+      const where = typeof c.where === "string" ? [c.where] : c.where ?? [c.name];
+      if (!where.some((w) => msg.includes(w))) return { outcome: "unclear error", why: `message does not name ${where.join(" or ")}: ${msg}` };
       const missing = mustName.filter((w) => !msg.includes(w));
       if (missing.length > 0) return { outcome: "unclear error", why: `message does not name '${missing.join("', '")}': ${msg}` };
       return { outcome: "clear error" };
