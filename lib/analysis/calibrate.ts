@@ -397,21 +397,7 @@ function crossing(design: CalibrationDesignParsed, m: Extract<MeasurementParsed,
  */
 export function calibrate(design: CalibrationDesign, measurements: readonly Measurement[], unknowns: readonly CalibrationUnknown[], opts: CalibrateOptions = {}): Calibration {
   const where = "calibrate";
-  const d = parseCalibrationDesign(design, where);
-  const data = parseInput(z.array(MeasurementInput).min(1).max(10_000), measurements, where) as MeasurementParsed[];
-  const o = parseInput(CalibrateOptionsInput, opts, where);
-  const names = parseInput(z.array(z.enum(UNKNOWNS as [CalibrationUnknown, ...CalibrationUnknown[]])).max(4), unknowns, where);
-  if (new Set(names).size !== names.length) {
-    throw new TanklightInputError([{ path: "unknowns", message: "names a parameter twice", value: names }], where);
-  }
-  for (const [i, m] of data.entries()) {
-    if ("token" in m && d.tokens[m.token] === undefined) {
-      throw new TanklightInputError([{ path: `measurements[${i}].token`, message: `names no token of the design (have: ${Object.keys(d.tokens).join(", ")})`, value: m.token }], where);
-    }
-  }
-  if (!names.includes("coilCurrent") && o.assume?.coilCurrent === undefined) {
-    throw new TanklightInputError([{ path: "unknowns", message: "must include 'coilCurrent', or opts.assume.coilCurrent must give it", value: names }], where);
-  }
+  const { d, data, o, names } = parseCalibrateArgs(design, measurements, unknowns, opts, where);
   const base: CalibrationParameters = {
     coilCurrent: o.assume?.coilCurrent ?? o.initial?.coilCurrent ?? 1,
     tokenQ: o.assume?.tokenQ ?? 1,
@@ -419,7 +405,7 @@ export function calibrate(design: CalibrationDesign, measurements: readonly Meas
     frequencyOffset: o.assume?.frequencyOffset ?? 0,
   };
   const continuous: Continuous[] = [];
-  const binary: { index: number; m: Extract<MeasurementParsed, { kind: "lit" }> }[] = [];
+  const binary: Binary[] = [];
   data.forEach((m, index) => (m.kind === "lit" ? binary.push({ index, m }) : continuous.push({ index, m })));
   const warnings: string[] = [];
   const params = {} as Record<CalibrationUnknown, CalibratedParameter>;
@@ -433,21 +419,12 @@ export function calibrate(design: CalibrationDesign, measurements: readonly Meas
   let dof = continuous.length - names.length;
 
   if (names.length > 0 && continuous.length >= names.length) {
-    // starting point: the coil current that puts the first edge (or tank amplitude) where measured
-    let start = { ...base, ...(o.initial ?? {}) } as CalibrationParameters;
-    if (names.includes("coilCurrent") && o.initial?.coilCurrent === undefined) start = { ...start, coilCurrent: initialCoilCurrent(d, continuous, binary, start, where) };
-    const f = (c: Float64Array): Float64Array => residuals(d, continuous, withValues(start, names, c), where);
-    const fit = levenbergMarquardt(f, Float64Array.from(names, (u) => toCoord(u, start[u])), o.maxIterations ?? 60);
-    if (!fit.converged) warnings.push(`the least-squares fit stopped at its iteration cap (${fit.iterations}) before converging`);
-    values = withValues(start, names, fit.coords);
+    const fit = fitUnknowns(d, continuous, binary, names, base, o, where);
+    values = fit.values;
     chi2 = fit.chi2;
-    const inv = inverseSmall(fit.jtj, names.length);
-    cov = inv ? Array.from(inv) : [];
-    names.forEach((u, i) => {
-      const sd = inv ? Math.sqrt(Math.max(inv[i * names.length + i]!, 0)) : Infinity;
-      params[u] = describeFitted(u, fit.coords[i]!, sd, d.frequency);
-    });
-    if (!inv) warnings.push("the measurements cannot separate the unknowns (JᵀJ is singular): measure at more poses, with another token, or fit fewer unknowns");
+    cov = fit.covariance;
+    for (const u of names) params[u] = fit.params[u]!;
+    warnings.push(...fit.warnings);
     if (dof > 0 && chi2 / dof > 4) {
       warnings.push(`χ²/dof = ${(chi2 / dof).toFixed(1)}: the model and the data disagree by more than the stated uncertainties (check the uncertainties, the design, or fit another unknown)`);
     }
@@ -496,6 +473,53 @@ export function calibrate(design: CalibrationDesign, measurements: readonly Meas
     summary,
     warnings,
   };
+}
+
+type Binary = { index: number; m: Extract<MeasurementParsed, { kind: "lit" }> };
+
+/** calibrate's arguments parsed and cross-checked (tokens named by the measurements exist; the coil current fitted or assumed). */
+function parseCalibrateArgs(design: CalibrationDesign, measurements: readonly Measurement[], unknowns: readonly CalibrationUnknown[], opts: CalibrateOptions, where: string) {
+  const d = parseCalibrationDesign(design, where);
+  const data = parseInput(z.array(MeasurementInput).min(1).max(10_000), measurements, where) as MeasurementParsed[];
+  const o = parseInput(CalibrateOptionsInput, opts, where);
+  const names = parseInput(z.array(z.enum(UNKNOWNS as [CalibrationUnknown, ...CalibrationUnknown[]])).max(4), unknowns, where);
+  if (new Set(names).size !== names.length) {
+    throw new TanklightInputError([{ path: "unknowns", message: "names a parameter twice", value: names }], where);
+  }
+  for (const [i, m] of data.entries()) {
+    if ("token" in m && d.tokens[m.token] === undefined) {
+      throw new TanklightInputError([{ path: `measurements[${i}].token`, message: `names no token of the design (have: ${Object.keys(d.tokens).join(", ")})`, value: m.token }], where);
+    }
+  }
+  if (!names.includes("coilCurrent") && o.assume?.coilCurrent === undefined) {
+    throw new TanklightInputError([{ path: "unknowns", message: "must include 'coilCurrent', or opts.assume.coilCurrent must give it", value: names }], where);
+  }
+  return { d, data, o, names };
+}
+
+/**
+ * The weighted least-squares fit of the unknowns to the continuous measurements, from a start
+ * whose coil current puts the first edge (or tank amplitude) where measured; returns the values,
+ * χ², the covariance (empty when JᵀJ is singular) and each unknown's estimate with its interval.
+ */
+function fitUnknowns(
+  d: CalibrationDesignParsed, continuous: readonly Continuous[], binary: readonly Binary[], names: readonly CalibrationUnknown[],
+  base: CalibrationParameters, o: ReturnType<typeof parseCalibrateArgs>["o"], where: string,
+): { values: CalibrationParameters; chi2: number; covariance: number[]; params: Partial<Record<CalibrationUnknown, CalibratedParameter>>; warnings: string[] } {
+  const warnings: string[] = [];
+  let start = { ...base, ...(o.initial ?? {}) } as CalibrationParameters;
+  if (names.includes("coilCurrent") && o.initial?.coilCurrent === undefined) start = { ...start, coilCurrent: initialCoilCurrent(d, continuous, binary, start, where) };
+  const f = (c: Float64Array): Float64Array => residuals(d, continuous, withValues(start, names, c), where);
+  const fit = levenbergMarquardt(f, Float64Array.from(names, (u) => toCoord(u, start[u])), o.maxIterations ?? 60);
+  if (!fit.converged) warnings.push(`the least-squares fit stopped at its iteration cap (${fit.iterations}) before converging`);
+  const inv = inverseSmall(fit.jtj, names.length);
+  const params: Partial<Record<CalibrationUnknown, CalibratedParameter>> = {};
+  names.forEach((u, i) => {
+    const sd = inv ? Math.sqrt(Math.max(inv[i * names.length + i]!, 0)) : Infinity;
+    params[u] = describeFitted(u, fit.coords[i]!, sd, d.frequency);
+  });
+  if (!inv) warnings.push("the measurements cannot separate the unknowns (JᵀJ is singular): measure at more poses, with another token, or fit fewer unknowns");
+  return { values: withValues(start, names, fit.coords), chi2: fit.chi2, covariance: inv ? Array.from(inv) : [], params, warnings };
 }
 
 function fmt(u: CalibrationUnknown, v: number): string {
