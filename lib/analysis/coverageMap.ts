@@ -280,16 +280,7 @@ async function runMap(
   const rows = total / n0;
   for (let r0 = 0; r0 < rows; r0 += rowsPerTile) {
     const r1 = Math.min(rows, r0 + rowsPerTile);
-    const positions = new Float64Array((r1 - r0) * n0 * 3);
-    let q = 0;
-    for (let idx = r0 * n0; idx < r1 * n0; idx++) {
-      const coords = indexCoords(idx, shape).map((i, d) => axes[d]!.values[i]!);
-      const p = world(fixed, names, coords);
-      positions[q++] = p[0];
-      positions[q++] = p[1];
-      positions[q++] = p[2];
-    }
-    const v = await evaluateChunks(ctx, positions);
+    const v = await evaluateChunks(ctx, gridPositions(axes, fixed, r0 * n0, r1 * n0));
     ledCurrent.set(v.current, r0 * n0);
     mutual.set(v.mutual, r0 * n0 * na);
     supplyCurrent.set(v.supply, r0 * n0);
@@ -389,11 +380,34 @@ function fmtMm(x: number): string {
   return `${Number((x * 1e3).toPrecision(3))} mm`;
 }
 
-function indexCoords(idx: number, shape: readonly number[]): number[] {
-  const out: number[] = [];
-  for (const n of shape) {
-    out.push(idx % n);
-    idx = Math.floor(idx / n);
+/**
+ * World positions [x, y, z, …] of the grid nodes from index `from` to `to` (exclusive), the
+ * first axis fastest — written straight into one array (the main thread's share of a map: no
+ * per-node arrays).
+ */
+function gridPositions(axes: readonly GridAxis[], fixed: Readonly<Partial<Record<"x" | "y" | "z", number>>>, from: number, to: number): Float64Array {
+  const out = new Float64Array((to - from) * 3);
+  const [x, y, z] = [fixed.x ?? 0, fixed.y ?? 0, fixed.z ?? 0];
+  for (let q = 0; q < out.length; q += 3) {
+    out[q] = x;
+    out[q + 1] = y;
+    out[q + 2] = z;
+  }
+  let stride = 1;
+  for (const a of axes) {
+    const d = a.name === "x" ? 0 : a.name === "y" ? 1 : 2;
+    const n = a.values.length;
+    // index along this axis: ⌊idx/stride⌋ mod n, stepped (no division per node)
+    let i = Math.floor(from / stride) % n;
+    let left = stride - (from % stride);
+    for (let q = d; q < out.length; q += 3) {
+      out[q] = a.values[i]!;
+      if (--left === 0) {
+        left = stride;
+        if (++i === n) i = 0;
+      }
+    }
+    stride *= n;
   }
   return out;
 }
@@ -605,8 +619,17 @@ async function refinePlane(
   }
   // ── dead zones: marching squares over coarse cells, fine sub-grids and a border ring ──
   const inside = (I: number, J: number): boolean => I >= 0 && J >= 0 && I <= NI && J <= NJ;
+  // the coarse nodes' margins once: a coarse cell whose corners agree in sign holds no segment
+  // (marching squares skips it the same way), so most cells are passed over without a visit
+  const coarseMargin = new Float64Array(nu * nv);
+  for (let k = 0; k < nu * nv; k++) coarseMargin[k] = margin(current[k]!, th);
+  const mixed = (i: number, j: number): boolean => {
+    const k = i + nu * j;
+    const dead = coarseMargin[k]! < 0;
+    return coarseMargin[k + 1]! < 0 !== dead || coarseMargin[k + nu]! < 0 !== dead || coarseMargin[k + nu + 1]! < 0 !== dead;
+  };
   const field = {
-    value: (I: number, J: number): number => (inside(I, J) ? margin(nodeCur(I, J), th) : 1),
+    value: (I: number, J: number): number => (!inside(I, J) ? 1 : isCoarse(I, J) ? coarseMargin[I / su + nu * (J / sv)]! : margin(nodeCur(I, J), th)),
     u: (I: number): number => U[0]! + (Math.min(NI, Math.max(0, I)) * hu) / su,
     v: (J: number): number => V[0]! + (Math.min(NJ, Math.max(0, J)) * hv) / sv,
     key: (I: number, J: number): number => I + 1 + (NI + 3) * (J + 1),
@@ -618,7 +641,7 @@ async function refinePlane(
         const I0 = i * su;
         const J0 = j * sv;
         if (!cellDone(i, j)) {
-          quad(I0, J0, I0 + su, J0 + sv);
+          if (mixed(i, j)) quad(I0, J0, I0 + su, J0 + sv);
           continue;
         }
         for (let b = 0; b < sv; b++) for (let a = 0; a < su; a++) quad(I0 + a, J0 + b, I0 + a + 1, J0 + b + 1);

@@ -13,7 +13,10 @@
 import { couplingEvaluator, type CouplingEvaluator } from "../em/couplingEvaluator.ts";
 import type { Coil, Pose, Vec3 } from "../em/types.ts";
 import type { LinkLoadModel, LinkNetwork, ReceiverNetwork, SharedDriveNetwork, TransmitterNetwork } from "../circuit/link/network.ts";
-import { solveLinkNetwork } from "../circuit/link/solveNetwork.ts";
+import { solveLinkOperatingPoint } from "../circuit/link/solveNetwork.ts";
+import { validateNetwork } from "../circuit/link/validateNetwork.ts";
+import { coilCurrents, inputPower } from "../circuit/link/assembleResult.ts";
+import type { LinkWorkspace } from "../circuit/link/operatingPoint.ts";
 import { solveLinkModel } from "../circuit/harmonic/modelChoice.ts";
 import { ADMITTANCE_TOLERANCE, LED_TOLERANCE } from "../circuit/harmonic/tokenTable.ts";
 import type { ModelBand } from "../circuit/harmonic/modelBand.ts";
@@ -124,16 +127,13 @@ function evaluatorFor(a: Coil, b: Coil): CouplingEvaluator {
  * current of the first transmitter that carries any (its own term exactly M_r), so the sign
  * convention is the same at every pose; 0 with every coil current zero.
  */
-function netMutual(ms: readonly number[], currents: readonly { readonly re: number; readonly im: number }[]): number {
-  const ref = currents.findIndex((c) => c.re !== 0 || c.im !== 0);
-  if (ref < 0) return 0;
-  const cr = currents[ref]!;
-  const d = cr.re * cr.re + cr.im * cr.im;
+function netMutual(ms: readonly number[], re: Float64Array, im: Float64Array): number {
+  let ref = 0;
+  while (ref < ms.length && re[ref] === 0 && im[ref] === 0) ref++;
+  if (ref === ms.length) return 0;
+  const d = re[ref]! * re[ref]! + im[ref]! * im[ref]!;
   let m = 0;
-  ms.forEach((mi, i) => {
-    const c = currents[i]!;
-    m += i === ref ? mi : (mi * (c.re * cr.re + c.im * cr.im)) / d;
-  });
+  for (let i = 0; i < ms.length; i++) m += i === ref ? ms[i]! : (ms[i]! * (re[i]! * re[ref]! + im[i]! * im[ref]!)) / d;
   return m;
 }
 
@@ -214,19 +214,25 @@ export function makeProbe(spec: ProbeSpec & { readonly models?: readonly LinkLoa
   const t = spec.token + nt;
   const receivers: ReceiverNetwork[] = spec.receivers.map((r, i) => ({ ...r, load: models[i]! }));
   const options = { litThreshold: spec.litThreshold, onNonConvergence: "warn" as const };
+  // per pose: plain loops, no closures made per call (under tsx each gets its name set, which
+  // cost a tenth of a map)
   const networkAt = (position: Vec3, axis: Vec3): { net: LinkNetwork; ms: number[] } => {
     const pose: Pose = { position, axis };
-    const L = spec.inductance.map((row) => row.slice());
-    const ms = evTxs.map((e, i) => e.mutual(txPoses[i]!, pose));
-    ms.forEach((m, i) => {
+    const L: number[][] = [];
+    for (const row of spec.inductance) L.push(row.slice());
+    const ms: number[] = [];
+    for (let i = 0; i < nt; i++) {
+      const m = evTxs[i]!.mutual(txPoses[i]!, pose);
+      ms.push(m);
       L[i]![t] = m;
       L[t]![i] = m;
-    });
-    spec.others.forEach((o, j) => {
+    }
+    for (let j = 0; j < spec.others.length; j++) {
+      const o = spec.others[j]!;
       const m = evOthers[j]!.mutual(o.pose, pose);
       L[o.receiver + nt]![t] = m;
       L[t]![o.receiver + nt] = m;
-    });
+    }
     const net: LinkNetwork = array
       ? { frequency: spec.frequency, inductance: L, transmitter: array.transmitters[0]!, transmitters: array.transmitters, ...(array.sharedDrives ? { sharedDrives: array.sharedDrives } : {}), receivers }
       : { frequency: spec.frequency, inductance: L, transmitter: spec.transmitter, receivers };
@@ -259,14 +265,29 @@ export function makeProbe(spec: ProbeSpec & { readonly models?: readonly LinkLoa
     const { net, ms } = networkAt(position, axis);
     const t = tabulated ? fromTable(net, ms[0]!) : undefined;
     if (t) return { ...t, mutual: ms[0]!, converged: true };
+    if (array || spec.model === undefined || spec.model === "fundamental") return fundamental(net, ms);
     // the same solver solveLink uses for that model, so a map agrees with solveLink point by point
-    // (several transmitters: the describing function, as solveLink)
-    const r = array || spec.model === undefined || spec.model === "fundamental" ? solveLinkNetwork(net, options) : solveLinkModel(net, { ...options, model: spec.model });
-    const m0 = array ? netMutual(ms, r.transmitters!.map((s) => s.coilCurrentPhasor)) : ms[0]!;
+    const r = solveLinkModel(net, { ...options, model: spec.model });
     let current = Infinity;
     for (const led of r.receivers[spec.token]!.leds) current = Math.min(current, led.averageCurrent);
     const supply = spec.supplyVoltage !== undefined ? Math.max(0, r.power.input) / spec.supplyVoltage : 0;
-    return { current: Math.max(0, current), mutual: m0, supply, converged: r.converged };
+    return { current: Math.max(0, current), mutual: ms[0]!, supply, converged: r.converged };
+  };
+  // the describing function (several transmitters too, as solveLink): solveLinkNetwork's own
+  // checks and operating point — the same numbers — read for the token's LEDs, the input power
+  // and the coil currents only, without its result record, on one reused workspace
+  let ws: LinkWorkspace | undefined;
+  const fundamental = (net: LinkNetwork, ms: readonly number[]): { current: number; mutual: number; supply: number; converged: boolean } => {
+    validateNetwork(net, "solveLinkNetwork");
+    const solved = solveLinkOperatingPoint(net, options, ws);
+    ws = solved.ws;
+    const tokenLoad = net.receivers[spec.token]!.load;
+    const k = spec.token;
+    let current = Infinity;
+    for (const led of tokenLoad.ledCurrents!(Math.hypot(ws.vRe[k]!, ws.vIm[k]!))) current = Math.min(current, led.current);
+    const supply = spec.supplyVoltage !== undefined ? Math.max(0, inputPower(ws)) / spec.supplyVoltage : 0;
+    const coil = array ? coilCurrents(ws) : undefined;
+    return { current: Math.max(0, current), mutual: coil ? netMutual(ms, coil.re, coil.im) : ms[0]!, supply, converged: solved.converged };
   };
   const validity = (position: Vec3, axis: Vec3): readonly string[] =>
     array

@@ -204,13 +204,16 @@ const IDENTITY = Float64Array.of(1, 0, 0, 0, 1, 0, 0, 0, 1);
  * numbers with no axis or the axis [0, 0, a > 0] and no spin (poseFrame's rotation is then the
  * identity exactly); every other pose, and every bad one, goes through poseFrame.
  */
+/** A coordinate within ±GEOMETRY_LIMITS.maxLength (a module function: frameOf runs per pose). */
+function inRange(x: unknown): boolean {
+  return typeof x === "number" && x >= -GEOMETRY_LIMITS.maxLength && x <= GEOMETRY_LIMITS.maxLength;
+}
+
 function frameOf(pose: Pose, field: string): Frame {
   if (pose !== null && typeof pose === "object" && (pose.spin === undefined || pose.spin === 0)) {
     const a = pose.axis;
     if (a !== undefined && !(Array.isArray(a) && a.length === 3 && a[0] === 0 && a[1] === 0 && a[2] > 0 && a[2] < Infinity)) return poseFrame(pose, "couplingEvaluator", field);
     const p = pose.position;
-    const L = GEOMETRY_LIMITS.maxLength;
-    const inRange = (x: unknown): boolean => typeof x === "number" && x >= -L && x <= L;
     let known = true;
     for (const k in pose) if (k !== "position" && k !== "axis" && k !== "spin") known = false;
     if (known && Array.isArray(p) && p.length === 3 && inRange(p[0]) && inRange(p[1]) && inRange(p[2])) return { R: IDENTITY, position: p };
@@ -409,6 +412,8 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
     void m;
   };
 
+  // made once, not per pose: a closure per call costs far more than its test under tsx (each gets a name set)
+  const accept = (e: number, m: number): boolean => e <= Math.max(relTol * Math.abs(m), absTol);
   const mutual = (poseTx: Pose, poseRx: Pose): number => {
     // one piece on purpose: the per-pose choice among levels A, B and C, cheapest first, reads in order
     const fTx = frameOf(poseTx, "poseTx");
@@ -435,7 +440,6 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
     const rho0 = Math.sqrt(ox * ox + oy * oy), nh = Math.sqrt(nx * nx + ny * ny);
     if (rho0 > 0) { px = ox / rho0; py = oy / rho0; } else if (nh > 0) { px = nx / nh; py = ny / nh; } else { px = 1; py = 0; }
     mirror = px * ny - py * nx === 0;
-    const accept = (e: number, m: number) => e <= Math.max(relTol * Math.abs(m), absTol);
 
     // level A, combination form (the sparse-grid combination technique: Griebel, Schneider &
     // Zenger 1992): M ≈ M₀₁ + M₁₀ − M₀₀ from the receiver's order-0 ring against both transmitter

@@ -124,7 +124,12 @@ function severalDrives(ws: LinkWorkspace): { label: string; assumptions: readonl
 }
 
 /** Every coil's current phasor, A peak: the transmitters' (sign · their unknown), then the receivers'. */
-function coilCurrents(ws: LinkWorkspace): { re: Float64Array; im: Float64Array } {
+/**
+ * Every coil's current phasor, A peak, from a solved workspace: the transmitters first (in the
+ * coil's own sense, through their feed's polarity), then the receivers.
+ * @example coilCurrents(solveLinkOperatingPoint(net).ws).re[0] // → solveLinkNetwork(net).transmitter.coilCurrentPhasor.re
+ */
+export function coilCurrents(ws: LinkWorkspace): { re: Float64Array; im: Float64Array } {
   const { t, m, p, base, iRe, iIm } = ws;
   const re = new Float64Array(t + m);
   const im = new Float64Array(t + m);

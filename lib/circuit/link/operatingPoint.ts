@@ -72,6 +72,16 @@ export interface LinkWorkspace {
   scalarIterations: number;
 }
 
+function zeros(len: number): Float64Array {
+  return new Float64Array(len);
+}
+
+function sameList(a: readonly number[], b: readonly number[]): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
+  return true;
+}
+
 /**
  * The workspace of one solve. `reuse`: a workspace of an earlier solve of the same layout (the
  * same loop, receiver and nonlinear counts) whose arrays are taken over — batch runs solve many
@@ -85,9 +95,11 @@ export function createWorkspace(network: LinkNetwork, w: number, base: BaseMatri
   const nl: number[] = [];
   for (let k = 0; k < m; k++) if (!network.receivers[k]!.load.linear) nl.push(k);
   const q = nl.length;
-  const r = reuse !== undefined && reuse.n === n && reuse.m === m && reuse.nl.length === q && reuse.nl.every((k, c) => k === nl[c]) ? reuse : undefined;
+  // no closures here (this runs once per solve of a map or a yield): under tsx each closure made
+  // per call gets its name set, which cost more than the solve's own set-up
+  const r = reuse !== undefined && reuse.n === n && reuse.m === m && sameList(reuse.nl, nl) ? reuse : undefined;
   if (r) r.x.fill(0);
-  const f = (len: number): Float64Array => new Float64Array(len);
+  const f = zeros;
   // written out field by field (an object spread of the old workspace is several times slower in V8)
   return {
     network, where, w, n, m, p, t, base, tanks, nl,
