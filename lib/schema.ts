@@ -7,7 +7,7 @@
  * Schemas are parsed once at the edge (builders, scenario specs); hot paths take the plain
  * numbers they return.
  */
-import { z } from "zod";
+import * as z from "./zod.ts";
 import { TanklightInputError, editDistance, nearestKey, unknownKeyMessage, type InputIssue } from "./errors.ts";
 
 export { editDistance, nearestKey, unknownKeyMessage };

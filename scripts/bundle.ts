@@ -7,9 +7,10 @@
  * of other dependencies are inlined where they are used; vega and tinypool are imported only
  * by the async functions that need them.
  *
- * zod is loaded on demand: `import { z } from "zod"` in lib/ becomes scripts/zodOnDemand.ts
- * (dist/zod.js), which requires dist/zod.cjs — the part of zod lib/ uses, bundled into one
- * CommonJS file of ≈ 118 kB instead of zod's 106 ES modules — when the first schema is built.
+ * zod is loaded on demand: lib/ reaches zod only through lib/zod.ts, which requires it on the
+ * first schema built (lib/zodLoader.ts); here lib/zodLoader.ts becomes scripts/zodOnDemand.ts,
+ * which requires dist/zod.cjs — the part of zod lib/ uses, bundled into one CommonJS file of
+ * ≈ 118 kB instead of zod's 106 ES modules.
  * Measured as CPU time of fresh processes on this 2-core machine (2026-12-02, load ≈ 11, one
  * run): bare node 110 ms; import with zod outside as an ESM package 300 ms; with all of zod
  * bundled into our chunks (evaluated at import, ≈ 590 kB) 230 ms; with zod on demand 160 ms.
@@ -27,35 +28,31 @@ import { fileURLToPath, pathToFileURL } from "node:url";
 const root = resolve(dirname(fileURLToPath(import.meta.url)), "..");
 const onDemand = join(root, "scripts", "zodOnDemand.ts");
 
-/** Every `import … from "zod"` of lib/ resolves to the on-demand stand-in; other zod paths are refused. */
+/**
+ * lib/zodLoader.ts (zod's CommonJS build) becomes the on-demand loader of dist/zod.cjs; a
+ * value import of zod itself is refused (lib/ reaches zod through lib/zod.ts; type imports are
+ * gone before esbuild resolves).
+ */
 const zodOnDemand: Plugin = {
   name: "zod-on-demand",
   setup(b) {
-    b.onResolve({ filter: /^zod($|\/)/ }, (args) =>
-      args.path === "zod"
-        ? { path: onDemand }
-        : { errors: [{ text: `${args.path}: lib/ may import only "zod" (loaded on demand by scripts/zodOnDemand.ts)` }] },
-    );
+    b.onResolve({ filter: /(^|\/)zodLoader\.ts$/ }, () => ({ path: onDemand }));
+    b.onResolve({ filter: /^zod($|\/)/ }, (args) => ({ errors: [{ text: `${args.path}: lib/ reaches zod through lib/zod.ts (loaded on demand)` }] }));
   },
 };
 
 /**
- * The members of zod's `z` that lib/ names (`z.strictObject`, `z.NEVER`, …: every `z.<name>` in
- * its sources that zod has; `z.core` is only used for types). dist/zod.cjs exports just these,
- * so esbuild leaves out the rest of zod (its 40 other locales, JSON Schema import, …).
+ * The members of zod's `z` that lib/ uses: those lib/zod.ts calls (`member("strictObject")`,
+ * `loadZod().globalRegistry`). dist/zod.cjs exports just these, so esbuild leaves out the rest
+ * of zod (its 40 other locales, JSON Schema import, …).
  */
 function zodMembers(): string[] {
-  const named = new Set<string>();
-  const walk = (dir: string): void => {
-    for (const e of readdirSync(dir, { withFileTypes: true })) {
-      const p = join(dir, e.name);
-      if (e.isDirectory()) walk(p);
-      else if (p.endsWith(".ts")) for (const m of readFileSync(p, "utf8").matchAll(/\bz\.([A-Za-z_$][\w$]*)/g)) named.add(m[1]!);
-    }
-  };
-  walk(join(root, "lib"));
+  const text = readFileSync(join(root, "lib", "zod.ts"), "utf8");
+  const named = new Set([...text.matchAll(/\bmember\("(\w+)"\)|\bloadZod\(\)\.(\w+)/g)].map((m) => (m[1] ?? m[2])!));
   const { z } = createRequire(import.meta.url)("zod") as { z: Record<string, unknown> };
-  return [...named].filter((k) => k in z && k !== "core").sort();
+  const missing = [...named].filter((k) => !(k in z));
+  if (missing.length > 0) throw new Error(`lib/zod.ts names z.${missing.join(", z.")}, which zod does not have`);
+  return [...named].sort();
 }
 
 /** Builds dist/ (or another folder: tests bundle into out/). */
@@ -76,7 +73,7 @@ export async function bundle(outdir: string): Promise<void> {
   await build({
     ...common,
     // the analysis worker is its own entry (dist/analysis/worker.js): worker threads load it by URL
-    entryPoints: { mod: join(root, "lib/mod.ts"), advanced: join(root, "lib/advanced.ts"), "analysis/worker": join(root, "lib/analysis/worker.ts"), zod: onDemand },
+    entryPoints: { mod: join(root, "lib/mod.ts"), advanced: join(root, "lib/advanced.ts"), "analysis/worker": join(root, "lib/analysis/worker.ts") },
     outdir,
     splitting: true,
     format: "esm",

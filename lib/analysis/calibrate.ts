@@ -29,7 +29,7 @@
  * its iteration cap (each iteration here costs tens of link solves); it also costs about
  * 0.3 s to import. The loop below is 40 lines and stops on relative progress.
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { current, frequency, length, parseInput, voltage, lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import { createRandom } from "../math/random.ts";

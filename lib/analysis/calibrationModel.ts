@@ -11,7 +11,7 @@
  * - litThreshold — LED average current at which a token counts as lit, A;
  * - frequencyOffset — drive frequency minus the nominal, Hz.
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { frequency, parseInput, temperature, unitVector, lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import { solveLink } from "../circuit/link.ts";

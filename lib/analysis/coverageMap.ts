@@ -26,7 +26,7 @@
  * change of M on its edges (a dip of |M| without a zero, or two zeros within one cell) — keep the
  * coarse step below half the smallest feature of the field (the token radius is a safe choice).
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import type { Vec3 } from "../em/types.ts";
 import type { LinkSystem } from "../circuit/link.ts";
 import { length, parseInput, lazySchema } from "../schema.ts";

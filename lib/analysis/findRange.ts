@@ -12,7 +12,7 @@
  * (./probe.ts) with M from couplingEvaluator; with several transmitters every coil's M, and the
  * sign test on their net coupling Σᵢ Mᵢ·Re(Iᵢ/I₀) (zero where their fields cancel).
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import type { Vec3 } from "../em/types.ts";
 import type { LinkSystem } from "../circuit/link.ts";
 import { length, parseInput, vec3, unitVector, lazySchema } from "../schema.ts";

@@ -3,7 +3,7 @@
  * orientations (flat, tilted about an axis, or a set of tilts), parsed from user input with
  * units.
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { angle, length, parseInput, quantity, unitVector, lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import type { Vec3 } from "../em/types.ts";

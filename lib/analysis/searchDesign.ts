@@ -20,7 +20,7 @@
  * (E-series capacitors, integer turns, coil counts). The finalists are then re-checked with
  * coverageMap's refinement (dead lines thinner than the search grid), re-ranked, and returned.
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { frequency as frequencyQ, length, parseInput, angle, current as currentQ, lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import type { ESeries } from "../circuit/eseries.ts";

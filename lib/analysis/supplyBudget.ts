@@ -10,7 +10,7 @@
  * Specification §7.2.1), USB 3.x 900 mA (USB 3.2 Specification), USB Type-C current 1.5 A and
  * 3.0 A (USB Type-C Cable and Connector Specification). A bench supply is taken at its rating.
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { TanklightInputError } from "../errors.ts";
 import { current as currentQ, parseInput, voltage as voltageQ, lazySchema } from "../schema.ts";
 import { LinkSystemInput, systemTransmitters, type DriveParsed } from "../circuit/link/schema.ts";

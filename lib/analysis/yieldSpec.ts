@@ -3,7 +3,7 @@
  * spec built from a system in the calling thread: the nominal network, winding variants with
  * their own L, R and M, and the random draws of every sample from one seeded generator.
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { angle, length, parseInput, quantity, voltage, lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import { createRandom } from "../math/random.ts";

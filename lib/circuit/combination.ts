@@ -7,7 +7,7 @@
  * (N parts per searched range). Combination rules: capacitors add in parallel and add
  * reciprocally in series; resistors and inductors (no mutual coupling) the other way round.
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { dimensionless, oneOf, parseArgs, wholeNumber, lazySchema } from "../schema.ts";
 import { ESeriesSchema, standardValuesBetween, type ESeries } from "./eseries.ts";
 

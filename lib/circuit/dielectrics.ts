@@ -10,7 +10,7 @@
  * capacitance with DC bias, temperature and age and detune the tank, and polyester (PET)
  * film runs warm at tank currents.
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { oneOf, parseInput, lazySchema } from "../schema.ts";
 import { TanklightInputError, requirePositive } from "../errors.ts";
 

@@ -20,7 +20,7 @@
  * Sokal (IEEE JSSC SC-10(3), 1975) and Raab (IEEE TCAS 24(12), 1977), see {@link classEDesign}
  * and {@link classEDrive}; and the parallel-tank form, see {@link parallelTankDrive}.
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { TanklightInputError } from "../errors.ts";
 import { current, frequency, inductance, parseArgs, parseInput, power, resistance, voltage, lazySchema } from "../schema.ts";
 import type { QuantityInput } from "../units.ts";

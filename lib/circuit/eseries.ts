@@ -12,7 +12,7 @@
  * The rule itself (10^(i/N) rounded) and its listed E24 exceptions (2.7 3.0 3.3 3.6 3.9 4.3 4.7
  * 8.2) are checked against these tables in tests/circuit/eseries.test.ts.
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { requirePositive } from "../errors.ts";
 import { oneOf, parseInput, lazySchema } from "../schema.ts";
 

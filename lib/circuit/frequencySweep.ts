@@ -4,7 +4,7 @@
  * show frequency splitting: two identical tanks tuned to f₀ with coupling k resonate at
  * f₀/√(1 ± k) (textbook coupled resonators; checked in tests/circuit/linkFrequencySweep.test.ts).
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { TanklightInputError, underName } from "../errors.ts";
 import { frequency, oneOf, parseArgs, wholeNumber, lazySchema } from "../schema.ts";
 import type { LinkNetwork, LinkOptions } from "./link/network.ts";

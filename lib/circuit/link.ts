@@ -8,7 +8,7 @@
  * (couplingEvaluator, exact where its estimate is not good enough) — come from lib/em; the numeric core (./link/solveNetwork.ts)
  * then solves the coupled-circuit matrix with each load's describing function.
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { current, nearestKey, parseArgs, parseInput, voltage, lazySchema } from "../schema.ts";
 import { TanklightInputError, assertNever } from "../errors.ts";
 import { couplingEvaluator, type CouplingEvaluator } from "../em/couplingEvaluator.ts";

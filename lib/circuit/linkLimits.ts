@@ -3,7 +3,7 @@
  * reaches it.
  */
 import { TanklightInputError, requireFinite, requirePositive } from "../errors.ts";
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { parseInput, lazySchema } from "../schema.ts";
 
 /** optimalLoad's options (values checked below). */

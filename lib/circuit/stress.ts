@@ -3,7 +3,7 @@
  * and a recommendation of dielectric and voltage rating — for a sinusoidal tank voltage or
  * current (I = ωC·V for a capacitor; RMS = peak/√2; P = I_rms²·ESR).
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { TanklightInputError } from "../errors.ts";
 import { HIGH_VOLTAGE } from "../hazards.ts";
 import { capacitance, current, dimensionless, frequency, parseInput, voltage, lazySchema } from "../schema.ts";

@@ -8,7 +8,7 @@
  * |H|/|H₀| = 1/√(1 + Q²(f/f₀ − f₀/f)²) (Terman, "Radio Engineers' Handbook", 1943, §3 —
  * from memory (unverified); the same curve in any circuits text).
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { TanklightInputError, requirePositive } from "../errors.ts";
 import { inductance, frequency, capacitance, dimensionless, oneOf, parseArgs, parseInput, resistance, wholeNumber, lazySchema } from "../schema.ts";
 import { formatQuantity, type QuantityInput } from "../units.ts";

@@ -10,7 +10,7 @@
  */
 import { mean, quantileSorted, sampleStandardDeviation } from "simple-statistics";
 import { createRandom } from "../math/random.ts";
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { capacitance, inductance, oneOf, parseInput, quantity, wholeNumber, lazySchema } from "../schema.ts";
 
 /** Relative part tolerance, e.g. 0.05 (or "5 %") for ±5 %, 0 ≤ t < 1. */

@@ -3,7 +3,7 @@
  * coverage maps): both coils' turns lumped into a few representative loops, with an error
  * estimate from two lumping orders and a fall-back to the exact filament sum.
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { dimensionless, frequency, inductance, lazySchema } from "../schema.ts";
 import { GEOMETRY_LIMITS, checkCoil as checkCoilArg, optionsArg } from "./inputs.ts";
 import { aOverRhoKernel } from "./loopKernel.ts";

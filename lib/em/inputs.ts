@@ -8,7 +8,7 @@
  * (field maps, coupling sweeps) do not pay for validation. A coil that passed is remembered by
  * identity (coils are immutable plain data), so repeated calls check it once.
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { TanklightInputError, type InputIssue } from "../errors.ts";
 import { angle, parseInput, unitVector, vec3, type QuantitySchema, lazySchema } from "../schema.ts";
 import { MATERIALS } from "./materials.ts";

@@ -2,7 +2,7 @@
  * Mutual inductance of two circular filaments in any relative position: one line integral,
  * over filament b, of filament a's closed-form vector potential.
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import { checkLoop, optionsArg } from "./inputs.ts";

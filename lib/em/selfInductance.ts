@@ -2,7 +2,7 @@
  * Self-inductance of a coil by the filament method with each turn's own-wire term.
  */
 import { MU0 } from "../constants.ts";
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { TanklightInputError } from "../errors.ts";
 import { frequency, lazySchema } from "../schema.ts";
 import { checkCoil, optionsArg } from "./inputs.ts";

@@ -8,7 +8,7 @@
  * arrays and counts are bounded, and every quantity passes the unit checks of lib/schema.ts.
  * Errors name the field by its JSON path ("token.coil.turns: …").
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { TanklightInputError } from "../errors.ts";
 import { LED_PRESET_DATA } from "../circuit/loads/ledPresets.ts";
 import { FlatSpiralSpec } from "../em/builders/flatSpiral.ts";

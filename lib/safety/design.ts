@@ -5,7 +5,7 @@
  * (quantities with units accepted) or from a solveLink system and its solution with
  * {@link designFromLink}.
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { parseInput, angle, capacitance, current, frequency, length, power, voltage, lazySchema } from "../schema.ts";
 import { PoseInput, TransmitterInput, LinkSystemInput, systemTransmitters, type DriveParsed, type LinkSystem } from "../circuit/link/schema.ts";
 import type { LinkSolution } from "../circuit/link.ts";

@@ -4,7 +4,7 @@
  * C95.1-2019, and the induced internal electric field against ICNIRP 2010's basic restriction.
  * An estimate from our own field model, not a compliance assessment.
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { parseInput, length, lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import { MU0 } from "../constants.ts";

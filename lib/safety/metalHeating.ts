@@ -2,7 +2,7 @@
  * metalHeating: eddy-current power in a coin, a piece of foil or a finger ring lying on the
  * surface above the transmitter, from the transmitters' own field at their operating current.
  */
-import { z } from "zod";
+import * as z from "../zod.ts";
 import { parseInput, length, resistivity, vec3, lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import { MU0 } from "../constants.ts";

@@ -2,7 +2,7 @@
  * The input schema of `solveLink(system)`: coils and poses, parts with units, drive specs and
  * loads. Quantities accept SI numbers or strings with units ("200 kHz", "2.2 nF", "5 V").
  */
-import { z } from "zod";
+import * as z from "../../zod.ts";
 import { angle, capacitance, frequency, quantity, resistance, temperature, unitVector, vec3, voltage, lazySchema } from "../../schema.ts";
 import type { Coil } from "../../em/types.ts";
 import { TanklightInputError } from "../../errors.ts";

@@ -12,7 +12,7 @@
  * source). Each step is assumed long enough for the tanks to settle (steady state per step:
  * many carrier cycles — a tank's envelope settles in a few times Q/π cycles).
  */
-import { z } from "zod";
+import * as z from "../../zod.ts";
 import { TanklightInputError } from "../../errors.ts";
 import { frequency, nearestKey, parseArgs, lazySchema } from "../../schema.ts";
 import { linkNetwork, SolveLinkOptionsInput, type LinkSystem } from "../link.ts";

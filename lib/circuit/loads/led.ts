@@ -16,7 +16,7 @@
  */
 import type { DiodeModel } from "../types.ts";
 import { thermalVoltage } from "../../constants.ts";
-import { z } from "zod";
+import * as z from "../../zod.ts";
 import { TanklightInputError, requireFinite } from "../../errors.ts";
 import { conductance, current, dimensionless, parseArgs, parseInput, resistance, temperature, voltage, lazySchema } from "../../schema.ts";
 import { lambertWOfLogCore } from "../../math/lambertW.ts";

@@ -16,7 +16,7 @@
  * - Diodes: silicon small-signal and small Schottky curves from memory (unverified) of typical
  *   datasheet graphs.
  */
-import { z } from "zod";
+import * as z from "../../zod.ts";
 import { led, diode, type Diode, type ForwardPoint, type Led } from "./led.ts";
 import { TanklightInputError } from "../../errors.ts";
 import { oneOf, parseArgs, temperature, lazySchema } from "../../schema.ts";

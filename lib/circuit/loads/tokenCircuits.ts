@@ -4,7 +4,7 @@
  */
 import type { Diode, Led } from "./led.ts";
 import type { TokenLoad } from "./types.ts";
-import { z } from "zod";
+import * as z from "../../zod.ts";
 import { TanklightInputError } from "../../errors.ts";
 import { parseInput, lazySchema } from "../../schema.ts";
 

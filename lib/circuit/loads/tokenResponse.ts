@@ -14,7 +14,7 @@
  */
 import type { TokenLoad, LedCurrent } from "./types.ts";
 import { averageLoadCurrent, checkLoad, fundamentalConductance } from "./describingFunction.ts";
-import { z } from "zod";
+import * as z from "../../zod.ts";
 import { TanklightInputError } from "../../errors.ts";
 import { capacitance, frequency, inductance, parseInput, resistance, voltage, lazySchema } from "../../schema.ts";
 import { HIGH_VOLTAGE } from "../../hazards.ts";

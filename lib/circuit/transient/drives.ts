@@ -9,7 +9,7 @@
  * 1977) and pass its values here; this file only builds circuits.
  */
 
-import { z } from "zod";
+import * as z from "../../zod.ts";
 import { assertNever, TanklightInputError } from "../../errors.ts";
 import { capacitance, dimensionless, frequency, inductance, oneOf, parseInput, resistance, voltage, lazySchema } from "../../schema.ts";
 import { GROUND, type CircuitElement, type TransientCircuit } from "./circuit.ts";

@@ -8,7 +8,7 @@
  * (no leakage, since the window holds whole periods).
  */
 
-import { z } from "zod";
+import * as z from "../../zod.ts";
 import { TanklightInputError } from "../../errors.ts";
 import { frequency, parseArgs, wholeNumber, lazySchema } from "../../schema.ts";
 

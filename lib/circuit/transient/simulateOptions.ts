@@ -5,7 +5,7 @@
  * and the steady-state settings. Bad or inconsistent options throw TanklightInputError naming
  * the field.
  */
-import { z } from "zod";
+import * as z from "../../zod.ts";
 import { TanklightInputError } from "../../errors.ts";
 import { dimensionless, frequency, parseInput, time, wholeNumber, lazySchema } from "../../schema.ts";
 

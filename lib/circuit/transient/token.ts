@@ -8,7 +8,7 @@
  * needs (otherwise it floats).
  */
 
-import { z } from "zod";
+import * as z from "../../zod.ts";
 import { assertNever, requireFinite, requirePositive, TanklightInputError } from "../../errors.ts";
 import { parseInput, lazySchema } from "../../schema.ts";
 

@@ -4,7 +4,7 @@
  * (phasors e^{jωt}, docs/design.md §3).
  */
 
-import { z } from "zod";
+import * as z from "../../zod.ts";
 import { requireFinite, requirePositive, TanklightInputError } from "../../errors.ts";
 import { parseInput, lazySchema } from "../../schema.ts";
 

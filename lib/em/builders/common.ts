@@ -3,7 +3,7 @@
  * placement of round turns in a winding window, rounded-rectangle polygons and the arc length of
  * an Archimedean spiral. Conventions are stated once in docs/methods/coils.md.
  */
-import { z } from "zod";
+import * as z from "../../zod.ts";
 import { TanklightInputError, type InputIssue } from "../../errors.ts";
 import type { Filament, Vec3 } from "../types.ts";
 

@@ -2,7 +2,7 @@
  * Conductor helpers: round magnet wire, AWG wire, litz and PCB traces as plain `Conductor`
  * records (lib/em/types.ts). Lengths accept SI numbers (m) or quantity strings ("0.5 mm").
  */
-import { z } from "zod";
+import * as z from "../../zod.ts";
 import { TanklightInputError, underName } from "../../errors.ts";
 import { dimensionless, length, parseInput, lazySchema } from "../../schema.ts";
 import { parseQuantity } from "../../units.ts";

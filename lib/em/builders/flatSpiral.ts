@@ -16,7 +16,7 @@
  * wireLength is the spiral's exact arc length (closed form, see archimedeanArcLength), without
  * the return lead or other leads, in both models.
  */
-import { z } from "zod";
+import * as z from "../../zod.ts";
 import { parseInput, length, lazySchema } from "../../schema.ts";
 import type { Coil, CoilShape, Filament, Vec3 } from "../types.ts";
 import { IssueList, SIZE_LIMITS, count, archimedeanArcLength, circleTurn, metres } from "./common.ts";

@@ -3,7 +3,7 @@
  * centrelines (as in Grover's rectangle formula), one closed polygon filament counter-clockwise
  * seen from +z; wire length 2(width + height) (sharp corners; leads excluded).
  */
-import { z } from "zod";
+import * as z from "../../zod.ts";
 import { parseInput, length, lazySchema } from "../../schema.ts";
 import type { Coil, CoilShape } from "../types.ts";
 import { IssueList, metres, roundedRectangle } from "./common.ts";

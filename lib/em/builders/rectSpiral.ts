@@ -11,7 +11,7 @@
  * passes its start corner is Σ (perimeter of turn i) − p exactly (its turns are the rings except
  * that the first ring's last side stops one pitch short); wound: Σ √(perimeter² + p²). Leads excluded.
  */
-import { z } from "zod";
+import * as z from "../../zod.ts";
 import { parseInput, length, lazySchema } from "../../schema.ts";
 import type { Coil, CoilShape, Filament } from "../types.ts";
 import { IssueList, SIZE_LIMITS, count, metres, roundedRectangle, roundedRectanglePerimeter } from "./common.ts";

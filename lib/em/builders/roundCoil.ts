@@ -11,7 +11,7 @@
  * - wire length: each turn's helix √((2πr)² + s²), s = the step to the next turn (axial pitch,
  *   radial pitch at a layer change); leads are not included.
  */
-import { z } from "zod";
+import * as z from "../../zod.ts";
 import { parseInput, length, lazySchema } from "../../schema.ts";
 import type { Coil, CoilShape, Filament } from "../types.ts";
 import { IssueList, count, circleTurn, metres } from "./common.ts";

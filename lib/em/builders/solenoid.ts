@@ -5,7 +5,7 @@
  * pitch = wire outer diameter and ℓ = N·d_o. Turns are circle filaments at
  * z = (i − (N − 1)/2)·pitch; wire length N·√((2πa)² + pitch²) (the helix; leads excluded).
  */
-import { z } from "zod";
+import * as z from "../../zod.ts";
 import { parseInput, length, lazySchema } from "../../schema.ts";
 import type { Coil, CoilShape } from "../types.ts";
 import { IssueList, count, metres } from "./common.ts";

@@ -3,7 +3,7 @@
  * the proximity effect of the field the other turns produce at each turn (Ferreira 1994).
  */
 
-import { z } from "zod";
+import * as z from "../../zod.ts";
 import { TanklightInputError } from "../../errors.ts";
 import { frequency, temperature as temperatureQ, lazySchema } from "../../schema.ts";
 import { checkCoil, optionsArg, quantityArg } from "../inputs.ts";
