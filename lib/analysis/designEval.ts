@@ -268,6 +268,52 @@ export function evaluateDesign(c: Candidate, p: DesignProblem): DesignEvaluation
   const C2 = nearestStandardValue(1 / (w * w * L2), p.series);
   const parts = { tx, token, C1, C2 };
   const height = p.barrier + (token.shape?.kind === "roundCoil" ? token.shape.windingHeight / 2 : 0);
+  const { coveredCurrent, weakest, supplyCurrent: tokenSupply } = candidateCoverage(c, p, parts, height);
+  // safety at the larger of: no token, a token at the centre
+  const bare = candidateSystem(c, p, parts, undefined, [0, 0, height]);
+  const loaded = candidateSystem(c, p, parts, p.colours[0], [0, 0, height]);
+  const solBare = solveLink(bare);
+  const solLoaded = solveLink(loaded);
+  const peak = (sol: typeof solBare): number => Math.max(...(sol.transmitters ?? [sol.transmitter]).map((t) => t.coilCurrent));
+  const opSolution = peak(solLoaded) > peak(solBare) ? solLoaded : solBare;
+  const supplyCurrent = Math.max(tokenSupply, Math.max(0, solBare.power.input) / p.supplyVoltage);
+  const tokenSize = p.token.size ?? 2 * (token.shape?.kind === "roundCoil" ? token.shape.outerRadius : p.token.innerRadius);
+  // the token as it is at the centre (its tank, LED and size for the cautions); the transmitters at the larger current
+  const withToken = designFromLink(loaded, solLoaded, { surfaceHeight: p.barrier, tokenSize });
+  const safetyDesign = opSolution === solLoaded ? withToken : { ...withToken, transmitters: designFromLink(bare, solBare, { surfaceHeight: p.barrier }).transmitters };
+  const safety = safetyMargins(safetyDesign, p.safety);
+  const coverage = Math.log(Math.max(coveredCurrent, 1e-6 * p.litThreshold) / p.litThreshold);
+  const supply = Math.log((SUPPLY_DERATING * p.supplyRating) / Math.max(supplyCurrent, 1e-12));
+  const margins = { coverage, supply, exposure: safety.exposure, emission: safety.emission };
+  const binding = (Object.keys(margins) as Constraint[]).reduce((a, b) => (margins[b] < margins[a] ? b : a));
+  return {
+    candidate: c,
+    transmitterCapacitance: C1,
+    tokenCapacitance: C2,
+    tokenHeight: height,
+    transmitterInductance: L1,
+    tokenInductance: L2,
+    transmitterOuterRadius: tx.shape?.kind === "roundCoil" ? tx.shape.outerRadius : c.radius,
+    coveredCurrent,
+    weakest,
+    supplyCurrent,
+    coilCurrent: peak(opSolution),
+    tankVoltage: Math.max(...(opSolution.transmitters ?? [opSolution.transmitter]).map((t) => t.capacitorVoltage)),
+    exposure: safety.exposureText,
+    emission: safety.emissionText,
+    margins,
+    score: margins[binding],
+    binding,
+    cautions: safetyCautions(safetyDesign, { exposure: safety.exposureCheck, emission: safety.emissionEstimate }).map((k) => k.text),
+  };
+}
+
+/**
+ * The candidate's coverage for every LED colour: the LED current met on `share` of the region,
+ * the weakest point, and the largest supply current with a token present. One transmitter: a
+ * range scan along x read at the region's radii; an array: the grid of region points.
+ */
+function candidateCoverage(c: Candidate, p: DesignProblem, parts: { tx: Coil; token: Coil; C1: number; C2: number }, height: number): Pick<DesignEvaluation, "coveredCurrent" | "weakest" | "supplyCurrent"> {
   const single = c.layout.rows * c.layout.columns === 1;
   let coveredCurrent = Infinity;
   let weakest: DesignEvaluation["weakest"] = { current: Infinity, at: [0, 0], colour: p.colours[0]! };
@@ -306,43 +352,7 @@ export function evaluateDesign(c: Candidate, p: DesignProblem): DesignEvaluation
       for (const d of v.supply) supplyCurrent = Math.max(supplyCurrent, d);
     }
   }
-  // safety at the larger of: no token, a token at the centre
-  const bare = candidateSystem(c, p, parts, undefined, [0, 0, height]);
-  const loaded = candidateSystem(c, p, parts, p.colours[0], [0, 0, height]);
-  const solBare = solveLink(bare);
-  const solLoaded = solveLink(loaded);
-  const peak = (sol: typeof solBare): number => Math.max(...(sol.transmitters ?? [sol.transmitter]).map((t) => t.coilCurrent));
-  const opSolution = peak(solLoaded) > peak(solBare) ? solLoaded : solBare;
-  supplyCurrent = Math.max(supplyCurrent, Math.max(0, solBare.power.input) / p.supplyVoltage);
-  const tokenSize = p.token.size ?? 2 * (token.shape?.kind === "roundCoil" ? token.shape.outerRadius : p.token.innerRadius);
-  // the token as it is at the centre (its tank, LED and size for the cautions); the transmitters at the larger current
-  const withToken = designFromLink(loaded, solLoaded, { surfaceHeight: p.barrier, tokenSize });
-  const safetyDesign = opSolution === solLoaded ? withToken : { ...withToken, transmitters: designFromLink(bare, solBare, { surfaceHeight: p.barrier }).transmitters };
-  const safety = safetyMargins(safetyDesign, p.safety);
-  const coverage = Math.log(Math.max(coveredCurrent, 1e-6 * p.litThreshold) / p.litThreshold);
-  const supply = Math.log((SUPPLY_DERATING * p.supplyRating) / Math.max(supplyCurrent, 1e-12));
-  const margins = { coverage, supply, exposure: safety.exposure, emission: safety.emission };
-  const binding = (Object.keys(margins) as Constraint[]).reduce((a, b) => (margins[b] < margins[a] ? b : a));
-  return {
-    candidate: c,
-    transmitterCapacitance: C1,
-    tokenCapacitance: C2,
-    tokenHeight: height,
-    transmitterInductance: L1,
-    tokenInductance: L2,
-    transmitterOuterRadius: tx.shape?.kind === "roundCoil" ? tx.shape.outerRadius : c.radius,
-    coveredCurrent,
-    weakest,
-    supplyCurrent,
-    coilCurrent: peak(opSolution),
-    tankVoltage: Math.max(...(opSolution.transmitters ?? [opSolution.transmitter]).map((t) => t.capacitorVoltage)),
-    exposure: safety.exposureText,
-    emission: safety.emissionText,
-    margins,
-    score: margins[binding],
-    binding,
-    cautions: safetyCautions(safetyDesign, { exposure: safety.exposureCheck, emission: safety.emissionEstimate }).map((k) => k.text),
-  };
+  return { coveredCurrent, weakest, supplyCurrent };
 }
 
 /** The exposure grid of the search: 13 × 13 points over the footprint plus 0.1 m, 3 heights up to 0.3 m, 5 × 5 disc centres (a coarse version of exposureCheck's default, for speed; the worst field is on the surface over a winding, which the grid's lowest level holds). */
