@@ -97,15 +97,27 @@ const RING_SAMPLES = 24;
  */
 export function turnFieldsPerAmpere(coil: Coil): TurnFields {
   checkCoil(coil, "coil", "turnFieldsPerAmpere");
-  const fs = coil.filaments;
-  const n = fs.length;
-  const h2 = new Float64Array(n);
-  const hz2 = new Float64Array(n);
-  const hr2 = new Float64Array(n);
-  const length = new Float64Array(n);
+  const circles = circleFilaments(coil);
+  const n = circles.length;
+  const out = { h2: new Float64Array(n), hz2: new Float64Array(n), hr2: new Float64Array(n), length: new Float64Array(n) };
   const warnings: string[] = [];
-  const circles: Extract<Filament, { kind: "circle" }>[] = [];
-  for (const f of fs) {
+  if (circles.some((c) => c.turns > 1)) {
+    warnings.push("some filaments stand for several turns: the proximity effect among the turns of one filament is not modelled");
+  }
+  const coaxial = circles.every((c) => Math.abs(c.center[0]) < 1e-12 && Math.abs(c.center[1]) < 1e-12 && Math.abs(c.axis[0]) < 1e-12 && Math.abs(c.axis[1]) < 1e-12);
+  for (let i = 0; i < n; i++) out.length[i] = circles[i]!.turns * 2 * Math.PI * circles[i]!.radius;
+  if (coaxial) coaxialTurnFields(circles, out);
+  else generalTurnFields(circles, out);
+  return { ...out, warnings };
+}
+
+type Circle = Extract<Filament, { kind: "circle" }>;
+type TurnFieldArrays = Pick<TurnFields, "h2" | "hz2" | "hr2">;
+
+/** The coil's filaments, which must all be circles (a path filament throws, naming turnFieldsPerAmpere). */
+function circleFilaments(coil: Coil): Circle[] {
+  const circles: Circle[] = [];
+  for (const f of coil.filaments) {
     if (f.kind !== "circle") {
       throw new TanklightInputError(
         [{ path: "coil.filaments", message: "polygon (path) filaments: proximity loss is not modelled yet", value: f.kind, expected: "circle filaments" }],
@@ -114,32 +126,37 @@ export function turnFieldsPerAmpere(coil: Coil): TurnFields {
     }
     circles.push(f);
   }
-  if (circles.some((c) => c.turns > 1)) {
-    warnings.push("some filaments stand for several turns: the proximity effect among the turns of one filament is not modelled");
-  }
-  const coaxial = circles.every((c) => Math.abs(c.center[0]) < 1e-12 && Math.abs(c.center[1]) < 1e-12 && Math.abs(c.axis[0]) < 1e-12 && Math.abs(c.axis[1]) < 1e-12);
-  for (let i = 0; i < n; i++) length[i] = circles[i]!.turns * 2 * Math.PI * circles[i]!.radius;
-  if (coaxial) {
-    for (let i = 0; i < n; i++) {
-      const ci = circles[i]!;
-      let br = 0;
-      let bz = 0;
-      for (let j = 0; j < n; j++) {
-        if (j === i) continue;
-        const cj = circles[j]!;
-        // axis may be ±z: a −z axis reverses the current sense and the local z
-        const s = cj.axis[2] >= 0 ? 1 : -1;
-        const b = loopField(cj.radius, cj.turns, ci.radius, s * (ci.center[2] - cj.center[2]));
-        br += b.bRho;
-        bz += s * b.bZ;
-      }
-      hr2[i] = (br * br) / (MU0 * MU0);
-      hz2[i] = (bz * bz) / (MU0 * MU0);
-      h2[i] = hr2[i]! + hz2[i]!;
+  return circles;
+}
+
+/** Coaxial circles (axes ±z on the z axis): the field is the same all round a turn, one point per turn. Writes h2, hz2, hr2. */
+function coaxialTurnFields(circles: readonly Circle[], out: TurnFieldArrays): void {
+  const n = circles.length;
+  for (let i = 0; i < n; i++) {
+    const ci = circles[i]!;
+    let br = 0;
+    let bz = 0;
+    for (let j = 0; j < n; j++) {
+      if (j === i) continue;
+      const cj = circles[j]!;
+      // axis may be ±z: a −z axis reverses the current sense and the local z
+      const s = cj.axis[2] >= 0 ? 1 : -1;
+      const b = loopField(cj.radius, cj.turns, ci.radius, s * (ci.center[2] - cj.center[2]));
+      br += b.bRho;
+      bz += s * b.bZ;
     }
-    return { h2, hz2, hr2, length, warnings };
+    out.hr2[i] = (br * br) / (MU0 * MU0);
+    out.hz2[i] = (bz * bz) / (MU0 * MU0);
+    out.h2[i] = out.hr2[i]! + out.hz2[i]!;
   }
-  // general placement: sample points around turn i, express each in filament j's frame
+}
+
+/**
+ * General placement: RING_SAMPLES points around each turn i, each expressed in filament j's frame;
+ * the field component along the wire is dropped (it induces no eddy current in a long wire). Writes h2, hz2, hr2.
+ */
+function generalTurnFields(circles: readonly Circle[], out: TurnFieldArrays): void {
+  const n = circles.length;
   for (let i = 0; i < n; i++) {
     const ci = circles[i]!;
     const [ui, vi, wi] = frame(ci.axis);
@@ -164,17 +181,15 @@ export function turnFieldsPerAmpere(coil: Coil): TurnFields {
         const ex = rho > 0 ? x / rho : 1, ey = rho > 0 ? y / rho : 0;
         for (let q = 0; q < 3; q++) B[q] = B[q]! + b.bRho * (ex * uj[q]! + ey * vj[q]!) + b.bZ * wj[q]!;
       }
-      // remove the component along the wire (it induces no eddy current in a long wire)
       const bt = dot(B, tangent);
       const bAx = dot(B, wi);
       sum2 += (dot(B, B) - bt * bt) / (MU0 * MU0);
       sumZ2 += (bAx * bAx) / (MU0 * MU0);
     }
-    h2[i] = sum2 / RING_SAMPLES;
-    hz2[i] = sumZ2 / RING_SAMPLES;
-    hr2[i] = Math.max(0, h2[i]! - hz2[i]!);
+    out.h2[i] = sum2 / RING_SAMPLES;
+    out.hz2[i] = sumZ2 / RING_SAMPLES;
+    out.hr2[i] = Math.max(0, out.h2[i]! - out.hz2[i]!);
   }
-  return { h2, hz2, hr2, length, warnings };
 }
 
 function dot(a: readonly number[], b: readonly number[]): number {
