@@ -256,6 +256,8 @@ function expectation(dimension: Dimension): string {
  * @example parseQuantity("0.5 mil", "length") // → 1.27e-5 (1 mil = 0.001 in = 25.4 µm exactly)
  */
 export function parseQuantity(value: QuantityInput, dimension: Dimension, field?: string): number {
+  // One function on purpose (≈ 80 lines): a parser read top to bottom — each check in the order the text is read, each
+  // with its own message — and the unit's scale applied on the decimal mantissa; the unit grammar lives in unitAlgebra.ts.
   checkDimension(dimension, "dimension", "parseQuantity");
   if (field !== undefined && typeof field !== "string") {
     throw new TanklightInputError([{ path: "field", message: "must be the field's name (a string) or absent", value: field }], "parseQuantity");
