@@ -27,17 +27,14 @@ export const KELVIN_CROSSOVER = 26;
 /** largest x for the unscaled functions (e^{x/√2} stays below the float64 range) */
 const UNSCALED_MAX = 1000;
 
-/** Real and imaginary parts of a scaled Kelvin value, written into `out` = [re, im]. */
-type Pair = [number, number];
-
-/** e^{−x/√2}·J_ν(x e^{3πi/4}) into out; ν ∈ {0, 1, 2}; x ≥ 0 (not checked: private hot path). */
-function scaledJ(nu: number, x: number, out: Pair): void {
-  if (x < KELVIN_CROSSOVER) seriesJ(nu, x, out);
-  else hankelJ(nu, x, out);
+/** e^{−x/√2}·J_ν(x e^{3πi/4}) into out[at] (real part) and out[at + 1] (imaginary part); ν ∈ {0, 1, 2}; x ≥ 0 (not checked: private hot path). */
+function scaledJ(nu: number, x: number, out: Float64Array, at: number): void {
+  if (x < KELVIN_CROSSOVER) seriesJ(nu, x, out, at);
+  else hankelJ(nu, x, out, at);
 }
 
 /** Ascending series of J_ν(x e^{3πi/4}), times e^{−x/√2}. */
-function seriesJ(nu: number, x: number, out: Pair): void {
+function seriesJ(nu: number, x: number, out: Float64Array, at: number): void {
   // Σ_k t_k i^k with t_k = (x²/4)^k / (k!(k+ν)!) real and positive.
   const q = (x * x) / 4;
   let fact = 1; // 1/ν!
@@ -60,12 +57,12 @@ function seriesJ(nu: number, x: number, out: Pair): void {
   const ang = (3 * Math.PI * nu) / 4;
   const c = Math.cos(ang) * mag;
   const s = Math.sin(ang) * mag;
-  out[0] = re * c - im * s;
-  out[1] = re * s + im * c;
+  out[at] = re * c - im * s;
+  out[at + 1] = re * s + im * c;
 }
 
 /** Hankel's asymptotic expansion of J_ν(x e^{3πi/4}), times e^{−x/√2}. */
-function hankelJ(nu: number, x: number, out: Pair): void {
+function hankelJ(nu: number, x: number, out: Float64Array, at: number): void {
   // a_k(ν) = Π_{j=1..k} (4ν² − (2j−1)²) / (k! 8^k); w = 1/z = e^{−3πi/4}/x.
   // H⁽²⁾ ~ √(2/(πz)) e^{−iχ} Σ (−i)^k a_k w^k,  H⁽¹⁾ ~ √(2/(πz)) e^{iχ} Σ i^k a_k w^k,
   // χ = z − (ν/2 + 1/4)π. For z = x e^{3πi/4}: e^{−iχ} = e^{x/√2} e^{iθ}, e^{iχ} = e^{−x/√2} e^{−iθ},
@@ -109,8 +106,8 @@ function hankelJ(nu: number, x: number, out: Pair): void {
   const amp = 0.5 * Math.sqrt(2 / (Math.PI * x));
   const cr = Math.cos((-3 * Math.PI) / 8) * amp;
   const ci = Math.sin((-3 * Math.PI) / 8) * amp;
-  out[0] = re * cr - im * ci;
-  out[1] = re * ci + im * cr;
+  out[at] = re * cr - im * ci;
+  out[at + 1] = re * ci + im * cr;
 }
 
 /** Kelvin functions of order 0 and their derivatives, plus orders 1 and 2, at one x. */
@@ -126,10 +123,6 @@ export interface KelvinValues {
   readonly ber2: number;
   readonly bei2: number;
 }
-
-const p0: Pair = [0, 0];
-const p1: Pair = [0, 0];
-const p2: Pair = [0, 0];
 
 function checkX(x: number, where: string, max: number): void {
   if (!(typeof x === "number" && Number.isFinite(x) && x >= 0 && x <= max)) {
@@ -165,45 +158,45 @@ export function kelvinScaled(x: number): KelvinValues {
  * @example kelvin(0) // → { ber: 1, bei: 0, berp: 0, beip: 0, … }
  */
 export function kelvin(x: number): KelvinValues {
-  checkX(x, "kelvin", UNSCALED_MAX);
+  return unscaled(x, "kelvin");
+}
+
+/** The unscaled values at x, checked for 0 ≤ x ≤ 1000 in the name of `where` (kelvin and its one-value forms). */
+function unscaled(x: number, where: string): KelvinValues {
+  checkX(x, where, UNSCALED_MAX);
   return assemble(x, Math.exp(x * SQRT1_2));
 }
 
 function assemble(x: number, scale: number): KelvinValues {
-  scaledJ(0, x, p0);
-  scaledJ(1, x, p1);
-  scaledJ(2, x, p2);
+  const p = new Float64Array(6);
+  kelvinScaledInto(x, p);
   return {
-    ber: p0[0] * scale,
-    bei: p0[1] * scale,
-    berp: ((p1[0] + p1[1]) * SQRT1_2) * scale,
-    beip: ((p1[1] - p1[0]) * SQRT1_2) * scale,
-    ber1: p1[0] * scale,
-    bei1: p1[1] * scale,
-    ber2: p2[0] * scale,
-    bei2: p2[1] * scale,
+    ber: p[0]! * scale,
+    bei: p[1]! * scale,
+    berp: ((p[2]! + p[3]!) * SQRT1_2) * scale,
+    beip: ((p[3]! - p[2]!) * SQRT1_2) * scale,
+    ber1: p[2]! * scale,
+    bei1: p[3]! * scale,
+    ber2: p[4]! * scale,
+    bei2: p[5]! * scale,
   };
 }
 
 /** ber x (A&S 9.9.1), 0 ≤ x ≤ 1000. @example ber(2) // → 0.7517341827 */
 export function ber(x: number): number {
-  checkX(x, "ber", UNSCALED_MAX);
-  return assemble(x, Math.exp(x * SQRT1_2)).ber;
+  return unscaled(x, "ber").ber;
 }
 /** bei x (A&S 9.9.1), 0 ≤ x ≤ 1000. @example bei(2) // → 0.9722916273 */
 export function bei(x: number): number {
-  checkX(x, "bei", UNSCALED_MAX);
-  return assemble(x, Math.exp(x * SQRT1_2)).bei;
+  return unscaled(x, "bei").bei;
 }
 /** ber′x = d ber x/dx (A&S 9.9.14), 0 ≤ x ≤ 1000. @example berPrime(1) // → −0.0624457522 */
 export function berPrime(x: number): number {
-  checkX(x, "berPrime", UNSCALED_MAX);
-  return assemble(x, Math.exp(x * SQRT1_2)).berp;
+  return unscaled(x, "berPrime").berp;
 }
 /** bei′x = d bei x/dx (A&S 9.9.14), 0 ≤ x ≤ 1000. @example beiPrime(1) // → 0.4973965115 */
 export function beiPrime(x: number): number {
-  checkX(x, "beiPrime", UNSCALED_MAX);
-  return assemble(x, Math.exp(x * SQRT1_2)).beip;
+  return unscaled(x, "beiPrime").beip;
 }
 
 /**
@@ -212,13 +205,7 @@ export function beiPrime(x: number): number {
  * [ber, bei, ber₁, bei₁, ber₂, bei₂]·e^{−x/√2}. No allocation, no input check (x ≥ 0 finite).
  */
 export function kelvinScaledInto(x: number, out: Float64Array): void {
-  scaledJ(0, x, p0);
-  scaledJ(1, x, p1);
-  scaledJ(2, x, p2);
-  out[0] = p0[0];
-  out[1] = p0[1];
-  out[2] = p1[0];
-  out[3] = p1[1];
-  out[4] = p2[0];
-  out[5] = p2[1];
+  scaledJ(0, x, out, 0);
+  scaledJ(1, x, out, 2);
+  scaledJ(2, x, out, 4);
 }
