@@ -463,7 +463,12 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
     const dTx = Math.abs(m01 - m00), dRx = Math.abs(m10 - m00);
     const lumpOk = lumpable && D > GUARD * Math.max(rx0.extent, t0.extent);
     const mC = m01 + m10 - m00;
-    const eC = dRx * lRx + dTx * lTx + Math.max(dTx, dRx) * Math.max(lRx, lTx) + lRx * lTx * Math.abs(mC) + errA;
+    // a floor on each coil's order-1 error that does not lean on its order-0 error, which can
+    // vanish by accident (M with an inflection across the turns): (extent/D)⁴·|M|, the size of the
+    // first term the order-1 rule leaves out (a solenoid beside a round token: 2.1× low without it)
+    const gRx = (rx0.extent * rx0.extent) / (D * D), gTx = (t0.extent * t0.extent) / (D * D);
+    const eFloor = (gRx * gRx + gTx * gTx) * Math.abs(mC);
+    const eC = dRx * lRx + dTx * lTx + Math.max(dTx, dRx) * Math.max(lRx, lTx) + lRx * lTx * Math.abs(mC) + eFloor + errA;
     if (lumpOk && accept(eC, mC)) {
       finish(mC, eC, "lumped", minA2);
       return mC;
@@ -483,7 +488,7 @@ export function couplingEvaluator(tx: Coil, rx: Coil, options: CouplingEvaluator
       // coil's order-0 error vanishes by accident (M has an inflection across its turns) the
       // (extent/D)² ratio estimates miss the order-1 error and this difference shows it (a
       // solenoid under a spiral token: 14× low without it, in the seeded sweep)
-      const eA = eRx + eTx + errA1 + Math.abs(mA - mC);
+      const eA = eRx + eTx + errA1 + Math.abs(mA - mC) + eFloor;
       if (accept(eA, mA)) {
         finish(mA, eA, "lumped", minA2);
         return mA;
