@@ -6,7 +6,8 @@
  * naming nothing but the count (find it by the module's top-level `const … = z.…`); the probe
  * counts a schema built before the import (it is not blind). A second fresh process records
  * every module the import loads (an ES module hook, plus Node's CommonJS cache) and checks that
- * none of them is zod's: lib/ reaches zod through lib/zod.ts, which loads it on first use. The
+ * none of them is zod's (lib/ reaches zod through lib/zod.ts, which loads it on first use) and
+ * that no other package but simple-statistics loads. The
  * time it takes is measured in bench/startup.bench.ts, not here.
  */
 import { describe, expect, it } from "vitest";
@@ -66,6 +67,10 @@ describe("import cost", () => {
     const r = modulesLoaded(["lib/mod.ts", "lib/advanced.ts"]);
     expect(r.esm.some((u) => u.endsWith("/lib/mod.ts"))).toBe(true);
     expect([...r.esm, ...r.cjs].filter(isZod)).toEqual([]);
+    // of the other packages only simple-statistics (one file) loads at import: vega, vega-lite
+    // and tinypool are imported by the async functions that use them, mathjs nowhere
+    const packages = new Set([...r.esm, ...r.cjs].map((p) => /[\\/]node_modules[\\/]((?:@[^\\/]+[\\/])?[^\\/]+)/.exec(p)?.[1]).filter((p) => p !== undefined && p !== "tsx" && p !== "esbuild"));
+    expect([...packages]).toEqual(["simple-statistics"]);
   }, 150_000);
 
 
