@@ -152,62 +152,44 @@ export interface FundamentalResponse {
   readonly slope: number;
 }
 
-/** Scratch result, reused (no allocation on the hot path). */
-const resp = { current: 0, slope: 0 };
-
-function fundamentalInto(load: TokenLoad, A: number, where: string): void {
+/** The fundamental current (A, peak) and its slope (S) of a load at amplitude A, unchecked, as a fresh record (no shared scratch). */
+function fundamentalOf(load: TokenLoad, A: number, where: string): FundamentalResponse {
   switch (load.kind) {
     case "resistor": {
       const g = 1 / load.resistance;
-      resp.current = g * A;
-      resp.slope = g;
-      return;
+      return { current: g * A, slope: g };
     }
     case "led": {
       const l = load.led;
       if (A === 0) {
-        resp.current = 0;
-        resp.slope = l.conductance(0);
-        return;
+        return { current: 0, slope: l.conductance(0) };
       }
       const ra = junctionAt(l, A);
-      resp.current = ra.i1 / Math.PI + l.leakage * A;
-      resp.slope = ra.slope / Math.PI + l.leakage;
-      return;
+      return { current: ra.i1 / Math.PI + l.leakage * A, slope: ra.slope / Math.PI + l.leakage };
     }
     case "antiParallel":
     case "parallelSameDirection": {
       if (A === 0) {
-        resp.current = 0;
-        resp.slope = load.a.conductance(0) + load.b.conductance(0);
-        return;
+        return { current: 0, slope: load.a.conductance(0) + load.b.conductance(0) };
       }
       const ra = junctionAt(load.a, A);
       const rb = junctionAt(load.b, A);
-      resp.current = (ra.i1 + rb.i1) / Math.PI + (load.a.leakage + load.b.leakage) * A;
-      resp.slope = (ra.slope + rb.slope) / Math.PI + load.a.leakage + load.b.leakage;
-      return;
+      return { current: (ra.i1 + rb.i1) / Math.PI + (load.a.leakage + load.b.leakage) * A, slope: (ra.slope + rb.slope) / Math.PI + load.a.leakage + load.b.leakage };
     }
     case "bridge": {
       const br = bridgeOf(load);
       if (A === 0) {
         br.evalAt(0);
-        resp.current = 0;
-        resp.slope = br.g;
-        return;
+        return { current: 0, slope: br.g };
       }
       const fwd = new Float64Array(6);
       halfWaveIntegrals(br, A, 0, fwd);
       // both half-cycles conduct through the string: I₁ = (2/π)∫₀^π i sin θ dθ
-      resp.current = (2 * fwd[0]!) / Math.PI;
-      resp.slope = (2 * fwd[2]!) / Math.PI;
-      return;
+      return { current: (2 * fwd[0]!) / Math.PI, slope: (2 * fwd[2]!) / Math.PI };
     }
     case "halfWaveReservoir": {
       const st = reservoirSteadyState(load.diode, load.led, A, load.seriesResistance ?? 0, undefined, undefined, reservoirBranch(load));
-      resp.current = st.fundamentalCurrent;
-      resp.slope = st.slope;
-      return;
+      return { current: st.fundamentalCurrent, slope: st.slope };
     }
     default:
       return assertNever(load, "load.kind", where, "is not a known token load");
@@ -240,8 +222,8 @@ function reservoirBranch(load: Extract<TokenLoad, { kind: "halfWaveReservoir" }>
 export function fundamentalConductance(load: TokenLoad, amplitude: number): number {
   checkLoad(load, "fundamentalConductance");
   checkAmplitude(amplitude, "fundamentalConductance");
-  fundamentalInto(load, amplitude, "fundamentalConductance");
-  return amplitude === 0 ? resp.slope : resp.current / amplitude;
+  const r = fundamentalOf(load, amplitude, "fundamentalConductance");
+  return amplitude === 0 ? r.slope : r.current / amplitude;
 }
 
 /**
@@ -254,8 +236,7 @@ export function fundamentalConductance(load: TokenLoad, amplitude: number): numb
 export function fundamentalCurrentSlope(load: TokenLoad, amplitude: number): number {
   checkLoad(load, "fundamentalCurrentSlope");
   checkAmplitude(amplitude, "fundamentalCurrentSlope");
-  fundamentalInto(load, amplitude, "fundamentalCurrentSlope");
-  return resp.slope;
+  return fundamentalOf(load, amplitude, "fundamentalCurrentSlope").slope;
 }
 
 /**
@@ -266,8 +247,7 @@ export function fundamentalCurrentSlope(load: TokenLoad, amplitude: number): num
 export function loadResponse(load: TokenLoad, amplitude: number): FundamentalResponse {
   checkLoad(load, "loadResponse");
   checkAmplitude(amplitude, "loadResponse");
-  fundamentalInto(load, amplitude, "loadResponse");
-  return { current: resp.current, slope: resp.slope };
+  return fundamentalOf(load, amplitude, "loadResponse");
 }
 
 /**
