@@ -18,6 +18,7 @@
  * circuit (stated when the network has any).
  */
 import type { LinkNetwork } from "../link/network.ts";
+import { solveLinkNetwork } from "../link/solveNetwork.ts";
 import { singleSwitchDrive } from "../transient/drives.ts";
 import { addToken } from "../transient/token.ts";
 import { periodicSteadyState } from "../transient/shooting.ts";
@@ -76,7 +77,8 @@ export function switchPeriodic(net: LinkNetwork, stepsPerCycle: number): SwitchP
   const r = net.receivers[0]!;
   const tok = addToken(drive.circuit, { coupledTo: drive.coil, mutualInductance: net.inductance[0]![1]!, inductance: net.inductance[1]![1]!, resistance: r.resistance, capacitance: r.capacitance, load: r.load.token! });
   const roles = (["led", "a", "b"] as const).filter((x) => tok.leds[x] !== undefined);
-  const pss = periodicSteadyState(tok.circuit, { frequency: f, stepsPerCycle });
+  const seed = describingSeed(net, wf.supply, wf.duty);
+  const pss = periodicSteadyState(tok.circuit, { frequency: f, stepsPerCycle, ...(seed ? { initialState: seed } : {}) });
   const n = stepsPerCycle;
   const avg = (a: ArrayLike<number>): number => {
     let s = 0;
@@ -92,4 +94,36 @@ export function switchPeriodic(net: LinkNetwork, stepsPerCycle: number): SwitchP
     input: wf.supply * Math.abs(avg(pss.currents["Vsupply"]!)),
     periods: pss.shooting.periods,
   };
+}
+
+/**
+ * A starting state for the shooting method from the describing-function solution
+ * (solveLinkNetwork, microseconds), so that Newton starts near the orbit instead of after a
+ * warm-up period from rest: the drawer's switch + tank + LED token in 4 periods instead of 6
+ * (bench/steady.bench.ts). Each phasor P (cosine reference, the drive equivalent's source real)
+ * is put on the switch's time axis — the coil-voltage fundamental of a switch closed from t = 0
+ * for duty·T is the half sine of the open interval, centred at (1 + duty)·T/2, inverted: phase
+ * −π·duty — and read at t = 0, x(0) = Re(e^{−jπ·duty}·P). The token tank voltage is
+ * −I₂/(jωC₂ + G) with G the load's describing-function conductance (load current / load
+ * voltage); the transmitter tank capacitor starts at the supply (the switch has just closed).
+ * A guess only: a poor one costs Newton iterations, not accuracy; undefined when the
+ * describing function does not converge. Element names are those of singleSwitchDrive and
+ * addToken (default token name).
+ */
+function describingSeed(net: LinkNetwork, supply: number, duty: number): Record<string, number> | undefined {
+  const df = solveLinkNetwork(net, { onNonConvergence: "warn" });
+  if (!df.converged) return undefined;
+  const c = Math.cos(Math.PI * duty);
+  const s = -Math.sin(Math.PI * duty);
+  const at0 = (re: number, im: number): number => c * re - s * im;
+  const i1 = df.transmitter.coilCurrentPhasor;
+  const rx = df.receivers[0]!;
+  const i2 = rx.coilCurrentPhasor;
+  const g = rx.loadVoltage > 0 ? rx.loadCurrent / rx.loadVoltage : 0;
+  const b = 2 * Math.PI * net.frequency * net.receivers[0]!.capacitance;
+  // V₂ = −I₂/(G + jB)
+  const d = g * g + b * b;
+  const v2re = -(i2.re * g + i2.im * b) / d;
+  const v2im = -(i2.im * g - i2.re * b) / d;
+  return { Ctank: supply, Ltx: at0(i1.re, i1.im), "token.L": at0(i2.re, i2.im), "token.C": at0(v2re, v2im) };
 }

@@ -31,11 +31,22 @@ function history(cc: CompiledCircuit, initial: boolean): ReactiveHistory {
   };
 }
 
-/** `columns` zeroed histories side by side in one set of arrays (column j of the capacitors at [j·nC, (j + 1)·nC), likewise the inductors). */
-function historyBlock(cc: CompiledCircuit, columns: number): ReactiveHistory {
-  const nC = cc.capacitors.length;
-  const nL = cc.inductors.length;
-  return { capV: new Float64Array(columns * nC), capI: new Float64Array(columns * nC), indI: new Float64Array(columns * nL), indW: new Float64Array(columns * nL) };
+/**
+ * `columns` zeroed histories side by side, all four arrays views on one buffer (so that saving
+ * and restoring the block is one copy): column j of the capacitors at [j·nC, (j + 1)·nC) of
+ * capV and capI, likewise the inductors.
+ */
+function historyBlock(cc: CompiledCircuit, columns: number): ReactiveHistory & { readonly buffer: Float64Array } {
+  const nC = columns * cc.capacitors.length;
+  const nL = columns * cc.inductors.length;
+  const buffer = new Float64Array(2 * nC + 2 * nL);
+  return {
+    buffer,
+    capV: buffer.subarray(0, nC),
+    capI: buffer.subarray(nC, 2 * nC),
+    indI: buffer.subarray(2 * nC, 2 * nC + nL),
+    indW: buffer.subarray(2 * nC + nL),
+  };
 }
 
 /** Column j of a {@link historyBlock}, as views on its arrays (writes go to the block). */
@@ -55,30 +66,56 @@ function historyColumn(block: ReactiveHistory, nC: number, nL: number, j: number
  */
 interface Sensitivities {
   /** the columns side by side (historyBlock) */
-  readonly block: ReactiveHistory;
+  readonly block: ReactiveHistory & { readonly buffer: Float64Array };
   /** column j as views on `block` */
   readonly columns: readonly ReactiveHistory[];
-  /** `block` saved before a step that may be rejected */
-  readonly saved: ReactiveHistory;
+  /** `block`'s buffer saved before a step that may be rejected */
+  readonly saved: Float64Array;
   /** capacitor voltages and inductor currents of every column at the start of a TR-BDF2 step */
   readonly stageCapV: Float64Array;
   readonly stageIndI: Float64Array;
-  /** workspace: one column's right-hand side and solution */
-  readonly dx: Float64Array;
-}
-
-/** Copies one history into another of the same circuit. */
-function copyHistory(from: ReactiveHistory, to: ReactiveHistory): void {
-  to.capV.set(from.capV);
-  to.capI.set(from.capI);
-  to.indI.set(from.indI);
-  to.indW.set(from.indW);
+  /** workspace: every column's right-hand side and solution, column j at [j·n, (j + 1)·n) */
+  readonly rhs: Float64Array;
+  /** column j of `rhs` as a view */
+  readonly rhsColumns: readonly Float64Array[];
 }
 
 /** Replaces the state of `h` (at t + γh) by TR-BDF2's BDF2 starting point a₁·x_γ − a₀·x, x the state at t. */
 function bdf2Point(h: ReactiveHistory, capV0: Float64Array, indI0: Float64Array): void {
   for (let i = 0; i < h.capV.length; i++) h.capV[i] = BDF2_A1 * h.capV[i]! - BDF2_A0 * capV0[i]!;
   for (let k = 0; k < h.indI.length; k++) h.indI[k] = BDF2_A1 * h.indI[k]! - BDF2_A0 * indI0[k]!;
+}
+
+/**
+ * Solves A·X = B in place for `m` right-hand sides side by side in `b` (column c at [c·n, (c + 1)·n))
+ * with the factors of lib/math/lu.ts's luFactorCore: its forward and back substitution (Golub &
+ * Van Loan 2013, Algorithms 3.1.1–3.1.2) with each factor entry read once for all columns, and
+ * zero entries skipped (MNA factors are mostly zeros).
+ */
+function solveColumns(a: Float64Array, n: number, pivots: Int32Array, b: Float64Array, m: number): void {
+  for (let k = 0; k < n; k++) {
+    const p = pivots[k]!;
+    if (p === k) continue;
+    for (let c = 0; c < m * n; c += n) {
+      const t = b[c + k]!;
+      b[c + k] = b[c + p]!;
+      b[c + p] = t;
+    }
+  }
+  for (let i = 1; i < n; i++) {
+    for (let j = 0; j < i; j++) {
+      const l = a[i * n + j]!;
+      if (l !== 0) for (let c = 0; c < m * n; c += n) b[c + i] = b[c + i]! - l * b[c + j]!;
+    }
+  }
+  for (let i = n - 1; i >= 0; i--) {
+    for (let j = i + 1; j < n; j++) {
+      const u = a[i * n + j]!;
+      if (u !== 0) for (let c = 0; c < m * n; c += n) b[c + i] = b[c + i]! - u * b[c + j]!;
+    }
+    const inv = 1 / a[i * n + i]!;
+    for (let c = 0; c < m * n; c += n) b[c + i] = b[c + i]! * inv;
+  }
 }
 
 /** A run's counters, as a transient result reports them. */
@@ -229,10 +266,7 @@ export class Engine {
     if (this.sens) {
       const { block } = this.sens;
       const nL = this.hist.indI.length;
-      block.capV.fill(0);
-      block.capI.fill(0);
-      block.indI.fill(0);
-      block.indW.fill(0);
+      block.buffer.fill(0);
       for (let j = 0; j < nC + nL; j++) {
         if (j < nC) block.capV[j * nC + j] = 1;
         else block.indI[j * nL + j - nC] = 1;
@@ -254,13 +288,15 @@ export class Engine {
     const nL = this.cc.inductors.length;
     const nS = nC + nL;
     const block = historyBlock(this.cc, nS);
+    const rhs = new Float64Array(nS * this.n);
     this.sens = {
       block,
       columns: Array.from({ length: nS }, (_, j) => historyColumn(block, nC, nL, j)),
-      saved: historyBlock(this.cc, nS),
+      saved: new Float64Array(block.buffer.length),
       stageCapV: new Float64Array(nS * nC),
       stageIndI: new Float64Array(nS * nL),
-      dx: new Float64Array(this.n),
+      rhs,
+      rhsColumns: Array.from({ length: nS }, (_, j) => rhs.subarray(j * this.n, (j + 1) * this.n)),
     };
   }
 
@@ -286,7 +322,7 @@ export class Engine {
     this.saved.indI.set(this.hist.indI);
     this.saved.indW.set(this.hist.indW);
     this.xSaved.set(this.x);
-    if (this.sensitivities) copyHistory(this.sens!.block, this.sens!.saved);
+    if (this.sensitivities) this.sens!.saved.set(this.sens!.block.buffer);
   }
 
   /** Restores the history saved by {@link saveHistory} (not the solution). */
@@ -295,7 +331,7 @@ export class Engine {
     this.hist.capI.set(this.saved.capI);
     this.hist.indI.set(this.saved.indI);
     this.hist.indW.set(this.saved.indW);
-    if (this.sensitivities) copyHistory(this.sens!.saved, this.sens!.block);
+    if (this.sensitivities) this.sens!.block.buffer.set(this.sens!.saved);
   }
 
   /** Restores the solution saved by {@link saveHistory}. */
@@ -377,14 +413,11 @@ export class Engine {
     if (this.sensitivities) {
       // the step's result depends on the history through the right-hand side only: the same
       // factors (this.work) carry each sensitivity column through the step
-      const { columns, dx } = this.sens!;
-      for (let j = 0; j < columns.length; j++) {
-        const sh = columns[j]!;
-        dx.fill(0);
-        stampHistory(this.cc, dx, alpha, theta, sh);
-        luSolveCore(this.work, this.n, this.pivots, dx);
-        updateHistory(this.cc, dx, alpha, theta, sh);
-      }
+      const { columns, rhs, rhsColumns } = this.sens!;
+      rhs.fill(0);
+      for (let j = 0; j < columns.length; j++) stampHistory(this.cc, rhsColumns[j]!, alpha, theta, columns[j]!);
+      solveColumns(this.work, this.n, this.pivots, rhs, columns.length);
+      for (let j = 0; j < columns.length; j++) updateHistory(this.cc, rhsColumns[j]!, alpha, theta, columns[j]!);
     }
     return true;
   }
