@@ -265,13 +265,16 @@ export function makeProbe(spec: ProbeSpec & { readonly models?: readonly LinkLoa
     const { net, ms } = networkAt(position, axis);
     const t = tabulated ? fromTable(net, ms[0]!) : undefined;
     if (t) return { ...t, mutual: ms[0]!, converged: true };
-    if (array || spec.model === undefined || spec.model === "fundamental") return fundamental(net, ms);
+    // (coils on a shared drive: the describing function, as solveLink)
+    if (array?.sharedDrives !== undefined || spec.model === undefined || spec.model === "fundamental") return fundamental(net, ms);
     // the same solver solveLink uses for that model, so a map agrees with solveLink point by point
     const r = solveLinkModel(net, { ...options, model: spec.model });
     let current = Infinity;
     for (const led of r.receivers[spec.token]!.leds) current = Math.min(current, led.averageCurrent);
     const supply = spec.supplyVoltage !== undefined ? Math.max(0, r.power.input) / spec.supplyVoltage : 0;
-    return { current: Math.max(0, current), mutual: ms[0]!, supply, converged: r.converged };
+    const txs = r.transmitters ?? [r.transmitter];
+    const mutual = array ? netMutual(ms, Float64Array.from(txs, (x) => x.coilCurrentPhasor.re), Float64Array.from(txs, (x) => x.coilCurrentPhasor.im)) : ms[0]!;
+    return { current: Math.max(0, current), mutual, supply, converged: r.converged };
   };
   // the describing function (several transmitters too, as solveLink): solveLinkNetwork's own
   // checks and operating point — the same numbers — read for the token's LEDs, the input power

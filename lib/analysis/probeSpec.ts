@@ -39,10 +39,10 @@ export function probeSpec(system: LinkSystem, options: ProbeOptions, where: stri
   const parsed = parseInput(LinkSystemInput, system, where);
   const txs = systemTransmitters(parsed);
   const tx = txs[0]!;
-  if (txs.length > 1 || parsed.sharedDrives !== undefined) {
+  if (parsed.sharedDrives !== undefined) {
     if (options.model === "harmonic") {
       throw new TanklightInputError(
-        [{ path: "model", message: "harmonic balance solves one transmitter on its own drive; map several (or a shared drive) with 'fundamental' or 'auto' (which then keeps the describing function, as solveLink does)", value: options.model }],
+        [{ path: "model", message: "harmonic balance solves transmitters on their own drives; map coils on a shared drive with 'fundamental' or 'auto' (which then keeps the describing function, as solveLink does)", value: options.model }],
         where,
       );
     }
@@ -107,7 +107,8 @@ export function probeSpec(system: LinkSystem, options: ProbeOptions, where: stri
     axes: options.axes ?? [[0, 0, 1]],
     litThreshold: options.litThreshold ?? DEFAULT_LIT_THRESHOLD,
     ...(supplyVoltage !== undefined ? { supplyVoltage } : {}),
-    ...(options.model !== undefined && options.model !== "fundamental" && !("array" in array) ? { model: options.model } : {}),
+    // (coils on a shared drive keep the describing function, as solveLink)
+    ...(options.model !== undefined && options.model !== "fundamental" && net.sharedDrives === undefined ? { model: options.model } : {}),
     models,
   };
 }

@@ -49,8 +49,9 @@ export interface YieldOptions {
   /**
    * steady-state model of every sample, as solveLink's `model`: "fundamental" (default, the
    * describing function), "harmonic" (harmonic balance) or "auto" (the describing function where
-   * its estimated error is small, harmonic balance elsewhere — per sample). Several transmitters
-   * or a shared drive: the describing function ("harmonic" is refused), as solveLink.
+   * its estimated error is small, harmonic balance elsewhere — per sample), over one transmitter
+   * or several on their own drives. Coils on a shared drive: the describing function ("harmonic"
+   * is refused), as solveLink.
    */
   readonly model?: LinkModel;
   readonly threads?: ThreadsOption;

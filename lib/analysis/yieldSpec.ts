@@ -119,10 +119,11 @@ export function yieldSpec(system: LinkSystem, variations: VariationsInput, optio
   if (!isTokenLoad(rx.load)) {
     throw new TanklightInputError([{ path: `receivers[${k}].load`, message: "toleranceYield needs the load as a TokenLoad ({ kind: 'led', led }, …) so its LED can be varied", value: "a load model" }], where);
   }
-  const array = txs.length > 1 || sys.sharedDrives !== undefined;
-  if (array && options.model === "harmonic") {
+  // harmonic balance solves any number of transmitters on their own drives, not coils on a shared drive
+  const shared = sys.sharedDrives !== undefined;
+  if (shared && options.model === "harmonic") {
     throw new TanklightInputError(
-      [{ path: "model", message: "harmonic balance solves one transmitter on its own drive; run an array (or a shared drive) with 'fundamental' or 'auto' (which then keeps the describing function, as solveLink does)", value: options.model }],
+      [{ path: "model", message: "harmonic balance solves transmitters on their own drives; run coils on a shared drive with 'fundamental' or 'auto' (which then keeps the describing function, as solveLink does)", value: options.model }],
       where,
     );
   }
@@ -162,8 +163,8 @@ export function yieldSpec(system: LinkSystem, variations: VariationsInput, optio
     litThreshold: options.litThreshold ?? DEFAULT_LIT_THRESHOLD,
     ...(supplyVoltage !== undefined ? { supplyVoltage } : {}),
     table: { maxAmplitude: 8, step: 5e-3 },
-    // several transmitters: the describing function, as solveLink ("auto" keeps it there)
-    model: array ? "fundamental" : (options.model ?? "fundamental"),
+    // coils on a shared drive: the describing function, as solveLink ("auto" keeps it there)
+    model: shared ? "fundamental" : (options.model ?? "fundamental"),
   };
   return {
     spec,

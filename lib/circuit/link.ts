@@ -511,13 +511,15 @@ export function solveLink(system: LinkSystem, options: SolveLinkOptions = {}): L
   const built = linkNetwork(system, { tabulateLoads: opts.tabulateLoads ?? false });
   const net = built.network;
   const txs = networkTransmitters(net);
-  if (txs.length === 1 && txs[0]!.feed === undefined) {
+  const own = net.sharedDrives === undefined && txs.every((t) => t.feed === undefined);
+  // several transmitters on their own drives: "harmonic" and "auto" by the model choice (harmonic balance handles them)
+  if (own && (txs.length === 1 || (opts.model ?? "fundamental") !== "fundamental")) {
     const r = solveLinkModel(net, opts);
     return { ...r, transmitters: r.transmitters ?? [r.transmitter], drives: r.drives ?? [ownDrive(r.transmitter, net, r.power.input)], warnings: [...built.warnings, ...r.warnings], coupling: built.coupling, network: net };
   }
   if (opts.model === "harmonic") {
     throw new TanklightInputError(
-      [{ path: "model", message: "harmonic balance solves one transmitter on its own drive; solve several (or a shared drive) with 'fundamental' or 'auto' (which then keeps the describing function)", value: opts.model }],
+      [{ path: "model", message: "harmonic balance solves transmitters on their own drives; solve coils on a shared drive with 'fundamental' or 'auto' (which then keeps the describing function)", value: opts.model }],
       "solveLink",
     );
   }

@@ -103,8 +103,17 @@ describe("coverageMap and findRange over several transmitters", () => {
     expect(ledAt([0.045, 0, 0.005 + r.range + 4e-4])).toBeLessThan(r.litThreshold);
   });
 
-  it("refuses harmonic balance over several transmitters (coverageMap and toleranceYield)", async () => {
-    await expect(coverageMap(pair(), { x: { from: 0, to: 0.01, points: 2 }, y: 0, z: Z }, { model: "harmonic" })).rejects.toThrow(/harmonic balance solves one transmitter/);
-    await expect(toleranceYield(pair([0.02, 0, Z]), {}, { samples: 10, seed: 1, model: "harmonic" })).rejects.toThrow(TanklightInputError);
+  it("maps several transmitters on their own drives by harmonic balance, as solveLink solves them; refuses it for coils on a shared drive", async () => {
+    const map = await coverageMap(pair(), { x: { from: 0.03, to: 0.045, points: 2 }, y: 0, z: Z }, { model: "harmonic", refine: false });
+    for (let i = 0; i < 2; i++) {
+      const pos: Vec3 = [map.axes[0]!.values[i]!, 0, Z];
+      const direct = solveLink(pair(pos), { model: "harmonic", tabulateLoads: true });
+      expect(direct.model).toBe("harmonic");
+      expectOutside({ quantity: `LED current at (${pos.join(", ")}) m, harmonic balance`, source: "independent method: solveLink(system) with the token at that pose, model 'harmonic'", ours: map.ledCurrent[i]!, reference: direct.receivers[0]!.leds[0]!.averageCurrent, rtol: 1e-9, atol: 1e-15, unit: "A" });
+    }
+    const bus = { name: "bus", drive: { kind: "sine" as const, amplitude: "5 V" }, wiring: "series" as const };
+    const shared = (position: Vec3): LinkSystem => ({ ...pair(position), sharedDrives: [bus], transmitters: [{ ...padTx(-0.045, "0 deg"), drive: "bus" }, { ...padTx(0.045, "180 deg"), drive: "bus" }] });
+    await expect(coverageMap(shared([0, 0, Z]), { x: { from: 0, to: 0.01, points: 2 }, y: 0, z: Z }, { model: "harmonic" })).rejects.toThrow(/harmonic balance solves transmitters on their own drives/);
+    await expect(toleranceYield(shared([0.02, 0, Z]), {}, { samples: 10, seed: 1, model: "harmonic" })).rejects.toThrow(TanklightInputError);
   });
 });

@@ -310,7 +310,7 @@ describe("solveLink with several transmitters", () => {
     expect(() => solveLink(shared(bus, [padTx(left, { drive: "bus", phase: "90 deg" })]))).toThrow(/transmitters\[0\]\.phase.*0 or 180°/);
     expect(() => solveLink(shared({ ...bus, drive: { kind: "classE", supply: "12 V", power: "5 W" } } as never, [padTx(left, { drive: "bus" })]))).toThrow(/sharedDrives\[0\]\.drive\.kind.*cannot be shared/);
     expect(() => solveLink(shared({ name: "cc", drive: { kind: "currentRegulated", amplitude: "1 A" }, wiring: "parallel" }, [padTx(left, { drive: "cc" })]))).toThrow(/sharedDrives\[0\]\.wiring.*in series/);
-    expect(() => solveLink(base, { model: "harmonic" })).toThrow(/model.*one transmitter/);
+    expect(() => solveLink(shared(bus, [padTx(left, { drive: "bus" })]), { model: "harmonic" })).toThrow(/model.*own drives/);
     const unused = solveLink({ ...base, sharedDrives: [bus] });
     expect(unused.warnings.join(" ")).toMatch(/'bus' feeds no transmitter/);
     expect(unused.errorBand.relative).toBe(Infinity);

@@ -22,7 +22,7 @@ import { harmonicPorts } from "./ports.ts";
 import { spectrumTables } from "./spectrum.ts";
 import { timeLoad } from "./timeLoad.ts";
 import { HarmonicSystem } from "./newton.ts";
-import { emfSpectrum, solveLinkHarmonic, type HarmonicOptions } from "./solveHarmonic.ts";
+import { emfSpectra, sharedDriveRefusal, solveLinkHarmonic, type HarmonicOptions } from "./solveHarmonic.ts";
 import type { HarmonicDetail } from "./result.ts";
 import type { ModelBand } from "./modelBand.ts";
 import type { HarmonicLinkResult } from "./result.ts";
@@ -86,6 +86,8 @@ export function fundamentalCheck(network: LinkNetwork, df: LinkResult, litThresh
   requireObject(df, "df", "fundamentalCheck");
   const rx = network.receivers;
   const drive = network.transmitter.drive;
+  const shared = sharedDriveRefusal(network);
+  if (shared !== undefined) return { estimate: Infinity, outside: [], reason: shared, harmonicPossible: false };
   if (drive.kind === "voltage" && drive.waveform?.kind === "singleSwitch") {
     return { estimate: Infinity, outside: [], reason: "the single-switch drive's switch-node waveform is assumed by the describing function, not solved", harmonicPossible: true };
   }
@@ -103,7 +105,7 @@ export function fundamentalCheck(network: LinkNetwork, df: LinkResult, litThresh
     out[0] = load.conductance(1);
     out[1] = (load.susceptance ? load.susceptance(1) : 0) * h;
   };
-  const ports = harmonicPorts(network, H, emfSpectrum(network), nonlinear, lin);
+  const ports = harmonicPorts(network, H, emfSpectra(network), nonlinear, lin);
   const P = ports.ports;
   const B = 2 * H + 1;
   if (P === 0) {
@@ -141,20 +143,23 @@ export function fundamentalCheck(network: LinkNetwork, df: LinkResult, litThresh
       if (e > FUNDAMENTAL_ACCEPT) outside.push(`${rx[k]!.label ?? `receiver ${k + 1}`}: ${a.label} (≈ ${(100 * e).toPrecision(2)} %)`);
     });
   }
-  // transmitter current: the fundamental's change through X_T at h = 1
+  // each transmitter's current: the fundamental's change through X_T at h = 1
   const size = ports.size;
-  let dRe = 0;
-  let dIm = 0;
-  for (let q = 0; q < P; q++) {
-    const cr = sys.cur[q * B + 1]! - before[q * B + 1]!;
-    const ci = sys.cur[q * B + 2]! - before[q * B + 2]!;
-    const tr = ports.xtRe[(1 * size + 0) * P + q]!;
-    const ti = ports.xtIm[(1 * size + 0) * P + q]!;
-    dRe += tr * cr - ti * ci;
-    dIm += tr * ci + ti * cr;
+  const dfTx = df.transmitters ?? [df.transmitter];
+  for (let i = 0; i < ports.transmitters; i++) {
+    let dRe = 0;
+    let dIm = 0;
+    for (let q = 0; q < P; q++) {
+      const cr = sys.cur[q * B + 1]! - before[q * B + 1]!;
+      const ci = sys.cur[q * B + 2]! - before[q * B + 2]!;
+      const tr = ports.xtRe[(1 * size + ports.index.loop(i)) * P + q]!;
+      const ti = ports.xtIm[(1 * size + ports.index.loop(i)) * P + q]!;
+      dRe += tr * cr - ti * ci;
+      dIm += tr * ci + ti * cr;
+    }
+    const i0 = dfTx[i]!.coilCurrent;
+    if (i0 > 0) estimate = Math.max(estimate, Math.hypot(dRe, dIm) / i0);
   }
-  const i0 = df.transmitter.coilCurrent;
-  if (i0 > 0) estimate = Math.max(estimate, Math.hypot(dRe, dIm) / i0);
   return { estimate, outside, harmonicPossible: true };
 }
 

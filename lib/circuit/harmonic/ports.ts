@@ -5,9 +5,9 @@
  * Microwave Circuits*, Kluwer 1990, ch. 5: the circuit is split into a linear part solved
  * phasor by phasor and a nonlinear part evaluated in time).
  *
- * Unknowns at harmonic h (ω_h = h·ω; h = 0 is DC): the coil currents I₀ (transmitter) and
- * I₁…I_m (receivers), every receiver's load voltage V_k, and — for the single-switch drive —
- * the switch-node voltage V_sw. Every coil current flows from its dotted end a to b, as in the
+ * Unknowns at harmonic h (ω_h = h·ω; h = 0 is DC): the coil currents — the transmitters'
+ * I₀…I_{t−1}, each on its own drive, then the receivers' — every receiver's load voltage V_k,
+ * and — for the single-switch drive (one transmitter) — the switch-node voltage V_sw. Every coil current flows from its dotted end a to b, as in the
  * transient engine (lib/circuit/transient/token.ts): a parallel tank's top and the load's
  * anode side are the coil's end a. This matters once harmonics are kept: reversing a token
  * coil negates its tank waveform, which for a rectifying load with even harmonics present is
@@ -15,15 +15,18 @@
  *   parallel tank: (R_k + jω_hL_k) I_k + Σ_j jω_hM_kj I_j − V_k = 0,  −I_k − (Y_C,k + Y_lin,k) V_k = I_L,k;
  *   series tank (one loop; the load carries I_k): (R_k + jω_hL_k + Z_C,k) I_k + Σ_j jω_hM_kj I_j + V_k = 0,
  *     I_k − Y_lin,k V_k = I_L,k;
- *   transmitter: voltage drive (Z_s + R₀ + jω_hL₀ [+ Z_C₀]) I₀ + Σ jω_hM₀ⱼIⱼ = E_h (parallel
- *     compensation through its Thevenin equivalent, as in the describing-function solver);
- *     current drive I₀ = I_set at h = 1, 0 elsewhere; single switch (tank between supply and
+ *   transmitter i: voltage drive (Z_s + Rᵢ + jω_hLᵢ [+ Z_C,i]) Iᵢ + Σ jω_hMᵢⱼIⱼ = E_i,h (parallel
+ *     compensation through its Thevenin equivalent, as in the describing-function solver; the
+ *     sum over every other coil, transmitters included); current drive Iᵢ = I_set·e^{jφ} at
+ *     h = 1, 0 elsewhere; single switch (tank between supply and
  *     switch node): (R₀ + jω_hL₀) I₀ + Σ jω_hM₀ⱼIⱼ + V_sw = V_DD·[h = 0] and
  *     I₀ − Y_C₀ V_sw = I_sw − Y_C₀ V_DD·[h = 0].
  * Y_lin is a linear load's admittance (folded in; no port). I_L,k and I_sw are the port
  * currents that the nonlinear elements draw. Solving once per harmonic with the port currents
  * as inputs gives the multi-port Thevenin form V_port = E_h + T_h·I_port and, for the results,
  * every unknown as x = x_oc + X_T·I_port.
+ *
+ * Shared drives (several coils on one source) are not written here: solveLinkHarmonic refuses them.
  *
  * A capacitor in series blocks DC; it is given its insulation resistance there
  * ({@link DC_INSULATION_RESISTANCE}) so that the DC equations stay regular.
@@ -52,7 +55,9 @@ export interface HarmonicPorts {
   readonly receiverPort: Int32Array;
   /** port number of the switch, −1 if none */
   readonly switchPort: number;
-  /** index in x of the transmitter current, receiver currents (1…m), receiver voltages (m+1…2m), switch voltage (2m+1) */
+  /** number of transmitters t (coils 0…t−1 of the inductance matrix) */
+  readonly transmitters: number;
+  /** index in x of coil k's current (the transmitters 0…t−1, receiver k at t + k), receiver k's load voltage, the switch voltage */
   readonly index: { readonly loop: (k: number) => number; readonly voltage: (k: number) => number; readonly switchNode: number };
   /** open-circuit port voltages E_h: [h·P + p] */
   readonly eRe: Float64Array;
@@ -72,10 +77,18 @@ export interface HarmonicPorts {
 export type EmfSpectrum = (h: number, out: Float64Array) => void;
 
 /**
+ * The transmitters of a network for harmonic balance: `transmitters`, or the one `transmitter`;
+ * every one on its own drive (a shared drive is refused by the caller).
+ */
+function ownTransmitters(net: LinkNetwork): readonly LinkNetwork["transmitter"][] {
+  return net.transmitters ?? [net.transmitter];
+}
+
+/**
  * Builds the harmonic port model of a link network.
  * @param net the link network (SI), as solveLinkNetwork takes it.
  * @param order highest harmonic H, integer ≥ 1.
- * @param emf the drive's EMF phasor at each harmonic (voltage drives; ignored otherwise).
+ * @param emf each transmitter's drive EMF phasor at each harmonic (voltage drives; ignored otherwise).
  * @param nonlinear which receivers are ports (true) rather than linear loads folded in.
  * @param linearAdmittance a folded receiver's load admittance at harmonic h: [G, B] into out.
  * @returns {@link HarmonicPorts}.
@@ -83,18 +96,21 @@ export type EmfSpectrum = (h: number, out: Float64Array) => void;
 export function harmonicPorts(
   net: LinkNetwork,
   order: number,
-  emf: EmfSpectrum,
+  emf: readonly EmfSpectrum[],
   nonlinear: readonly boolean[],
   linearAdmittance: (k: number, h: number, out: Float64Array) => void,
 ): HarmonicPorts {
   const where = "harmonicBalance";
   const w = 2 * Math.PI * net.frequency;
-  const tx = net.transmitter;
+  const txs = ownTransmitters(net);
+  const t = txs.length;
+  const tx0 = txs[0]!;
   const rx = net.receivers;
   const m = rx.length;
-  const n = m + 1;
-  const wf = tx.drive.kind === "voltage" ? tx.drive.waveform : undefined;
+  const n = t + m;
+  const wf = tx0.drive.kind === "voltage" ? tx0.drive.waveform : undefined;
   const hasSwitch = wf?.kind === "singleSwitch";
+  if (hasSwitch && t > 1) throw new TanklightInputError([{ path: "transmitters", message: "harmonic balance solves the single-switch drive with one transmitter", value: t }], where);
   const size = n + m + (hasSwitch ? 1 : 0);
   const receiverPort = new Int32Array(m).fill(-1);
   const portReceiver: number[] = [];
@@ -107,7 +123,7 @@ export function harmonicPorts(
   const switchPort = hasSwitch ? portReceiver.length : -1;
   if (hasSwitch) portReceiver.push(-1);
   const P = portReceiver.length;
-  const loop = (k: number): number => k; // 0 transmitter, k ≥ 1 receiver k−1
+  const loop = (k: number): number => k; // coil k in the inductance matrix's order: transmitters, then receivers
   const voltage = (k: number): number => n + k; // receiver k (0-based)
   const switchNode = hasSwitch ? n + m : -1;
   const portIndex = portReceiver.map((k) => (k >= 0 ? voltage(k) : switchNode));
@@ -148,35 +164,42 @@ export function harmonicPorts(
     for (let i = 0; i < n; i++) {
       for (let j = 0; j < n; j++) if (i !== j) set(loop(i), loop(j), 0, wh * L[i]![j]!);
     }
-    // ── transmitter row ──
-    const drive = tx.drive;
-    if (drive.kind === "current") {
-      for (let j = 0; j < size; j++) {
-        aRe[j] = 0;
-        aIm[j] = 0;
+    // ── transmitter rows ──
+    for (let i = 0; i < t; i++) {
+      const tx = txs[i]!;
+      const drive = tx.drive;
+      if (drive.kind === "current") {
+        for (let j = 0; j < size; j++) {
+          aRe[i * size + j] = 0;
+          aIm[i * size + j] = 0;
+        }
+        set(i, i, 1, 0);
+        if (h === 1) {
+          const ph = tx.phase ?? 0;
+          bRe[i] = ph === 0 ? drive.amplitude : drive.amplitude * Math.cos(ph);
+          bIm[i] = ph === 0 ? 0 : drive.amplitude * Math.sin(ph);
+        }
+      } else if (hasSwitch && wf?.kind === "singleSwitch") {
+        set(0, 0, tx.resistance, wh * L[0]![0]!);
+        set(0, switchNode, 1, 0);
+        if (h === 0) bRe[0] = wf.supply;
+        // switch-node KCL: I₀ − Y_C₀·V_sw = I_sw − Y_C₀·V_DD·[h = 0]
+        const [ycRe, ycIm] = capacitorAdmittance(tx.capacitance ?? 0, tx.capacitorEsr ?? 0, wh);
+        set(switchNode, 0, 1, 0);
+        set(switchNode, switchNode, -ycRe, -ycIm);
+        if (h === 0) bRe[switchNode] = -ycRe * wf.supply;
+      } else {
+        const th = transmitterThevenin(tx, drive, emf[i]!, h, wh, tmp);
+        set(i, i, th.zRe + tx.resistance, th.zIm + wh * L[i]![i]!);
+        bRe[i] = th.eRe;
+        bIm[i] = th.eIm;
       }
-      set(0, 0, 1, 0);
-      if (h === 1) bRe[0] = drive.amplitude;
-    } else if (hasSwitch && wf?.kind === "singleSwitch") {
-      set(0, 0, tx.resistance, wh * L[0]![0]!);
-      set(0, switchNode, 1, 0);
-      if (h === 0) bRe[0] = wf.supply;
-      // switch-node KCL: I₀ − Y_C₀·V_sw = I_sw − Y_C₀·V_DD·[h = 0]
-      const [ycRe, ycIm] = capacitorAdmittance(tx.capacitance ?? 0, tx.capacitorEsr ?? 0, wh);
-      set(switchNode, 0, 1, 0);
-      set(switchNode, switchNode, -ycRe, -ycIm);
-      if (h === 0) bRe[switchNode] = -ycRe * wf.supply;
-    } else {
-      const th = transmitterThevenin(tx, drive, emf, h, wh, tmp);
-      set(0, 0, th.zRe + tx.resistance, th.zIm + wh * L[0]![0]!);
-      bRe[0] = th.eRe;
-      bIm[0] = th.eIm;
     }
     // ── receivers ──
     for (let k = 0; k < m; k++) {
       const r = rx[k]!;
-      const row = loop(k + 1);
-      set(row, row, r.resistance, wh * L[k + 1]![k + 1]!);
+      const row = loop(t + k);
+      set(row, row, r.resistance, wh * L[t + k]![t + k]!);
       if (r.topology === "series") {
         const [zr, zi] = capacitorImpedance(r.capacitance, r.capacitorEsr ?? 0, wh);
         set(row, row, zr, zi);
@@ -201,7 +224,7 @@ export function harmonicPorts(
     const bad = complexLuFactor(aRe, aIm, size, piv);
     if (bad >= 0) {
       throw new TanklightInputError(
-        [{ path: bad === 0 ? "transmitter" : "network", message: `the linear network is singular at harmonic ${h} (${(h * net.frequency).toPrecision(4)} Hz): a loop without resistance at DC, or a lossless tank exactly at a harmonic`, value: h }],
+        [{ path: bad < t ? (t > 1 ? `transmitters[${bad}]` : "transmitter") : "network", message: `the linear network is singular at harmonic ${h} (${(h * net.frequency).toPrecision(4)} Hz): a loop without resistance at DC, or a lossless tank exactly at a harmonic`, value: h }],
         where,
       );
     }
@@ -231,6 +254,7 @@ export function harmonicPorts(
   }
   return {
     order: H,
+    transmitters: t,
     ports: P,
     size,
     portReceiver: Int32Array.from(portReceiver),

@@ -5,7 +5,7 @@
  */
 import type { LinkNetwork, LinkOptions } from "../link/network.ts";
 import { DEFAULT_BRIGHTNESS_REFERENCE, DEFAULT_CAUTION_VOLTAGE, DEFAULT_LIT_THRESHOLD } from "../link/network.ts";
-import type { LedState, LinkResult, Phasor, ReceiverState } from "../link/result.ts";
+import type { DriveState, LedState, LinkResult, Phasor, ReceiverState, TransmitterState } from "../link/result.ts";
 import type { HarmonicPorts } from "./ports.ts";
 import { capacitorAdmittance, capacitorImpedance } from "./ports.ts";
 import type { HarmonicSystem } from "./newton.ts";
@@ -21,9 +21,11 @@ export interface HarmonicDetail {
   readonly order: number;
   /** samples per period of the time-domain evaluation, N */
   readonly samples: number;
-  /** transmitter coil current, A, harmonics 0…H */
+  /** transmitter coil current (with several: the first's), A, harmonics 0…H */
   readonly transmitterCurrent: HarmonicPhasors;
-  /** transmitter coil current, largest |i(t)| over the period, A */
+  /** with several transmitters: every transmitter's coil current, A, harmonics 0…H, in the network's order */
+  readonly transmitterCurrents?: readonly HarmonicPhasors[];
+  /** transmitter coil current (the first transmitter's), largest |i(t)| over the period, A */
   readonly transmitterCurrentPeak: number;
   /** the single-switch drive's switch-node voltage, when there is one */
   readonly switchNode?: {
@@ -90,10 +92,11 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
   const f = net.frequency;
   const w = 2 * Math.PI * f;
   const L = net.inductance;
-  const tx = net.transmitter;
+  const txs = net.transmitters ?? [net.transmitter];
+  const t = txs.length;
   const rx = net.receivers;
   const m = rx.length;
-  const n = m + 1;
+  const n = t + m;
   if (P > 0 && !sys.holds(z, 1)) sys.residual(z, 1, new Float64Array(sys.size)); // loads and port currents at z
   // every unknown at every harmonic: x_h = x_oc,h + X_T,h·I_port,h
   const xRe = new Float64Array((H + 1) * size);
@@ -148,6 +151,10 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
     }
     return [hi, lo];
   };
+  const div = (p: Phasor, q: Phasor): Phasor => {
+    const d = q.re * q.re + q.im * q.im;
+    return d > 0 ? { re: (p.re * q.re + p.im * q.im) / d, im: (p.im * q.re - p.re * q.im) / d } : { re: 0, im: 0 };
+  };
   const peakAbs = (x: readonly Phasor[]): number => {
     const [hi, lo] = extremes(x);
     return Math.max(Math.abs(hi), Math.abs(lo));
@@ -158,87 +165,151 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
   const cautionV = options.cautionVoltage ?? DEFAULT_CAUTION_VOLTAGE;
   const cautions: string[] = [];
 
-  // ── transmitter ──
-  const i0 = series(ports.index.loop(0));
-  const coilV: Phasor[] = [];
-  for (let h = 0; h <= H; h++) {
-    let v = mul(i0[h]!, tx.resistance, h * w * L[0]![0]!);
-    for (let j = 1; j < n; j++) v = add(v, mul(at(h, ports.index.loop(j)), 0, h * w * L[0]![j]!));
-    coilV.push(v);
-  }
-  const drive = tx.drive;
-  const wf = drive.kind === "voltage" ? drive.waveform : undefined;
-  const c0 = tx.capacitance ?? 0;
-  const esr0 = tx.capacitorEsr ?? 0;
-  const capI: Phasor[] = [];
-  const capV: Phasor[] = [];
-  const srcI: Phasor[] = [];
-  const termV: Phasor[] = [];
+  // ── transmitters ──
+  const txStates: TransmitterState[] = [];
+  const drives: DriveState[] = [];
+  const txCurrents: HarmonicPhasors[] = [];
   let switchDetail: Omit<NonNullable<HarmonicDetail["switchNode"]>, "truncation"> | undefined;
   let input = 0;
   let driverLoss = 0;
-  if (wf?.kind === "singleSwitch") {
-    const vsw = series(ports.index.switchNode);
+  let txCoilLoss = 0;
+  let txCapLoss = 0;
+  for (let ti = 0; ti < t; ti++) {
+    const tx = txs[ti]!;
+    const i0 = series(ports.index.loop(ti));
+    txCurrents.push(i0);
+    // coil voltage RᵢIᵢ + jωLᵢIᵢ + Σ jωMᵢⱼIⱼ (every other coil); mv the mutual part at the fundamental
+    const coilV: Phasor[] = [];
+    let mv: Phasor = { re: 0, im: 0 };
     for (let h = 0; h <= H; h++) {
-      const tank = sub(h === 0 ? { re: wf.supply, im: 0 } : { re: 0, im: 0 }, vsw[h]!);
-      const [yr, yi] = capacitorAdmittance(c0, esr0, h * w);
-      const ic = mul(tank, yr, yi);
-      capI.push(ic);
-      capV.push(tank);
-      srcI.push(add(i0[h]!, ic));
-      termV.push(tank);
+      let v = mul(i0[h]!, tx.resistance, h * w * L[ti]![ti]!);
+      for (let j = 0; j < n; j++) {
+        if (j === ti) continue;
+        const e = mul(at(h, ports.index.loop(j)), 0, h * w * L[ti]![j]!);
+        v = add(v, e);
+        if (h === 1) mv = add(mv, e);
+      }
+      coilV.push(v);
     }
-    input = wf.supply * srcI[0]!.re;
-    const p = ports.switchPort;
-    const v = sys.v.subarray(p * N, (p + 1) * N);
-    const i = sys.i.subarray(p * N, (p + 1) * N);
-    let pl = 0;
-    for (let s = 0; s < N; s++) pl += v[s]! * i[s]!;
-    driverLoss = pl / N;
-    const [hi, lo] = extremes(vsw);
-    let hs = 0;
-    for (let h = 2; h <= H; h++) hs += abs(vsw[h]!) ** 2;
-    switchDetail = { voltage: vsw, peak: hi, minimum: lo, distortion: abs(vsw[1]!) > 0 ? Math.sqrt(hs) / abs(vsw[1]!) : Infinity };
-  } else {
-    for (let h = 0; h <= H; h++) {
-      if (tx.compensation === "series") {
-        const [zr, zi] = capacitorImpedance(c0, esr0, h * w);
-        capI.push(i0[h]!);
-        capV.push(mul(i0[h]!, zr, zi));
-        srcI.push(i0[h]!);
-        termV.push(add(coilV[h]!, capV[h]!));
-      } else if (tx.compensation === "parallel") {
+    const drive = tx.drive;
+    const wf = drive.kind === "voltage" ? drive.waveform : undefined;
+    const c0 = tx.capacitance ?? 0;
+    const esr0 = tx.capacitorEsr ?? 0;
+    const capI: Phasor[] = [];
+    const capV: Phasor[] = [];
+    const srcI: Phasor[] = [];
+    const termV: Phasor[] = [];
+    let inputI = 0;
+    let driverI = 0;
+    if (wf?.kind === "singleSwitch") {
+      const vsw = series(ports.index.switchNode);
+      for (let h = 0; h <= H; h++) {
+        const tank = sub(h === 0 ? { re: wf.supply, im: 0 } : { re: 0, im: 0 }, vsw[h]!);
         const [yr, yi] = capacitorAdmittance(c0, esr0, h * w);
-        const ic = mul(coilV[h]!, yr, yi);
+        const ic = mul(tank, yr, yi);
         capI.push(ic);
-        capV.push(coilV[h]!);
+        capV.push(tank);
         srcI.push(add(i0[h]!, ic));
-        termV.push(coilV[h]!);
+        termV.push(tank);
+      }
+      inputI = wf.supply * srcI[0]!.re;
+      const p = ports.switchPort;
+      const v = sys.v.subarray(p * N, (p + 1) * N);
+      const i = sys.i.subarray(p * N, (p + 1) * N);
+      let pl = 0;
+      for (let s = 0; s < N; s++) pl += v[s]! * i[s]!;
+      driverI = pl / N;
+      const [hi, lo] = extremes(vsw);
+      let hs = 0;
+      for (let h = 2; h <= H; h++) hs += abs(vsw[h]!) ** 2;
+      switchDetail = { voltage: vsw, peak: hi, minimum: lo, distortion: abs(vsw[1]!) > 0 ? Math.sqrt(hs) / abs(vsw[1]!) : Infinity };
+    } else {
+      for (let h = 0; h <= H; h++) {
+        if (tx.compensation === "series") {
+          const [zr, zi] = capacitorImpedance(c0, esr0, h * w);
+          capI.push(i0[h]!);
+          capV.push(mul(i0[h]!, zr, zi));
+          srcI.push(i0[h]!);
+          termV.push(add(coilV[h]!, capV[h]!));
+        } else if (tx.compensation === "parallel") {
+          const [yr, yi] = capacitorAdmittance(c0, esr0, h * w);
+          const ic = mul(coilV[h]!, yr, yi);
+          capI.push(ic);
+          capV.push(coilV[h]!);
+          srcI.push(add(i0[h]!, ic));
+          termV.push(coilV[h]!);
+        } else {
+          capI.push({ re: 0, im: 0 });
+          capV.push({ re: 0, im: 0 });
+          srcI.push(i0[h]!);
+          termV.push(coilV[h]!);
+        }
+      }
+      if (drive.kind === "voltage") {
+        // EMF·I over the period; the source resistance's loss is the driver loss
+        const emfV = termV.map((v, h) => add(v, mul(srcI[h]!, drive.resistance, 0)));
+        inputI = power(emfV, srcI);
+        driverI = drive.resistance * meanSquare(srcI);
       } else {
-        capI.push({ re: 0, im: 0 });
-        capV.push({ re: 0, im: 0 });
-        srcI.push(i0[h]!);
-        termV.push(coilV[h]!);
+        inputI = power(termV, srcI);
       }
     }
-    if (drive.kind === "voltage") {
-      // EMF·I over the period; the source resistance's loss is the driver loss
-      const emfV = termV.map((t, h) => add(t, mul(srcI[h]!, drive.resistance, 0)));
-      input = power(emfV, srcI);
-      driverLoss = drive.resistance * meanSquare(srcI);
-    } else {
-      input = power(termV, srcI);
-    }
+    const coilLoss = tx.resistance * meanSquare(i0);
+    const capLoss = esr0 * meanSquare(capI);
+    input += inputI;
+    driverLoss += driverI;
+    txCoilLoss += coilLoss;
+    txCapLoss += capLoss;
+    const txLabel = tx.label ?? (t > 1 ? `transmitter ${ti + 1}` : "transmitter");
+    const txCapPeak = peakAbs(capV);
+    const coilPeak = peakAbs(coilV);
+    pushIf(warnings, partVoltageWarning(txLabel + " capacitor", txCapPeak, tx.capacitorRating));
+    pushIf(warnings, selfResonanceWarning(txLabel + " coil", f, tx.selfResonance));
+    pushIf(cautions, voltageCaution(txLabel + " coil", coilPeak, cautionV));
+    if (tx.compensation !== "none") pushIf(cautions, voltageCaution(txLabel + " capacitor", txCapPeak, cautionV));
+    const i01 = abs(i0[1]!);
+    const src1 = abs(srcI[1]!);
+    const term1 = abs(termV[1]!);
+    const capI01 = abs(capI[1]!);
+    const capV01 = abs(capV[1]!);
+    const coilV1 = abs(coilV[1]!);
+    // input impedance at the fundamental; reflected impedance Σ jωMᵢⱼIⱼ / Iᵢ
+    const inZ = div(termV[1]!, srcI[1]!);
+    txStates.push({
+      label: txLabel,
+      coilCurrent: i01,
+      coilCurrentRms: i01 * SQRT1_2,
+      coilCurrentPhasor: i0[1]!,
+      coilVoltage: coilV1,
+      coilVoltageRms: coilV1 * SQRT1_2,
+      capacitorVoltage: capV01,
+      capacitorVoltageRms: capV01 * SQRT1_2,
+      capacitorCurrent: capI01,
+      capacitorCurrentRms: capI01 * SQRT1_2,
+      sourceCurrent: src1,
+      sourceCurrentRms: src1 * SQRT1_2,
+      sourceVoltage: term1,
+      sourceVoltageRms: term1 * SQRT1_2,
+      inputImpedance: inZ,
+      reflectedImpedance: div(mv, i0[1]!),
+      coilLoss,
+      capacitorLoss: capLoss,
+      driverLoss: driverI,
+    });
+    drives.push({
+      label: txLabel,
+      description: drive.label,
+      wiring: "own",
+      transmitters: [txLabel],
+      sourceCurrent: src1,
+      sourceCurrentRms: src1 * SQRT1_2,
+      sourceVoltage: term1,
+      sourceVoltageRms: term1 * SQRT1_2,
+      inputImpedance: inZ,
+      inputPower: inputI,
+      driverLoss: driverI,
+    });
   }
-  const txCoilLoss = tx.resistance * meanSquare(i0);
-  const txCapLoss = esr0 * meanSquare(capI);
-  const txLabel = tx.label ?? "transmitter";
-  const txCapPeak = peakAbs(capV);
-  const coilPeak = peakAbs(coilV);
-  pushIf(warnings, partVoltageWarning(txLabel + " capacitor", txCapPeak, tx.capacitorRating));
-  pushIf(warnings, selfResonanceWarning(txLabel + " coil", f, tx.selfResonance));
-  pushIf(cautions, voltageCaution(txLabel + " coil", coilPeak, cautionV));
-  if (tx.compensation !== "none") pushIf(cautions, voltageCaution(txLabel + " capacitor", txCapPeak, cautionV));
 
   // ── receivers ──
   const receivers: ReceiverState[] = [];
@@ -247,7 +318,7 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
   let rxCoil = 0;
   let rxCap = 0;
   rx.forEach((r, k) => {
-    const ik = series(ports.index.loop(k + 1));
+    const ik = series(ports.index.loop(t + k));
     const vk = series(ports.index.voltage(k));
     const p = ports.receiverPort[k]!;
     const emf: Phasor[] = [];
@@ -257,9 +328,9 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
     const loadI: Phasor[] = [];
     for (let h = 0; h <= H; h++) {
       let e: Phasor = { re: 0, im: 0 };
-      for (let j = 0; j < n; j++) if (j !== k + 1) e = sub(e, mul(at(h, ports.index.loop(j)), 0, h * w * L[k + 1]![j]!));
+      for (let j = 0; j < n; j++) if (j !== t + k) e = sub(e, mul(at(h, ports.index.loop(j)), 0, h * w * L[t + k]![j]!));
       emf.push(e);
-      cv.push(sub(mul(ik[h]!, r.resistance, h * w * L[k + 1]![k + 1]!), e));
+      cv.push(sub(mul(ik[h]!, r.resistance, h * w * L[t + k]![t + k]!), e));
       if (r.topology === "parallel") {
         const [yr, yi] = capacitorAdmittance(r.capacitance, r.capacitorEsr ?? 0, h * w);
         capIk.push(mul(vk[h]!, yr, yi));
@@ -366,22 +437,9 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
     }
   }
 
-  const i01 = abs(i0[1]!);
-  const src1 = abs(srcI[1]!);
-  const term1 = abs(termV[1]!);
-  const capI01 = abs(capI[1]!);
-  const capV01 = abs(capV[1]!);
-  const coilV1 = abs(coilV[1]!);
-  // reflected impedance Σ jωM₀ⱼIⱼ / I₀ and input impedance at the fundamental
-  let mv: Phasor = { re: 0, im: 0 };
-  for (let j = 1; j < n; j++) mv = add(mv, mul(at(1, ports.index.loop(j)), 0, w * L[0]![j]!));
-  const div = (p: Phasor, q: Phasor): Phasor => {
-    const d = q.re * q.re + q.im * q.im;
-    return d > 0 ? { re: (p.re * q.re + p.im * q.im) / d, im: (p.im * q.re - p.re * q.im) / d } : { re: 0, im: 0 };
-  };
-  const inZ = div(termV[1]!, srcI[1]!);
-  let t1Peak = 0;
-  t1Peak = peakAbs(i0);
+  const t1Peak = peakAbs(txCurrents[0]!);
+  const drive = txs[0]!.drive;
+  const wf = drive.kind === "voltage" ? drive.waveform : undefined;
   const band: ModelBand = harmonicBand(truncation, H);
   return {
     model: "harmonic",
@@ -390,27 +448,8 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
     converged: a.converged,
     iterations: a.iterations,
     scalarIterations: 0,
-    transmitter: {
-      label: txLabel,
-      coilCurrent: i01,
-      coilCurrentRms: i01 * SQRT1_2,
-      coilCurrentPhasor: i0[1]!,
-      coilVoltage: coilV1,
-      coilVoltageRms: coilV1 * SQRT1_2,
-      capacitorVoltage: capV01,
-      capacitorVoltageRms: capV01 * SQRT1_2,
-      capacitorCurrent: capI01,
-      capacitorCurrentRms: capI01 * SQRT1_2,
-      sourceCurrent: src1,
-      sourceCurrentRms: src1 * SQRT1_2,
-      sourceVoltage: term1,
-      sourceVoltageRms: term1 * SQRT1_2,
-      inputImpedance: inZ,
-      reflectedImpedance: div(mv, i0[1]!),
-      coilLoss: txCoilLoss,
-      capacitorLoss: txCapLoss,
-      driverLoss,
-    },
+    transmitter: txStates[0]!,
+    ...(net.transmitters !== undefined ? { transmitters: txStates, drives } : {}),
     receivers,
     power: {
       input,
@@ -425,7 +464,7 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
     litThreshold: threshold,
     litThresholdSource: litThresholdSource(options.litThreshold),
     drive: {
-      label: drive.label,
+      label: t > 1 ? txs.map((x) => x.drive.label).join("; ") : drive.label,
       assumptions:
         wf?.kind === "singleSwitch"
           ? [`switch-node waveform solved with the tank by harmonic balance (order ${H}); switch R_on ${wf.onResistance} Ω, ${Math.round(wf.duty * 100)} % duty`, "no body diode: a negative switch-node swing is reported in harmonic.switchNode.minimum"]
@@ -438,8 +477,9 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
     harmonic: {
       order: H,
       samples: N,
-      transmitterCurrent: i0,
+      transmitterCurrent: txCurrents[0]!,
       transmitterCurrentPeak: t1Peak,
+      ...(t > 1 ? { transmitterCurrents: txCurrents } : {}),
       ...(switchDetail ? { switchNode: { ...switchDetail, truncation: switchTruncation } } : {}),
       receivers: rxDetail,
       truncation,

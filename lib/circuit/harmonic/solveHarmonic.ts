@@ -77,6 +77,8 @@ export function solveLinkHarmonic(network: LinkNetwork, options: HarmonicOptions
   const where = "solveLinkHarmonic";
   requireObject(network, "network", where);
   requireObject(options, "options", where);
+  const shared = sharedDriveRefusal(network);
+  if (shared !== undefined) throw new TanklightInputError([{ path: "sharedDrives", message: shared, value: network.sharedDrives?.length ?? 0 }], where);
   const H = options.order ?? DEFAULT_HARMONIC_ORDER;
   if (!(Number.isInteger(H) && H >= 1 && H <= 200)) {
     throw new TanklightInputError([{ path: "order", message: "must be an integer from 1 to 200", value: H, expected: "1…200" }], where);
@@ -133,6 +135,19 @@ export function solveLinkHarmonic(network: LinkNetwork, options: HarmonicOptions
   return solveOrder(network, H, N, options, df, undefined).result;
 }
 
+/**
+ * Why harmonic balance cannot solve a network, or undefined when it can: it solves every
+ * transmitter on its own drive (any number of them, each with its phase), not coils hung on a
+ * shared drive.
+ * @example sharedDriveRefusal(network) // undefined for transmitters on their own drives
+ */
+export function sharedDriveRefusal(network: LinkNetwork): string | undefined {
+  const txs = network.transmitters ?? [network.transmitter];
+  return (network.sharedDrives?.length ?? 0) > 0 || txs.some((t) => t.feed !== undefined)
+    ? "harmonic balance solves transmitters on their own drives; coils on a shared drive keep the describing function"
+    : undefined;
+}
+
 /** Harmonic balance at one order and sampling, optionally started from a lower-order solution. */
 function solveOrder(
   network: LinkNetwork,
@@ -152,7 +167,7 @@ function solveOrder(
     out[0] = load.conductance(1);
     out[1] = (load.susceptance ? load.susceptance(1) : 0) * h; // a linear load's susceptance taken as capacitive
   };
-  const ports = harmonicPorts(network, H, emfSpectrum(network), nonlinear, lin);
+  const ports = harmonicPorts(network, H, emfSpectra(network), nonlinear, lin);
   const tables = spectrumTables(N);
   const loads: TimeLoad[] = [];
   for (let p = 0; p < ports.ports; p++) {
@@ -284,27 +299,42 @@ function sysLoadConductance(df: LinkResult, k: number): number {
 }
 
 /**
- * The drive's EMF phasor at each harmonic (peak; the fundamental real, as the equivalent's):
- * a sine has only the fundamental; a square wave between `low` and `high` (50 % duty) has the
- * DC (low + high)/2 and the odd harmonics (high − low)/2 · 4/(πh) · (−1)^((h−1)/2) (its Fourier
- * series, aligned so that the fundamental is a cosine).
+ * Transmitter i's drive EMF phasor at each harmonic (peak; with the transmitter's phase φ = 0 the
+ * fundamental is real, as the equivalent's): a sine has only the fundamental; a square wave
+ * between `low` and `high` (50 % duty) has the DC (low + high)/2 and the odd harmonics
+ * (high − low)/2 · 4/(πh) · (−1)^((h−1)/2) (its Fourier series, aligned so that the fundamental is
+ * a cosine). A phase φ is a time shift of the whole waveform: harmonic h turns by h·φ.
+ * @param network the link network; i the transmitter's index (default 0).
+ * @example emfSpectrum(net)(1, out) // out = [2, 0] for sineDrive(2)
  */
-export function emfSpectrum(network: LinkNetwork): EmfSpectrum {
-  const d = network.transmitter.drive;
+export function emfSpectrum(network: LinkNetwork, i = 0): EmfSpectrum {
+  const tx = (network.transmitters ?? [network.transmitter])[i]!;
+  const d = tx.drive;
   if (d.kind !== "voltage") return (_h, out) => out.fill(0);
   const wf = d.waveform;
+  const phase = tx.phase ?? 0;
+  const turn = (h: number, re: number, out: Float64Array): void => {
+    if (phase === 0 || re === 0) {
+      out[0] = re;
+      out[1] = 0;
+    } else {
+      out[0] = re * Math.cos(h * phase);
+      out[1] = re * Math.sin(h * phase);
+    }
+  };
   if (wf?.kind === "square") {
     const half = (wf.high - wf.low) / 2;
     const mid = (wf.high + wf.low) / 2;
     return (h, out) => {
-      out[1] = 0;
-      if (h === 0) out[0] = mid;
-      else if (h % 2 === 1) out[0] = ((half * 4) / (Math.PI * h)) * ((h - 1) % 4 === 0 ? 1 : -1);
-      else out[0] = 0;
+      if (h === 0) turn(0, mid, out);
+      else if (h % 2 === 1) turn(h, ((half * 4) / (Math.PI * h)) * ((h - 1) % 4 === 0 ? 1 : -1), out);
+      else turn(h, 0, out);
     };
   }
-  return (h, out) => {
-    out[0] = h === 1 ? d.amplitude : 0;
-    out[1] = 0;
-  };
+  return (h, out) => turn(h, h === 1 ? d.amplitude : 0, out);
+}
+
+/** Every transmitter's {@link emfSpectrum}, in the network's order. */
+export function emfSpectra(network: LinkNetwork): EmfSpectrum[] {
+  return (network.transmitters ?? [network.transmitter]).map((_, i) => emfSpectrum(network, i));
 }

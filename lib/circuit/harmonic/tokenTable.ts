@@ -119,7 +119,7 @@ export function tokenTable(
       receivers: [receiver],
     },
     H,
-    (_h, out) => out.fill(0),
+    [(_h, out) => out.fill(0)],
     [true],
     () => undefined,
   );
@@ -142,7 +142,7 @@ export function tokenTable(
     const pd = harmonicPorts(
       { frequency, inductance: [[coupledTo.inductance, md], [md, inductance]], transmitter: coupledTo.transmitter, receivers: [receiver] },
       H,
-      (_h, out) => out.fill(0),
+      [(_h, out) => out.fill(0)],
       [true],
       () => undefined,
     );
