@@ -6,8 +6,10 @@ import { expectOutside } from "./helpers/validation.ts";
 
 
 describe("casebook", () => {
-  it("every scenario runs and prints a notebook with units", async () => {
-    for (const [name, s] of Object.entries(scenarios)) {
+  // one test per scenario: together they take 1.5–2 min on a loaded 2-core machine, near one test's timeout
+  it.each(Object.keys(scenarios))("scenario %s runs and prints a notebook with units", async (name) => {
+    {
+      const s = scenarios[name as keyof typeof scenarios]!;
       const md = notebookMarkdown((await s.run()).notebook);
       expect(md.length, name).toBeGreaterThan(100);
       expect(md, name).toMatch(/\d (m|µ|n|p|k)?(H|m|Hz|V|A|W)\b/);
