@@ -218,6 +218,11 @@ export function nearestKey(key: string, valid: readonly string[]): string | unde
  */
 export function unknownKeyMessage(key: string, valid: readonly string[]): string {
   const near = nearestKey(key, valid);
-  if (near !== undefined) return `unknown field; did you mean '${near}'?`;
+  if (near !== undefined) {
+    // a short typo may be as near to several keys ("n" to x, nx, ny): name them all
+    const d = editDistance(key, near);
+    const all = valid.filter((v) => editDistance(key, v) === d).map((v) => `'${v}'`);
+    return `unknown field; did you mean ${all.length === 1 ? all[0] : `${all.slice(0, -1).join(", ")} or ${all[all.length - 1]}`}?`;
+  }
   return valid.length > 0 ? `unknown field (accepted: ${valid.join(", ")})` : "unknown field";
 }

@@ -11,8 +11,8 @@
  * 3.0 A (USB Type-C Cable and Connector Specification). A bench supply is taken at its rating.
  */
 import * as z from "../zod.ts";
-import { TanklightInputError } from "../errors.ts";
-import { current as currentQ, parseInput, voltage as voltageQ, lazySchema } from "../schema.ts";
+import { TanklightInputError, requireObject, underName } from "../errors.ts";
+import { current as currentQ, parseArgs, parseInput, voltage as voltageQ, lazySchema } from "../schema.ts";
 import { LinkSystemInput, systemTransmitters, type DriveParsed } from "../circuit/link/schema.ts";
 import { solveLink, type LinkSystem, type LinkSolution } from "../circuit/link.ts";
 import type { LinkOptions } from "../circuit/link/network.ts";
@@ -40,6 +40,10 @@ export const SupplyInput = lazySchema(() => z.union([
     label: z.string().optional(),
   }),
 ]));
+/** supplyVerdict's arguments: the DC draw (V > 0, A ≥ 0, quantity strings accepted) and the supply. */
+const SupplyVerdictArgs = lazySchema(() => z.strictObject({ draw: z.strictObject({ voltage: voltageQ({ positive: true }), current: currentQ({ nonNegative: true }) }), supply: SupplyInput }));
+/** supplyBudget's supply, checked before the link is solved. */
+const SupplyBudgetArgs = lazySchema(() => z.strictObject({ supply: SupplyInput }));
 /** What {@link supplyBudget} accepts as a supply. */
 export type SupplyInput = z.input<typeof SupplyInput>;
 
@@ -80,7 +84,9 @@ function resolveSupply(s: z.output<typeof SupplyInput>): { label: string; voltag
  * @example supplyVerdict({ voltage: 5, current: 10.52 }, "usb2").verdict // → "over"
  */
 export function supplyVerdict(draw: { readonly voltage: number; readonly current: number }, supply: SupplyInput): SupplyVerdict {
-  const s = resolveSupply(parseInput(SupplyInput, supply, "supplyVerdict"));
+  const args = parseArgs(SupplyVerdictArgs, [draw, supply], "supplyVerdict");
+  draw = args.draw;
+  const s = resolveSupply(args.supply);
   const power = draw.voltage * draw.current;
   const utilisation = draw.current / s.current;
   const fmtA = (a: number): string => (a >= 1 ? `${a.toPrecision(3)} A` : `${(a * 1e3).toPrecision(3)} mA`);
@@ -124,7 +130,9 @@ export interface SupplyBudget extends SupplyVerdict {
  * @example a 1-turn, 50 mm coil series-tuned on a 5 V half bridge: supplyBudget(system, "usb2").verdict is "over" (15.0 A, 75.2 W)
  */
 export function supplyBudget(system: LinkSystem, supply: SupplyInput, options: LinkOptions = {}): SupplyBudget {
+  requireObject(system, "system", "supplyBudget");
   const parsed = parseInput(LinkSystemInput, system, "supplyBudget");
+  parseInput(SupplyBudgetArgs, { supply }, "supplyBudget");
   const txs = systemTransmitters(parsed);
   const at = (i: number): string => (parsed.transmitters === undefined ? "transmitter" : `transmitters[${i}]`);
   // every drive in the solution's order (own drives, then the shared drives that feed a coil), with its field
@@ -147,9 +155,10 @@ export function supplyBudget(system: LinkSystem, supply: SupplyInput, options: L
     v = dv;
   }
   if (v === undefined) throw new TanklightInputError([{ path: "transmitters", message: "no drive", value: undefined }], "supplyBudget");
-  const solution = solveLink(system, options);
+  const solution = underName("supplyBudget", () => solveLink(system, options));
   // I = Σ P_in/V_DD over the drives (a drive that returns power draws nothing)
   let current = 0;
   for (const d of solution.drives) current += Math.max(0, d.inputPower) / v;
-  return { ...supplyVerdict({ voltage: v, current }, supply), solution };
+  const voltage = v;
+  return { ...underName("supplyBudget", () => supplyVerdict({ voltage, current }, supply)), solution };
 }

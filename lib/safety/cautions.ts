@@ -5,6 +5,7 @@
  * local codes, regulations and licensed practice.
  */
 import { HIGH_VOLTAGE, METAL_HEATING_POWER, SMALL_PART_DIAMETER } from "../hazards.ts";
+import { TanklightInputError, requireObject, unknownKeyMessage } from "../errors.ts";
 import { parseSafetyDesign, type SafetyDesign } from "./design.ts";
 import type { ExposureCheck } from "./exposure.ts";
 import type { EmissionEstimate } from "./emission.ts";
@@ -38,6 +39,7 @@ const DEFER = "Follow local codes, regulations and licensed practice.";
  */
 export function cautions(design: SafetyDesign, context: CautionContext = {}): Caution[] {
   const d = parseSafetyDesign(design, "cautions");
+  checkContext(context);
   const out: Caution[] = [];
   const worst = context.exposure ? ` This design's field reaches ${fmtValue(context.exposure.worst.flux, "T")} RMS at the surface.` : "";
   out.push({
@@ -83,4 +85,26 @@ export function cautions(design: SafetyDesign, context: CautionContext = {}): Ca
     text: `Any transmitter radiates and can interfere with radio services and nearby electronics; radio rules for inductive devices apply to the product, and the estimates here are not a compliance test.${emText} ${DEFER}`,
   });
   return out;
+}
+
+const CONTEXT_KEYS: readonly string[] = Object.freeze(["exposure", "emission", "metal"]);
+
+/** cautions' context: only the results of exposureCheck, emissionEstimate and metalHeating (a typo names the nearest key). */
+function checkContext(context: unknown): void {
+  const where = "cautions";
+  requireObject(context, "context", where);
+  const c = context as Record<string, unknown>;
+  const fail = (path: string, message: string, value: unknown): never => {
+    throw new TanklightInputError([{ path, message, value }], where);
+  };
+  for (const key of Object.keys(c)) if (!CONTEXT_KEYS.includes(key)) fail(`context.${key}`, unknownKeyMessage(key, CONTEXT_KEYS), c[key]);
+  const has = (v: unknown, path: readonly string[]): boolean => path.reduce<unknown>((o, k) => (o !== null && typeof o === "object" ? (o as Record<string, unknown>)[k] : undefined), v) !== undefined;
+  if (c["exposure"] !== undefined && !(has(c["exposure"], ["worst", "flux"]) && typeof (c["exposure"] as { worst: { flux: unknown } }).worst.flux === "number")) {
+    fail("context.exposure", "must be what exposureCheck returned", c["exposure"]);
+  }
+  if (c["emission"] !== undefined && !(typeof c["emission"] === "object" && c["emission"] !== null && !Array.isArray(c["emission"]))) fail("context.emission", "must be what emissionEstimate returned", c["emission"]);
+  const metal = c["metal"];
+  if (metal !== undefined && !(Array.isArray(metal) && metal.every((m) => m !== null && typeof m === "object" && typeof m.object === "string" && typeof m.power === "number" && typeof m.verdict === "string"))) {
+    fail("context.metal", "must be a list of what metalHeating returned", metal);
+  }
 }

@@ -8,7 +8,7 @@ import { coilResistance } from "../em/losses/coilResistance.ts";
 import type { Coil } from "../em/types.ts";
 import { HIGH_VOLTAGE, WINDING_TEMPERATURE_RISE } from "../hazards.ts";
 import { parseSafetyDesign, type SafetyDesign, type SafetyDesignParsed } from "./design.ts";
-import { TYPICAL_INDICATOR_LED, WINDING_CURRENT_DENSITY, checkRating, fmtValue, type RatingCheck } from "./partRatings.ts";
+import { TYPICAL_INDICATOR_LED, WINDING_CURRENT_DENSITY, checkRatingCore, fmtValue, type RatingCheck } from "./partRatings.ts";
 import { rmsFromPeak } from "./rms.ts";
 
 /** The winding-temperature model, named once. */
@@ -89,8 +89,8 @@ function capacitorChecks(what: string, cap: NonNullable<SafetyDesignParsed["tran
   const s = capacitorStress({ capacitance: cap.capacitance, frequency: f, voltageAmplitude: cap.voltage });
   cautions.push(...s.cautions.map((c) => `${what}: ${c}`));
   return [
-    checkRating(`${what} voltage (peak)`, s.peakVoltage, "V", cap.rating),
-    checkRating(`${what} current (RMS)`, s.rmsCurrent, "A", cap.currentRating),
+    checkRatingCore(`${what} voltage (peak)`, s.peakVoltage, "V", cap.rating),
+    checkRatingCore(`${what} current (RMS)`, s.rmsCurrent, "A", cap.currentRating),
   ];
 }
 
@@ -115,17 +115,17 @@ export function componentStress(design: SafetyDesign): ComponentStress {
     const checks: RatingCheck[] = [];
     if (t.capacitor) checks.push(...capacitorChecks(`${label} capacitor`, t.capacitor, f, cautions));
     if (t.switchPeakVoltage !== undefined) {
-      checks.push(checkRating(`${label} switch voltage (peak)`, t.switchPeakVoltage, "V", t.switchRating));
+      checks.push(checkRatingCore(`${label} switch voltage (peak)`, t.switchPeakVoltage, "V", t.switchRating));
       if (t.switchPeakVoltage > HIGH_VOLTAGE.value) cautions.push(`${label} switch node: ${fmtValue(t.switchPeakVoltage, "V")} peak, above ${HIGH_VOLTAGE.value} V: ${HIGH_VOLTAGE.meaning}; follow local codes, regulations and licensed practice`);
     }
     const iRms = rmsFromPeak(t.current);
     const j = iRms / copperArea(t.coil);
-    checks.push(checkRating(`${label} winding current density (RMS)`, j * 1e-6, "A/mm²", WINDING_CURRENT_DENSITY.value * 1e-6));
+    checks.push(checkRatingCore(`${label} winding current density (RMS)`, j * 1e-6, "A/mm²", WINDING_CURRENT_DENSITY.value * 1e-6));
     const lossSource = t.coilLoss !== undefined ? "given" : "coilResistance";
     const loss = t.coilLoss ?? iRms * iRms * coilResistance(t.coil, f);
     const surface = windingSurface(t.coil);
     const rise = mcLymanRise(loss, surface);
-    checks.push(checkRating(`${label} winding temperature rise`, rise, "K", WINDING_TEMPERATURE_RISE.value));
+    checks.push(checkRatingCore(`${label} winding temperature rise`, rise, "K", WINDING_TEMPERATURE_RISE.value));
     return { label, checks, currentDensity: j, windingLoss: loss, windingLossSource: lossSource, windingSurface: surface, temperatureRise: rise };
   });
   const receivers = d.receivers.map((r, k): ReceiverStress => {
@@ -133,7 +133,7 @@ export function componentStress(design: SafetyDesign): ComponentStress {
     const checks: RatingCheck[] = [];
     r.leds.forEach((led, n) => {
       const name = `${label} ${led.label ?? `LED ${n + 1}`} current (average)`;
-      checks.push(checkRating(name, led.averageCurrent, "A", led.ratedCurrent ?? TYPICAL_INDICATOR_LED.ratedCurrent, led.maximumCurrent ?? TYPICAL_INDICATOR_LED.maximumCurrent));
+      checks.push(checkRatingCore(name, led.averageCurrent, "A", led.ratedCurrent ?? TYPICAL_INDICATOR_LED.ratedCurrent, led.maximumCurrent ?? TYPICAL_INDICATOR_LED.maximumCurrent));
     });
     if (r.capacitor) checks.push(...capacitorChecks(`${label} capacitor`, r.capacitor, f, cautions));
     return { label, checks };

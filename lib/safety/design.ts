@@ -7,6 +7,7 @@
  */
 import * as z from "../zod.ts";
 import { parseInput, angle, capacitance, current, frequency, length, power, voltage, lazySchema } from "../schema.ts";
+import { TanklightInputError, describeValue, requireObject } from "../errors.ts";
 import { PoseInput, TransmitterInput, LinkSystemInput, systemTransmitters, type DriveParsed, type LinkSystem } from "../circuit/link/schema.ts";
 import type { LinkSolution } from "../circuit/link.ts";
 import type { TransmitterState, ReceiverState } from "../circuit/link/result.ts";
@@ -43,6 +44,9 @@ export const SafetyTransmitterInput = lazySchema(() => z.strictObject({
   coilLoss: power().optional(),
 }));
 
+/** |surfaceHeight| ≤ 100 km: the exposure grid and metal objects above it stay within the field sums' ±1000 km (GEOMETRY_LIMITS). */
+const SURFACE_LIMIT = 1e5;
+
 /** One LED on a token, with its operating current and ratings. */
 export const SafetyLedInput = lazySchema(() => z.strictObject({
   label: z.string().optional(),
@@ -69,7 +73,7 @@ export const SafetyDesignInput = lazySchema(() => z.strictObject({
   frequency: frequency(),
   transmitters: z.array(SafetyTransmitterInput).min(1),
   /** the surface people touch: its height z in the world frame, m (points with z ≥ it are accessible) */
-  surfaceHeight: length({ positive: false }),
+  surfaceHeight: length({ positive: false, min: -SURFACE_LIMIT, max: SURFACE_LIMIT }),
   receivers: z.array(SafetyReceiverInput).default([]),
 }));
 
@@ -80,6 +84,7 @@ export type SafetyDesignParsed = z.output<typeof SafetyDesignInput>;
 
 /** Validates a design once; every check calls it (a parsed design passes through unchanged). */
 export function parseSafetyDesign(design: SafetyDesign, where: string): SafetyDesignParsed {
+  requireObject(design, "design", where);
   return parseInput(SafetyDesignInput, design, where);
 }
 
@@ -94,6 +99,16 @@ export interface DesignFromLinkOptions {
   /** RMS current rating of the tank capacitors, A RMS */
   readonly capacitorCurrentRating?: number;
 }
+
+/** designFromLink's opts (strict: a typo names the nearest key). */
+const DesignFromLinkInput = lazySchema(() => z.strictObject({
+  opts: z.strictObject({
+    surfaceHeight: length({ positive: false }),
+    tokenSize: z.union([length(), z.array(length())]).optional(),
+    switchRating: voltage({ positive: true }).optional(),
+    capacitorCurrentRating: current({ positive: true }).optional(),
+  }),
+}));
 
 type SystemTransmitter = z.output<typeof TransmitterInput>;
 
@@ -152,18 +167,31 @@ function transmitterOf(tx: SystemTransmitter, drive: DriveParsed | undefined, st
  */
 export function designFromLink(system: LinkSystem, solution: LinkSolution, opts: DesignFromLinkOptions): SafetyDesign {
   const where = "designFromLink";
+  requireObject(system, "system", where);
   const s = parseInput(LinkSystemInput, system, where);
-  const states = solution.transmitters;
+  opts = parseInput(DesignFromLinkInput, { opts }, where).opts;
   const txs = systemTransmitters(s);
+  checkSolution(solution, txs.length, s.receivers.length, where);
+  const states = solution.transmitters;
   // a coil on a shared drive sees that drive's switch
-  const driveOf = (tx: SystemTransmitter): DriveParsed | undefined =>
-    typeof tx.drive === "string" ? s.sharedDrives?.find((d) => d.name === tx.drive)?.drive : tx.drive;
+  const driveOf = (tx: SystemTransmitter, i: number): DriveParsed | undefined => {
+    if (typeof tx.drive !== "string") return tx.drive;
+    const shared = s.sharedDrives?.find((d) => d.name === tx.drive);
+    if (shared === undefined) {
+      const path = s.transmitters === undefined ? "system.transmitter.drive" : `system.transmitters[${i}].drive`;
+      throw new TanklightInputError([{ path, message: `names no shared drive (known: ${(s.sharedDrives ?? []).map((d) => `'${d.name}'`).join(", ") || "none"})`, value: tx.drive }], where);
+    }
+    return shared.drive;
+  };
+  if (Array.isArray(opts.tokenSize) && opts.tokenSize.length !== s.receivers.length) {
+    throw new TanklightInputError([{ path: "opts.tokenSize", message: `gives ${opts.tokenSize.length} sizes for ${s.receivers.length} receivers (one number for all, or one per receiver)`, value: opts.tokenSize }], where);
+  }
   const base = (txs[0]!.pose?.position[2] as number | undefined) ?? 0;
   const sizes = opts.tokenSize;
   return {
     frequency: solution.frequency,
     surfaceHeight: base + opts.surfaceHeight,
-    transmitters: txs.map((tx, i) => transmitterOf(tx, driveOf(tx), states[i] ?? states[0]!, opts)),
+    transmitters: txs.map((tx, i) => transmitterOf(tx, driveOf(tx, i), states[i]!, opts)),
     receivers: solution.receivers.map((r: ReceiverState, k) => {
       const cap = s.receivers[k]?.capacitor;
       const size = typeof sizes === "number" ? sizes : sizes?.[k];
@@ -184,4 +212,17 @@ export function designFromLink(system: LinkSystem, solution: LinkSolution, opts:
       };
     }),
   };
+}
+
+/** The solution must be solveLink's result for this system: its transmitter and receiver lists match the system's. */
+function checkSolution(solution: unknown, transmitters: number, receivers: number, where: string): void {
+  requireObject(solution, "solution", where);
+  const sol = solution as { transmitters?: unknown; receivers?: unknown; frequency?: unknown };
+  const count = (x: unknown): number => (Array.isArray(x) ? x.length : -1);
+  if (count(sol.transmitters) !== transmitters || count(sol.receivers) !== receivers || !(typeof sol.frequency === "number" && sol.frequency > 0 && Number.isFinite(sol.frequency))) {
+    throw new TanklightInputError(
+      [{ path: "solution", message: `must be what solveLink returned for this system (${transmitters} transmitter(s), ${receivers} receiver(s), a frequency)`, value: `${count(sol.transmitters)} transmitter(s), ${count(sol.receivers)} receiver(s), frequency ${describeValue(sol.frequency)}` }],
+      where,
+    );
+  }
 }

@@ -3,7 +3,9 @@
  * 300 m with the full near/far-field expressions, against 47 CFR 15.209 and CEPT ERC/REC 70-03
  * Annex 9. An estimate, not a compliance test.
  */
+import * as z from "../zod.ts";
 import { MU0, SPEED_OF_LIGHT } from "../constants.ts";
+import { lazySchema, length, parseArgs } from "../schema.ts";
 import type { Pose, Vec3 } from "../em/types.ts";
 import { parseSafetyDesign, type SafetyDesign } from "./design.ts";
 import { momentPerAmpere } from "./geometry.ts";
@@ -78,14 +80,29 @@ export const DIPOLE_MODEL =
 /**
  * Magnetic-dipole field magnitude, A/m (same convention as m), largest over directions:
  * on the axis m√(1+(kr)²)/(2πr³), broadside m√(1−(kr)²+(kr)⁴)/(4πr³) (Cochran & Heinrich §7.5).
+ * @param moment dipole moment, A·m², 0 … 1e9 (a 1000-turn, 1 m² coil at 1000 A is 1e6).
+ * @param r distance, m (or "10 m"), 1 nm … 1e9 m (beyond these r³ leaves the double range).
+ * @param k wavenumber 2πf/c, 1/m, 0 … 1e6 (1e6 /m is 48 THz).
  * @example dipoleField(1, 10, 2*Math.PI*200e3/299792458) .value // → 1.5929e-4 (A/m, on the axis: near field at 10 m)
  */
-export function dipoleField(moment: number, r: number, k: number): { value: number; direction: "axis" | "broadside"; kr: number } {
+export function dipoleField(moment: number, r: number | string, k: number): { value: number; direction: "axis" | "broadside"; kr: number } {
+  if (!(typeof r === "number" && inRange(moment, 0, 1e9) && inRange(r, 1e-9, 1e9) && inRange(k, 0, 1e6))) ({ moment, r, k } = parseArgs(DipoleArgs, [moment, r, k], "dipoleField"));
+  return dipoleFieldCore(moment, r as number, k);
+}
+
+/** dipoleField for checked numbers (emissionEstimate's distances 10–300 m). */
+function dipoleFieldCore(moment: number, r: number, k: number): { value: number; direction: "axis" | "broadside"; kr: number } {
   const kr = k * r;
   const axis = (moment * Math.sqrt(1 + kr * kr)) / (2 * Math.PI * r ** 3);
   const side = (moment * Math.sqrt(1 - kr * kr + kr ** 4)) / (4 * Math.PI * r ** 3);
   return axis >= side ? { value: axis, direction: "axis", kr } : { value: side, direction: "broadside", kr };
 }
+
+const inRange = (x: unknown, lo: number, hi: number): boolean => typeof x === "number" && x >= lo && x <= hi;
+const bounded = (lo: number, hi: number, unit: string) =>
+  z.number({ error: `must be a finite number in ${unit}` }).min(lo, { error: `must be ≥ ${lo} ${unit}` }).max(hi, { error: `must be ≤ ${hi} ${unit} (beyond it the field leaves the double range or the model's meaning)` });
+/** dipoleField's arguments, checked by name when a plain call is out of range. */
+const DipoleArgs = lazySchema(() => z.strictObject({ moment: bounded(0, 1e9, "A·m²"), r: length({ min: 1e-9, max: 1e9 }), k: bounded(0, 1e6, "1/m") }));
 
 /** Distances at which the field is reported, m. */
 export const EMISSION_DISTANCES = [10, 30, 300] as const;
@@ -133,7 +150,7 @@ export function emissionEstimate(design: SafetyDesign): EmissionEstimate {
   }
   const zDb = decibels(FREE_SPACE_IMPEDANCE, 1);
   const at = (r: number): FieldAtDistance => {
-    const h = dipoleField(momentRms, r, k);
+    const h = dipoleFieldCore(momentRms, r, k);
     const dBuAm = decibels(h.value, 1e-6);
     return { distance: r, fieldStrength: h.value, dBuAm, dBuVm: dBuAm + zDb, direction: h.direction, kr: h.kr };
   };

@@ -4,7 +4,9 @@
  * 70-03 Annex 9 (magnetic field at 10 m). Frequencies in Hz; rows hold on closed bands. For
  * estimates only — never a compliance test.
  */
+import * as z from "../zod.ts";
 import type { SourceStatus } from "./referenceLevels.ts";
+import { frequency, lazySchema, oneOf, parseArgs } from "../schema.ts";
 
 /** One row of an emission rule. */
 export interface EmissionRow {
@@ -77,10 +79,21 @@ export const EMISSION_RULES: readonly EmissionRule[] = [
 /**
  * The rows of a rule that hold at f (Hz): both edges of a band included, and a specific narrow
  * band replaces the general rows strictly inside it.
+ * @param rule one of EMISSION_RULES, or its id ("47 CFR 15.209").
+ * @param f frequency, Hz (or "200 kHz").
  * @example emissionRows(EMISSION_RULES[1], 200e3)[0].limitDb(200e3) // → -15 (dBµA/m at 10 m, CEPT 70-03 Annex 9)
  */
-export function emissionRows(rule: EmissionRule, f: number): EmissionRow[] {
-  const hold = rule.rows.filter((r) => f >= r.fMin && f <= r.fMax);
+export function emissionRows(rule: EmissionRule | EmissionRule["id"], f: number | string): EmissionRow[] {
+  let known = EMISSION_RULES.find((x) => x === rule || x.id === rule);
+  if (known === undefined || !(typeof f === "number" && f > 0 && f < Infinity)) {
+    const args = parseArgs(EmissionRowsArgs, [EMISSION_RULES.includes(rule as EmissionRule) ? (rule as EmissionRule).id : rule, f], "emissionRows");
+    known = EMISSION_RULES.find((x) => x.id === args.rule)!;
+    f = args.f;
+  }
+  const hold = known.rows.filter((r) => f >= r.fMin && f <= r.fMax);
   const inside = hold.filter((r) => r.specific && f > r.fMin && f < r.fMax);
   return inside.length > 0 ? inside : hold;
 }
+
+/** emissionRows' arguments when not plain: a carried rule's id and a frequency. */
+const EmissionRowsArgs = lazySchema(() => z.strictObject({ rule: oneOf(EMISSION_RULES.map((x) => x.id)), f: frequency() }));

@@ -6,7 +6,8 @@
  */
 import * as z from "../zod.ts";
 import { parseInput, length, lazySchema } from "../schema.ts";
-import { TanklightInputError } from "../errors.ts";
+import { requireObject } from "../errors.ts";
+import { GEOMETRY_LIMITS } from "../em/inputs.ts";
 import { MU0 } from "../constants.ts";
 import type { Pose, Vec3 } from "../em/types.ts";
 import { parseSafetyDesign, type SafetyDesign, type SafetyDesignParsed } from "./design.ts";
@@ -22,7 +23,12 @@ import {
   type SourceStatus,
 } from "./referenceLevels.ts";
 
-const range = lazySchema(() => z.tuple([length({ positive: false }), length({ positive: false })]));
+/** Highest grid height above the surface, m: a person is not found 1 km above a table (and the grid stays within the field sums' range). */
+const MAX_GRID_HEIGHT = 1000;
+/** an increasing pair [min, max] of world coordinates, within the field sums' ±1000 km (GEOMETRY_LIMITS) */
+const range = lazySchema(() =>
+  z.tuple([length({ positive: false, min: -GEOMETRY_LIMITS.maxLength, max: GEOMETRY_LIMITS.maxLength }), length({ positive: false, min: -GEOMETRY_LIMITS.maxLength, max: GEOMETRY_LIMITS.maxLength })])
+    .refine((r) => r[1] > r[0], { error: "must be an increasing pair [min, max] in m" }));
 
 /** Options of {@link exposureCheck}. */
 export const ExposureOptionsInput = lazySchema(() => z.strictObject({
@@ -31,7 +37,7 @@ export const ExposureOptionsInput = lazySchema(() => z.strictObject({
   /** accessible y range (world), m; default as x */
   y: range.optional(),
   /** heights above the surface, m: [lowest, highest]; default [0, 0.3] */
-  height: z.tuple([length({ nonNegative: true }), length({ positive: true })]).optional(),
+  height: z.tuple([length({ nonNegative: true, max: MAX_GRID_HEIGHT }), length({ positive: true, max: MAX_GRID_HEIGHT })]).refine((r) => r[1] > r[0], { error: "must be an increasing pair [lowest, highest] in m" }).optional(),
   /** grid points along x, y and height; default 41, 41, 11 */
   nx: z.int().min(2).max(1001).optional(),
   ny: z.int().min(2).max(1001).optional(),
@@ -160,9 +166,6 @@ function gridOf(o: z.output<typeof ExposureOptionsInput>, sources: readonly Fiel
   const xr = o.x ?? [x0 - margin, x1 + margin];
   const yr = o.y ?? [y0 - margin, y1 + margin];
   const hr = o.height ?? [0, 0.3];
-  for (const [name, r] of [["x", xr], ["y", yr], ["height", hr]] as const) {
-    if (!(r[1] > r[0])) throw new TanklightInputError([{ path: name, message: "must be an increasing pair [min, max] in m", value: r }], "exposureCheck");
-  }
   const nx = o.nx ?? 41, ny = o.ny ?? 41, nz = o.nz ?? 11;
   // level points: the nx·ny plane, repeated at each height
   const xs = new Float64Array(nx * ny), ys = new Float64Array(nx * ny);
@@ -238,6 +241,7 @@ function discFluxes(sources: readonly FieldSource[], cx: Float64Array, cy: Float
 export function exposureCheck(design: SafetyDesign, options: ExposureOptions = {}): ExposureCheck {
   const where = "exposureCheck";
   const d = parseSafetyDesign(design, where);
+  requireObject(options, "options", where);
   const o = parseInput(ExposureOptionsInput, options, where);
   const f = d.frequency;
   const sources = sourcesOf(d);

@@ -4,9 +4,10 @@
  */
 import * as z from "../zod.ts";
 import { parseInput, length, resistivity, vec3, lazySchema } from "../schema.ts";
-import { TanklightInputError } from "../errors.ts";
+import { TanklightInputError, requireObject } from "../errors.ts";
 import { MU0 } from "../constants.ts";
 import { COPPER, ALUMINIUM, type Material } from "../em/materials.ts";
+import { GEOMETRY_LIMITS } from "../em/inputs.ts";
 import { skinDepth } from "../em/losses/skinDepth.ts";
 import { selfInductance } from "../em/selfInductance.ts";
 import type { Coil, Pose, Vec3 } from "../em/types.ts";
@@ -40,7 +41,7 @@ export const MetalObjectInput = lazySchema(() => z.discriminatedUnion("kind", [
     thickness: length(),
     metal,
     /** centre of the object's lower face, world m; default: on the surface above the first transmitter */
-    position: vec3().optional(),
+    position: vec3({ min: -GEOMETRY_LIMITS.maxLength, max: GEOMETRY_LIMITS.maxLength }).optional(),
   }),
   z.strictObject({
     kind: z.literal("ring"),
@@ -52,7 +53,7 @@ export const MetalObjectInput = lazySchema(() => z.discriminatedUnion("kind", [
     /** wall thickness (radial), m */
     thickness: length(),
     metal,
-    position: vec3().optional(),
+    position: vec3({ min: -GEOMETRY_LIMITS.maxLength, max: GEOMETRY_LIMITS.maxLength }).optional(),
   }),
 ]));
 export type MetalObject = z.input<typeof MetalObjectInput>;
@@ -159,6 +160,7 @@ function fluxProfile(sources: readonly FieldSource[], c: Vec3, a: number): { rho
 export function metalHeating(design: SafetyDesign, object: MetalObject): MetalHeating {
   const where = "metalHeating";
   const d = parseSafetyDesign(design, where);
+  requireObject(object, "object", where);
   const o = parseInput(MetalObjectInput, object, where);
   const mat = materialOf(o.metal);
   const f = d.frequency, w = 2 * Math.PI * f;

@@ -2,6 +2,9 @@
  * Part ratings the safety checks compare with when a design gives none: a typical indicator LED,
  * and the winding current density of trade practice.
  */
+import * as z from "../zod.ts";
+import { DIMENSIONS, type Dimension } from "../units.ts";
+import { parseArgs, quantity } from "../schema.ts";
 
 /**
  * A typical 3–5 mm or 0603–1206 indicator LED: 20 mA rated continuous forward current, 30 mA
@@ -45,9 +48,41 @@ export function fmtValue(x: number, unit: string): string {
 /**
  * A value against a rating (and optionally an absolute maximum): the verdict, the ratio and a
  * sentence with the margin or the excess.
+ * Numbers are in `unit`; where `unit` is the SI unit of a dimension ("A", "V", "K") quantity
+ * strings are read too ("25 mA"). |value| ≤ 1e100 and ratings in [1e-100, 1e100] (the ratio
+ * stays in the double range).
  * @example checkRating("LED current", 0.502, "A", 0.02, 0.03).verdict // → "over absolute maximum"
+ * @example checkRating("LED current", "25 mA", "A", "20 mA").verdict // → "over rating"
  */
-export function checkRating(what: string, value: number, unit: string, rating?: number, maximum?: number): RatingCheck {
+export function checkRating(what: string, value: number | string, unit: string, rating?: number | string, maximum?: number | string): RatingCheck {
+  const plain = typeof what === "string" && typeof unit === "string" && inRange(value, -BOUND, BOUND) && (rating === undefined || inRange(rating, 1 / BOUND, BOUND)) && (maximum === undefined || inRange(maximum, 1 / BOUND, BOUND));
+  if (!plain) ({ what, value, unit, rating, maximum } = parseArgs(ratingArgs(unit), [what, value, unit, rating, maximum], "checkRating"));
+  return checkRatingCore(what, value as number, unit, rating as number | undefined, maximum as number | undefined);
+}
+
+/** Values and ratings beyond ±1e100 would give ratios outside the double range. */
+const BOUND = 1e100;
+const inRange = (x: unknown, lo: number, hi: number): x is number => typeof x === "number" && x >= lo && x <= hi;
+
+/** checkRating's arguments, checked by name; quantity strings where the unit is a dimension's SI unit. */
+function ratingArgs(unit: unknown) {
+  const dimension = (Object.keys(DIMENSIONS) as Dimension[]).find((d) => DIMENSIONS[d].unit !== "" && DIMENSIONS[d].unit === unit);
+  const why = "(beyond it the ratio leaves the double range)";
+  const num = (min: number) =>
+    dimension !== undefined
+      ? quantity(dimension, { min, max: BOUND })
+      : z.number({ error: `must be a finite number in the unit given (a quantity string is read only when unit is an SI unit symbol such as 'A' or 'V'; unit is ${typeof unit === "string" ? `'${unit}'` : "not a string"})` }).min(min, { error: `must be ≥ ${min} ${why}` }).max(BOUND, { error: `must be ≤ ${BOUND} ${why}` });
+  return z.strictObject({
+    what: z.string({ error: "must be a string naming what is checked" }),
+    value: num(-BOUND),
+    unit: z.string({ error: "must be a unit symbol (a string)" }),
+    rating: num(1 / BOUND).optional(),
+    maximum: num(1 / BOUND).optional(),
+  });
+}
+
+/** checkRating for checked numbers (componentStress's parts). */
+export function checkRatingCore(what: string, value: number, unit: string, rating?: number, maximum?: number): RatingCheck {
   if (rating === undefined) return { what, value, unit, verdict: "no rating given", text: `${what}: ${fmtValue(value, unit)} (no rating given)` };
   const ratio = value / rating;
   if (maximum !== undefined && value > maximum) {

@@ -5,7 +5,9 @@
  * the edge between two rows both hold and the lower value is taken. Outside every row a
  * standard is "not covered" at that frequency (not a pass).
  */
+import * as z from "../zod.ts";
 import { MU0 } from "../constants.ts";
+import { frequency as frequencyQ, lazySchema, oneOf, parseArgs } from "../schema.ts";
 
 /** Who is exposed: the general public or workers who know of the exposure (occupational). */
 export type Population = "public" | "occupational";
@@ -152,9 +154,12 @@ function band(r: LevelRow): string {
  * @example referenceLevel("ICNIRP 2010", "public", 200e3)?.flux // → 2.7e-5 (T RMS, Table 4)
  * @example referenceLevel("ICNIRP 1998", "public", 150e3)?.flux // → 6.133e-6 (edge: 0.92/0.15 µT beats 6.25 µT)
  */
-export function referenceLevel(standard: ExposureStandardId, population: Population, frequency: number): ReferenceLevel | undefined {
-  const s = EXPOSURE_STANDARDS.find((x) => x.id === standard);
-  if (!s) return undefined;
+export function referenceLevel(standard: ExposureStandardId, population: Population, frequency: number | string): ReferenceLevel | undefined {
+  let s = EXPOSURE_STANDARDS.find((x) => x.id === standard);
+  if (s === undefined || !plainArgs(population, frequency)) {
+    ({ standard, population, frequency } = parseArgs(ReferenceLevelArgs, [standard, population, frequency], "referenceLevel"));
+    s = EXPOSURE_STANDARDS.find((x) => x.id === standard)!;
+  }
   let best: { row: LevelRow; flux: number } | undefined;
   for (const row of s.rows[population]) {
     if (frequency < row.fMin || frequency > row.fMax) continue;
@@ -188,7 +193,8 @@ export interface BasicRestriction {
  * (occupational), f in Hz, RMS, averaged over a 2×2×2 mm³ contiguous tissue volume.
  * @example basicRestriction("public", 200e3)?.field // → 27 (V/m RMS)
  */
-export function basicRestriction(population: Population, frequency: number): BasicRestriction | undefined {
+export function basicRestriction(population: Population, frequency: number | string): BasicRestriction | undefined {
+  if (!plainArgs(population, frequency)) ({ population, frequency } = parseArgs(BasicRestrictionArgs, [population, frequency], "basicRestriction"));
   if (frequency < 3 * kHz || frequency > 10 * MHz) return undefined;
   const k = population === "public" ? 1.35e-4 : 2.7e-4;
   return {
@@ -198,3 +204,14 @@ export function basicRestriction(population: Population, frequency: number): Bas
     status: "checked",
   };
 }
+
+/** A population word and a frequency in Hz as the exposure check passes them (no parse needed). */
+function plainArgs(population: unknown, frequency: unknown): frequency is number {
+  return (population === "public" || population === "occupational") && typeof frequency === "number" && frequency > 0 && frequency < Infinity;
+}
+
+const population = () => oneOf(["public", "occupational"] as const);
+/** referenceLevel's arguments, checked by name when they are not plain (a quantity string, a typo, NaN). */
+const ReferenceLevelArgs = lazySchema(() => z.strictObject({ standard: oneOf(EXPOSURE_STANDARDS.map((x) => x.id)), population: population(), frequency: frequencyQ() }));
+/** basicRestriction's arguments, likewise. */
+const BasicRestrictionArgs = lazySchema(() => z.strictObject({ population: population(), frequency: frequencyQ() }));

@@ -2,11 +2,14 @@
  * safetyReport: every safety check of a design in one record, with margins, plus the same as
  * Markdown lines for a report or casebook notebook to print.
  */
+import * as z from "../zod.ts";
+import { TanklightInputError } from "../errors.ts";
+import { lazySchema, parseInput } from "../schema.ts";
 import { parseSafetyDesign, type SafetyDesign } from "./design.ts";
-import { exposureCheck, type ExposureCheck, type ExposureOptions } from "./exposure.ts";
+import { exposureCheck, ExposureOptionsInput, type ExposureCheck, type ExposureOptions } from "./exposure.ts";
 import { emissionEstimate, type EmissionEstimate } from "./emission.ts";
 import { componentStress, type ComponentStress } from "./componentStress.ts";
-import { metalHeating, type MetalHeating, type MetalObject } from "./metalHeating.ts";
+import { metalHeating, MetalObjectInput, type MetalHeating, type MetalObject } from "./metalHeating.ts";
 import { cautions, type Caution } from "./cautions.ts";
 import { fmtValue } from "./partRatings.ts";
 
@@ -55,10 +58,11 @@ export interface SafetyReport {
  */
 export function safetyReport(design: SafetyDesign, options: SafetyReportOptions = {}): SafetyReport {
   const d = parseSafetyDesign(design, "safetyReport");
-  const exposure = exposureCheck(d, options.exposure ?? {});
+  const o = parseInput(SafetyReportArgs, { options }, "safetyReport").options ?? {};
+  const exposure = exposureCheck(d, o.exposure ?? {});
   const emission = emissionEstimate(d);
   const stress = componentStress(d);
-  const metal = (options.metalObjects ?? DEFAULT_METAL_OBJECTS).map((o) => metalHeating(d, o));
+  const metal = (o.metalObjects ?? DEFAULT_METAL_OBJECTS).map((m, i) => metalOf(d, m, i));
   const list = cautions(d, { exposure, emission, metal });
   const attention = [
     ...exposure.referenceLevels.filter((l) => l.verdict === "exceeds" && l.status === "checked").map((l) => l.text),
@@ -68,6 +72,21 @@ export function safetyReport(design: SafetyDesign, options: SafetyReportOptions 
     ...metal.filter((m) => m.verdict === "caution").map((m) => m.text),
   ];
   return { exposure, emission, stress, metal, cautions: list, attention, markdown: markdownOf(exposure, emission, stress, metal, list) };
+}
+
+/** safetyReport's options (strict: a typo names the nearest key; fields checked as exposureCheck and metalHeating check them). */
+const SafetyReportArgs = lazySchema(() => z.strictObject({
+  options: z.strictObject({ exposure: ExposureOptionsInput.optional(), metalObjects: z.array(MetalObjectInput).optional() }).optional(),
+}));
+
+/** metalHeating of one object; its cross-field error (an object below the surface) named under safetyReport's option. */
+function metalOf(d: Parameters<typeof metalHeating>[0], object: MetalObject, i: number): MetalHeating {
+  try {
+    return metalHeating(d, object);
+  } catch (e) {
+    if (!(e instanceof TanklightInputError)) throw e;
+    throw new TanklightInputError(e.issues.map((x) => ({ ...x, path: x.path.replace(/^object/, `options.metalObjects[${i}]`) })), "safetyReport");
+  }
 }
 
 function markdownOf(exposure: ExposureCheck, emission: EmissionEstimate, stress: ComponentStress, metal: readonly MetalHeating[], list: readonly Caution[]): string[] {

@@ -21,10 +21,6 @@ const NOT_YET_FUZZED: Readonly<Record<string, readonly string[]>> = {
   "link (harmonic balance, shooting, network internals)": [
     "solveLinkHarmonic", "solveLinkModel", "fundamentalCheck", "periodicSteadyState", "linkNetwork", "solveLinkNetwork", "summarizeLink", "tokenLoadModel",
   ],
-  "safety": [
-    "designFromLink", "referenceLevel", "basicRestriction", "exposureCheck", "emissionEstimate", "dipoleField", "emissionRows", "metalHeating",
-    "componentStress", "checkRating", "cautions", "safetyReport", "supplyBudget", "supplyVerdict",
-  ],
   "analysis": ["coverageMap", "findRange", "taskPool", "toleranceYield", "wilsonInterval", "searchDesign", "calibrate", "predictToken", "predictRange", "drivePlausibility"],
   "report": [
     "renderSvg", "ledSwatch", "notebook", "partsList", "partVoltages", "wireText", "notebookMarkdown", "notebookHtml", "notebookText", "renderNotebook",

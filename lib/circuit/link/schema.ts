@@ -5,6 +5,7 @@
 import * as z from "../../zod.ts";
 import { angle, capacitance, frequency, quantity, resistance, temperature, unitVector, vec3, voltage, lazySchema } from "../../schema.ts";
 import type { Coil } from "../../em/types.ts";
+import { GEOMETRY_LIMITS } from "../../em/inputs.ts";
 import { TanklightInputError } from "../../errors.ts";
 import { DRIVE_FIELDS, type DriveEquivalent } from "../drive.ts";
 import type { TokenLoad } from "../loads/types.ts";
@@ -22,7 +23,8 @@ const coilSchema = lazySchema(() => z.custom<Coil>(
 
 /** A pose: position (lengths), axis (direction, default +z), spin (angle, default 0). */
 export const PoseInput = lazySchema(() => z.strictObject({
-  position: vec3(),
+  /** within ±1000 km, as the EM layer's poses (GEOMETRY_LIMITS: beyond it the field sums lose every digit) */
+  position: vec3({ min: -GEOMETRY_LIMITS.maxLength, max: GEOMETRY_LIMITS.maxLength }),
   axis: unitVector().optional(),
   spin: angle().optional(),
 }));
