@@ -83,17 +83,7 @@ export function reservoirSteadyState(
   frequency?: number,
   branch?: JunctionBranch,
 ): ReservoirState {
-  const where = "reservoirSteadyState";
-  requireJunction(diode, "diode", where);
-  if (!(led !== null && typeof led === "object" && typeof led.current === "function" && typeof led.conductance === "function")) {
-    throw new TanklightInputError([{ path: "led", message: "must be an LED (or any load with current(v) and conductance(v))", value: led }], where);
-  }
-  if (!(Number.isFinite(amplitude) && amplitude >= 0)) {
-    throw new TanklightInputError([{ path: "amplitude", message: "must be a finite number ≥ 0 V", value: amplitude }], where);
-  }
-  if (!(Number.isFinite(seriesResistance) && seriesResistance >= 0)) {
-    throw new TanklightInputError([{ path: "seriesResistance", message: "must be a finite number ≥ 0 Ω", value: seriesResistance }], where);
-  }
+  checkReservoirArgs(diode, led, amplitude, seriesResistance);
   const br = branch ?? new JunctionBranch(diode.is, diode.n * diode.thermalVoltage, diode.rs + seriesResistance);
   const gl = diode.leakage;
   if (amplitude === 0) {
@@ -153,6 +143,21 @@ export function reservoirSteadyState(
     ...(ripple !== undefined ? { ripple } : {}),
     warnings,
   };
+}
+
+/** reservoirSteadyState's argument checks (the diode a junction, the LED a current(v)/conductance(v) load, A and R finite and ≥ 0). */
+function checkReservoirArgs(diode: Diode, led: Pick<Led, "current" | "conductance">, amplitude: number, seriesResistance: number): void {
+  const where = "reservoirSteadyState";
+  requireJunction(diode, "diode", where);
+  if (!(led !== null && typeof led === "object" && typeof led.current === "function" && typeof led.conductance === "function")) {
+    throw new TanklightInputError([{ path: "led", message: "must be an LED (or any load with current(v) and conductance(v))", value: led }], where);
+  }
+  if (!(Number.isFinite(amplitude) && amplitude >= 0)) {
+    throw new TanklightInputError([{ path: "amplitude", message: "must be a finite number ≥ 0 V", value: amplitude }], where);
+  }
+  if (!(Number.isFinite(seriesResistance) && seriesResistance >= 0)) {
+    throw new TanklightInputError([{ path: "seriesResistance", message: "must be a finite number ≥ 0 Ω", value: seriesResistance }], where);
+  }
 }
 
 /** The result of {@link currentFedBridge}. */
