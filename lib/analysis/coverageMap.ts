@@ -202,33 +202,11 @@ function world(fixed: Readonly<Partial<Record<"x" | "y" | "z", number>>>, names:
   return [p.x, p.y, p.z];
 }
 
-/** Evaluates positions in chunks (in flight together so a pool keeps every thread busy). */
-async function evaluateChunks(ctx: Ctx, positions: Float64Array): Promise<ProbeValues> {
+/** Evaluates positions (in this thread or shared across the pool: ./pool.ts), reporting progress. */
+async function evaluatePositions(ctx: Ctx, positions: Float64Array): Promise<ProbeValues> {
   const count = positions.length / 3;
-  const chunk = Math.max(64, Math.ceil(count / (ctx.evaluator.threads * 8)));
-  const parts: Promise<ProbeValues>[] = [];
-  for (let s = 0; s < count; s += chunk) {
-    const e = Math.min(count, s + chunk);
-    parts.push(
-      ctx.evaluator.evaluate(positions.slice(3 * s, 3 * e)).then((v) => {
-        ctx.progress.done(e - s);
-        return v;
-      }),
-    );
-  }
-  const results = await Promise.all(parts);
-  const current = new Float64Array(count);
-  const mutual = new Float64Array(count * ctx.na);
-  const supply = new Float64Array(count);
-  let unconverged = 0;
-  let at = 0;
-  for (const r of results) {
-    current.set(r.current, at);
-    mutual.set(r.mutual, at * ctx.na);
-    supply.set(r.supply, at);
-    at += r.current.length;
-    unconverged += r.unconverged;
-  }
+  const values = await ctx.evaluator.evaluate(positions, (units) => ctx.progress.done(units));
+  const { current, supply, unconverged } = values;
   ctx.solves += count * ctx.na;
   ctx.unconverged += unconverged;
   for (let p = 0; p < count; p++) {
@@ -238,7 +216,7 @@ async function evaluateChunks(ctx: Ctx, positions: Float64Array): Promise<ProbeV
     else if (current[p]! < ctx.weakest.current) ctx.weakest = { position: ctx.weakest.position, current: current[p]! };
     if (supply[p]! > ctx.maxSupply) ctx.maxSupply = supply[p]!;
   }
-  return { current, mutual, supply, unconverged };
+  return values;
 }
 
 async function runMap(
@@ -280,7 +258,7 @@ async function runMap(
   const rows = total / n0;
   for (let r0 = 0; r0 < rows; r0 += rowsPerTile) {
     const r1 = Math.min(rows, r0 + rowsPerTile);
-    const v = await evaluateChunks(ctx, gridPositions(axes, fixed, r0 * n0, r1 * n0));
+    const v = await evaluatePositions(ctx, gridPositions(axes, fixed, r0 * n0, r1 * n0));
     ledCurrent.set(v.current, r0 * n0);
     mutual.set(v.mutual, r0 * n0 * na);
     supplyCurrent.set(v.supply, r0 * n0);
@@ -458,7 +436,7 @@ async function refineLine(ctx: Ctx, axis: GridAxis, at: (u: number) => Vec3, coa
     }
   }
   ctx.progress.add(positions.length / 3);
-  const fine = positions.length > 0 ? await evaluateChunks(ctx, positions) : undefined;
+  const fine = positions.length > 0 ? await evaluatePositions(ctx, positions) : undefined;
   const su: number[] = [];
   const sc: number[] = [];
   let f = 0;
@@ -580,7 +558,7 @@ async function refinePlane(
       positions[3 * k + 2] = p[2];
     });
     ctx.progress.add(need.length);
-    const vals = need.length > 0 ? await evaluateChunks(ctx, positions) : undefined;
+    const vals = need.length > 0 ? await evaluatePositions(ctx, positions) : undefined;
     need.forEach((key, k) => {
       slot.set(key, fineCur.length);
       fineCur.push(vals!.current[k]!);

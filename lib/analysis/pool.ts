@@ -14,14 +14,19 @@ import { pathToFileURL } from "node:url";
 import type { ProbeSpec, ProbeValues, Probe } from "./probe.ts";
 import { transferable, portableSpec, MISSING_PROBE } from "./probe.ts";
 import type { WorkerTask } from "./worker.ts";
+import { sharedBatch, SHARED_DONE, SHARED_UNCONVERGED, POINTS_PER_CLAIM } from "./sharedBatch.ts";
 import { TanklightInputError } from "../errors.ts";
 
 /** Something that solves token positions: in this thread or across a pool. */
 export interface PointEvaluator {
   readonly threads: number;
-  evaluate(positions: Float64Array): Promise<ProbeValues>;
+  /** solves every position ([x, y, z, …], m); `done(units)` is told as positions are solved */
+  evaluate(positions: Float64Array, done: (units: number) => void): Promise<ProbeValues>;
   close(): Promise<void>;
 }
+
+/** How often the progress of a shared batch is read, ms. */
+const PROGRESS_POLL_MS = 100;
 
 /** A pool of worker threads running ./worker.ts tasks. */
 export interface TaskPool {
@@ -82,12 +87,13 @@ export function checkThreads(threads: ThreadsOption, where: string): void {
 
 /**
  * An id derived from a spec's content (FNV-1a over its JSON), so a worker keeps the model it
- * built for one design across runs (repeated maps, a benchmark).
+ * built for one design across runs (repeated maps, a benchmark). Each coil's JSON is made once
+ * per coil object (a spec's `coils`: immutable; writing out their numbers was most of a map's cost on
+ * the main thread).
  */
 export function contentId(spec: unknown): string {
-  // no replacer (one call per value made this 20× slower): a typed array is written as an
-  // object of its entries, which is as faithful to the content
-  const text = JSON.stringify(spec);
+  const { coils, ...rest } = spec as { coils?: unknown };
+  const text = JSON.stringify(rest) + (Array.isArray(coils) ? coils.map((c: unknown) => (typeof c === "object" && c !== null ? coilText(c) : JSON.stringify(c))).join(",") : "");
   let h1 = 0x811c9dc5;
   let h2 = 0x01000193;
   for (let i = 0; i < text.length; i++) {
@@ -96,6 +102,17 @@ export function contentId(spec: unknown): string {
     h2 = Math.imul(h2 ^ c, 0x5bd1e995);
   }
   return `${(h1 >>> 0).toString(16)}${(h2 >>> 0).toString(16)}-${text.length}`;
+}
+
+/** Coils' JSON by coil object (immutable plain data from the builders). */
+const coilTexts = new WeakMap<object, string>();
+function coilText(coil: object): string {
+  let t = coilTexts.get(coil);
+  if (t === undefined) {
+    t = JSON.stringify(coil);
+    coilTexts.set(coil, t);
+  }
+  return t;
 }
 
 /** A unique id for a probe or run spec, so workers build each probe once. */
@@ -110,27 +127,73 @@ export type ThreadsOption = number | TaskPool | undefined;
  * An evaluator of token positions: the probe in this thread when one thread is asked for (or
  * the system's loads are ready-made functions that cannot cross to a worker), else a pool —
  * the caller's (left running) or one started for this run (closed by `close()`).
+ *
+ * On a pool a batch is shared, not split into tasks: the positions and the result arrays sit in
+ * shared memory, each thread gets one task and claims POINTS_PER_CLAIM positions at a
+ * time from an atomic counter until none are left (self-scheduling), writing each position's
+ * values at its own index. The main thread posts one message per thread and waits — no per-chunk
+ * messages to answer, no thread idle while the last chunks run — and the numbers are the same
+ * as one thread's, position by position. Progress is read from the shared counter every
+ * {@link PROGRESS_POLL_MS} ms.
  */
 export async function pointEvaluator(spec: ProbeSpec, threads: ThreadsOption, local: () => Probe): Promise<PointEvaluator> {
   const count = typeof threads === "object" ? threads.threads : (threads ?? 1);
   if (count <= 1 || !transferable(spec)) {
     const probe = local();
-    return { threads: 1, evaluate: async (positions) => probe.evaluate(positions), close: async () => {} };
+    return { threads: 1, evaluate: async (positions, done) => evaluateInChunks(probe, positions, done), close: async () => {} };
   }
   const owned = typeof threads !== "object";
   const pool = typeof threads === "object" ? threads : await taskPool(count);
   const portable = portableSpec(spec);
   const id = contentId(portable);
-  // the spec (≈ 14 kB of coils and parts: a few ms to clone each way) goes to a worker only when it
-  // has not built this probe yet — at most once per worker and design, nothing for a warm pool
-  const withSpec = (positions: Float64Array): Promise<ProbeValues> => pool.run<ProbeValues>({ kind: "probe", id, spec: portable, positions });
+  const na = spec.axes.length;
   return {
     threads: count,
-    evaluate: (positions) =>
-      pool.run<ProbeValues>({ kind: "probe", id, positions }).catch((e: unknown) => {
-        if (e instanceof Error && e.message.includes(MISSING_PROBE)) return withSpec(positions);
-        throw e;
-      }),
+    evaluate: async (positions, done) => {
+      const batch = sharedBatch(positions, na);
+      // the spec (≈ 14 kB of coils and parts: a few ms to clone each way) goes to a worker only when it
+      // has not built this probe yet — at most once per worker and design, nothing for a warm pool
+      const run = (): Promise<null> =>
+        pool.run<null>({ kind: "probeShared", id, batch }).catch((e: unknown) => {
+          if (e instanceof Error && e.message.includes(MISSING_PROBE)) return pool.run<null>({ kind: "probeShared", id, spec: portable, batch });
+          throw e;
+        });
+      let reported = 0;
+      const report = (): void => {
+        const d = Atomics.load(batch.counter, SHARED_DONE);
+        if (d > reported) done(d - reported);
+        reported = Math.max(reported, d);
+      };
+      const timer = setInterval(report, PROGRESS_POLL_MS);
+      try {
+        await Promise.all(Array.from({ length: count }, run));
+      } finally {
+        clearInterval(timer);
+      }
+      report(); // also orders this thread's reads after the workers' writes (an atomic read of what they last added)
+      return { current: batch.current.slice(), mutual: batch.mutual.slice(), supply: batch.supply.slice(), unconverged: Atomics.load(batch.counter, SHARED_UNCONVERGED) };
+    },
     close: () => (owned ? pool.close() : Promise.resolve()),
   };
+}
+
+/** The probe over positions in this thread, in about eight chunks so progress is reported as it goes. */
+function evaluateInChunks(probe: Probe, positions: Float64Array, done: (units: number) => void): ProbeValues {
+  const n = positions.length / 3;
+  const na = probe.spec.axes.length;
+  const chunk = Math.max(64, Math.ceil(n / 8));
+  const current = new Float64Array(n);
+  const mutual = new Float64Array(n * na);
+  const supply = new Float64Array(n);
+  let unconverged = 0;
+  for (let s = 0; s < n; s += chunk) {
+    const e = Math.min(n, s + chunk);
+    const v = probe.evaluate(positions.subarray(3 * s, 3 * e));
+    current.set(v.current, s);
+    mutual.set(v.mutual, s * na);
+    supply.set(v.supply, s);
+    unconverged += v.unconverged;
+    done(e - s);
+  }
+  return { current, mutual, supply, unconverged };
 }

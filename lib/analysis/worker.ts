@@ -3,13 +3,14 @@
  * Each worker keeps the probes it has built, by the spec id the main thread gave them, so a
  * probe (coupling evaluators, tabulated loads) is built once per worker and run.
  */
-import { makeProbe, MISSING_PROBE, type Probe, type ProbeSpec, type ProbeValues } from "./probe.ts";
+import { makeProbe, MISSING_PROBE, type Probe, type ProbeSpec } from "./probe.ts";
+import { solveShared, type SharedBatch } from "./sharedBatch.ts";
 import { makeYieldModel, type YieldModel, type YieldSpec, type YieldValues } from "./yieldModel.ts";
 import type { Candidate, DesignEvaluation, DesignProblem } from "./designEval.ts";
 
-/** A task for a worker: token positions of a probe, or samples of a yield model. */
+/** A task for a worker: its share of a batch of token positions (./sharedBatch.ts), samples of a yield model, or a design candidate. */
 export type WorkerTask =
-  | { readonly kind: "probe"; readonly id: string; readonly spec?: ProbeSpec; readonly positions: Float64Array }
+  | { readonly kind: "probeShared"; readonly id: string; readonly spec?: ProbeSpec; readonly batch: SharedBatch }
   | { readonly kind: "yield"; readonly id: string; readonly spec: YieldSpec; readonly draws: Float64Array }
   | { readonly kind: "design"; readonly candidate: Candidate; readonly problem: DesignProblem };
 
@@ -28,19 +29,21 @@ function cached<T extends Probe | YieldModel>(id: string, make: () => T): T {
 }
 
 /** Runs one task (called by tinypool in a worker thread). */
-export default async function runTask(task: WorkerTask): Promise<ProbeValues | YieldValues | DesignEvaluation> {
+export default async function runTask(task: WorkerTask): Promise<YieldValues | DesignEvaluation | null> {
   switch (task.kind) {
     case "design": {
       // design candidates build coils from their numbers: the builders (schemas, units) load on first use
       const { evaluateDesign } = await import("./designEval.ts");
       return evaluateDesign(task.candidate, task.problem);
     }
-    case "probe": {
-      // the spec travels only when this worker has not built the probe yet (see pointEvaluator)
+    case "probeShared": {
+      // the spec travels only when this worker has not built the probe yet (see pointEvaluator);
+      // without a probe nothing of the batch is claimed
       const spec = task.spec;
       const probe = spec ? cached(task.id, () => makeProbe(spec)) : (models.get(task.id) as Probe | undefined);
       if (!probe) throw new Error(`${MISSING_PROBE} ${task.id}`);
-      return probe.evaluate(task.positions);
+      solveShared(probe, task.batch);
+      return null;
     }
     case "yield":
       return cached(task.id, () => makeYieldModel(task.spec)).evaluate(task.draws);
