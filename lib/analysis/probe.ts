@@ -205,6 +205,43 @@ export interface Probe {
 export function makeProbe(spec: ProbeSpec & { readonly models?: readonly LinkLoadModel[] }): Probe {
   // in this thread the system's own tabulated loads; in a worker the same loads rebuilt from data
   const models: LinkLoadModel[] = spec.loads.map((l, i) => spec.models?.[i] ?? tokenLoadModel(decodeLoad(l!), { tabulate: true }));
+  const array = spec.array;
+  const receivers: ReceiverNetwork[] = spec.receivers.map((r, i) => ({ ...r, load: models[i]! }));
+  const options = { litThreshold: spec.litThreshold, onNonConvergence: "warn" as const };
+  const networkAt = probeNetworks(spec, receivers);
+  const fromTable = spec.model !== undefined && spec.model !== "fundamental" && tableApplies(spec, receivers) ? tableSolver(spec) : undefined;
+  const fundamental = fundamentalSolver(spec, options);
+  const at = (position: Vec3, axis: Vec3): { current: number; mutual: number; supply: number; converged: boolean } => {
+    const { net, ms } = networkAt(position, axis);
+    const t = fromTable ? fromTable(net, ms[0]!) : undefined;
+    if (t) return { ...t, mutual: ms[0]!, converged: true };
+    // (coils on a shared drive: the describing function, as solveLink)
+    if (array?.sharedDrives !== undefined || spec.model === undefined || spec.model === "fundamental") return fundamental(net, ms);
+    // the same solver solveLink uses for that model, so a map agrees with solveLink point by point
+    const r = solveLinkModel(net, { ...options, model: spec.model });
+    let current = Infinity;
+    for (const led of r.receivers[spec.token]!.leds) current = Math.min(current, led.averageCurrent);
+    const supply = spec.supplyVoltage !== undefined ? Math.max(0, r.power.input) / spec.supplyVoltage : 0;
+    const txs = r.transmitters ?? [r.transmitter];
+    const mutual = array ? netMutual(ms, Float64Array.from(txs, (x) => x.coilCurrentPhasor.re), Float64Array.from(txs, (x) => x.coilCurrentPhasor.im)) : ms[0]!;
+    return { current: Math.max(0, current), mutual, supply, converged: r.converged };
+  };
+  const validity = (position: Vec3, axis: Vec3): readonly string[] =>
+    array
+      ? ["describing function used with its error not estimated (several transmitters), as solveLink does"]
+      : solveLinkModel(networkAt(position, axis).net, { ...options, model: "fundamental" }).warnings.filter((w) => w.startsWith("describing function"));
+  return { spec, at, validity, evaluate: (positions) => evaluatePositions(spec, at, positions) };
+}
+
+type PoseValues = { current: number; mutual: number; supply: number; converged: boolean };
+
+/**
+ * The link network with the token at a pose: the spec's inductance matrix with the token's row
+ * and column from one couplingEvaluator per coil pair, and each transmitter's mutual `ms`, H.
+ * Per pose: plain loops, no closures made per call (under tsx each gets its name set, which
+ * cost a tenth of a map).
+ */
+function probeNetworks(spec: ProbeSpec, receivers: ReceiverNetwork[]): (position: Vec3, axis: Vec3) => { net: LinkNetwork; ms: number[] } {
   const ev = (a: number, b: number): CouplingEvaluator => evaluatorFor(spec.coils[a]!, spec.coils[b]!);
   const array = spec.array;
   const evTxs = array ? array.coils.map((c) => ev(c, spec.tokenCoil)) : [ev(spec.txCoil, spec.tokenCoil)];
@@ -212,11 +249,7 @@ export function makeProbe(spec: ProbeSpec & { readonly models?: readonly LinkLoa
   const evOthers = spec.others.map((o) => ev(o.coil, spec.tokenCoil));
   const nt = evTxs.length;
   const t = spec.token + nt;
-  const receivers: ReceiverNetwork[] = spec.receivers.map((r, i) => ({ ...r, load: models[i]! }));
-  const options = { litThreshold: spec.litThreshold, onNonConvergence: "warn" as const };
-  // per pose: plain loops, no closures made per call (under tsx each gets its name set, which
-  // cost a tenth of a map)
-  const networkAt = (position: Vec3, axis: Vec3): { net: LinkNetwork; ms: number[] } => {
+  return (position: Vec3, axis: Vec3): { net: LinkNetwork; ms: number[] } => {
     const pose: Pose = { position, axis };
     const L: number[][] = [];
     for (const row of spec.inductance) L.push(row.slice());
@@ -238,12 +271,18 @@ export function makeProbe(spec: ProbeSpec & { readonly models?: readonly LinkLoa
       : { frequency: spec.frequency, inductance: L, transmitter: spec.transmitter, receivers };
     return { net, ms };
   };
-  // harmonic balance ("harmonic", "auto") of one transmitter and the token alone: the token's
-  // harmonic balance tabulated against its induced EMF once, then per pose the transmitter's
-  // loop equation (lib/circuit/harmonic/linkTable.ts); built on first use, grown as needed
-  const tabulated = spec.model !== undefined && spec.model !== "fundamental" && tableApplies(spec, receivers);
+}
+
+/**
+ * Harmonic balance ("harmonic", "auto") of one transmitter and the token alone: the token's
+ * harmonic balance tabulated against its induced EMF once, then per pose the transmitter's loop
+ * equation (lib/circuit/harmonic/linkTable.ts); the table is built on first use and grown as
+ * needed. A pose the table cannot answer (no convergence, drive harmonics past the limit) gives
+ * undefined: the caller solves it directly.
+ */
+function tableSolver(spec: ProbeSpec): (net: LinkNetwork, mutual: number) => { current: number; supply: number } | undefined {
   let table: { readonly link: LinkTable; readonly point: LinkTablePoint } | undefined;
-  const fromTable = (net: LinkNetwork, mutual: number): { current: number; supply: number } | undefined => {
+  return (net: LinkNetwork, mutual: number): { current: number; supply: number } | undefined => {
     try {
       if (!table) {
         const link = linkTable(net, { order: DEFAULT_HARMONIC_ORDER, samples: defaultSamples(DEFAULT_HARMONIC_ORDER), litThreshold: spec.litThreshold });
@@ -261,26 +300,17 @@ export function makeProbe(spec: ProbeSpec & { readonly models?: readonly LinkLoa
     const supply = spec.supplyVoltage !== undefined ? Math.max(0, table.point.input) / spec.supplyVoltage : 0;
     return { current: Math.max(0, current), supply };
   };
-  const at = (position: Vec3, axis: Vec3): { current: number; mutual: number; supply: number; converged: boolean } => {
-    const { net, ms } = networkAt(position, axis);
-    const t = tabulated ? fromTable(net, ms[0]!) : undefined;
-    if (t) return { ...t, mutual: ms[0]!, converged: true };
-    // (coils on a shared drive: the describing function, as solveLink)
-    if (array?.sharedDrives !== undefined || spec.model === undefined || spec.model === "fundamental") return fundamental(net, ms);
-    // the same solver solveLink uses for that model, so a map agrees with solveLink point by point
-    const r = solveLinkModel(net, { ...options, model: spec.model });
-    let current = Infinity;
-    for (const led of r.receivers[spec.token]!.leds) current = Math.min(current, led.averageCurrent);
-    const supply = spec.supplyVoltage !== undefined ? Math.max(0, r.power.input) / spec.supplyVoltage : 0;
-    const txs = r.transmitters ?? [r.transmitter];
-    const mutual = array ? netMutual(ms, Float64Array.from(txs, (x) => x.coilCurrentPhasor.re), Float64Array.from(txs, (x) => x.coilCurrentPhasor.im)) : ms[0]!;
-    return { current: Math.max(0, current), mutual, supply, converged: r.converged };
-  };
-  // the describing function (several transmitters too, as solveLink): solveLinkNetwork's own
-  // checks and operating point — the same numbers — read for the token's LEDs, the input power
-  // and the coil currents only, without its result record, on one reused workspace
+}
+
+/**
+ * The describing function (several transmitters too, as solveLink): solveLinkNetwork's own
+ * checks and operating point — the same numbers — read for the token's LEDs, the input power
+ * and the coil currents only, without its result record, on one workspace reused pose to pose.
+ */
+function fundamentalSolver(spec: ProbeSpec, options: { readonly litThreshold: number; readonly onNonConvergence: "warn" }): (net: LinkNetwork, ms: readonly number[]) => PoseValues {
+  const array = spec.array;
   let ws: LinkWorkspace | undefined;
-  const fundamental = (net: LinkNetwork, ms: readonly number[]): { current: number; mutual: number; supply: number; converged: boolean } => {
+  return (net: LinkNetwork, ms: readonly number[]): PoseValues => {
     validateNetwork(net, "solveLinkNetwork");
     const solved = solveLinkOperatingPoint(net, options, ws);
     ws = solved.ws;
@@ -292,36 +322,29 @@ export function makeProbe(spec: ProbeSpec & { readonly models?: readonly LinkLoa
     const coil = array ? coilCurrents(ws) : undefined;
     return { current: Math.max(0, current), mutual: coil ? netMutual(ms, coil.re, coil.im) : ms[0]!, supply, converged: solved.converged };
   };
-  const validity = (position: Vec3, axis: Vec3): readonly string[] =>
-    array
-      ? ["describing function used with its error not estimated (several transmitters), as solveLink does"]
-      : solveLinkModel(networkAt(position, axis).net, { ...options, model: "fundamental" }).warnings.filter((w) => w.startsWith("describing function"));
-  return {
-    spec,
-    at,
-    validity,
-    evaluate(positions: Float64Array): ProbeValues {
-      const count = positions.length / 3;
-      const na = spec.axes.length;
-      const current = new Float64Array(count);
-      const mutual = new Float64Array(count * na);
-      const supply = new Float64Array(count);
-      let unconverged = 0;
-      for (let p = 0; p < count; p++) {
-        const pos: Vec3 = [positions[3 * p]!, positions[3 * p + 1]!, positions[3 * p + 2]!];
-        let worst = Infinity;
-        let most = 0;
-        for (let a = 0; a < na; a++) {
-          const v = at(pos, spec.axes[a]!);
-          worst = Math.min(worst, v.current);
-          most = Math.max(most, v.supply);
-          mutual[p * na + a] = v.mutual;
-          if (!v.converged) unconverged++;
-        }
-        current[p] = worst;
-        supply[p] = most;
-      }
-      return { current, mutual, supply, unconverged };
-    },
-  };
+}
+
+/** A batch of positions [x, y, z, …] (m): per position the worst LED current and the largest supply current over the spec's axes. */
+function evaluatePositions(spec: ProbeSpec, at: (position: Vec3, axis: Vec3) => PoseValues, positions: Float64Array): ProbeValues {
+  const count = positions.length / 3;
+  const na = spec.axes.length;
+  const current = new Float64Array(count);
+  const mutual = new Float64Array(count * na);
+  const supply = new Float64Array(count);
+  let unconverged = 0;
+  for (let p = 0; p < count; p++) {
+    const pos: Vec3 = [positions[3 * p]!, positions[3 * p + 1]!, positions[3 * p + 2]!];
+    let worst = Infinity;
+    let most = 0;
+    for (let a = 0; a < na; a++) {
+      const v = at(pos, spec.axes[a]!);
+      worst = Math.min(worst, v.current);
+      most = Math.max(most, v.supply);
+      mutual[p * na + a] = v.mutual;
+      if (!v.converged) unconverged++;
+    }
+    current[p] = worst;
+    supply[p] = most;
+  }
+  return { current, mutual, supply, unconverged };
 }
