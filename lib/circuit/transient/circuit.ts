@@ -87,6 +87,11 @@ export interface CurrentSourceElement {
  * A switch between a and b: resistance rOn while closed(t) is true, rOff otherwise. The
  * engine finds each switching instant by bisection of closed(t) inside the step and restarts
  * integration there with a backward-Euler step. Pulses shorter than one step may be missed.
+ * With `bodyDiode`, a MOSFET's intrinsic diode sits across it from b (anode, the source) to a
+ * (cathode, the drain): it conducts when v(a) falls below v(b) by its forward drop, whatever
+ * the gate says — any DiodeModel (`diode()`/`diodePreset()`; the drive builders' `bodyDiode:
+ * true` uses ./bodyDiode.ts, a typical small MOSFET's); it is the diode element `<name>.body`,
+ * its current listed under that name.
  */
 export interface SwitchElement {
   readonly kind: "switch";
@@ -99,6 +104,8 @@ export interface SwitchElement {
   readonly onResistance: number;
   /** Ω, > onResistance; default 1 MΩ */
   readonly offResistance?: number;
+  /** the body diode, anode b → cathode a (default none) */
+  readonly bodyDiode?: DiodeModel;
 }
 
 /** A diode or LED (any `DiodeModel`: current(v), conductance(v)) from anode to cathode. */

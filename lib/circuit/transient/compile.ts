@@ -57,6 +57,12 @@ function finiteOr(x: unknown, dflt: number, path: string, unit: string, issues: 
   return x;
 }
 
+/** A DiodeModel: current(v) and conductance(v) functions. */
+function isDiodeModel(m: unknown): m is DiodeModel {
+  const d = m as DiodeModel | undefined;
+  return typeof d === "object" && d !== null && typeof d.current === "function" && typeof d.conductance === "function";
+}
+
 /** Union–find over node names. */
 class Components {
   private parent = new Map<string, string>();
@@ -274,10 +280,16 @@ function collectElements(elements: readonly CircuitElement[], nodes: NodeTable):
         const roff = positive(e.offResistance ?? DEFAULT_SWITCH_OFF_RESISTANCE, `${path}.offResistance`, "Ω", issues);
         if (roff <= ron) issues.push({ path: `${path}.offResistance`, message: "must exceed onResistance", value: roff, expected: `> ${ron} Ω` });
         c.switches.push({ name: e.name, a: idx(e.a), b: idx(e.b), gOn: 1 / ron, gOff: 1 / roff, closed: e.closed });
+        if (e.bodyDiode !== undefined) {
+          if (!isDiodeModel(e.bodyDiode)) issues.push({ path: `${path}.bodyDiode`, message: "must be a DiodeModel with current(v) and conductance(v) (e.g. bodyDiodeModel())", value: e.bodyDiode });
+          else if (elements.some((x) => x.name === `${e.name}.body`)) issues.push({ path: `${path}.bodyDiode`, message: `its diode is named "${e.name}.body", which another element already uses`, value: e.name });
+          // anode at b (source), cathode at a (drain)
+          c.diodes.push({ name: `${e.name}.body`, a: idx(e.b), b: idx(e.a), model: e.bodyDiode });
+        }
         break;
       }
       case "diode":
-        if (!e.model || typeof e.model.current !== "function" || typeof e.model.conductance !== "function") {
+        if (!isDiodeModel(e.model)) {
           issues.push({ path: `${path}.model`, message: "must be a DiodeModel with current(v) and conductance(v)", value: e.model });
         }
         c.diodes.push({ name: e.name, a: idx(e.anode), b: idx(e.cathode), model: e.model });

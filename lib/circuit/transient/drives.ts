@@ -14,6 +14,7 @@ import { assertNever, TanklightInputError } from "../../errors.ts";
 import { capacitance, dimensionless, frequency, inductance, oneOf, parseInput, resistance, voltage, lazySchema } from "../../schema.ts";
 import { GROUND, type CircuitElement, type TransientCircuit } from "./circuit.ts";
 import { periodicGate, stepWaveform } from "./waveforms.ts";
+import { bodyDiodeModel } from "./bodyDiode.ts";
 
 /** A drive circuit with the names a caller needs. */
 export interface DriveCircuit {
@@ -67,12 +68,17 @@ export const SingleSwitchDriveSpec = lazySchema(() => z.strictObject({
   onResistance: resistance({ positive: true }).optional(),
   /** switch off-resistance, Ω > onResistance; default 1 MΩ */
   offResistance: resistance({ positive: true }).optional(),
+  /**
+   * give each switch its MOSFET body diode (bodyDiodeModel(), ./bodyDiode.ts), source to drain;
+   * default false: it changes the result wherever the switch node dips below ground
+   */
+  bodyDiode: z.boolean().optional(),
 }));
 /** What {@link singleSwitchDrive} accepts. */
 export type SingleSwitchDriveSpec = z.input<typeof SingleSwitchDriveSpec>;
 
 /** The fields every drive circuit shares, parsed (SI), with the defaults applied. */
-type TransmitterFields = Pick<z.output<typeof SingleSwitchDriveSpec>, "supply" | "frequency" | "coilInductance" | "tankCapacitance" | "coilResistance" | "loadResistance" | "onResistance" | "offResistance">;
+type TransmitterFields = Pick<z.output<typeof SingleSwitchDriveSpec>, "supply" | "frequency" | "coilInductance" | "tankCapacitance" | "coilResistance" | "loadResistance" | "onResistance" | "offResistance" | "bodyDiode">;
 
 /**
  * The transmitter coil "Ltx" (L, H; its resistance R, Ω) from node "coilTop" to `end`, through
@@ -88,6 +94,14 @@ function pushCoilBranch(elements: CircuitElement[], nodes: Record<string, string
   } else {
     elements.push({ kind: "inductor", name: "Ltx", a: "coilTop", b: end, inductance: L, resistance: R });
   }
+}
+
+/** The switch fields every switch of a drive shares: off-resistance and body diode when asked for. */
+function switchExtras(spec: TransmitterFields): { offResistance?: number; bodyDiode?: ReturnType<typeof bodyDiodeModel> } {
+  return {
+    ...(spec.offResistance !== undefined ? { offResistance: spec.offResistance } : {}),
+    ...(spec.bodyDiode ? { bodyDiode: bodyDiodeModel() } : {}),
+  };
 }
 
 /** The shared values with their defaults; the switch's off-resistance must exceed its on-resistance (else it never opens). */
@@ -117,10 +131,7 @@ export function singleSwitchDrive(input: SingleSwitchDriveSpec): DriveCircuit {
   const arrangement = spec.arrangement ?? "parallel-tank";
   const warnings: string[] = [];
   const gate = periodicGate({ frequency: f, duty: spec.duty ?? 0.5 });
-  const sw: CircuitElement = {
-    kind: "switch", name: "S1", a: "switch", b: GROUND, closed: gate, onResistance: ron,
-    ...(spec.offResistance !== undefined ? { offResistance: spec.offResistance } : {}),
-  };
+  const sw: CircuitElement = { kind: "switch", name: "S1", a: "switch", b: GROUND, closed: gate, onResistance: ron, ...switchExtras(spec) };
   const elements: CircuitElement[] = [
     { kind: "voltageSource", name: "Vsupply", plus: "supply", minus: GROUND, waveform: stepWaveform(supply) },
   ];
@@ -170,6 +181,11 @@ export const BridgeDriveSpec = lazySchema(() => z.strictObject({
   onResistance: resistance({ positive: true }).optional(),
   /** switch off-resistance, Ω > onResistance; default 1 MΩ */
   offResistance: resistance({ positive: true }).optional(),
+  /**
+   * give each switch its MOSFET body diode (bodyDiodeModel(), ./bodyDiode.ts), source to drain;
+   * default false: it changes the result wherever the switch node dips below ground
+   */
+  bodyDiode: z.boolean().optional(),
 }));
 /** What {@link bridgeDrive} accepts. */
 export type BridgeDriveSpec = z.input<typeof BridgeDriveSpec>;
@@ -177,8 +193,8 @@ export type BridgeDriveSpec = z.input<typeof BridgeDriveSpec>;
 /**
  * A half or full bridge (square wave, 50 % duty, complementary switches with no dead time)
  * driving a series-tuned transmitter: leg midpoint(s) "midA" ("midB"), series capacitor to
- * "coilTop", coil "Ltx" to ground (half) or to "midB" (full). No dead time is modelled, so no
- * body diodes are needed; the fundamental of the leg voltage is 2V/π (half) or 4V/π (full,
+ * "coilTop", coil "Ltx" to ground (half) or to "midB" (full). No dead time is modelled, so the
+ * body diodes (`bodyDiode: true`) conduct only if a leg is driven beyond its rails; the fundamental of the leg voltage is 2V/π (half) or 4V/π (full,
  * across the tank) — Fourier series of a square wave.
  * @example bridgeDrive({ supply: 12, frequency: 200e3, bridge: "full", coilInductance: 10e-6, tankCapacitance: 63.3e-9 }).nodes.midB // → "midB"
  */
@@ -186,7 +202,7 @@ export function bridgeDrive(input: BridgeDriveSpec): DriveCircuit {
   const where = "bridgeDrive";
   const spec = parseInput(BridgeDriveSpec, input, where);
   const { supply, f, L, C, R, rLoad, ron } = transmitterValues(spec, where);
-  const off = spec.offResistance !== undefined ? { offResistance: spec.offResistance } : {};
+  const off = switchExtras(spec);
   const high = periodicGate({ frequency: f, duty: 0.5 });
   const low = periodicGate({ frequency: f, duty: 0.5, invert: true });
   const elements: CircuitElement[] = [
