@@ -151,7 +151,9 @@ export function formatResult(r: BenchResult, w?: Workload, reference?: BenchResu
     let verdict = "";
     if (w.targetRatio !== undefined) verdict = ` target ≥ ${w.targetRatio}× ${ratio >= w.targetRatio ? "met" : "MISSED"}`;
     if (w.maxSlowdown !== undefined) verdict = ` target ≤ ${w.maxSlowdown}× of it ${1 / ratio <= w.maxSlowdown ? "met" : "MISSED"}`;
-    parts.push(`vs "${w.against}": ${ratio >= 1 ? `${ratio.toFixed(2)}× faster` : `${(1 / ratio).toFixed(2)}× its time`} (min; median ${medRatio.toFixed(2)})${verdict}`);
+    // min and median in the same words ("1.36× its time (min; median 1.47× its time)")
+    const words = (x: number): string => (x >= 1 ? `${x.toFixed(2)}× faster` : `${(1 / x).toFixed(2)}× its time`);
+    parts.push(`vs "${w.against}": ${words(ratio)} (min; median ${words(medRatio)})${verdict}`);
   }
   return parts.join("  ");
 }
