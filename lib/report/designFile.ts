@@ -111,6 +111,7 @@ export function parseDesign(input: unknown): Design {
  * @example parseDesignText("[1, 2") // → throws TanklightInputError (not valid JSON)
  */
 export function parseDesignText(textIn: string): Design {
+  if (typeof textIn !== "string") throw new TanklightInputError([{ path: "text", message: "must be the design file's text (a string; parseDesign takes the parsed object)", value: textIn }], "design file");
   const bytes = new TextEncoder().encode(textIn).length;
   if (bytes > DESIGN_FILE_MAX_BYTES) {
     throw new TanklightInputError([{ path: "", message: `is too large (limit ${DESIGN_FILE_MAX_BYTES} bytes)`, value: `${bytes} bytes` }], "design file");

@@ -5,7 +5,8 @@
  * else is escaped.
  */
 import { valueText } from "./format.ts";
-import { DEFER_LINE, type Cell, type Notebook } from "./notebook.ts";
+import { DEFER_LINE, requireNotebook, type Cell, type Notebook } from "./notebook.ts";
+import { TanklightInputError } from "../errors.ts";
 import { PALETTE } from "./theme.ts";
 
 /** HTML-escaped text. */
@@ -95,6 +96,10 @@ code{font:13px ui-monospace,monospace;background:#fff;padding:0 .2rem}
  * @example notebookHtml(notebook("Drawer"), new Map()).startsWith("<!doctype html>") // → true
  */
 export function notebookHtml(nb: Notebook, svgs: ReadonlyMap<string, string>): string {
+  requireNotebook(nb, "nb", "notebookHtml");
+  if (!(svgs instanceof Map) || [...svgs].some(([k, v]) => typeof k !== "string" || typeof v !== "string")) {
+    throw new TanklightInputError([{ path: "svgs", message: "must be a Map from figure name to SVG text (what renderNotebook returned)", value: svgs instanceof Map ? `a Map of ${svgs.size}` : svgs }], "notebookHtml");
+  }
   return [
     "<!doctype html>",
     '<html lang="en"><head><meta charset="utf-8">',

@@ -6,7 +6,9 @@
  * (Im Y_t·V)², and the current still available to the LED at amplitude V is
  * √(|I_N|² − (Im Y_t·V)²) − Re Y_t·V (Norton's theorem; any circuits text).
  */
-import { fundamentalConductance } from "../circuit/loads/describingFunction.ts";
+import * as z from "../zod.ts";
+import { checkLoad, fundamentalConductance } from "../circuit/loads/describingFunction.ts";
+import { capacitance, current, frequency, inductance, lazySchema, parseInput, quantity, resistance, voltage, wholeNumber } from "../schema.ts";
 import type { TokenLoad } from "../circuit/loads/types.ts";
 
 /** Inputs, SI: frequency Hz, mutual inductance H, transmitter coil current A peak, token L H, R Ω, C F. */
@@ -40,6 +42,8 @@ export interface LoadLine {
  * @example tokenLoadLine({ frequency: 2e5, mutualInductance: 1e-7, transmitterCurrent: 1, inductance: 3e-4, resistance: 12, capacitance: 2.2e-9, load: { kind: "led", led: ledPreset("red") } }).norton
  */
 export function tokenLoadLine(p: LoadLineInput): LoadLine {
+  p = parseInput(LoadLineArgs, { input: p }, "tokenLoadLine").input as LoadLineInput;
+  checkLoad(p.load, "tokenLoadLine");
   const w = 2 * Math.PI * p.frequency;
   const zr = p.resistance, zi = w * p.inductance, z2 = zr * zr + zi * zi;
   const norton = (w * Math.abs(p.mutualInductance) * p.transmitterCurrent) / Math.sqrt(z2);
@@ -51,3 +55,18 @@ export function tokenLoadLine(p: LoadLineInput): LoadLine {
   const load = voltage.map((v) => fundamentalConductance(p.load, v) * v);
   return { norton, voltage, available, load };
 }
+
+/** tokenLoadLine's input (strict; quantity strings accepted). Amplitudes ≤ 1 kV and ≤ 100000 points (each point evaluates the load's describing function). */
+const LoadLineArgs = lazySchema(() => z.strictObject({
+  input: z.strictObject({
+    frequency: frequency({ max: 1e12 }),
+    mutualInductance: quantity("inductance", { min: -1, max: 1 }),
+    transmitterCurrent: current({ nonNegative: true, max: 1e6 }),
+    inductance: inductance({ max: 1 }),
+    resistance: resistance({ max: 1e9 }),
+    capacitance: capacitance({ max: 1 }),
+    load: z.unknown(),
+    maxVoltage: voltage({ positive: true, max: 1000 }).optional(),
+    points: wholeNumber(2, 100000, "each point evaluates the load's describing function").optional(),
+  }),
+}));

@@ -3,7 +3,7 @@
  * beside the report.
  */
 import { valueText } from "./format.ts";
-import { DEFER_LINE, type Cell, type Notebook } from "./notebook.ts";
+import { DEFER_LINE, requireNotebook, type Cell, type Notebook } from "./notebook.ts";
 
 const escapeCell = (s: string): string => s.replace(/\|/g, "\\|").replace(/\n/g, " ");
 
@@ -39,6 +39,7 @@ function cellMarkdown(c: Cell): string[] {
  * @example notebookMarkdown(notebook("Drawer")).split("\n")[0] // → "# Drawer"
  */
 export function notebookMarkdown(nb: Notebook): string {
+  requireNotebook(nb, "nb", "notebookMarkdown");
   const head = [`# ${nb.title}`, "", ...(nb.subtitle ? [`*${nb.subtitle}*`, ""] : []), ...(nb.note ? [`> ${nb.note}`, ""] : [])];
   return [...head, ...nb.cells.flatMap(cellMarkdown)].join("\n").replace(/\n{3,}/g, "\n\n").trimEnd() + "\n";
 }

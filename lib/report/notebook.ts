@@ -7,7 +7,7 @@
  * The notebook is a plain record of cells; its methods only append a cell (and return it), so
  * a scenario reads top to bottom like the report it makes.
  */
-import { TanklightInputError } from "../errors.ts";
+import { TanklightInputError, requireObject, unknownKeyMessage } from "../errors.ts";
 import type { ChartSpec } from "./charts/spec.ts";
 import type { PartRow } from "./partsList.ts";
 
@@ -71,6 +71,7 @@ export interface Notebook {
  * @example const nb = notebook("The pebble drawer", { note: "Demo data." }); nb.heading("Coils"); nb.table(["quantity", "value"], [["L", { value: 4.7e-6, unit: "H" }]]);
  */
 export function notebook(title: string, options: NotebookOptions = {}): Notebook {
+  checkNotebookArgs(title, options);
   const cells: Cell[] = [];
   const names = new Set<string>();
   const log = options.log ?? (() => {});
@@ -121,3 +122,30 @@ export function notebook(title: string, options: NotebookOptions = {}): Notebook
 
 /** The closing line of every cautions section. */
 export const DEFER_LINE = "These are engineering estimates, not certification: follow local codes and regulations and, where they require it, licensed practice and accredited testing.";
+
+const OPTION_KEYS: readonly string[] = Object.freeze(["subtitle", "note", "log"]);
+
+/** notebook's arguments: a string title; options strict (a typo names the nearest key), strings and a function. */
+function checkNotebookArgs(title: unknown, options: unknown): void {
+  const fail = (path: string, message: string, value: unknown): never => {
+    throw new TanklightInputError([{ path, message, value }], "notebook");
+  };
+  if (typeof title !== "string") fail("title", "must be a string", title);
+  requireObject(options, "options", "notebook");
+  const o = options as Record<string, unknown>;
+  for (const key of Object.keys(o)) if (!OPTION_KEYS.includes(key)) fail(`options.${key}`, unknownKeyMessage(key, OPTION_KEYS), o[key]);
+  for (const key of ["subtitle", "note"]) if (o[key] !== undefined && typeof o[key] !== "string") fail(`options.${key}`, "must be a string or absent", o[key]);
+  if (o["log"] !== undefined && typeof o["log"] !== "function") fail("options.log", "must be a function (line) => void or absent", o["log"]);
+}
+
+/**
+ * A renderer's notebook argument: what notebook() returned (a string title and a list of cells),
+ * else a TanklightInputError naming `field` and `where`.
+ * @example requireNotebook(null, "nb", "notebookMarkdown") // → throws TanklightInputError
+ */
+export function requireNotebook(nb: unknown, field: string, where: string): void {
+  const n = nb as { title?: unknown; cells?: unknown } | null;
+  if (typeof n !== "object" || n === null || typeof n.title !== "string" || !Array.isArray(n.cells)) {
+    throw new TanklightInputError([{ path: field, message: "must be a notebook (what notebook() returned)", value: typeof n === "object" && n !== null ? "an object without a title and cells" : nb }], where);
+  }
+}

@@ -8,8 +8,11 @@
  * (charge conservation: V_i = V·C_total/C_i); in the mixed two-level forms each part is rated
  * for the whole tank voltage, which is on the safe side.
  */
-import { recommendCapacitor, DIELECTRICS, type Dielectric } from "../circuit/dielectrics.ts";
-import { SERIES_TOLERANCE, type ESeries } from "../circuit/eseries.ts";
+import * as z from "../zod.ts";
+import { recommendCapacitor, DIELECTRICS, DielectricSchema, type Dielectric } from "../circuit/dielectrics.ts";
+import { SERIES_TOLERANCE, ESeriesSchema, type ESeries } from "../circuit/eseries.ts";
+import { checkCoil, checkConductor } from "../em/inputs.ts";
+import { capacitance, current, lazySchema, oneOf, parseArgs, parseInput, voltage, wholeNumber } from "../schema.ts";
 import { awgDiameter } from "../em/classicFormulas.ts";
 import type { Coil, Conductor } from "../em/types.ts";
 import { formatQuantity } from "../units.ts";
@@ -64,6 +67,7 @@ function nearestAwg(d: number): number | undefined {
  * @example wireText(roundWire("0.1 mm", { insulation: "10 um" })) // → "0.10 mm copper wire (AWG 38), 0.12 mm over insulation"
  */
 export function wireText(c: Conductor): string {
+  c = checkConductor(c, "conductor", "wireText");
   const mm = (x: number) => `${(x * 1e3).toFixed(x < 1e-3 ? 3 : 2).replace(/0$/, "")} mm`;
   switch (c.kind) {
     case "round": {
@@ -83,7 +87,13 @@ export function wireText(c: Conductor): string {
  * Peak voltage across each part of a combination, V (see the module comment).
  * @example partVoltages([2.2e-9, 2.2e-9], "series", 3) // → [1.5, 1.5] (V: equal parts in series share the peak)
  */
-export function partVoltages(parts: readonly number[], topology: string, peak: number): number[] {
+export function partVoltages(parts: readonly number[], topology: string, peak: number | string): number[] {
+  ({ parts, topology, peak } = parseArgs(PartVoltagesArgs, [parts, topology, peak], "partVoltages"));
+  return partVoltagesCore(parts, topology, peak);
+}
+
+/** partVoltages for checked values (partsList's parsed builds). */
+function partVoltagesCore(parts: readonly number[], topology: string, peak: number): number[] {
   if (topology === "series") {
     const total = 1 / parts.reduce((s, c) => s + 1 / c, 0);
     return parts.map((c) => (peak * total) / c);
@@ -99,9 +109,11 @@ export function partVoltages(parts: readonly number[], topology: string, peak: n
  * // → "2.20 nF ±10 % (E12), 6.3 V, class 1 ceramic C0G (NP0)"
  */
 export function partsList(input: PartsInput): PartRow[] {
+  input = parseInput(PartsListArgs, { input }, "partsList").input as PartsInput;
+  input.coils.forEach((k, i) => checkCoil(k.coil, `input.coils[${i}].coil`, "partsList"));
   const rows: PartRow[] = [];
   for (const c of input.capacitors) {
-    const volts = partVoltages(c.parts, c.topology, c.peakVoltage);
+    const volts = partVoltagesCore(c.parts, c.topology, c.peakVoltage);
     const tol = SERIES_TOLERANCE[c.series];
     c.parts.forEach((value, i) => {
       const rec = recommendCapacitor(volts[i]!, value);
@@ -136,3 +148,29 @@ export function partsList(input: PartsInput): PartRow[] {
   });
   return rows;
 }
+
+/** The topologies bestCombination names (docs of Combination.topology). */
+const TOPOLOGIES = ["single", "series", "parallel", ...(["series", "parallel"] as const).flatMap((a) => (["series", "parallel"] as const).map((b) => `${a} pair in ${b} with one`))];
+/** Parts in one combination at most (a tank is built from a few parts). */
+const MAX_PARTS = 64;
+/** Items of one row at most (a batch). */
+const MAX_QUANTITY = 1e6;
+const capacitorParts = () => z.array(capacitance()).min(1).max(MAX_PARTS, { error: `must hold at most ${MAX_PARTS} parts (one combination)` });
+/** partVoltages' arguments. */
+const PartVoltagesArgs = lazySchema(() => z.strictObject({ parts: capacitorParts(), topology: oneOf(TOPOLOGIES), peak: voltage({ nonNegative: true }) }));
+/** partsList's input (strict: a typo names the nearest key); coils are checked like hand-made ones. */
+const PartsListArgs = lazySchema(() => {
+  const quantity = () => wholeNumber(1, MAX_QUANTITY, "a batch count").optional();
+  const item = () => z.string({ error: "must be a string naming the item" });
+  return z.strictObject({
+    input: z.strictObject({
+      coils: z.array(z.strictObject({ item: item(), coil: z.unknown(), quantity: quantity() })),
+      capacitors: z.array(z.strictObject({
+        item: item(), parts: capacitorParts(), topology: oneOf(TOPOLOGIES), series: ESeriesSchema,
+        peakVoltage: voltage({ nonNegative: true }), quantity: quantity(), dielectric: DielectricSchema.optional(),
+      })),
+      leds: z.array(z.strictObject({ item: item(), colour: z.string({ error: "must be a colour (a string)" }), quantity: quantity() })),
+      supply: z.strictObject({ item: item(), voltage: voltage({ nonNegative: true }), current: current({ nonNegative: true }), rating: current({ positive: true }).optional() }),
+    }),
+  });
+});

@@ -9,7 +9,8 @@ import type { Coil, Pose } from "../em/types.ts";
 import type { SafetyReport } from "../safety/safetyReport.ts";
 import { formatQuantity as fmt } from "../units.ts";
 import * as chart from "./chart.ts";
-import type { Notebook } from "./notebook.ts";
+import { requireNotebook, type Notebook } from "./notebook.ts";
+import { TanklightInputError } from "../errors.ts";
 
 /** What the exposure map needs: the transmitter coil, its pose, its current and the surface. */
 export interface FieldMapInput {
@@ -32,6 +33,11 @@ export interface FieldMapInput {
  * @example const texts = addSafetySections(nb, safetyReport(designFromLink(system, solveLink(system), { surfaceHeight: 0.005 })))
  */
 export function addSafetySections(nb: Notebook, report: SafetyReport, map?: FieldMapInput): string[] {
+  requireNotebook(nb, "nb", "addSafetySections");
+  const r = report as Partial<SafetyReport> | null;
+  if (typeof r !== "object" || r === null || typeof r.exposure?.worst !== "object" || typeof r.emission !== "object" || typeof r.stress !== "object" || !Array.isArray(r.metal) || !Array.isArray(r.cautions)) {
+    throw new TanklightInputError([{ path: "report", message: "must be what safetyReport returned", value: typeof r === "object" && r !== null ? "an object without exposure, emission, stress, metal and cautions" : report }], "addSafetySections");
+  }
   const e = report.exposure;
   nb.heading("Exposure (an estimate, not a compliance test)");
   nb.text(`Worst accessible point: **${fmt(e.worst.flux, "T")} RMS** (${fmt(e.worst.fieldStrength, "A/m")} RMS), ${fmt(e.worst.height, "m")} above the surface. Grid: ${e.grid}.`);

@@ -3,7 +3,7 @@
  * figures named with their file, the parts list and the cautions. No colour codes.
  */
 import { valueText } from "./format.ts";
-import { DEFER_LINE, type Cell, type Notebook } from "./notebook.ts";
+import { DEFER_LINE, requireNotebook, type Cell, type Notebook } from "./notebook.ts";
 
 /** Markdown emphasis and code marks removed. */
 function plain(s: string): string {
@@ -37,6 +37,7 @@ function cellText(c: Cell): string[] {
  * @example notebookText(notebook("Drawer")).split("\n")[0] // → "Drawer"
  */
 export function notebookText(nb: Notebook): string {
+  requireNotebook(nb, "nb", "notebookText");
   const rule = "═".repeat(Math.min(78, [...nb.title].length));
   return [nb.title, rule, ...(nb.subtitle ? [nb.subtitle] : []), ...(nb.note ? [nb.note] : []), ...nb.cells.flatMap(cellText)].join("\n").replace(/\n{3,}/g, "\n\n").trimEnd() + "\n";
 }

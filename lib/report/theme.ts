@@ -3,6 +3,7 @@
  * accent pair, LED colours that read as the LED they stand for) and a vega-lite `config`
  * that every chart builder attaches. Plain data; no module state.
  */
+import { TanklightInputError } from "../errors.ts";
 
 /** Named colours of the tanklight palette (hex sRGB). */
 export const PALETTE = {
@@ -31,6 +32,7 @@ export const SERIES_COLOURS: readonly string[] = [PALETTE.teal, PALETTE.amber, P
  * @example ledSwatch("green-gap") // → "#2f9a4c"
  */
 export function ledSwatch(colour: string): string {
+  if (typeof colour !== "string") throw new TanklightInputError([{ path: "colour", message: "must be an LED colour (a preset name or free text)", value: colour }], "ledSwatch");
   const c = colour.toLowerCase();
   if (c.includes("red")) return "#d23a2a";
   if (c.includes("orange")) return "#e9781f";
