@@ -20,7 +20,7 @@
  */
 import { luFactorCore, luSolve } from "../../math/lu.ts";
 import { complexLuFactorCore, complexLuSolveCore } from "../../math/complexLu.ts";
-import type { HarmonicPorts } from "./ports.ts";
+import { takeFrom, type HarmonicPorts } from "./ports.ts";
 import { analyze, project, synthesize, twoSided, type SpectrumTables } from "./spectrum.ts";
 import type { TimeLoad } from "./timeLoad.ts";
 
@@ -81,13 +81,12 @@ export class HarmonicSystem {
     // one allocation for the whole workspace (typed arrays beyond 64 bytes each cost a backing store)
     const Z = P * B;
     const ws = new Float64Array(P + 3 * P * N + Z * Z + 2 * (4 * H + 1) + 2 * (H + 1) + B + 7 * Z);
-    let at = 0;
-    const take = (n: number): Float64Array => ws.subarray(at, (at += n));
-    this.frozen = take(P);
+    const cur = { buf: ws, at: 0 };
+    this.frozen = takeFrom(cur, P);
     this.isFrozen = new Uint8Array(P);
-    this.v = take(P * N);
-    this.i = take(P * N);
-    this.g = take(P * N);
+    this.v = takeFrom(cur, P * N);
+    this.i = takeFrom(cur, P * N);
+    this.g = takeFrom(cur, P * N);
     this.vs = [];
     this.is = [];
     this.gs = [];
@@ -96,20 +95,20 @@ export class HarmonicSystem {
       this.is.push(this.i.subarray(p * N, (p + 1) * N));
       this.gs.push(this.g.subarray(p * N, (p + 1) * N));
     }
-    this.cur = take(Z);
-    this.jac = take(Z * Z);
+    this.cur = takeFrom(cur, Z);
+    this.jac = takeFrom(cur, Z * Z);
     this.piv = new Int32Array(Z);
-    this.gRe = take(4 * H + 1);
-    this.gIm = take(4 * H + 1);
-    this.dRe = take(H + 1);
-    this.dIm = take(H + 1);
-    this.uCoef = take(B);
-    this.wr = take(Z);
-    this.wdz = take(Z);
-    this.wzt = take(Z);
-    this.wrt = take(Z);
-    this.wnat = take(Z);
-    this.zAt = take(Z);
+    this.gRe = takeFrom(cur, 4 * H + 1);
+    this.gIm = takeFrom(cur, 4 * H + 1);
+    this.dRe = takeFrom(cur, H + 1);
+    this.dIm = takeFrom(cur, H + 1);
+    this.uCoef = takeFrom(cur, B);
+    this.wr = takeFrom(cur, Z);
+    this.wdz = takeFrom(cur, Z);
+    this.wzt = takeFrom(cur, Z);
+    this.wrt = takeFrom(cur, Z);
+    this.wnat = takeFrom(cur, Z);
+    this.zAt = takeFrom(cur, Z);
   }
 
   /** Whether the port waveforms and currents held are those of z at source level λ with the true loads (the last {@link residual} call). */

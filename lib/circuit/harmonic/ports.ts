@@ -131,28 +131,24 @@ export function harmonicPorts(
   const H = order;
   // one backing store for every table and the work arrays
   const all = new Float64Array((H + 1) * (2 * P + 2 * P * P + 2 * size + 2 * size * P) + 2 * size * size + 2 * size + 2);
-  let at = 0;
-  const take = (n: number): Float64Array => all.subarray(at, (at += n));
-  const eRe = take((H + 1) * P);
-  const eIm = take((H + 1) * P);
-  const tRe = take((H + 1) * P * P);
-  const tIm = take((H + 1) * P * P);
-  const xRe = take((H + 1) * size);
-  const xIm = take((H + 1) * size);
-  const xtRe = take((H + 1) * size * P);
-  const xtIm = take((H + 1) * size * P);
+  const cur = { buf: all, at: 0 };
+  const eRe = takeFrom(cur, (H + 1) * P);
+  const eIm = takeFrom(cur, (H + 1) * P);
+  const tRe = takeFrom(cur, (H + 1) * P * P);
+  const tIm = takeFrom(cur, (H + 1) * P * P);
+  const xRe = takeFrom(cur, (H + 1) * size);
+  const xIm = takeFrom(cur, (H + 1) * size);
+  const xtRe = takeFrom(cur, (H + 1) * size * P);
+  const xtIm = takeFrom(cur, (H + 1) * size * P);
 
-  const aRe = take(size * size);
-  const aIm = take(size * size);
+  const aRe = takeFrom(cur, size * size);
+  const aIm = takeFrom(cur, size * size);
   const piv = new Int32Array(size);
-  const bRe = take(size);
-  const bIm = take(size);
-  const tmp = take(2);
+  const bRe = takeFrom(cur, size);
+  const bIm = takeFrom(cur, size);
+  const tmp = takeFrom(cur, 2);
   const L = net.inductance;
-  const set = (i: number, j: number, re: number, im: number): void => {
-    aRe[i * size + j] = aRe[i * size + j]! + re;
-    aIm[i * size + j] = aIm[i * size + j]! + im;
-  };
+  const A = { re: aRe, im: aIm, n: size };
 
   for (let h = 0; h <= H; h++) {
     const wh = h * w;
@@ -162,7 +158,7 @@ export function harmonicPorts(
     bIm.fill(0);
     // mutual inductances in every loop row
     for (let i = 0; i < n; i++) {
-      for (let j = 0; j < n; j++) if (i !== j) set(loop(i), loop(j), 0, wh * L[i]![j]!);
+      for (let j = 0; j < n; j++) if (i !== j) addAt(A, loop(i), loop(j), 0, wh * L[i]![j]!);
     }
     // ── transmitter rows ──
     for (let i = 0; i < t; i++) {
@@ -173,24 +169,24 @@ export function harmonicPorts(
           aRe[i * size + j] = 0;
           aIm[i * size + j] = 0;
         }
-        set(i, i, 1, 0);
+        addAt(A, i, i, 1, 0);
         if (h === 1) {
           const ph = tx.phase ?? 0;
           bRe[i] = ph === 0 ? drive.amplitude : drive.amplitude * Math.cos(ph);
           bIm[i] = ph === 0 ? 0 : drive.amplitude * Math.sin(ph);
         }
       } else if (hasSwitch && wf?.kind === "singleSwitch") {
-        set(0, 0, tx.resistance, wh * L[0]![0]!);
-        set(0, switchNode, 1, 0);
+        addAt(A, 0, 0, tx.resistance, wh * L[0]![0]!);
+        addAt(A, 0, switchNode, 1, 0);
         if (h === 0) bRe[0] = wf.supply;
         // switch-node KCL: I₀ − Y_C₀·V_sw = I_sw − Y_C₀·V_DD·[h = 0]
         const [ycRe, ycIm] = capacitorAdmittance(tx.capacitance ?? 0, tx.capacitorEsr ?? 0, wh);
-        set(switchNode, 0, 1, 0);
-        set(switchNode, switchNode, -ycRe, -ycIm);
+        addAt(A, switchNode, 0, 1, 0);
+        addAt(A, switchNode, switchNode, -ycRe, -ycIm);
         if (h === 0) bRe[switchNode] = -ycRe * wf.supply;
       } else {
         const th = transmitterThevenin(tx, drive, emf[i]!, h, wh, tmp);
-        set(i, i, th.zRe + tx.resistance, th.zIm + wh * L[i]![i]!);
+        addAt(A, i, i, th.zRe + tx.resistance, th.zIm + wh * L[i]![i]!);
         bRe[i] = th.eRe;
         bIm[i] = th.eIm;
       }
@@ -199,26 +195,26 @@ export function harmonicPorts(
     for (let k = 0; k < m; k++) {
       const r = rx[k]!;
       const row = loop(t + k);
-      set(row, row, r.resistance, wh * L[t + k]![t + k]!);
+      addAt(A, row, row, r.resistance, wh * L[t + k]![t + k]!);
       if (r.topology === "series") {
         const [zr, zi] = capacitorImpedance(r.capacitance, r.capacitorEsr ?? 0, wh);
-        set(row, row, zr, zi);
+        addAt(A, row, row, zr, zi);
       }
       const prow = voltage(k);
       if (r.topology === "parallel") {
         // the tank voltage is the coil's voltage a − b; KCL at the top: −I_k − Y_C·V_k = I_L
-        set(row, prow, -1, 0);
-        set(prow, row, -1, 0);
+        addAt(A, row, prow, -1, 0);
+        addAt(A, prow, row, -1, 0);
         const [yr, yi] = capacitorAdmittance(r.capacitance, r.capacitorEsr ?? 0, wh);
-        set(prow, prow, -yr, -yi);
+        addAt(A, prow, prow, -yr, -yi);
       } else {
         // one loop: the load carries the coil current I_k
-        set(row, prow, 1, 0);
-        set(prow, row, 1, 0);
+        addAt(A, row, prow, 1, 0);
+        addAt(A, prow, row, 1, 0);
       }
       if (!nonlinear[k]) {
         linearAdmittance(k, h, tmp);
-        set(prow, prow, -tmp[0]!, -tmp[1]!);
+        addAt(A, prow, prow, -tmp[0]!, -tmp[1]!);
       }
     }
     const bad = complexLuFactor(aRe, aIm, size, piv);
@@ -270,6 +266,22 @@ export function harmonicPorts(
     xtRe,
     xtIm,
   };
+}
+
+/**
+ * The next n entries of a shared backing store (one allocation for many work arrays), advancing its cursor.
+ * @example takeFrom({ buf: new Float64Array(4), at: 1 }, 2).length // → 2
+ */
+export function takeFrom(c: { readonly buf: Float64Array; at: number }, n: number): Float64Array {
+  const out = c.buf.subarray(c.at, c.at + n);
+  c.at += n;
+  return out;
+}
+
+/** a[i][j] += re + j·im in a split complex n×n matrix. */
+function addAt(a: { readonly re: Float64Array; readonly im: Float64Array; readonly n: number }, i: number, j: number, re: number, im: number): void {
+  a.re[i * a.n + j] = a.re[i * a.n + j]! + re;
+  a.im[i * a.n + j] = a.im[i * a.n + j]! + im;
 }
 
 /** A voltage drive's source as the transmitter coil sees it at one harmonic: EMF and impedance (V, Ω). */

@@ -117,48 +117,8 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
       xIm[h * size + i] = im;
     }
   }
-  const at = (h: number, i: number): Phasor => ({ re: xRe[h * size + i]!, im: xIm[h * size + i]! });
-  const series = (i: number): Phasor[] => Array.from({ length: H + 1 }, (_, h) => at(h, i));
-  const abs = (p: Phasor): number => Math.hypot(p.re, p.im);
-  const mul = (p: Phasor, re: number, im: number): Phasor => ({ re: p.re * re - p.im * im, im: p.re * im + p.im * re });
-  const add = (p: Phasor, q: Phasor): Phasor => ({ re: p.re + q.re, im: p.im + q.im });
-  const sub = (p: Phasor, q: Phasor): Phasor => ({ re: p.re - q.re, im: p.im - q.im });
-  /** mean power of v·i over the period from harmonics: V₀I₀ + ½ΣRe(V_h I_h*) */
-  const power = (v: readonly Phasor[], i: readonly Phasor[]): number => {
-    let s = v[0]!.re * i[0]!.re;
-    for (let h = 1; h <= H; h++) s += 0.5 * (v[h]!.re * i[h]!.re + v[h]!.im * i[h]!.im);
-    return s;
-  };
-  const meanSquare = (i: readonly Phasor[]): number => {
-    let s = i[0]!.re * i[0]!.re;
-    for (let h = 1; h <= H; h++) s += 0.5 * (i[h]!.re * i[h]!.re + i[h]!.im * i[h]!.im);
-    return s;
-  };
-  const coef = new Float64Array(B);
-  const samples = new Float64Array(N);
-  const extremes = (x: readonly Phasor[]): [number, number] => {
-    coef[0] = x[0]!.re;
-    for (let h = 1; h <= H; h++) {
-      coef[2 * h - 1] = x[h]!.re;
-      coef[2 * h] = x[h]!.im;
-    }
-    synthesize(sys.tables, H, coef, 0, samples);
-    let hi = -Infinity;
-    let lo = Infinity;
-    for (let s = 0; s < N; s++) {
-      hi = Math.max(hi, samples[s]!);
-      lo = Math.min(lo, samples[s]!);
-    }
-    return [hi, lo];
-  };
-  const div = (p: Phasor, q: Phasor): Phasor => {
-    const d = q.re * q.re + q.im * q.im;
-    return d > 0 ? { re: (p.re * q.re + p.im * q.im) / d, im: (p.im * q.re - p.re * q.im) / d } : { re: 0, im: 0 };
-  };
-  const peakAbs = (x: readonly Phasor[]): number => {
-    const [hi, lo] = extremes(x);
-    return Math.max(Math.abs(hi), Math.abs(lo));
-  };
+  const X: Expanded = { re: xRe, im: xIm, size, H };
+  const S: Synth = { tables: sys.tables, H, N, coef: new Float64Array(B), samples: new Float64Array(N) };
 
   const threshold = options.litThreshold ?? DEFAULT_LIT_THRESHOLD;
   const brightRef = options.brightnessReference ?? DEFAULT_BRIGHTNESS_REFERENCE;
@@ -176,7 +136,7 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
   let txCapLoss = 0;
   for (let ti = 0; ti < t; ti++) {
     const tx = txs[ti]!;
-    const i0 = series(ports.index.loop(ti));
+    const i0 = series(X, ports.index.loop(ti));
     txCurrents.push(i0);
     // coil voltage RᵢIᵢ + jωLᵢIᵢ + Σ jωMᵢⱼIⱼ (every other coil); mv the mutual part at the fundamental
     const coilV: Phasor[] = [];
@@ -185,7 +145,7 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
       let v = mul(i0[h]!, tx.resistance, h * w * L[ti]![ti]!);
       for (let j = 0; j < n; j++) {
         if (j === ti) continue;
-        const e = mul(at(h, ports.index.loop(j)), 0, h * w * L[ti]![j]!);
+        const e = mul(at(X, h, ports.index.loop(j)), 0, h * w * L[ti]![j]!);
         v = add(v, e);
         if (h === 1) mv = add(mv, e);
       }
@@ -202,7 +162,7 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
     let inputI = 0;
     let driverI = 0;
     if (wf?.kind === "singleSwitch") {
-      const vsw = series(ports.index.switchNode);
+      const vsw = series(X, ports.index.switchNode);
       for (let h = 0; h <= H; h++) {
         const tank = sub(h === 0 ? { re: wf.supply, im: 0 } : { re: 0, im: 0 }, vsw[h]!);
         const [yr, yi] = capacitorAdmittance(c0, esr0, h * w);
@@ -219,7 +179,7 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
       let pl = 0;
       for (let s = 0; s < N; s++) pl += v[s]! * i[s]!;
       driverI = pl / N;
-      const [hi, lo] = extremes(vsw);
+      const [hi, lo] = extremes(S, vsw);
       let hs = 0;
       for (let h = 2; h <= H; h++) hs += abs(vsw[h]!) ** 2;
       switchDetail = { voltage: vsw, peak: hi, minimum: lo, distortion: abs(vsw[1]!) > 0 ? Math.sqrt(hs) / abs(vsw[1]!) : Infinity };
@@ -247,7 +207,8 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
       }
       if (drive.kind === "voltage") {
         // EMF·I over the period; the source resistance's loss is the driver loss
-        const emfV = termV.map((v, h) => add(v, mul(srcI[h]!, drive.resistance, 0)));
+        const emfV: Phasor[] = [];
+        for (let h = 0; h <= H; h++) emfV.push(add(termV[h]!, mul(srcI[h]!, drive.resistance, 0)));
         inputI = power(emfV, srcI);
         driverI = drive.resistance * meanSquare(srcI);
       } else {
@@ -261,8 +222,8 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
     txCoilLoss += coilLoss;
     txCapLoss += capLoss;
     const txLabel = tx.label ?? (t > 1 ? `transmitter ${ti + 1}` : "transmitter");
-    const txCapPeak = peakAbs(capV);
-    const coilPeak = peakAbs(coilV);
+    const txCapPeak = peakAbs(S, capV);
+    const coilPeak = peakAbs(S, coilV);
     pushIf(warnings, partVoltageWarning(txLabel + " capacitor", txCapPeak, tx.capacitorRating));
     pushIf(warnings, selfResonanceWarning(txLabel + " coil", f, tx.selfResonance));
     pushIf(cautions, voltageCaution(txLabel + " coil", coilPeak, cautionV));
@@ -317,9 +278,10 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
   let delivered = 0;
   let rxCoil = 0;
   let rxCap = 0;
-  rx.forEach((r, k) => {
-    const ik = series(ports.index.loop(t + k));
-    const vk = series(ports.index.voltage(k));
+  for (let k = 0; k < m; k++) {
+    const r = rx[k]!;
+    const ik = series(X, ports.index.loop(t + k));
+    const vk = series(X, ports.index.voltage(k));
     const p = ports.receiverPort[k]!;
     const emf: Phasor[] = [];
     const cv: Phasor[] = [];
@@ -328,7 +290,7 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
     const loadI: Phasor[] = [];
     for (let h = 0; h <= H; h++) {
       let e: Phasor = { re: 0, im: 0 };
-      for (let j = 0; j < n; j++) if (j !== t + k) e = sub(e, mul(at(h, ports.index.loop(j)), 0, h * w * L[t + k]![j]!));
+      for (let j = 0; j < n; j++) if (j !== t + k) e = sub(e, mul(at(X, h, ports.index.loop(j)), 0, h * w * L[t + k]![j]!));
       emf.push(e);
       cv.push(sub(mul(ik[h]!, r.resistance, h * w * L[t + k]![t + k]!), e));
       if (r.topology === "parallel") {
@@ -366,20 +328,22 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
       ledList = sys.loads[p]!.leds(v);
     } else {
       loadPower = power(vk, loadI);
-      [vPeak, vMin] = extremes(vk);
+      [vPeak, vMin] = extremes(S, vk);
       ledList = r.load.ledCurrents ? r.load.ledCurrents(abs(vk[1]!)) : [];
     }
-    const leds: LedState[] = ledList.map((d) => ({
-      label: d.label,
-      averageCurrent: d.current,
-      relativeBrightness: d.relativeBrightness ?? Math.max(d.current, 0) / brightRef,
-      lit: d.current >= threshold,
-    }));
+    const leds: LedState[] = [];
+    let lit = false;
+    let allLit = ledList.length > 0;
+    for (const d of ledList) {
+      leds.push({ label: d.label, averageCurrent: d.current, relativeBrightness: d.relativeBrightness ?? Math.max(d.current, 0) / brightRef, lit: d.current >= threshold });
+      lit ||= d.current >= threshold;
+      allLit &&= d.current >= threshold;
+    }
     const label = r.label ?? `receiver ${k + 1}`;
-    const capPeak = peakAbs(capVk);
+    const capPeak = peakAbs(S, capVk);
     pushIf(warnings, partVoltageWarning(label + " capacitor", capPeak, r.capacitorRating));
     pushIf(warnings, selfResonanceWarning(label + " coil", f, r.selfResonance));
-    pushIf(cautions, voltageCaution(label + " tank", Math.max(capPeak, peakAbs(cv)), cautionV));
+    pushIf(cautions, voltageCaution(label + " tank", Math.max(capPeak, peakAbs(S, cv)), cautionV));
     const coilLoss = r.resistance * meanSquare(ik);
     const capLoss = (r.capacitorEsr ?? 0) * meanSquare(capIk);
     delivered += loadPower;
@@ -411,11 +375,11 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
       coilLoss,
       capacitorLoss: capLoss,
       leds,
-      lit: leds.some((d) => d.lit),
-      allLit: leds.length > 0 && leds.every((d) => d.lit),
+      lit,
+      allLit,
     });
     rxDetail.push({ loadVoltage: vk, loadVoltagePeak: vPeak, loadVoltageMinimum: vMin, coilCurrent: ik });
-  });
+  }
 
   // ── truncation indicator: harmonics H+1…2H of the port currents through |T_pp,H|·H/h ──
   let truncation = 0;
@@ -437,7 +401,7 @@ export function assembleHarmonicResult(a: AssembleInput): HarmonicLinkResult {
     }
   }
 
-  const t1Peak = peakAbs(txCurrents[0]!);
+  const t1Peak = peakAbs(S, txCurrents[0]!);
   const drive = txs[0]!.drive;
   const wf = drive.kind === "voltage" ? drive.waveform : undefined;
   const band: ModelBand = harmonicBand(truncation, H);
@@ -505,6 +469,90 @@ function harmonicBand(truncation: number, order: number): ModelBand {
         ? `harmonic balance, order ${order}: within 1 % of the transient engine's periodic steady state on LED average and coil currents over the validated grid`
         : `harmonic balance, order ${order}: the dropped harmonics are large (truncation indicator ${truncation.toPrecision(2)}); raise the order`,
   };
+}
+
+/** Every unknown at every harmonic, [h·size + i]. */
+interface Expanded {
+  readonly re: Float64Array;
+  readonly im: Float64Array;
+  readonly size: number;
+  readonly H: number;
+}
+
+/** Unknown i at harmonic h as a phasor. */
+function at(x: Expanded, h: number, i: number): Phasor {
+  return { re: x.re[h * x.size + i]!, im: x.im[h * x.size + i]! };
+}
+
+/** Unknown i at every harmonic 0…H. */
+function series(x: Expanded, i: number): Phasor[] {
+  const out: Phasor[] = [];
+  for (let h = 0; h <= x.H; h++) out.push(at(x, h, i));
+  return out;
+}
+
+function abs(p: Phasor): number {
+  return Math.hypot(p.re, p.im);
+}
+function mul(p: Phasor, re: number, im: number): Phasor {
+  return { re: p.re * re - p.im * im, im: p.re * im + p.im * re };
+}
+function add(p: Phasor, q: Phasor): Phasor {
+  return { re: p.re + q.re, im: p.im + q.im };
+}
+function sub(p: Phasor, q: Phasor): Phasor {
+  return { re: p.re - q.re, im: p.im - q.im };
+}
+function div(p: Phasor, q: Phasor): Phasor {
+  const d = q.re * q.re + q.im * q.im;
+  return d > 0 ? { re: (p.re * q.re + p.im * q.im) / d, im: (p.im * q.re - p.re * q.im) / d } : { re: 0, im: 0 };
+}
+
+/** Mean power of v·i over the period from harmonics: V₀I₀ + ½ΣRe(V_h I_h*). */
+function power(v: readonly Phasor[], i: readonly Phasor[]): number {
+  let s = v[0]!.re * i[0]!.re;
+  for (let h = 1; h < v.length; h++) s += 0.5 * (v[h]!.re * i[h]!.re + v[h]!.im * i[h]!.im);
+  return s;
+}
+
+/** Mean square over the period from harmonics. */
+function meanSquare(i: readonly Phasor[]): number {
+  let s = i[0]!.re * i[0]!.re;
+  for (let h = 1; h < i.length; h++) s += 0.5 * (i[h]!.re * i[h]!.re + i[h]!.im * i[h]!.im);
+  return s;
+}
+
+/** A waveform's samples from its harmonics (workspace). */
+interface Synth {
+  readonly tables: HarmonicSystem["tables"];
+  readonly H: number;
+  readonly N: number;
+  readonly coef: Float64Array;
+  readonly samples: Float64Array;
+}
+
+/** Largest and smallest value over the sampled period of the waveform with harmonics x. */
+function extremes(w: Synth, x: readonly Phasor[]): [number, number] {
+  const { H, N, coef, samples } = w;
+  coef[0] = x[0]!.re;
+  for (let h = 1; h <= H; h++) {
+    coef[2 * h - 1] = x[h]!.re;
+    coef[2 * h] = x[h]!.im;
+  }
+  synthesize(w.tables, H, coef, 0, samples);
+  let hi = -Infinity;
+  let lo = Infinity;
+  for (let s = 0; s < N; s++) {
+    hi = Math.max(hi, samples[s]!);
+    lo = Math.min(lo, samples[s]!);
+  }
+  return [hi, lo];
+}
+
+/** Largest |value| over the sampled period. */
+function peakAbs(w: Synth, x: readonly Phasor[]): number {
+  const [hi, lo] = extremes(w, x);
+  return Math.max(Math.abs(hi), Math.abs(lo));
 }
 
 function pushIf(list: string[], s: string | undefined): void {

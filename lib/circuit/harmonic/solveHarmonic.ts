@@ -142,10 +142,9 @@ export function solveLinkHarmonic(network: LinkNetwork, options: HarmonicOptions
  * @example sharedDriveRefusal(network) // undefined for transmitters on their own drives
  */
 export function sharedDriveRefusal(network: LinkNetwork): string | undefined {
-  const txs = network.transmitters ?? [network.transmitter];
-  return (network.sharedDrives?.length ?? 0) > 0 || txs.some((t) => t.feed !== undefined)
-    ? "harmonic balance solves transmitters on their own drives; coils on a shared drive keep the describing function"
-    : undefined;
+  let shared = (network.sharedDrives?.length ?? 0) > 0;
+  for (const t of network.transmitters ?? [network.transmitter]) shared ||= t.feed !== undefined;
+  return shared ? "harmonic balance solves transmitters on their own drives; coils on a shared drive keep the describing function" : undefined;
 }
 
 /** Harmonic balance at one order and sampling, optionally started from a lower-order solution. */
@@ -336,5 +335,7 @@ export function emfSpectrum(network: LinkNetwork, i = 0): EmfSpectrum {
 
 /** Every transmitter's {@link emfSpectrum}, in the network's order. */
 export function emfSpectra(network: LinkNetwork): EmfSpectrum[] {
-  return (network.transmitters ?? [network.transmitter]).map((_, i) => emfSpectrum(network, i));
+  const out: EmfSpectrum[] = [];
+  for (let i = 0; i < (network.transmitters?.length ?? 1); i++) out.push(emfSpectrum(network, i));
+  return out;
 }
