@@ -45,14 +45,18 @@ function stats(t: number[]): { min: number; median: number; rounds: number } {
 }
 
 /**
- * Two async runs timed in alternating rounds after one warm-up each, so a change of machine load
+ * Two async runs timed in alternating rounds after three warm-ups each, so a change of machine load
  * during the run falls on both (the ratio is taken from the same run). Also the process's CPU time
  * per run (all threads: process.cpuUsage), which the load of other processes hardly changes: the
  * two-thread run's CPU over the one-thread run's shows what the pool costs (start-up excluded).
  */
 async function interleaved(rounds: number, a: () => Promise<unknown>, b: () => Promise<unknown>): Promise<[ReturnType<typeof stats>, ReturnType<typeof stats>, number, number]> {
-  await a();
-  await b();
+  // three warm-up runs each: V8 keeps optimising the solver's functions over the first maps
+  // (measured: its compiler threads took 85 ms of CPU per map over maps 2–11, 26 ms after six)
+  for (let w = 0; w < 3; w++) {
+    await a();
+    await b();
+  }
   const ta: number[] = [];
   const tb: number[] = [];
   const ca: number[] = [];
@@ -93,7 +97,7 @@ const pool = await taskPool(2);
 try {
   if (want("coverage")) {
     // one thread and two (the pool started before timing) in alternating rounds of the same run
-    const [one, two, cpuOne, cpuTwo] = await interleaved(7, () => coverageMap(system, region, { refine: false }), () => coverageMap(system, region, { refine: false, threads: pool }));
+    const [one, two, cpuOne, cpuTwo] = await interleaved(9, () => coverageMap(system, region, { refine: false }), () => coverageMap(system, region, { refine: false, threads: pool }));
     line("analysis: coverageMap, 1 thread", "121×61 nonlinear solves", one, 0.3);
     line("analysis: coverageMap, 2 threads (pool started)", "121×61 nonlinear solves", two);
     const ratio = one.median / two.median;
