@@ -18,7 +18,8 @@
  * point taken at once, steps halved when no neighbour improves; integers stop at a step of 1,
  * radius, pitch and frequency at 1 % of their range. Derivative-free because the score jumps
  * (E-series capacitors, integer turns, coil counts). The finalists are then re-checked with
- * coverageMap's refinement (dead lines thinner than the search grid), re-ranked, and returned.
+ * coverageMap's refinement (dead lines thinner than the search grid; to `finalResolution`, 1 mm by
+ * default, within the `maxRefineSolves` cost guard), re-ranked, and returned.
  */
 import * as z from "../zod.ts";
 import { frequency as frequencyQ, length, parseInput, angle, current as currentQ, lazySchema } from "../schema.ts";
@@ -139,6 +140,19 @@ export interface SearchOptions {
   readonly threads?: ThreadsOption;
   /** progress: done/total designs (grid, compass search, then the finalists' refined maps) and an estimate of the time left */
   readonly onProgress?: ProgressCallback;
+  /**
+   * finest step of an array finalist's refined coverage map, m or "1 mm" (default 1 mm): dead
+   * lines down to about this width are found. The cost grows as (map step / resolution)², so it
+   * is guarded by `maxRefineSolves`.
+   */
+  readonly finalResolution?: number | string;
+  /**
+   * cost guard of that refinement: the most refined link solves a finalist's map may take per LED
+   * colour (default 20,000 — about 3 s of one thread for a 3 × 3 array with five tilts). When the
+   * solves projected for `finalResolution` exceed it, the map goes to the finest step that fits,
+   * and the result says so (`refined.limitedBy`).
+   */
+  readonly maxRefineSolves?: number;
 }
 
 /** One returned design. */
@@ -148,7 +162,14 @@ export interface DesignResult extends DesignEvaluation {
   /** a one-line description with units */
   readonly summary: string;
   /** the finalist check: coverageMap with refinement over the region (arrays), its lit share and weakest LED current, A */
-  readonly refined?: { readonly litShare: number; readonly weakest: number; readonly resolution: number };
+  readonly refined?: {
+    readonly litShare: number;
+    readonly weakest: number;
+    /** the finest step reached, m (the coarsest over the colours) */
+    readonly resolution: number;
+    /** when the cost guard stopped short of `finalResolution`: why, in words */
+    readonly limitedBy?: string;
+  };
 }
 
 /** The result of {@link searchDesign}. */
@@ -186,6 +207,7 @@ export async function searchDesign(requirements: RequirementsInput, space: Desig
   const req = parseInput(RequirementsInput, requirements, where);
   const sp = parseInput(DesignSpaceInput, space, where);
   checkThreads(options.threads, where);
+  const refineOpts = parseInput(RefineOptions, { finalResolution: options.finalResolution, maxRefineSolves: options.maxRefineSolves }, where);
   checkRanges(req, sp, where);
   const problem = problemOf(req, sp, options);
   const budget = options.maxEvaluations ?? 120;
@@ -232,7 +254,7 @@ export async function searchDesign(requirements: RequirementsInput, space: Desig
     const top = diverse(all, finalists);
     progress.add(-(finalists - top.length));
     for (const d of top) {
-      checked.push(await refineFinalist(d, problem, pool));
+      checked.push(await refineFinalist(d, problem, pool, { resolution: refineOpts.finalResolution ?? DEFAULT_FINAL_RESOLUTION, maxSolves: refineOpts.maxRefineSolves ?? DEFAULT_MAX_REFINE_SOLVES }));
       progress.done(1);
     }
     checked.sort(byScore);
@@ -436,19 +458,37 @@ async function compass(start: DesignEvaluation, req: Req, sp: Space, evaluate: (
   }
 }
 
-/** Side of the finalists' coverage maps (points a side); their refinement: a quarter of the smaller step, at least FINAL_MAP_RESOLUTION. */
+/** Side of the finalists' coverage maps (points a side); their screening refinement: a quarter of the step, at least SCREEN_RESOLUTION. */
 const FINAL_MAP_POINTS = 17;
-/** Finest refinement of a finalist's map, m: 4 mm (coverageMap then finds dead lines down to about this width; the search is a screen, the chosen design's own map can go finer). */
-const FINAL_MAP_RESOLUTION = 4e-3;
+/** The screening refinement's finest step, m: 4 mm (cheap; it finds which cells need the final one). */
+const SCREEN_RESOLUTION = 4e-3;
+/** Default finest step of a finalist's refined map, m. */
+export const DEFAULT_FINAL_RESOLUTION = 1e-3;
+/** Default cost guard: refined link solves per finalist map and colour. */
+export const DEFAULT_MAX_REFINE_SOLVES = 20_000;
+
+const RefineOptions = lazySchema(() => z.object({
+  finalResolution: length({ positive: true, max: 1 }).optional(),
+  maxRefineSolves: z.number().int().min(0).max(10_000_000).optional(),
+}));
 
 /**
- * Re-checks an array finalist with coverageMap over the region (17 × 17, refined to a quarter of
- * the step, at least 4 mm, near the lit boundary and where the net coupling changes sign): with a share of 1 its
- * weakest current bounds the coverage margin; with a smaller share a refined lit share below the
- * required one makes the margin ln(lit share / required share). One coil: the search's radial
- * scan already bisects its dark rings, so it is returned as it is.
+ * Re-checks an array finalist with coverageMap over the region (17 × 17), in two passes: a
+ * screening map refined to a quarter of the step (at least 4 mm) near the lit boundary and where
+ * the net coupling changes sign, then — where `guard.resolution` is finer — the map refined to
+ * that step. The second pass's cost is projected from the cells the screen refined (each cell
+ * (⌈step/resolution⌉ + 1)² solves per orientation); past `guard.maxSolves` the step is the finest
+ * that fits, and `limitedBy` says so. With a share of 1 its weakest current bounds the coverage
+ * margin; with a smaller share a refined lit share below the required one makes the margin
+ * ln(lit share / required share). One coil: the search's radial scan already bisects its dark
+ * rings, so it is returned as it is.
  */
-export async function refineFinalist(d: DesignEvaluation, p: DesignProblem, pool: TaskPool | undefined): Promise<DesignEvaluation & { refined?: DesignResult["refined"] }> {
+export async function refineFinalist(
+  d: DesignEvaluation,
+  p: DesignProblem,
+  pool: TaskPool | undefined,
+  guard: { readonly resolution: number; readonly maxSolves: number } = { resolution: DEFAULT_FINAL_RESOLUTION, maxSolves: DEFAULT_MAX_REFINE_SOLVES },
+): Promise<DesignEvaluation & { refined?: DesignResult["refined"] }> {
   const c = d.candidate;
   if (c.layout.rows * c.layout.columns === 1) return d;
   const [hx, hy] = "radius" in p.cover ? [p.cover.radius, p.cover.radius] : [p.cover.width / 2, p.cover.depth / 2];
@@ -456,19 +496,38 @@ export async function refineFinalist(d: DesignEvaluation, p: DesignProblem, pool
   const token = tokenCoil(c, p);
   const parts = { tx, token, C1: d.transmitterCapacitance, C2: d.tokenCapacitance };
   const step = (2 * Math.min(hx, hy)) / (FINAL_MAP_POINTS - 1);
-  const resolution = Math.max(step / 4, FINAL_MAP_RESOLUTION);
+  const screen = Math.max(step / 4, SCREEN_RESOLUTION);
   // the search's five axes: flat, and tilted by ±tilt about x and about y
   const t = p.tilt;
   const orientation = t > 0 ? [{ tilt: 0 }, { tilt: t, about: [1, 0, 0] as const }, { tilt: -t, about: [1, 0, 0] as const }, { tilt: t, about: [0, 1, 0] as const }, { tilt: -t, about: [0, 1, 0] as const }] : undefined;
+  const axes = orientation?.length ?? 1;
   let litShare = 1;
   let weakest = Infinity;
+  let resolution = 0;
+  let limitedBy: string | undefined;
   for (const colour of p.colours) {
     const system = candidateSystem(c, p, parts, colour, [0, 0, d.tokenHeight]);
-    const map = await coverageMap(
-      system,
-      { x: { from: -hx, to: hx, points: FINAL_MAP_POINTS }, y: { from: -hy, to: hy, points: FINAL_MAP_POINTS }, z: d.tokenHeight },
-      { resolution, litThreshold: p.litThreshold, ...(orientation ? { orientation } : {}), ...(pool ? { threads: pool } : {}) },
-    );
+    const mapAt = (res: number) =>
+      coverageMap(
+        system,
+        { x: { from: -hx, to: hx, points: FINAL_MAP_POINTS }, y: { from: -hy, to: hy, points: FINAL_MAP_POINTS }, z: d.tokenHeight },
+        { resolution: res, litThreshold: p.litThreshold, ...(orientation ? { orientation } : {}), ...(pool ? { threads: pool } : {}) },
+      );
+    let map = await mapAt(screen);
+    let res = screen;
+    if (guard.resolution < screen && map.refinedCells > 0) {
+      const cost = (r: number): number => map.refinedCells * (Math.ceil(step / r - 1e-9) + 1) ** 2 * axes;
+      res = guard.resolution;
+      if (cost(res) > guard.maxSolves) {
+        // the finest step whose projected solves fit the guard
+        const perSide = Math.floor(Math.sqrt(guard.maxSolves / (map.refinedCells * axes))) - 1;
+        res = perSide >= 1 ? Math.max(guard.resolution, step / perSide) : screen;
+        limitedBy = `the refinement stopped at ${Number((res * 1e3).toPrecision(3))} mm, not ${Number((guard.resolution * 1e3).toPrecision(3))} mm: ${map.refinedCells} cells to refine would have taken about ${Math.round(cost(guard.resolution))} link solves, over maxRefineSolves (${guard.maxSolves})`;
+      }
+      if (res < screen) map = await mapAt(res);
+      else res = screen;
+    }
+    resolution = Math.max(resolution, res);
     // a disc region: the map's lit share over the square is an estimate of the disc's (stated in the doc)
     litShare = Math.min(litShare, map.litFraction);
     weakest = Math.min(weakest, p.share === 1 ? map.weakest.current : shareCurrent(Array.from(map.ledCurrent), p.share));
@@ -477,7 +536,7 @@ export async function refineFinalist(d: DesignEvaluation, p: DesignProblem, pool
   if (p.share < 1 && litShare < p.share) coverage = Math.min(coverage, Math.log(litShare / p.share));
   const margins = { ...d.margins, coverage };
   const binding = (Object.keys(margins) as Constraint[]).reduce((a, b) => (margins[b] < margins[a] ? b : a));
-  return { ...d, coveredCurrent: Math.min(d.coveredCurrent, weakest), margins, binding, score: margins[binding], refined: { litShare, weakest, resolution } };
+  return { ...d, coveredCurrent: Math.min(d.coveredCurrent, weakest), margins, binding, score: margins[binding], refined: { litShare, weakest, resolution, ...(limitedBy ? { limitedBy } : {}) } };
 }
 
 /** The region as sorted radii of a 41 × 41 grid of its points (a disc: points inside it), and its reach. */

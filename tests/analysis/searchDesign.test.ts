@@ -76,6 +76,20 @@ describe("searchDesign", () => {
     expect(r.designs[0]!.summary).toMatch(/1 × 2 coils at 120 × 0 mm pitch/);
   }, 600_000);
 
+  it("refines an array finalist to finalResolution (1 mm by default) within its cost guard, and says when the guard stops it short", async () => {
+    const p = designProblem(tray, traySpace, { onResistance: 1 });
+    const known = evaluateDesign({ radius: 0.05, turns: 10, wire: 0.8e-3, frequency: 125e3, tokenTurns: 140, layout: { rows: 1, columns: 2, pitchX: 0.12, pitchY: 0, phasing: "alternate" as const } }, p);
+    const fine = await refineFinalist(known, p, undefined);
+    expect(fine.refined!.limitedBy).toBeUndefined();
+    expect(fine.refined!.resolution).toBeLessThanOrEqual(0.001);
+    const guarded = await refineFinalist(known, p, undefined, { resolution: 0.001, maxSolves: 2000 });
+    expect(guarded.refined!.limitedBy).toMatch(/stopped at .* mm, not 1 mm: .* over maxRefineSolves \(2000\)/);
+    expect(guarded.refined!.resolution).toBeGreaterThan(0.001);
+    expect(guarded.refined!.resolution).toBeLessThanOrEqual(0.004);
+    // the dead line on the seam of the 0°/180° pair is found by both: the finer map's lit share within a 4 mm band's share of the coarser
+    expect(Math.abs(fine.refined!.litShare - guarded.refined!.litShare)).toBeLessThan(0.004 / 0.12);
+  }, 600_000);
+
   it("gives the same designs on 1 and 2 threads", async () => {
     const one = await searchDesign(tray, traySpace, { maxEvaluations: 8, onResistance: 1 });
     const pool = await taskPool(2);
