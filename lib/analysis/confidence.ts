@@ -55,7 +55,7 @@ export function wilsonInterval(successes: number, trials: number, level = 0.95):
   if (!(Number.isInteger(successes) && successes >= 0 && successes <= trials)) {
     throw new TanklightInputError([{ path: "successes", message: `must be an integer from 0 to trials (${trials})`, value: successes }], where);
   }
-  if (!(level > 0 && level < 1)) throw new TanklightInputError([{ path: "level", message: "must be between 0 and 1, e.g. 0.95", value: level }], where);
+  if (!(typeof level === "number" && level > 0 && level < 1)) throw new TanklightInputError([{ path: "level", message: "must be between 0 and 1, e.g. 0.95", value: level }], where);
   const n = trials;
   const p = successes / n;
   const z = normalQuantile(1 - (1 - level) / 2);

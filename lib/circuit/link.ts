@@ -9,7 +9,7 @@
  * then solves the coupled-circuit matrix with each load's describing function.
  */
 import * as z from "../zod.ts";
-import { current, nearestKey, parseArgs, parseInput, voltage, lazySchema } from "../schema.ts";
+import { current, nearestKey, parseArgs, parseInput, voltage, lazySchema, unknownKeyMessage } from "../schema.ts";
 import { TanklightInputError, assertNever } from "../errors.ts";
 import { couplingEvaluator, type CouplingEvaluator } from "../em/couplingEvaluator.ts";
 import { selfInductance } from "../em/selfInductance.ts";
@@ -281,6 +281,15 @@ const ORIGIN: Pose = { position: [0, 0, 0] };
  * @example linkNetwork(system).coupling[0].length // → 2 (transmitter and one receiver)
  */
 export function linkNetwork(system: LinkSystem, options: { readonly tabulateLoads?: boolean } = {}): LinkNetworkBuild {
+  if (typeof options !== "object" || options === null || Array.isArray(options) || Object.keys(options).some((k) => k !== "tabulateLoads") || !(options.tabulateLoads === undefined || typeof options.tabulateLoads === "boolean")) {
+    const key = typeof options === "object" && options !== null ? Object.keys(options).find((k) => k !== "tabulateLoads") : undefined;
+    throw new TanklightInputError(
+      [key !== undefined
+        ? { path: `options.${key}`, message: unknownKeyMessage(key, ["tabulateLoads"]), value: (options as Record<string, unknown>)[key] }
+        : { path: typeof options === "object" && options !== null ? "options.tabulateLoads" : "options", message: "must be { tabulateLoads?: boolean }", value: options }],
+      "linkNetwork",
+    );
+  }
   if (typeof system !== "object" || system === null || Array.isArray(system)) {
     throw new TanklightInputError([{ path: "system", message: "expected a link system { frequency, transmitter or transmitters, receivers }", value: system }], "solveLink");
   }

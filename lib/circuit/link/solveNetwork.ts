@@ -29,7 +29,7 @@
  * tank impedances), ./localSolve.ts (step 1's scalar solve), ./operatingPoint.ts (the
  * iteration on an explicit workspace), ./assembleResult.ts (the result from the solved state).
  */
-import { requireObject, requirePositive } from "../../errors.ts";
+import { TanklightInputError, requireObject, requirePositive, unknownKeyMessage } from "../../errors.ts";
 import { assembleResult, type SolvedLink } from "./assembleResult.ts";
 import { LinkConvergenceError } from "./localSolve.ts";
 import type { LinkNetwork, LinkOptions } from "./network.ts";
@@ -56,6 +56,7 @@ export { LinkConvergenceError } from "./localSolve.ts";
 export function solveLinkNetwork(network: LinkNetwork, options: LinkOptions = {}): LinkResult {
   requireObject(network, "network", "solveLinkNetwork");
   requireObject(options, "options", "solveLinkNetwork", true);
+  if (options !== undefined) checkLinkOptions(options, "solveLinkNetwork");
   requirePositive(network.frequency, "frequency", "Hz", "solveLinkNetwork");
   validateNetwork(network, "solveLinkNetwork");
   return assembleResult(solveLinkOperatingPoint(network, options), options);
@@ -88,4 +89,33 @@ export function solveLinkOperatingPoint(network: LinkNetwork, options: LinkOptio
     warnings.push(msg);
   }
   return { ws, converged, iterations, warnings };
+}
+
+/** The keys of LinkOptions, and of solveLink's options that the engines pass along with them (model, order, samples, tabulateLoads). */
+const LINK_OPTION_KEYS: readonly string[] = Object.freeze(["litThreshold", "brightnessReference", "cautionVoltage", "maxIterations", "tolerance", "onNonConvergence", "tabulateLoads", "model", "order", "samples"]);
+
+/**
+ * LinkOptions checked by hand (solveLinkNetwork runs in the analysis loops: a few typeof tests,
+ * no schema): known keys only (a typo names the nearest), SI numbers in range — solveLink takes
+ * the same options with units ("0.5 mA").
+ */
+function checkLinkOptions(options: LinkOptions, where: string): void {
+  const o = options as Record<string, unknown>;
+  const fail = (key: string, message: string): never => {
+    throw new TanklightInputError([{ path: `options.${key}`, message, value: o[key] }], where);
+  };
+  for (const key of Object.keys(o)) if (!LINK_OPTION_KEYS.includes(key)) fail(key, unknownKeyMessage(key, LINK_OPTION_KEYS));
+  const positive = (key: string, unit: string): void => {
+    const v = o[key];
+    if (v !== undefined && !(typeof v === "number" && v > 0 && v < Infinity)) fail(key, `must be a finite number > 0 ${unit} (SI; solveLink reads units)`);
+  };
+  positive("litThreshold", "A");
+  positive("brightnessReference", "A");
+  positive("cautionVoltage", "V");
+  const it = o["maxIterations"];
+  if (it !== undefined && !(Number.isInteger(it) && (it as number) >= 1 && (it as number) <= 10_000)) fail("maxIterations", "must be a whole number from 1 to 10000");
+  const tol = o["tolerance"];
+  if (tol !== undefined && !(typeof tol === "number" && tol > 0 && tol <= 0.01)) fail("tolerance", "must be a number > 0 and ≤ 0.01");
+  const nc = o["onNonConvergence"];
+  if (nc !== undefined && nc !== "throw" && nc !== "warn") fail("onNonConvergence", "must be 'throw' or 'warn'");
 }

@@ -4,7 +4,7 @@
  * these tokens, here", answered with units.
  */
 import { formatQuantity } from "../../units.ts";
-import { requireObject } from "../../errors.ts";
+import { TanklightInputError, requireObject } from "../../errors.ts";
 import type { LinkResult } from "./result.ts";
 
 /** One reported quantity. */
@@ -38,6 +38,11 @@ export interface LinkSummary {
  */
 export function summarizeLink(result: LinkResult, digits = 3): LinkSummary {
   requireObject(result, "result", "summarizeLink");
+  const r = result as { frequency?: unknown; receivers?: unknown; transmitters?: unknown };
+  if (!(typeof r.frequency === "number" && Number.isFinite(r.frequency) && Array.isArray(r.receivers) && Array.isArray(r.transmitters))) {
+    throw new TanklightInputError([{ path: "result", message: "must be what solveLink or solveLinkNetwork returned (a frequency, transmitters and receivers)", value: "an object without them" }], "summarizeLink");
+  }
+  if (!(Number.isInteger(digits) && digits >= 1 && digits <= 17)) throw new TanklightInputError([{ path: "digits", message: "must be a whole number of significant figures from 1 to 17", value: digits }], "summarizeLink");
   const rows: LinkSummaryRow[] = [];
   const add = (quantity: string, value: number, unit: string): void => {
     rows.push({ quantity, value, unit, text: formatQuantity(value, unit, digits) });

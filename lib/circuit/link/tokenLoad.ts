@@ -15,7 +15,7 @@
  */
 import { averageLoadCurrent, checkLoad, fundamentalConductance, fundamentalCurrentSlope } from "../loads/describingFunction.ts";
 import type { TokenLoad } from "../loads/types.ts";
-import { TanklightInputError, assertNever } from "../../errors.ts";
+import { TanklightInputError, assertNever, requireObject, unknownKeyMessage } from "../../errors.ts";
 import type { LinkLoadModel } from "./network.ts";
 
 /** Options of {@link tokenLoadModel}. */
@@ -148,6 +148,7 @@ function ledsAt(labels: readonly string[], avg: readonly Float64Array[], bright:
  */
 export function tokenLoadModel(load: TokenLoad, options: TokenLoadModelOptions = {}): LinkLoadModel {
   checkLoad(load, "tokenLoadModel");
+  checkModelOptions(options);
   const label = loadLabel(load);
   const exact: LinkLoadModel = {
     label,
@@ -241,4 +242,26 @@ function loadLabel(load: TokenLoad): string {
     default:
       return assertNever(load, "load.kind", "tokenLoadModel", "is not a known token load");
   }
+}
+
+const MODEL_OPTION_KEYS: readonly string[] = Object.freeze(["tabulate", "maxAmplitude", "step"]);
+/** Tabulated points at most (maxAmplitude / step): memory and build time grow with them. */
+const MAX_TABLE_POINTS = 1_000_000;
+
+/** tokenLoadModel's options: known keys only (a typo names the nearest), a boolean, amplitudes in V > 0, a bounded table. */
+function checkModelOptions(options: unknown): void {
+  const where = "tokenLoadModel";
+  requireObject(options, "options", where);
+  const o = options as Record<string, unknown>;
+  const fail = (key: string, message: string): never => {
+    throw new TanklightInputError([{ path: `options.${key}`, message, value: o[key] }], where);
+  };
+  for (const key of Object.keys(o)) if (!MODEL_OPTION_KEYS.includes(key)) fail(key, unknownKeyMessage(key, MODEL_OPTION_KEYS));
+  if (o["tabulate"] !== undefined && typeof o["tabulate"] !== "boolean") fail("tabulate", "must be true, false or absent");
+  for (const key of ["maxAmplitude", "step"]) {
+    const v = o[key];
+    if (v !== undefined && !(typeof v === "number" && v > 0 && v <= 1e4)) fail(key, "must be a number > 0 and ≤ 10000 V");
+  }
+  const points = ((o["maxAmplitude"] as number | undefined) ?? 12) / ((o["step"] as number | undefined) ?? 5e-3);
+  if (points > MAX_TABLE_POINTS) fail("step", `gives ${Math.round(points)} table points (maxAmplitude / step), more than ${MAX_TABLE_POINTS}: memory and build time grow with them`);
 }
