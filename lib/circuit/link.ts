@@ -535,7 +535,7 @@ export function solveLink(system: LinkSystem, options: SolveLinkOptions = {}): L
   const r = solveLinkNetwork(net, opts);
   const errorBand: ModelBand = {
     relative: Infinity,
-    basis: "describing function (fundamental only); its error is not estimated for several transmitters or a shared drive (the one-step harmonic-balance check handles one transmitter on its own drive)",
+    basis: "describing function (fundamental only); its error is not estimated by the default model over several transmitters (model 'auto' estimates it when every transmitter has its own drive) nor for coils on a shared drive",
   };
   return {
     ...r,
