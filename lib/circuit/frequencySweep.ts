@@ -94,7 +94,8 @@ export function frequencySweep(
   const fs = sweepFrequencies(args.frequencies);
   const at = typeof network === "function" ? network : (f: number): LinkNetwork => ({ ...network, frequency: f });
   // the solver checks the network and the link options; its messages carry this function's name
-  const solve = (f: number): LinkResult => underName(where, () => solveLinkNetwork(at(f), options));
+  const { refine: _refine, ...linkOptions } = options;
+  const solve = (f: number): LinkResult => underName(where, () => solveLinkNetwork(at(f), linkOptions));
   const n = fs.length;
   const out = {
     transmitterCurrent: new Float64Array(n),

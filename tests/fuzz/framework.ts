@@ -186,16 +186,18 @@ function nonFinite(value: unknown, allowInfinite: boolean, depth = 0): boolean {
 }
 
 /**
- * Calls one probe and classifies the outcome.
+ * Calls one probe (awaiting a returned promise) and classifies the outcome.
  * @returns the outcome and, for a failure, a line saying why.
  */
-export function classify(c: FuzzCase, args: readonly unknown[], kind: "bad" | "extreme", mustName: readonly string[]): { outcome: Outcome; why?: string } {
+export async function classify(c: FuzzCase, args: readonly unknown[], kind: "bad" | "extreme", mustName: readonly string[]): Promise<{ outcome: Outcome; why?: string }> {
   const t0 = performance.now();
   let result: unknown;
   let error: unknown;
   let threw = false;
   try {
     result = (c.call as (...a: unknown[]) => unknown)(...args);
+    // an async function's answer (renderSvg …): its value or its rejection
+    if (result instanceof Promise) result = await result;
   } catch (e) {
     threw = true;
     error = e;
@@ -251,25 +253,25 @@ export function fuzzSuite(area: string, cases: readonly FuzzCase[]): void {
   describe(`fuzz ${area}`, () => {
     const total = newCounts();
     for (const c of cases) {
-      it(`${c.name}: every bad input a clear TanklightInputError, never a TypeError, NaN or hang`, () => {
+      it(`${c.name}: every bad input a clear TanklightInputError, never a TypeError, NaN or hang`, async () => {
         const counts = newCounts();
         // the valid call itself must work
-        const base = classify(c, c.valid, "extreme", []);
+        const base = await classify(c, c.valid, "extreme", []);
         expect(base.outcome, `${c.name}(valid input): ${base.why ?? ""}`).toBe("finite");
-        for (const p of probes(c)) tally(counts, c, p.label, p.kind, classify(c, p.args, p.kind, p.mustName));
+        for (const p of probes(c)) tally(counts, c, p.label, p.kind, await classify(c, p.args, p.kind, p.mustName));
         // random junk in place of each argument (fast-check: strings, numbers, objects with odd keys …)
         const junkRuns = c.junkRuns ?? 20;
-        c.valid.forEach((_, i) => {
-          fc.assert(
-            fc.property(fc.anything({ withNullPrototype: true, withObjectString: true, withBoxedValues: true, withSparseArray: true }), (junk) => {
+        for (let i = 0; i < c.valid.length; i++) {
+          await fc.assert(
+            fc.asyncProperty(fc.anything({ withNullPrototype: true, withObjectString: true, withBoxedValues: true, withSparseArray: true }), async (junk) => {
               const args = replaced(c.valid, [i], junk);
-              const r = classify(c, args, "extreme", []);
+              const r = await classify(c, args, "extreme", []);
               tally(counts, c, `argument ${i} = ${fc.stringify(junk).slice(0, 60)}`, "extreme", r);
               return true;
             }),
             { numRuns: junkRuns, seed: 20261202 + i },
           );
-        });
+        }
         addInto(total, counts);
         // the failures in full (vitest abbreviates arrays in its assertion message)
         if (counts.failures.length > 0) console.log(counts.failures.slice(0, 12).join("\n"));

@@ -5,11 +5,14 @@
  * (framework: tests/fuzz/framework.ts). A notebook, a safety report and a coil are library
  * objects passed along (`skip`), but null, junk and a missing one still are tried. Demo data.
  */
-import { readFileSync } from "node:fs";
+import { mkdtempSync, readFileSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { afterAll } from "vitest";
 import { fuzzSuite } from "./framework.ts";
 import {
   ledSwatch, notebook, partsList, partVoltages, wireText, notebookMarkdown, notebookHtml, notebookText, tokenLoadLine, parseDesign,
-  parseDesignText, designJsonSchema, addSafetySections, roundWire, roundCoil, ledPreset, safetyReport,
+  parseDesignText, designJsonSchema, addSafetySections, roundWire, roundCoil, ledPreset, safetyReport, renderSvg, renderNotebook, writeNotebook, chart,
 } from "../../lib/mod.ts";
 
 const coil = roundCoil({ innerRadius: "6 mm", turns: 20, wire: { diameter: "0.1 mm" } });
@@ -22,6 +25,13 @@ const report = safetyReport(
   { frequency: "200 kHz", surfaceHeight: "4 mm", transmitters: [{ coil, current: "0.5 A" }] },
   { exposure: { nx: 3, ny: 3, nz: 2, discGrid: 2 }, metalObjects: [] },
 );
+const spec = chart.ledCurrent({ curves: [{ colour: "red", distance: [0.01, 0.05], current: [5e-3, 2e-4] }], threshold: 5e-4 });
+const withFigure = notebook("Figure notebook", { note: "Demo data." });
+withFigure.figure("led-current", spec, "LED current against distance (demo data)");
+/** writeNotebook writes below a temporary directory: a mutated dir ('toString', '') stays inside it */
+const tmp = mkdtempSync(join(tmpdir(), "tanklight-fuzz-"));
+afterAll(() => rmSync(tmp, { recursive: true, force: true }));
+const write = (nb: never, dir: unknown, onProgress: never) => writeNotebook(nb, typeof dir === "string" && dir !== "" ? join(tmp, dir) : (dir as string), onProgress);
 /** the casebook's design file (demo data) */
 const designText = readFileSync(new URL("../../casebook/designs/through-the-books.json", import.meta.url), "utf8");
 
@@ -46,4 +56,8 @@ fuzzSuite("report", [
   { name: "parseDesignText", where: "design file", call: parseDesignText, valid: [designText], extreme: [["{"], ["[]"], [" ".repeat(100)]] },
   { name: "designJsonSchema", call: designJsonSchema, valid: [] },
   { name: "addSafetySections", call: (r: never) => addSafetySections(notebook("t"), r), valid: [report], params: ["report"], skip: ["0"] },
+  // async renderers (vega is loaded on the first call): the spec and notebooks are library objects
+  { name: "renderSvg", call: renderSvg, valid: [spec, { scale: 2 }], params: ["spec", "options"], skip: ["0"], budgetMs: 8000, junkRuns: 8, bad: [[{}], [{ mark: "nonsense" }]] },
+  { name: "renderNotebook", call: renderNotebook, valid: [withFigure, () => undefined], params: ["nb", "onProgress"], skip: ["0"], budgetMs: 8000, junkRuns: 8 },
+  { name: "writeNotebook", call: write, valid: [withFigure, "out", () => undefined], params: ["nb", "dir", "onProgress"], skip: ["0"], text: ["1"], budgetMs: 8000, junkRuns: 8 },
 ]);
