@@ -30,7 +30,7 @@
  * 0.3 s to import. The loop below is 40 lines and stops on relative progress.
  */
 import * as z from "../zod.ts";
-import { current, frequency, length, parseInput, voltage, lazySchema } from "../schema.ts";
+import { current, frequency, inductance, length, parseArgs, parseInput, resistance, voltage, lazySchema } from "../schema.ts";
 import { TanklightInputError } from "../errors.ts";
 import { createRandom } from "../math/random.ts";
 import { DEFAULT_LIT_THRESHOLD } from "../circuit/link/network.ts";
@@ -756,9 +756,26 @@ export function predictRange(
  * (3.562 × supply, the class-E peak switch voltage — source: Sokal & Sokal 1975, Raab 1977),
  * and the coil's own loss ½I²R must stay below what the supply can deliver (supply × its
  * current limit).
+ * Quantity strings are read ("2.1 A", "6 uH"); values are bounded where the products would leave the double range.
  * @example drivePlausibility(2.1, { inductance: 6e-6, resistance: 0.1, frequency: 2e5 }, { supply: 5, currentLimit: 0.5 }).coilVoltage // → 15.83 (V peak, below 3.562 × 5 V)
  */
 export function drivePlausibility(
+  coilCurrent: number | string,
+  coil: { readonly inductance: number | string; readonly resistance: number | string; readonly frequency: number | string },
+  supply: { readonly supply: number | string; readonly currentLimit: number | string },
+): { plausible: boolean; coilVoltage: number; maxCoilVoltage: number; coilLoss: number; maxPower: number; reasons: string[] } {
+  const args = parseArgs(DrivePlausibilityArgs, [coilCurrent, coil, supply], "drivePlausibility");
+  return drivePlausibilityCore(args.coilCurrent, args.coil, args.supply);
+}
+
+/** drivePlausibility's arguments (strict; quantities with units; bounds keep ωLI and I²R finite). */
+const DrivePlausibilityArgs = lazySchema(() => z.strictObject({
+  coilCurrent: current({ nonNegative: true, max: 1e6 }),
+  coil: z.strictObject({ inductance: inductance({ max: 1e3 }), resistance: resistance({ max: 1e9 }), frequency: frequency({ max: 1e12 }) }),
+  supply: z.strictObject({ supply: voltage({ positive: true, max: 1e6 }), currentLimit: current({ positive: true, max: 1e6 }) }),
+}));
+
+function drivePlausibilityCore(
   coilCurrent: number,
   coil: { readonly inductance: number; readonly resistance: number; readonly frequency: number },
   supply: { readonly supply: number; readonly currentLimit: number },

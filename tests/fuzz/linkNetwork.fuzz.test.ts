@@ -1,13 +1,13 @@
 /**
  * Fuzz: the link solver's internals of lib/mod.ts and lib/advanced.ts (issue 11) — linkNetwork,
- * solveLinkNetwork, summarizeLink, tokenLoadModel — and wilsonInterval of the analysis layer.
+ * solveLinkNetwork, summarizeLink, tokenLoadModel.
  * Bad and extreme arguments give a clear TanklightInputError naming the function and the
  * argument, or a finite result (framework: tests/fuzz/framework.ts). The network and the
  * result are what the library built (their inner fields are library data: `skip`), but null,
  * junk and a missing one are still tried. Demo parts: one pad and one LED token.
  */
 import { fuzzSuite } from "./framework.ts";
-import { linkNetwork, solveLinkNetwork, summarizeLink, roundCoil, ledPreset, wilsonInterval } from "../../lib/mod.ts";
+import { linkNetwork, solveLinkNetwork, summarizeLink, roundCoil, ledPreset } from "../../lib/mod.ts";
 import { tokenLoadModel } from "../../lib/advanced.ts";
 
 const pad = roundCoil({ meanRadius: "20 mm", turns: 3, wire: { diameter: "0.5 mm" } });
@@ -30,5 +30,4 @@ fuzzSuite("link internals", [
   { name: "solveLinkNetwork", call: solveLinkNetwork, valid: [built.network, { litThreshold: 5e-4, maxIterations: 50, tolerance: 1e-9, onNonConvergence: "warn" }], params: ["network", "options"], skip: ["0"] },
   { name: "summarizeLink", call: summarizeLink, valid: [result, 3], params: ["result", "digits"], skip: ["0"] },
   { name: "tokenLoadModel", call: tokenLoadModel, valid: [ledLoad, { tabulate: true, maxAmplitude: 6, step: 0.01 }], params: ["load", "options"], skip: ["0.led"] },
-  { name: "wilsonInterval", call: wilsonInterval, valid: [45, 50, 0.95], params: ["successes", "trials", "level"] },
 ]);
