@@ -21,10 +21,10 @@
  *
  * Safety operating point: the transmitters' currents with no token, or with a token at the
  * region's centre if that is larger (a token's reflected load lowers a tuned transmitter's
- * current, but a detuned pair can raise it). Coils whose dipole moments cancel (alternate
- * phasing) are not credited with lower emission: emissionEstimate's dipole term then
- * underestimates (its quadrupole terms are not estimated), so the margin is taken with every coil
- * in phase — an upper bound of the dipole term.
+ * current, but a detuned pair can raise it). An array's emission is emissionEstimate's for the
+ * actual phases (the coils' dipole fields superposed from their own centres, so alternate and
+ * quadrature phasing are credited with their lower far field); where that model does not apply it
+ * takes every coil in phase, and the emission text says which.
  * Plain data in and out, so worker threads can evaluate candidates.
  */
 import { roundCoil } from "../em/builders/roundCoil.ts";
@@ -379,13 +379,10 @@ function safetyMargins(
       exposureText = `${row.text} (required margin ${s.exposureMarginDb} dB)`;
     } else exposureText = row ? row.text : `${s.standard}: not carried`;
   }
-  let em = emissionEstimate(design);
-  let credited = "";
-  if (em.warnings.some((w) => w.includes("cancel"))) {
-    // the dipole term cancels: take every coil in phase (an upper bound of the dipole term)
-    em = emissionEstimate({ ...design, transmitters: design.transmitters.map((t) => ({ ...t, phase: 0 })) });
-    credited = " — coils taken in phase: their cancelling phases are not credited (quadrupole terms not estimated)";
-  }
+  // an array: the coils' fields superposed with their actual phases, or the in-phase bound where
+  // that model does not apply (emissionEstimate decides and says which)
+  const em = emissionEstimate(design);
+  const credited = em.array ? ` — ${em.array.method}: ${em.array.text}` : "";
   const rules = em.limits.filter((l) => s.emissionRules.includes(l.rule));
   const worstRule = rules.reduce<(typeof rules)[number] | undefined>((a, b) => (a === undefined || b.marginDb < a.marginDb ? b : a), undefined);
   const emission = worstRule ? (worstRule.marginDb - s.emissionMarginDb) * NEPER_PER_DB : Infinity;
