@@ -136,7 +136,8 @@ const MARGIN_FLOOR = 1e-6;
  * comment for the method and the resolution guarantee).
  *
  * @param system a link system (solveLink's input, one transmitter or several with their own or
- *   shared drives; several are solved with the describing function, as solveLink does);
+ *   shared drives, solved with the model `options.model` names as solveLink does: coils on a
+ *   shared drive stay on the describing function);
  *   `options.token` names the receiver that moves (its own pose is ignored), the others are left
  *   out unless `options.others`.
  * @param region `{ x, y, z }`, each a coordinate or `{ from, to, points | step }` (m or "90 mm"):
