@@ -14,15 +14,16 @@
  * the describing function; otherwise it runs harmonic balance from there.
  */
 import { solveLinkNetwork } from "../link/solveNetwork.ts";
+import { validateNetwork } from "../link/validateNetwork.ts";
 import type { LinkNetwork } from "../link/network.ts";
 import { DEFAULT_LIT_THRESHOLD } from "../link/network.ts";
 import type { LinkResult } from "../link/result.ts";
-import { TanklightInputError, requireObject } from "../../errors.ts";
+import { TanklightInputError, requireObject, requirePositive } from "../../errors.ts";
 import { harmonicPorts } from "./ports.ts";
 import { spectrumTables } from "./spectrum.ts";
 import { timeLoad } from "./timeLoad.ts";
 import { HarmonicSystem } from "./newton.ts";
-import { emfSpectra, sharedDriveRefusal, solveLinkHarmonic, type HarmonicOptions } from "./solveHarmonic.ts";
+import { checkHarmonicOptions, emfSpectra, sharedDriveRefusal, solveLinkHarmonic, type HarmonicOptions } from "./solveHarmonic.ts";
 import type { HarmonicDetail } from "./result.ts";
 import type { ModelBand } from "./modelBand.ts";
 import type { HarmonicLinkResult } from "./result.ts";
@@ -84,6 +85,12 @@ export interface FundamentalCheck {
 export function fundamentalCheck(network: LinkNetwork, df: LinkResult, litThreshold = DEFAULT_LIT_THRESHOLD): FundamentalCheck {
   requireObject(network, "network", "fundamentalCheck");
   requireObject(df, "df", "fundamentalCheck");
+  if (!Array.isArray(network.receivers)) throw new TanklightInputError([{ path: "network.receivers", message: "must be an array (a network from linkNetwork)", value: network.receivers }], "fundamentalCheck");
+  validateNetwork(network, "fundamentalCheck");
+  requirePositive(litThreshold, "litThreshold", "A", "fundamentalCheck");
+  if (!Array.isArray(df.receivers) || df.receivers.length !== network.receivers.length) {
+    throw new TanklightInputError([{ path: "df.receivers", message: "must be the describing-function result of this network (one entry per receiver)", value: df.receivers }], "fundamentalCheck");
+  }
   const rx = network.receivers;
   const drive = network.transmitter.drive;
   const shared = sharedDriveRefusal(network);
@@ -244,8 +251,9 @@ function gauss(a: Float64Array, b: Float64Array, n: number): void {
  */
 export function solveLinkModel(network: LinkNetwork, options: ModelOptions = {}): ModelledLinkResult {
   requireObject(network, "network", "solveLinkModel");
-  requireObject(options, "options", "solveLinkModel");
-  const model = options.model ?? "fundamental";
+  checkHarmonicOptions(options, "solveLinkModel");
+  // undefined takes the default; null is a bad value
+  const model = options.model === undefined ? "fundamental" : options.model;
   if (model !== "fundamental" && model !== "harmonic" && model !== "auto") {
     throw new TanklightInputError([{ path: "model", message: "must be 'fundamental', 'harmonic' or 'auto'", value: model }], "solveLink");
   }

@@ -16,10 +16,10 @@
  * step, which also solves the switch with the tank), then with the true loads. If that fails,
  * source stepping (the drive scaled from a fraction up to 1, each level started from the last).
  */
-import { solveLinkNetwork, LinkConvergenceError } from "../link/solveNetwork.ts";
+import { solveLinkNetwork, LinkConvergenceError, checkLinkOptions } from "../link/solveNetwork.ts";
 import type { LinkNetwork, LinkOptions } from "../link/network.ts";
 import type { LinkResult } from "../link/result.ts";
-import { TanklightInputError, requireObject } from "../../errors.ts";
+import { TanklightInputError, requireObject, underName } from "../../errors.ts";
 import { harmonicPorts, type EmfSpectrum, type HarmonicPorts } from "./ports.ts";
 import { spectrumTables } from "./spectrum.ts";
 import { timeLoad, type TimeLoad } from "./timeLoad.ts";
@@ -76,19 +76,11 @@ export function defaultSamples(order: number): number {
 export function solveLinkHarmonic(network: LinkNetwork, options: HarmonicOptions = {}): HarmonicLinkResult {
   const where = "solveLinkHarmonic";
   requireObject(network, "network", where);
-  requireObject(options, "options", where);
+  const { order: H, samples: N } = checkHarmonicOptions(options, where);
+  // the describing-function solution: validates the network and starts the continuation
+  const df = underName(where, () => solveLinkNetwork(network, { ...options, onNonConvergence: "warn" }));
   const shared = sharedDriveRefusal(network);
   if (shared !== undefined) throw new TanklightInputError([{ path: "sharedDrives", message: shared, value: network.sharedDrives?.length ?? 0 }], where);
-  const H = options.order ?? DEFAULT_HARMONIC_ORDER;
-  if (!(Number.isInteger(H) && H >= 1 && H <= 200)) {
-    throw new TanklightInputError([{ path: "order", message: "must be an integer from 1 to 200", value: H, expected: "1…200" }], where);
-  }
-  const N = options.samples ?? defaultSamples(H);
-  if (!(Number.isInteger(N) && N >= 2 * H + 2 && N <= 100000)) {
-    throw new TanklightInputError([{ path: "samples", message: `must be an integer ≥ 2·order + 2 = ${2 * H + 2}`, value: N, expected: `≥ ${2 * H + 2}` }], where);
-  }
-  // the describing-function solution: validates the network and starts the continuation
-  const df = solveLinkNetwork(network, { ...options, onNonConvergence: "warn" });
   const rx = network.receivers;
   rx.forEach((r, k) => {
     if (!r.load.linear && r.load.token === undefined) {
@@ -133,6 +125,26 @@ export function solveLinkHarmonic(network: LinkNetwork, options: HarmonicOptions
     return { ...high.result, harmonic: detail, warnings, errorBand: orderBand(change, H, half, hard) };
   }
   return solveOrder(network, H, N, options, df, undefined).result;
+}
+
+/**
+ * The options object of the harmonic engines checked under `where`: known link-option keys
+ * (a typo names the nearest), the harmonic `order` H (integer 1…200) and `samples` N (integer
+ * 2H + 2…100000); undefined takes the default, null is a bad value.
+ * @example checkHarmonicOptions({ order: 9 }, "solveLinkHarmonic") // → { order: 9, samples: 72 }
+ */
+export function checkHarmonicOptions(options: HarmonicOptions, where: string): { order: number; samples: number } {
+  requireObject(options, "options", where);
+  checkLinkOptions(options, where);
+  const H = options.order === undefined ? DEFAULT_HARMONIC_ORDER : options.order;
+  if (!(Number.isInteger(H) && H >= 1 && H <= 200)) {
+    throw new TanklightInputError([{ path: "order", message: "must be an integer from 1 to 200", value: H, expected: "1…200" }], where);
+  }
+  const N = options.samples === undefined ? defaultSamples(H) : options.samples;
+  if (!(Number.isInteger(N) && N >= 2 * H + 2 && N <= 100000)) {
+    throw new TanklightInputError([{ path: "samples", message: `must be an integer ≥ 2·order + 2 = ${2 * H + 2}`, value: N, expected: `≥ ${2 * H + 2}` }], where);
+  }
+  return { order: H, samples: N };
 }
 
 /**

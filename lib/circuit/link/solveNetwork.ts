@@ -99,7 +99,7 @@ const LINK_OPTION_KEYS: readonly string[] = Object.freeze(["litThreshold", "brig
  * no schema): known keys only (a typo names the nearest), SI numbers in range — solveLink takes
  * the same options with units ("0.5 mA").
  */
-function checkLinkOptions(options: LinkOptions, where: string): void {
+export function checkLinkOptions(options: LinkOptions, where: string): void {
   const o = options as Record<string, unknown>;
   const fail = (key: string, message: string): never => {
     throw new TanklightInputError([{ path: `options.${key}`, message, value: o[key] }], where);
